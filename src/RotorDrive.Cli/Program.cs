@@ -1,0 +1,3 @@
+using RotorDrive.Cli;
+
+return await CliApp.RunAsync(args);

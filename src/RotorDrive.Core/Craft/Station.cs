@@ -1,0 +1,19 @@
+using RotorDrive.Core.Drive;
+using RotorDrive.Core.Magnetics;
+
+namespace RotorDrive.Core.Craft;
+
+/// <summary>One rotor station of a rig: where it sits, which way it spins, its rotor and its drivetrain.</summary>
+/// <param name="XM">Position of the rotor axis from the rig origin, m (x forward).</param>
+/// <param name="YM">Position of the rotor axis from the rig origin, m (y left).</param>
+/// <param name="Spin">Spin direction seen from above.</param>
+/// <param name="Rotor">The rotor design.</param>
+/// <param name="Motor">The assigned motor, or null when none is assigned yet.</param>
+/// <param name="Controller">The assigned speed controller, or null when none is assigned yet.</param>
+public sealed record Station(
+    double XM,
+    double YM,
+    SpinDirection Spin,
+    RotorDesign Rotor,
+    Motor? Motor,
+    SpeedController? Controller);

@@ -1,0 +1,26 @@
+namespace RotorDrive.Core.Drive;
+
+/// <summary>A brushless speed controller (ESC), described by averaged-switch ratings, in SI units.</summary>
+/// <param name="Id">Catalog id.</param>
+/// <param name="ContinuousCurrentA">Continuous phase current rating, A.</param>
+/// <param name="BurstCurrentA">Burst phase current rating, A (also the hardware current limit).</param>
+/// <param name="BurstDurationS">How long the burst current may last, s.</param>
+/// <param name="MinCells">Smallest supported series cell count.</param>
+/// <param name="MaxCells">Largest supported series cell count.</param>
+/// <param name="OnResistanceOhm">Effective on-resistance in the motor current path, ohm.</param>
+/// <param name="IdleCurrentA">The controller's own supply current, A.</param>
+/// <param name="MaxErpm">Largest electrical rpm it can commutate.</param>
+/// <param name="MassKg">Mass, kg.</param>
+/// <param name="Reversible">True when it can run either spin direction.</param>
+public sealed record SpeedController(
+    string Id,
+    double ContinuousCurrentA,
+    double BurstCurrentA,
+    double BurstDurationS,
+    int MinCells,
+    int MaxCells,
+    double OnResistanceOhm,
+    double IdleCurrentA,
+    double MaxErpm,
+    double MassKg,
+    bool Reversible);
