@@ -93,7 +93,7 @@ public sealed partial class DormandPrince45
         {
             events!.Evaluate(t, _y, _gPrev.AsSpan(0, eventCount));
         }
-        bool dense = eventCount > 0 || o.OutputIntervalS is not null;
+        bool dense = eventCount > 0 || (observer is not null && o.OutputIntervalS is not null);
         long gridIndex = 0;
         if (o.OutputIntervalS is { } interval)
         {

@@ -371,7 +371,8 @@ public class DormandPrince45Tests
         var result = new DormandPrince45(1, new DormandPrince45Options { RelativeTolerance = 1e-9, AbsoluteTolerance = 1e-12 })
             .Integrate((t, s, d) => d[0] = lambda * s[0], 0, y, length);
         double exact = Math.Exp(lambda * length);
-        return result.Status == OdeStatus.Completed && Math.Abs(y[0] - exact) <= 1e-7 * exact;
+        // Relative accuracy where the solution is large, the absolute tolerance (1e-12 per step) where it has decayed.
+        return result.Status == OdeStatus.Completed && Math.Abs(y[0] - exact) <= 1e-7 * exact + 1e-10;
     }
 
     private readonly struct Oscillator : IOdeSystem

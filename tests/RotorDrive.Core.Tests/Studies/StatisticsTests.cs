@@ -100,7 +100,8 @@ public class StatisticsTests
         double percent = percentCode * 100.0 / 255.0;
         double ours = Percentiles.OfSorted(sorted, percent);
         double mathNet = SortedArrayStatistics.QuantileCustom(sorted, percent / 100.0, QuantileDefinition.R7);
-        return Math.Abs(ours - mathNet) <= 1e-12 * Math.Max(1, Math.Abs(mathNet));
+        // Rounding of the interpolation scales with the data's magnitude, not the result's.
+        return Math.Abs(ours - mathNet) <= 1e-12 * Math.Max(1, sorted.Max(Math.Abs));
     }
 
     [Fact]
