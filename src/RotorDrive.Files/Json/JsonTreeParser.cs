@@ -41,14 +41,15 @@ internal sealed class JsonTreeParser
     private JsonNode? Run()
     {
         var options = new JsonReaderOptions { CommentHandling = JsonCommentHandling.Skip, AllowTrailingCommas = true, MaxDepth = 64 };
+        if (IsBlank())
+        {
+            _problems.Add(new InputProblem(_file, 1, 1, "$", Messages.JsonSyntax("the file is empty")));
+            return null;
+        }
         var reader = new Utf8JsonReader(_utf8, options);
         try
         {
-            if (!reader.Read())
-            {
-                _problems.Add(new InputProblem(_file, 1, 1, "$", Messages.JsonSyntax("the file is empty")));
-                return null;
-            }
+            reader.Read();
             var root = ReadValue(ref reader, "$");
             if (reader.Read())
             {
@@ -65,6 +66,41 @@ internal sealed class JsonTreeParser
             _problems.Add(new InputProblem(_file, line, column, e.Path ?? "$", Messages.JsonSyntax(Detail(e.Message))));
             return null;
         }
+    }
+
+    // True when the text holds nothing but whitespace and comments.
+    private bool IsBlank()
+    {
+        int i = 0;
+        while (i < _utf8.Length)
+        {
+            byte b = _utf8[i];
+            if (b is (byte)' ' or (byte)'\t' or (byte)'\r' or (byte)'\n')
+            {
+                i++;
+            }
+            else if (b == (byte)'/' && i + 1 < _utf8.Length && _utf8[i + 1] == (byte)'/')
+            {
+                while (i < _utf8.Length && _utf8[i] != (byte)'\n')
+                {
+                    i++;
+                }
+            }
+            else if (b == (byte)'/' && i + 1 < _utf8.Length && _utf8[i + 1] == (byte)'*')
+            {
+                int end = _utf8.AsSpan(i + 2).IndexOf("*/"u8);
+                if (end < 0)
+                {
+                    return false;
+                }
+                i += end + 4;
+            }
+            else
+            {
+                return false;
+            }
+        }
+        return true;
     }
 
     private JsonNode ReadValue(ref Utf8JsonReader reader, string path)
