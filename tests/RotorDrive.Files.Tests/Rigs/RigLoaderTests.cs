@@ -133,6 +133,29 @@ public class RigLoaderTests
         Assert.Equal(KeysOf(text), KeysOf(written));
     }
 
+    [Fact]
+    public void Writer_OfAFullDocument_WritesExactlyTheDocumentedKeys()
+    {
+        var doc = new RigDocument
+        {
+            Name = "n",
+            Catalogs = new RigCatalogsSection { Motors = "a", Controllers = "b", Packs = "c", CellCurves = "d", Rotors = "e", Plates = "f" },
+            Plate = new RigPlateSection { Material = "m", ThicknessMm = 1, TemperatureC = 2, ConvectionWPerM2K = 3 },
+            Craft = new RigCraftSection { EmptyMassKg = 1, PayloadKg = 2, CgXMm = 3, CgYMm = 4, YawInertiaKgM2 = 5, HeaveDampingRatio = 0.1 },
+            Gap = new RigGapSection { DesignMm = 10, LandedMm = 5 },
+            AmbientC = 20,
+            GearYawFrictionNm = 1,
+            Stations = [new RigStationSection { XMm = 1, YMm = 2, Spin = "cw", Rotor = "r", Motor = "m", Controller = "c" }],
+            Pack = new RigPackSection { Id = "p", Count = 2 },
+            Limits = new RigLimitsSection { YawTorqueNm = 1, PlateTempC = 2, CellCutoffV = 3, UsableCapacityPct = 4, MaxDuty = 0.5, LiftoffTimeS = 6 },
+        };
+        var expected = RigKeys.Top.Concat(RigKeys.Catalogs).Concat(RigKeys.Plate).Concat(RigKeys.Craft).Concat(RigKeys.Gap)
+            .Concat(RigKeys.Station).Concat(RigKeys.Pack).Concat(RigKeys.Limits).Order().ToList();
+        string written = RigDocumentWriter.Write(doc);
+        Assert.Equal(expected, KeysOf(written));
+        Assert.Empty(RigDocumentReader.Read(written, "w.json").Problems);
+    }
+
     private static List<string> KeysOf(string json)
         => System.Text.RegularExpressions.Regex.Matches(json, "\"([a-z_0-9]+)\"\\s*:").Select(m => m.Groups[1].Value).Order().ToList();
 }
