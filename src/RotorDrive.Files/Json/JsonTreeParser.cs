@@ -14,6 +14,9 @@ internal sealed class JsonTreeParser
     private readonly string _file;
     private readonly List<InputProblem> _problems;
 
+    // The path of the value read last: where a syntax error (such as a missing comma) was found.
+    private string _lastPath = "$";
+
     private JsonTreeParser(string text, string file, List<InputProblem> problems)
     {
         _utf8 = Encoding.UTF8.GetBytes(text);
@@ -63,7 +66,7 @@ internal sealed class JsonTreeParser
         {
             int line = (int)(e.LineNumber ?? 0) + 1;
             int column = CharacterColumn(line, (int)(e.BytePositionInLine ?? 0));
-            _problems.Add(new InputProblem(_file, line, column, e.Path ?? "$", Messages.JsonSyntax(Detail(e.Message))));
+            _problems.Add(new InputProblem(_file, line, column, _lastPath, Messages.JsonSyntax(Detail(e.Message))));
             return null;
         }
     }
@@ -105,6 +108,7 @@ internal sealed class JsonTreeParser
 
     private JsonNode ReadValue(ref Utf8JsonReader reader, string path)
     {
+        _lastPath = path;
         var (line, column) = Position(reader.TokenStartIndex);
         switch (reader.TokenType)
         {
@@ -116,8 +120,9 @@ internal sealed class JsonTreeParser
                 {
                     string key = reader.GetString() ?? "";
                     var (keyLine, keyColumn) = Position(reader.TokenStartIndex);
-                    reader.Read();
                     string childPath = path + "." + key;
+                    _lastPath = childPath;
+                    reader.Read();
                     var value = ReadValue(ref reader, childPath);
                     if (!seen.Add(key))
                     {

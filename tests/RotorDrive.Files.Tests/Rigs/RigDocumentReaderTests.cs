@@ -24,8 +24,16 @@ public class RigDocumentReaderTests
         var result = Read("{\n  \"name\": \"r\",\n  \"ambient_c\": 2x\n}\n");
         Assert.Null(result.Document);
         var problem = Assert.Single(result.Problems);
-        Assert.Equal((File, 3, 17), (problem.File, problem.Line, problem.Column));
+        Assert.Equal((File, 3, 17, "$.ambient_c"), (problem.File, problem.Line, problem.Column, problem.Field));
         Assert.StartsWith(Messages.JsonSyntax(""), problem.Message);
+    }
+
+    [Fact]
+    public void Read_ReportsAMissingCommaAtTheNextKey_NamingTheValueBeforeIt()
+    {
+        var result = Read("{\n  \"name\": \"r\"\n  \"ambient_c\": 20\n}\n");
+        var problem = Assert.Single(result.Problems);
+        Assert.Equal((3, 3, "$.name"), (problem.Line, problem.Column, problem.Field));
     }
 
     [Fact]
