@@ -10,7 +10,9 @@ namespace RotorDrive.Core.Loads;
 /// with points equally spaced in ln(sigma omega) (dense near zero speed, where lift grows as omega^2 and torque as
 /// omega). Below that the exact low-speed laws (lift proportional to omega^2, torque to omega) carry the last node to
 /// zero. Gap points are equally spaced over [MinGapM, MaxGapM]. Defaults: 96 speed points over 6 decades and 48 gap
-/// points, which keep the interpolation error near 1e-5 of the value for the rotors tried (tests check 1e-3).</para>
+/// points. Against direct quadrature they give about 2e-5 of the value on a typical rotor (24 segments, radii 70-120 mm)
+/// and at most a fifth of the 0.1 % target over the wide family of random rotors, plates and ranges the tests draw
+/// (many-pole rotors of small radius at large gaps are the hardest: e^(-2 k g) changes fastest between gap nodes).</para>
 /// <para>Queries outside the range (larger sigma omega, gaps outside) are answered by the direct model, so they are
 /// right but slower.</para>
 /// </remarks>
