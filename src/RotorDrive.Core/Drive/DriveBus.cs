@@ -75,11 +75,11 @@ public static class DriveBus
         {
             throw new ArgumentException($"points must hold at least {n} entries; got {points.Length}.", nameof(points));
         }
-        Span<StationTerms> terms = n <= StackStations ? stackalloc StationTerms[n] : new StationTerms[n];
+        Span<DriveStation> terms = n <= StackStations ? stackalloc DriveStation[n] : new DriveStation[n];
         double cPlus = 0;
         for (int j = 0; j < n; j++)
         {
-            terms[j] = StationTerms.Prepare(inputs[j]);
+            terms[j] = DriveStation.Prepare(inputs[j]);
             cPlus += terms[j].CPlus;
         }
 
@@ -112,6 +112,40 @@ public static class DriveBus
         return Scan(source, terms, points, passes);
     }
 
+    // One prepared station on its own pack: the operating-point search calls this in its inner loop.
+    internal static BusSolution SolveSingle(BusSource source, ref DriveStation station, out DrivePoint point)
+    {
+        double voc = source.OpenCircuitVoltageV, rp = source.ResistanceOhm;
+        double v = voc;
+        Single(ref station, v, out double a, out double b, out double c);
+        for (int pass = 1; pass <= DriveBusOptions.Default.MaxActiveSetPasses; pass++)
+        {
+            if (!Roots(1 + rp * b, voc - rp * a, rp * c, out double root, out _) || root <= 0)
+            {
+                break;
+            }
+            Single(ref station, root, out double a2, out double b2, out double c2);
+            if ((a2 == a && b2 == b && c2 == c) || Math.Abs(root - v) <= DriveBusOptions.Default.RelativeVoltageTolerance * root)
+            {
+                if (rp * station.CPlus < root * root)
+                {
+                    point = station.PointAt(root);
+                    var status = root < 0.5 * voc ? BusStatus.Collapsed : BusStatus.Solved;
+                    return new BusSolution(status, root, point.BusCurrentA, voc, pass, Scanned: false);
+                }
+                break;
+            }
+            v = root;
+            a = a2;
+            b = b2;
+            c = c2;
+        }
+        Span<DrivePoint> one = stackalloc DrivePoint[1];
+        var solution = Scan(source, new Span<DriveStation>(ref station), one, DriveBusOptions.Default.MaxActiveSetPasses);
+        point = one[0];
+        return solution;
+    }
+
     /// <summary>Evaluates one drivetrain at a known bus voltage (an ideal bus, no pack sag).</summary>
     /// <param name="busVoltageV">Bus voltage, V, greater than 0.</param>
     /// <param name="input">The controller's input.</param>
@@ -121,11 +155,11 @@ public static class DriveBus
     public static DrivePoint Evaluate(double busVoltageV, in DriveInput input)
     {
         Preconditions.Positive(busVoltageV, nameof(busVoltageV));
-        var terms = StationTerms.Prepare(input);
+        var terms = DriveStation.Prepare(input);
         return terms.PointAt(busVoltageV);
     }
 
-    private static BusSolution Scan(BusSource source, Span<StationTerms> terms, Span<DrivePoint> points, int passes)
+    private static BusSolution Scan(BusSource source, Span<DriveStation> terms, Span<DrivePoint> points, int passes)
     {
         double voc = source.OpenCircuitVoltageV, rp = source.ResistanceOhm;
         int n = terms.Length;
@@ -171,7 +205,7 @@ public static class DriveBus
         return new BusSolution(BusStatus.NoSolution, 0, 0, voc, passes, Scanned: true);
     }
 
-    private static BusSolution Finish(BusSource source, Span<StationTerms> terms, Span<DrivePoint> points, double v, int passes, bool scanned)
+    private static BusSolution Finish(BusSource source, Span<DriveStation> terms, Span<DrivePoint> points, double v, int passes, bool scanned)
     {
         double packCurrent = 0;
         for (int j = 0; j < terms.Length; j++)
@@ -185,25 +219,35 @@ public static class DriveBus
     }
 
     // Coefficients of sum(I_bus) = A + B V + C / V for the rules in force at voltage v.
-    private static void Sums(Span<StationTerms> terms, double v, out double a, out double b, out double c)
+    private static void Sums(Span<DriveStation> terms, double v, out double a, out double b, out double c)
     {
         a = 0;
         b = 0;
         c = 0;
         for (int j = 0; j < terms.Length; j++)
         {
-            ref readonly var t = ref terms[j];
-            t.RuleAt(v, out double value, out bool driven);
-            a += t.Idle;
-            if (driven)
-            {
-                a -= value * t.E / t.Rt;
-                b += value * value / t.Rt;
-            }
-            else
-            {
-                c += (value * t.Rt + t.E) * value;
-            }
+            Single(ref terms[j], v, out double aj, out double bj, out double cj);
+            a += aj;
+            b += bj;
+            c += cj;
+        }
+    }
+
+    // One station's share of A, B and C at voltage v.
+    private static void Single(ref DriveStation t, double v, out double a, out double b, out double c)
+    {
+        t.RuleAt(v, out double value, out bool driven);
+        if (driven)
+        {
+            a = t.Idle - value * t.E / t.Rt;
+            b = value * value / t.Rt;
+            c = 0;
+        }
+        else
+        {
+            a = t.Idle;
+            b = 0;
+            c = (value * t.Rt + t.E) * value;
         }
     }
 
@@ -228,201 +272,5 @@ public static class DriveBus
         r1 = Math.Max(big, other);
         r2 = Math.Min(big, other);
         return true;
-    }
-
-    // Everything the solver needs from one station, computed once per solve.
-    private struct StationTerms
-    {
-        public double E;
-        public double Rt;
-        public double R;
-        public double Ron;
-        public double Idle;
-        public double Limit;
-        public double MaxDuty;
-        public double Duty;
-        public double Current;
-        public double Flux;
-        public double Kv;
-        public double I0;
-        public double Speed;
-        public double CPlus;
-        public bool IsCurrent;
-        public bool Braking;
-        public bool Clamped;
-
-        public static StationTerms Prepare(in DriveInput input)
-        {
-            var drive = input.Drivetrain ?? throw new ArgumentException("Every drive input needs a drivetrain.", nameof(input));
-            var motor = drive.Motor;
-            var t = new StationTerms
-            {
-                Speed = Preconditions.NonNegative(input.SpeedRadPerS, "speed"),
-                Flux = drive.FluxFactorAt(input.MagnetTempC),
-                R = motor.ResistanceAt(Preconditions.Finite(input.WindingTempC, "winding temperature")),
-                Idle = drive.Controller.IdleCurrentA,
-                Limit = drive.CurrentLimitA,
-                MaxDuty = drive.MaxDuty,
-                Kv = motor.KvRadPerSPerV,
-                I0 = motor.NoLoadCurrentA,
-                Braking = input.Braking,
-            };
-            t.Ron = drive.Controller.OnResistanceOhm;
-            t.Rt = Preconditions.Positive(t.R + t.Ron, "loop resistance at the winding temperature");
-            t.E = t.Flux * t.Speed / t.Kv;
-            double value = input.Command.Value;
-            if (input.Command.Kind == DriveCommandKind.Duty)
-            {
-                Preconditions.InRange(value, 0, 1, "duty");
-                t.Clamped = value > t.MaxDuty;
-                t.Duty = Math.Min(value, t.MaxDuty);
-                t.CPlus = Math.Max(0, ConstantPower(t, t.Limit));
-                if (t.Braking)
-                {
-                    t.CPlus = Math.Max(t.CPlus, ConstantPower(t, -t.Limit));
-                }
-            }
-            else
-            {
-                Preconditions.Finite(value, "motor current command");
-                double low = t.Braking ? -t.Limit : 0.0;
-                t.IsCurrent = true;
-                t.Clamped = value > t.Limit || value < -t.Limit;
-                t.Current = Math.Clamp(value, low, t.Limit);
-                t.CPlus = Math.Max(0, ConstantPower(t, t.Current));
-            }
-            return t;
-        }
-
-        private static double ConstantPower(in StationTerms t, double current) => (current * t.Rt + t.E) * current;
-
-        // The rule in force at bus voltage v: duty-driven (value = duty delta) or constant current (value = alpha).
-        public readonly DriveRegime RuleAt(double v, out double value, out bool driven)
-        {
-            if (!Braking && v < E)
-            {
-                driven = true;
-                value = 1.0;
-                return DriveRegime.Rectifying;
-            }
-            if (IsCurrent)
-            {
-                double saturated = (MaxDuty * v - E) / Rt;
-                if (Current > saturated)
-                {
-                    if (!Braking && saturated < 0)
-                    {
-                        driven = false;
-                        value = 0.0;
-                        return DriveRegime.Freewheel;
-                    }
-                    driven = true;
-                    value = MaxDuty;
-                    return DriveRegime.MaxDuty;
-                }
-                if (Braking && Current * Rt + E < 0)
-                {
-                    driven = true;
-                    value = 0.0;
-                    return DriveRegime.ZeroDuty;
-                }
-                driven = false;
-                value = Current;
-                if (Clamped)
-                {
-                    return Current > 0 ? DriveRegime.CurrentLimit : DriveRegime.BrakeCurrentLimit;
-                }
-                return Current == 0 && !Braking ? DriveRegime.Freewheel : DriveRegime.Regulating;
-            }
-            double drive = Duty * v - E;
-            double limitVolts = Limit * Rt;
-            if (drive > limitVolts)
-            {
-                driven = false;
-                value = Limit;
-                return DriveRegime.CurrentLimit;
-            }
-            if (Braking)
-            {
-                if (drive < -limitVolts)
-                {
-                    if (v < E - limitVolts)
-                    {
-                        driven = true;
-                        value = 1.0;
-                        return DriveRegime.Rectifying;
-                    }
-                    driven = false;
-                    value = -Limit;
-                    return DriveRegime.BrakeCurrentLimit;
-                }
-            }
-            else if (drive < 0)
-            {
-                driven = false;
-                value = 0.0;
-                return DriveRegime.Freewheel;
-            }
-            driven = true;
-            value = Duty;
-            return Clamped ? DriveRegime.MaxDuty : DriveRegime.Regulating;
-        }
-
-        // Voltages where RuleAt can change its answer (a superset is harmless); returns how many were written.
-        public readonly int Breakpoints(Span<double> into)
-        {
-            int k = 0;
-            if (!Braking)
-            {
-                Add(into, ref k, E);
-            }
-            if (IsCurrent)
-            {
-                Add(into, ref k, (Current * Rt + E) / MaxDuty);
-                Add(into, ref k, E / MaxDuty);
-                return k;
-            }
-            if (Duty > 0)
-            {
-                Add(into, ref k, (Limit * Rt + E) / Duty);
-                Add(into, ref k, Braking ? (E - Limit * Rt) / Duty : E / Duty);
-            }
-            if (Braking)
-            {
-                Add(into, ref k, E - Limit * Rt);
-            }
-            return k;
-        }
-
-        private static void Add(Span<double> into, ref int k, double v)
-        {
-            if (v > 0 && double.IsFinite(v))
-            {
-                into[k++] = v;
-            }
-        }
-
-        public readonly DrivePoint PointAt(double v)
-        {
-            var regime = RuleAt(v, out double value, out bool driven);
-            double current = driven ? (value * v - E) / Rt : value;
-            double duty = driven ? value : (value * Rt + E) / v;
-            double motorVoltage = current * R + E;
-            double busCurrent = duty * current + Idle;
-            double torque = Flux * (current - I0) / Kv;
-            return new DrivePoint(
-                regime,
-                Speed,
-                v,
-                duty,
-                motorVoltage,
-                current,
-                E,
-                torque,
-                busCurrent,
-                current * current * R,
-                I0 * E,
-                current * current * Ron + v * Idle);
-        }
     }
 }

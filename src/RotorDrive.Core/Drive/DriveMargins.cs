@@ -19,18 +19,33 @@ public static class DriveMargins
     {
         Preconditions.NotNull(drivetrain, nameof(drivetrain));
         Preconditions.NotNull(rotor, nameof(rotor));
+        var margins = new LimitMargin[StationCount];
+        FillStation(margins, drivetrain, rotor, point);
+        return margins;
+    }
+
+    internal const int StationCount = 6;
+
+    internal const int PackCount = 3;
+
+    internal static void FillStation(Span<LimitMargin> into, Drivetrain drivetrain, RotorDesign rotor, in DrivePoint point)
+    {
         var motor = drivetrain.Motor;
         var controller = drivetrain.Controller;
         double current = Math.Abs(point.MotorCurrentA);
-        return
-        [
-            new(DriveLimit.MotorCurrent, current, motor.MaxCurrentA),
-            new(DriveLimit.MotorPower, Math.Abs(point.MotorInputPowerW), motor.MaxPowerW),
-            new(DriveLimit.ControllerContinuousCurrent, current, controller.ContinuousCurrentA),
-            new(DriveLimit.ControllerBurstCurrent, current, controller.BurstCurrentA),
-            new(DriveLimit.ControllerErpm, motor.ElectricalRpm(point.SpeedRadPerS), controller.MaxErpm),
-            new(DriveLimit.RotorMaxSpeed, point.SpeedRadPerS, rotor.MaxSpeedRadPerS),
-        ];
+        into[0] = new(DriveLimit.MotorCurrent, current, motor.MaxCurrentA);
+        into[1] = new(DriveLimit.MotorPower, Math.Abs(point.MotorInputPowerW), motor.MaxPowerW);
+        into[2] = new(DriveLimit.ControllerContinuousCurrent, current, controller.ContinuousCurrentA);
+        into[3] = new(DriveLimit.ControllerBurstCurrent, current, controller.BurstCurrentA);
+        into[4] = new(DriveLimit.ControllerErpm, motor.ElectricalRpm(point.SpeedRadPerS), controller.MaxErpm);
+        into[5] = new(DriveLimit.RotorMaxSpeed, point.SpeedRadPerS, rotor.MaxSpeedRadPerS);
+    }
+
+    internal static void FillPack(Span<LimitMargin> into, PackBank packs, double packCurrentA, double busVoltageV, double cellCutoffV)
+    {
+        into[0] = new(DriveLimit.PackContinuousCurrent, packCurrentA, packs.ContinuousCurrentA);
+        into[1] = new(DriveLimit.PackBurstCurrent, packCurrentA, packs.BurstCurrentA);
+        into[2] = new(DriveLimit.PackCutoffVoltage, busVoltageV, cellCutoffV * packs.CellsSeries, IsLowerBound: true);
     }
 
     /// <summary>Margins of the pack bank: continuous and burst discharge current, loaded voltage against cutoff.</summary>
@@ -43,11 +58,8 @@ public static class DriveMargins
     public static LimitMargin[] ForPack(PackBank packs, double packCurrentA, double busVoltageV, double cellCutoffV)
     {
         Preconditions.NotNull(packs, nameof(packs));
-        return
-        [
-            new(DriveLimit.PackContinuousCurrent, packCurrentA, packs.ContinuousCurrentA),
-            new(DriveLimit.PackBurstCurrent, packCurrentA, packs.BurstCurrentA),
-            new(DriveLimit.PackCutoffVoltage, busVoltageV, cellCutoffV * packs.CellsSeries, IsLowerBound: true),
-        ];
+        var margins = new LimitMargin[PackCount];
+        FillPack(margins, packs, packCurrentA, busVoltageV, cellCutoffV);
+        return margins;
     }
 }

@@ -11,7 +11,8 @@ namespace RotorDrive.Core.Drive;
 /// a stable one at high speed. The search never reports only one when there are more.</para>
 /// <para>Method: the torque balance f(omega) = Q_motor - Q_load (Q_motor from <see cref="DriveBus"/> with this rotor's
 /// own pack sag, Drela's first-order motor) is sampled from rest to the search top, the speed above which the motor
-/// cannot drive (back-EMF above d x open-circuit voltage, plus 5 %), so every crossing lies inside. Each sign change is
+/// cannot drive (back-EMF above d x open-circuit voltage, plus 5 %), so every crossing lies inside. Samples crowd toward
+/// rest (quadratic spacing), and one sits on the motor curve's current-limit corner. Each sign change is
 /// refined with MathNet's Brent solver (R. P. Brent, "Algorithms for Minimization without Derivatives", 1973). A local
 /// minimum of |f| between samples that keep their sign is probed by successive parabolic steps to find two close
 /// crossings (a drag peak grazing the current limit). Stability is the sign of df/d omega at the crossing: negative
@@ -72,7 +73,7 @@ public static class OperatingPointFinder
             var loadAtTarget = balance.LoadAt(target);
             double flux = drivetrain.FluxFactorAt(conditions.MotorMagnetTempC);
             balance.Command = DriveCommand.MotorCurrent(drivetrain.Motor.CurrentForTorqueA(loadAtTarget.TotalTorqueNm, flux));
-            var held = balance.Detail(target, EquilibriumKind.Held, stable: true, slope: null);
+            var held = balance.Detail(target, EquilibriumKind.Held, stable: true);
             if (held.Drive.Regime is DriveRegime.Regulating or DriveRegime.Freewheel)
             {
                 holdMet = true;
@@ -134,22 +135,44 @@ public static class OperatingPointFinder
     {
         if (!(top > 0))
         {
-            points.Add(balance.Detail(0, EquilibriumKind.AtRest, stable: true, slope: null));
+            points.Add(balance.Detail(0, EquilibriumKind.AtRest, stable: true));
             return;
         }
+        // Samples crowd toward rest (x = top (i/(n-1))^2) where the drag peak and the stall below it usually lie, plus
+        // one at the motor's current-limit corner so that no sample interval straddles the kink of its torque curve.
         int n = options.ScanPoints;
-        Span<double> xs = stackalloc double[n];
-        Span<double> fs = stackalloc double[n];
-        double scale = 0;
+        double corner = balance.CornerSpeed();
+        bool withCorner = corner > 0 && corner < top;
+        int m = withCorner ? n + 1 : n;
+        Span<double> xs = stackalloc double[m];
+        Span<double> fs = stackalloc double[m];
+        int filled = 0;
         for (int i = 0; i < n; i++)
         {
-            xs[i] = i == 0 ? RestFraction * top : top * i / (n - 1);
+            double u = i / (double)(n - 1);
+            double x = i == 0 ? RestFraction * top : top * u * u;
+            if (withCorner && corner < x && (filled == 0 || corner > xs[filled - 1]))
+            {
+                xs[filled++] = corner;
+            }
+            xs[filled++] = x;
+        }
+        if (filled < m)
+        {
+            // The corner coincided with a sample.
+            m = filled;
+            xs = xs[..m];
+            fs = fs[..m];
+        }
+        double scale = 0;
+        for (int i = 0; i < m; i++)
+        {
             fs[i] = balance.F(xs[i]);
             scale = Math.Max(scale, Math.Abs(fs[i]));
         }
         if (fs[0] <= 0)
         {
-            points.Add(balance.Detail(0, EquilibriumKind.AtRest, stable: true, slope: null));
+            points.Add(balance.Detail(0, EquilibriumKind.AtRest, stable: true));
         }
         if (scale == 0)
         {
@@ -157,54 +180,58 @@ public static class OperatingPointFinder
         }
         balance.Top = top;
         balance.Scale = scale;
-        var brackets = new List<Bracket>(4);
-        for (int i = 0; i + 1 < n; i++)
+        // At most one sign-change bracket per sample interval, and two per probed interior sample.
+        Span<Bracket> brackets = stackalloc Bracket[3 * m];
+        int count = 0;
+        for (int i = 0; i + 1 < m; i++)
         {
             if (Positive(fs[i]) != Positive(fs[i + 1]))
             {
-                brackets.Add(new Bracket(xs[i], fs[i], xs[i + 1], fs[i + 1]));
+                brackets[count++] = new Bracket(xs[i], fs[i], xs[i + 1], fs[i + 1]);
             }
         }
-        for (int i = 1; i + 1 < n; i++)
+        for (int i = 1; i + 1 < m; i++)
         {
             bool sameSign = Positive(fs[i - 1]) == Positive(fs[i]) && Positive(fs[i]) == Positive(fs[i + 1]);
             if (sameSign && Math.Abs(fs[i]) < Math.Abs(fs[i - 1]) && Math.Abs(fs[i]) <= Math.Abs(fs[i + 1]))
             {
-                ProbeTangency(balance, xs[i - 1], fs[i - 1], xs[i], fs[i], xs[i + 1], fs[i + 1], options.TangencyProbes, brackets);
+                count += ProbeTangency(balance, xs[i - 1], fs[i - 1], xs[i], fs[i], xs[i + 1], fs[i + 1], options.TangencyProbes, brackets[count..]);
             }
         }
-
-        var roots = new List<(double Speed, bool Stable)>(brackets.Count);
-        Func<double, double> g = balance.Normalized;
-        foreach (var b in brackets)
+        if (count == 0)
         {
+            return;
+        }
+
+        Span<Root> roots = stackalloc Root[count];
+        Func<double, double> g = balance.Normalized;
+        for (int k = 0; k < count; k++)
+        {
+            var b = brackets[k];
             balance.Cache(b.Lo / top, b.FLo / scale, b.Hi / top, b.FHi / scale);
             double x = Brent.TryFindRoot(g, b.Lo / top, b.Hi / top, options.RelativeAccuracy, options.MaxIterations, out double root)
                 ? root
                 : FalsePosition(b) / top;
-            roots.Add((x * top, Positive(b.FLo)));
+            roots[k] = new Root(x * top, Positive(b.FLo));
         }
-        roots.Sort((p, q) => p.Speed.CompareTo(q.Speed));
+        roots.Sort(static (p, q) => p.Speed.CompareTo(q.Speed));
         double merge = 10 * options.RelativeAccuracy * top;
-        for (int k = 0; k < roots.Count; k++)
+        double h = options.SlopeStepRelative * top;
+        for (int k = 0; k < count; k++)
         {
             var (speed, stable) = roots[k];
             // Two crossings at one speed are a tangency: stable from one side only, so not stable.
-            if (k + 1 < roots.Count && roots[k + 1].Speed - speed <= merge)
+            if (k + 1 < count && roots[k + 1].Speed - speed <= merge)
             {
                 stable = false;
                 k++;
             }
-            double h = options.SlopeStepRelative * top;
-            var point = balance.Detail(speed, EquilibriumKind.Crossing, stable, slope: null);
-            double f0 = point.Drive.TorqueNm - point.Load.TotalTorqueNm;
-            double slope = (balance.F(speed + h) - f0) / h;
-            points.Add(point with { StabilitySlopeNmPerRadPerS = slope });
+            points.Add(balance.Detail(speed, EquilibriumKind.Crossing, stable, slopeStep: h));
         }
     }
 
     // Successive parabolic steps toward a local minimum of |f|; when f changes sign there, two crossings are bracketed.
-    private static void ProbeTangency(TorqueBalance balance, double a, double fa, double b, double fb, double c, double fc, int probes, List<Bracket> brackets)
+    private static int ProbeTangency(TorqueBalance balance, double a, double fa, double b, double fb, double c, double fc, int probes, Span<Bracket> brackets)
     {
         double left = a, fLeft = fa, right = c, fRight = fc;
         for (int k = 0; k < probes; k++)
@@ -213,19 +240,19 @@ public static class OperatingPointFinder
             double den = (b - a) * (fb - fc) - (b - c) * (fb - fa);
             if (den == 0)
             {
-                return;
+                return 0;
             }
             double u = b - 0.5 * num / den;
             if (!(u > left && u < right) || u == b)
             {
-                return;
+                return 0;
             }
             double fu = balance.F(u);
             if (Positive(fu) != Positive(fb))
             {
-                brackets.Add(new Bracket(left, fLeft, u, fu));
-                brackets.Add(new Bracket(u, fu, right, fRight));
-                return;
+                brackets[0] = new Bracket(left, fLeft, u, fu);
+                brackets[1] = new Bracket(u, fu, right, fRight);
+                return 2;
             }
             if (Math.Abs(fu) < Math.Abs(fb))
             {
@@ -253,6 +280,7 @@ public static class OperatingPointFinder
                 fc = fu;
             }
         }
+        return 0;
     }
 
     // Fallback when Brent stops on its iteration limit: the secant through the bracket's ends (always inside it).
@@ -262,15 +290,41 @@ public static class OperatingPointFinder
 
     private readonly record struct Bracket(double Lo, double FLo, double Hi, double FHi);
 
+    private readonly record struct Root(double Speed, bool Stable);
+
     // The torque balance of one rotor at one command; counts its evaluations and caches Brent's two starting ends.
     private sealed class TorqueBalance(StationDrive drive, OperatingConditions conditions, BusSource source)
     {
         private readonly IRotorLoad _load = drive.Load;
+        private DriveStation _station;
+        private DriveCommand _command;
         private double _x1 = double.NaN, _g1, _x2 = double.NaN, _g2;
 
-        public DriveCommand Command { get; set; }
+        public DriveCommand Command
+        {
+            get => _command;
+            set
+            {
+                _command = value;
+                _station = DriveStation.Prepare(new DriveInput(drive.Drivetrain, value, 0, conditions.WindingTempC, conditions.MotorMagnetTempC, conditions.Braking));
+            }
+        }
 
         public double Top { get; set; }
+
+        // Speed where the commanded duty first drives the current limit, with the pack sagging under d I_lim + I_idle:
+        // d (Voc - R_bank (d I_lim + I_idle)) - I_lim R_t = E; 0 when there is none (current command, zero duty).
+        public double CornerSpeed()
+        {
+            if (_station.IsCurrent || _station.Duty <= 0)
+            {
+                return 0;
+            }
+            double d = _station.Duty;
+            double busAtCorner = source.OpenCircuitVoltageV - source.ResistanceOhm * (d * _station.Limit + _station.Idle);
+            double backEmf = d * busAtCorner - _station.Limit * _station.Rt;
+            return backEmf > 0 ? backEmf * _station.Kv / _station.Flux : 0;
+        }
 
         public double Scale { get; set; }
 
@@ -282,8 +336,8 @@ public static class OperatingPointFinder
         public double F(double speed)
         {
             Evaluations++;
-            var input = new DriveInput(drive.Drivetrain, Command, speed, conditions.WindingTempC, conditions.MotorMagnetTempC, conditions.Braking);
-            DriveBus.Solve(source, in input, out var point);
+            _station.SetSpeed(speed);
+            DriveBus.SolveSingle(source, ref _station, out var point);
             return point.TorqueNm - LoadAt(speed).TotalTorqueNm;
         }
 
@@ -308,17 +362,21 @@ public static class OperatingPointFinder
             return F(x * Top) / Scale;
         }
 
-        public OperatingPoint Detail(double speed, EquilibriumKind kind, bool stable, double? slope)
+        // The full record of an equilibrium; with a slope step, also the forward-difference stability slope.
+        public OperatingPoint Detail(double speed, EquilibriumKind kind, bool stable, double slopeStep = 0)
         {
             Evaluations++;
-            var input = new DriveInput(drive.Drivetrain, Command, speed, conditions.WindingTempC, conditions.MotorMagnetTempC, conditions.Braking);
-            var bus = DriveBus.Solve(source, in input, out var point);
+            _station.SetSpeed(speed);
+            var bus = DriveBus.SolveSingle(source, ref _station, out var point);
             var load = LoadAt(speed);
-            var station = DriveMargins.ForStation(drive.Drivetrain, drive.Rotor, point);
-            var pack = DriveMargins.ForPack(drive.Packs, bus.PackCurrentA, bus.BusVoltageV, drive.Limits.CellCutoffV);
-            var margins = new LimitMargin[station.Length + pack.Length + 1];
-            station.CopyTo(margins, 0);
-            pack.CopyTo(margins, station.Length);
+            double? slope = null;
+            if (slopeStep > 0)
+            {
+                slope = (F(speed + slopeStep) - (point.TorqueNm - load.TotalTorqueNm)) / slopeStep;
+            }
+            var margins = new LimitMargin[DriveMargins.StationCount + DriveMargins.PackCount + 1];
+            DriveMargins.FillStation(margins, drive.Drivetrain, drive.Rotor, point);
+            DriveMargins.FillPack(margins.AsSpan(DriveMargins.StationCount), drive.Packs, bus.PackCurrentA, bus.BusVoltageV, drive.Limits.CellCutoffV);
             margins[^1] = new LimitMargin(DriveLimit.DutyHeadroom, point.Duty, drive.Limits.MaxDuty);
             return new OperatingPoint(kind, speed, stable, slope, point, load, bus.PackCurrentA, margins);
         }
