@@ -43,10 +43,9 @@ public static class DriveBus
     /// <exception cref="ArgumentOutOfRangeException">A value is not finite or out of its physical range.</exception>
     public static BusSolution Solve(BusSource source, in DriveInput input, out DrivePoint point)
     {
-        Span<DrivePoint> one = stackalloc DrivePoint[1];
-        var solution = Solve(source, new ReadOnlySpan<DriveInput>(in input), one, double.NaN, DriveBusOptions.Default);
-        point = one[0];
-        return solution;
+        CheckSource(source);
+        var station = DriveStation.Prepare(input);
+        return SolveSingle(source, ref station, out point, double.NaN, DriveBusOptions.Default);
     }
 
     /// <summary>Solves the bus starting from a voltage hint (e.g. the previous time step's bus voltage).</summary>
@@ -68,12 +67,17 @@ public static class DriveBus
         DriveBusOptions options)
     {
         Preconditions.NotNull(options, nameof(options));
-        double voc = Preconditions.Positive(source.OpenCircuitVoltageV, "open-circuit voltage");
-        double rp = Preconditions.NonNegative(source.ResistanceOhm, "pack resistance");
+        CheckSource(source);
+        double voc = source.OpenCircuitVoltageV, rp = source.ResistanceOhm;
         int n = inputs.Length;
         if (points.Length < n)
         {
             throw new ArgumentException($"points must hold at least {n} entries; got {points.Length}.", nameof(points));
+        }
+        if (n == 1)
+        {
+            var station = DriveStation.Prepare(inputs[0]);
+            return SolveSingle(source, ref station, out points[0], busVoltageHintV, options);
         }
         Span<DriveStation> terms = n <= StackStations ? stackalloc DriveStation[n] : new DriveStation[n];
         double cPlus = 0;
@@ -112,20 +116,21 @@ public static class DriveBus
         return Scan(source, terms, points, passes);
     }
 
-    // One prepared station on its own pack: the operating-point search calls this in its inner loop.
-    internal static BusSolution SolveSingle(BusSource source, ref DriveStation station, out DrivePoint point)
+    // One prepared station on its own pack: the operating-point search calls this in its inner loop. Same method as
+    // the N-station solve without its loops.
+    internal static BusSolution SolveSingle(BusSource source, ref DriveStation station, out DrivePoint point, double busVoltageHintV, DriveBusOptions options)
     {
         double voc = source.OpenCircuitVoltageV, rp = source.ResistanceOhm;
-        double v = voc;
+        double v = double.IsFinite(busVoltageHintV) && busVoltageHintV > 0 ? busVoltageHintV : voc;
         Single(ref station, v, out double a, out double b, out double c);
-        for (int pass = 1; pass <= DriveBusOptions.Default.MaxActiveSetPasses; pass++)
+        for (int pass = 1; pass <= options.MaxActiveSetPasses; pass++)
         {
             if (!Roots(1 + rp * b, voc - rp * a, rp * c, out double root, out _) || root <= 0)
             {
                 break;
             }
             Single(ref station, root, out double a2, out double b2, out double c2);
-            if ((a2 == a && b2 == b && c2 == c) || Math.Abs(root - v) <= DriveBusOptions.Default.RelativeVoltageTolerance * root)
+            if ((a2 == a && b2 == b && c2 == c) || Math.Abs(root - v) <= options.RelativeVoltageTolerance * root)
             {
                 if (rp * station.CPlus < root * root)
                 {
@@ -141,9 +146,21 @@ public static class DriveBus
             c = c2;
         }
         Span<DrivePoint> one = stackalloc DrivePoint[1];
-        var solution = Scan(source, new Span<DriveStation>(ref station), one, DriveBusOptions.Default.MaxActiveSetPasses);
+        var solution = Scan(source, new Span<DriveStation>(ref station), one, options.MaxActiveSetPasses);
         point = one[0];
         return solution;
+    }
+
+    private static void CheckSource(BusSource source)
+    {
+        if (!(source.OpenCircuitVoltageV > 0) || !double.IsFinite(source.OpenCircuitVoltageV))
+        {
+            Preconditions.Positive(source.OpenCircuitVoltageV, "open-circuit voltage");
+        }
+        if (!(source.ResistanceOhm >= 0) || !double.IsFinite(source.ResistanceOhm))
+        {
+            Preconditions.NonNegative(source.ResistanceOhm, "pack resistance");
+        }
     }
 
     /// <summary>Evaluates one drivetrain at a known bus voltage (an ideal bus, no pack sag).</summary>

@@ -337,7 +337,7 @@ public static class OperatingPointFinder
         {
             Evaluations++;
             _station.SetSpeed(speed);
-            DriveBus.SolveSingle(source, ref _station, out var point);
+            DriveBus.SolveSingle(source, ref _station, out var point, double.NaN, DriveBusOptions.Default);
             return point.TorqueNm - LoadAt(speed).TotalTorqueNm;
         }
 
@@ -367,7 +367,7 @@ public static class OperatingPointFinder
         {
             Evaluations++;
             _station.SetSpeed(speed);
-            var bus = DriveBus.SolveSingle(source, ref _station, out var point);
+            var bus = DriveBus.SolveSingle(source, ref _station, out var point, double.NaN, DriveBusOptions.Default);
             var load = LoadAt(speed);
             double? slope = null;
             if (slopeStep > 0)
