@@ -1,21 +1,67 @@
 using System.CommandLine;
+using System.Text.Json;
+using RotorDrive.Cli.Commands;
+using RotorDrive.Files;
 
 namespace RotorDrive.Cli;
 
-/// <summary>Builds the rotordrive command tree; one file per subcommand registers itself here.</summary>
+/// <summary>Builds the rotordrive command tree and runs it with the shared error handling and exit codes.</summary>
+/// <remarks>Each subcommand lives in Commands/ with a static <c>Create()</c>; add one line to <see cref="BuildRoot"/>
+/// to register it. Commands write through <c>parse.InvocationConfiguration.Output</c>/<c>.Error</c> so tests can
+/// capture them.</remarks>
 public static class CliApp
 {
     /// <summary>Builds the root command with every subcommand.</summary>
     public static RootCommand BuildRoot()
     {
         var root = new RootCommand("RotorDrive: drivetrain choice and analysis for eddy-current levitation rigs.");
+        root.Subcommands.Add(CheckCommand.Create());
+        root.Subcommands.Add(LoadCommand.Create());
         return root;
     }
 
-    /// <summary>Parses and runs the command line; returns the process exit code.</summary>
-    public static async Task<int> RunAsync(string[] args)
+    /// <summary>Parses and runs the command line; returns the process exit code (see <see cref="ExitCodes"/>).</summary>
+    /// <param name="args">The arguments.</param>
+    /// <param name="output">Where results go (stdout by default).</param>
+    /// <param name="error">Where problems and progress go (stderr by default).</param>
+    public static async Task<int> RunAsync(string[] args, TextWriter? output = null, TextWriter? error = null)
     {
-        var root = BuildRoot();
-        return await root.Parse(args).InvokeAsync();
+        output ??= Console.Out;
+        error ??= Console.Error;
+        try
+        {
+            var parse = BuildRoot().Parse(args);
+            if (parse.Errors.Count > 0)
+            {
+                foreach (var e in parse.Errors)
+                {
+                    error.WriteLine($"rotordrive: {e.Message}");
+                }
+                error.WriteLine("Run 'rotordrive --help' (or 'rotordrive COMMAND --help') for usage.");
+                return ExitCodes.BadInput;
+            }
+            var configuration = new InvocationConfiguration
+            {
+                Output = output,
+                Error = error,
+                EnableDefaultExceptionHandler = false,
+            };
+            return await parse.InvokeAsync(configuration);
+        }
+        catch (Exception e) when (IsInputError(e))
+        {
+            error.WriteLine($"rotordrive: error: {OneLine(e.Message)}");
+            return ExitCodes.BadInput;
+        }
+        catch (Exception e)
+        {
+            error.WriteLine($"rotordrive: {Messages.Unexpected($"{e.GetType().Name}: {OneLine(e.Message)}")} (this is a bug in RotorDrive; please report it with the command you ran)");
+            return ExitCodes.InternalError;
+        }
     }
+
+    private static bool IsInputError(Exception e)
+        => e is IOException or UnauthorizedAccessException or JsonException or FormatException or InvalidDataException;
+
+    private static string OneLine(string message) => message.ReplaceLineEndings(" ").Trim();
 }

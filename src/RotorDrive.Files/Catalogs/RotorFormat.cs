@@ -1,0 +1,89 @@
+namespace RotorDrive.Files.Catalogs;
+
+/// <summary>rotors.csv: Halbach magnet rotor designs.</summary>
+public sealed class RotorFormat : CatalogFormat<RotorRow>
+{
+    /// <summary>Creates the format.</summary>
+    public RotorFormat()
+        : base(
+        [
+            CatalogColumn.Text("id"),
+            CatalogColumn.Integer("segments", ValueRule.AtLeast(2)),
+            CatalogColumn.Integer("segments_per_wavelength", ValueRule.AtLeast(2)),
+            CatalogColumn.Real("inner_radius_mm", ValueRule.NonNegative),
+            CatalogColumn.Real("outer_radius_mm", ValueRule.Positive),
+            CatalogColumn.Real("magnet_thickness_mm", ValueRule.Positive),
+            CatalogColumn.Real("remanence_t", ValueRule.Between(0.05, 1.6)),
+            CatalogColumn.Real("remanence_temp_coeff_pct_per_k", ValueRule.Between(-1, 1)),
+            CatalogColumn.OptionalReal("magnet_density_kg_m3", ValueRule.Positive),
+            CatalogColumn.Real("rotor_mass_g", ValueRule.Positive),
+            CatalogColumn.Real("inertia_kg_m2", ValueRule.Positive),
+            CatalogColumn.Real("max_rpm", ValueRule.Positive),
+            CatalogColumn.OptionalReal("bearing_drag_nm", ValueRule.NonNegative),
+            CatalogColumn.OptionalReal("bearing_damping_nm_per_krpm", ValueRule.NonNegative),
+            CatalogColumn.OptionalReal("retainer_thickness_mm", ValueRule.Positive),
+            CatalogColumn.OptionalReal("retainer_allowable_mpa", ValueRule.Positive),
+        ])
+    {
+    }
+
+    /// <inheritdoc/>
+    public override string FileName => "rotors.csv";
+
+    private protected override string? IdOf(RotorRow row) => row.Id;
+
+    private protected override RotorRow? ReadRow(CsvRowCursor row)
+    {
+        var id = row.Text("id");
+        var n = row.Integer("segments");
+        var m = row.Integer("segments_per_wavelength");
+        var ri = row.Real("inner_radius_mm");
+        var ro = row.Real("outer_radius_mm");
+        var h = row.Real("magnet_thickness_mm");
+        var br = row.Real("remanence_t");
+        var beta = row.Real("remanence_temp_coeff_pct_per_k");
+        var density = row.Real("magnet_density_kg_m3");
+        var mass = row.Real("rotor_mass_g");
+        var inertia = row.Real("inertia_kg_m2");
+        var maxRpm = row.Real("max_rpm");
+        var bearing = row.Real("bearing_drag_nm");
+        var damping = row.Real("bearing_damping_nm_per_krpm");
+        var retainer = row.Real("retainer_thickness_mm");
+        var allowable = row.Real("retainer_allowable_mpa");
+        bool ok = true;
+        if (n is { } segments && m is { } perWave && segments % perWave != 0)
+        {
+            row.Report("segments", Messages.SegmentsNotMultiple(segments, perWave));
+            ok = false;
+        }
+        if (ri is { } inner && ro is { } outer && inner >= outer)
+        {
+            row.Report("inner_radius_mm", Messages.InnerRadiusNotBelowOuter(inner, outer));
+            ok = false;
+        }
+        if (retainer is not null && allowable is null && !row.HasProblems)
+        {
+            row.Report("retainer_allowable_mpa", Messages.RetainerPairIncomplete("retainer_allowable_mpa"));
+            ok = false;
+        }
+        if (allowable is not null && retainer is null && !row.HasProblems)
+        {
+            row.Report("retainer_thickness_mm", Messages.RetainerPairIncomplete("retainer_thickness_mm"));
+            ok = false;
+        }
+        if (!ok || id is null || n is null || m is null || ri is null || ro is null || h is null || br is null || beta is null
+            || mass is null || inertia is null || maxRpm is null)
+        {
+            return null;
+        }
+        return new RotorRow(id, n.Value, m.Value, ri.Value, ro.Value, h.Value, br.Value, beta.Value, density, mass.Value,
+            inertia.Value, maxRpm.Value, bearing, damping, retainer, allowable);
+    }
+
+    private protected override string?[] FormatRow(RotorRow r) =>
+    [
+        r.Id, F(r.Segments), F(r.SegmentsPerWavelength), F(r.InnerRadiusMm), F(r.OuterRadiusMm), F(r.MagnetThicknessMm),
+        F(r.RemanenceT), F(r.RemanenceTempCoeffPctPerK), F(r.MagnetDensityKgM3), F(r.RotorMassG), F(r.InertiaKgM2),
+        F(r.MaxRpm), F(r.BearingDragNm), F(r.BearingDampingNmPerKrpm), F(r.RetainerThicknessMm), F(r.RetainerAllowableMpa),
+    ];
+}

@@ -1,0 +1,47 @@
+using RotorDrive.Core;
+using RotorDrive.Core.Magnetics;
+
+namespace RotorDrive.Files.Catalogs;
+
+/// <summary>One row of rotors.csv, in the file's units.</summary>
+public sealed record RotorRow(
+    string Id,
+    int Segments,
+    int SegmentsPerWavelength,
+    double InnerRadiusMm,
+    double OuterRadiusMm,
+    double MagnetThicknessMm,
+    double RemanenceT,
+    double RemanenceTempCoeffPctPerK,
+    double? MagnetDensityKgM3,
+    double RotorMassG,
+    double InertiaKgM2,
+    double MaxRpm,
+    double? BearingDragNm,
+    double? BearingDampingNmPerKrpm,
+    double? RetainerThicknessMm,
+    double? RetainerAllowableMpa)
+{
+    /// <summary>Converts a viscous drag coefficient in N m per 1000 rpm to N m per rad/s.</summary>
+    public static double DampingToSi(double nmPerKrpm) => nmPerKrpm / (1000.0 * Units.RadPerSPerRpm);
+
+    /// <summary>The rotor design in SI units (mm to m, %/K to 1/K, g to kg, rpm to rad/s, N m/krpm to N m s/rad,
+    /// MPa to Pa); absent bearing terms become 0.</summary>
+    public RotorDesign ToRotor() => new(
+        Id,
+        Segments,
+        SegmentsPerWavelength,
+        InnerRadiusMm / 1000.0,
+        OuterRadiusMm / 1000.0,
+        MagnetThicknessMm / 1000.0,
+        RemanenceT,
+        RemanenceTempCoeffPctPerK / 100.0,
+        MagnetDensityKgM3,
+        RotorMassG / 1000.0,
+        InertiaKgM2,
+        Units.RpmToRadPerS(MaxRpm),
+        BearingDragNm ?? 0.0,
+        DampingToSi(BearingDampingNmPerKrpm ?? 0.0),
+        RetainerThicknessMm / 1000.0,
+        RetainerAllowableMpa * 1e6);
+}

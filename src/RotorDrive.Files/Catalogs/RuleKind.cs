@@ -1,0 +1,20 @@
+namespace RotorDrive.Files.Catalogs;
+
+/// <summary>The kinds of range test a <see cref="ValueRule"/> applies.</summary>
+public enum RuleKind
+{
+    /// <summary>Any finite value.</summary>
+    Any,
+
+    /// <summary>Strictly greater than zero.</summary>
+    Positive,
+
+    /// <summary>Zero or more.</summary>
+    NonNegative,
+
+    /// <summary>Within an inclusive range.</summary>
+    Between,
+
+    /// <summary>A whole number of at least a minimum.</summary>
+    AtLeast,
+}

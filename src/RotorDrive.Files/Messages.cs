@@ -1,0 +1,165 @@
+using System.Globalization;
+
+namespace RotorDrive.Files;
+
+/// <summary>Every message RotorDrive.Files reports about user input; tests assert against these builders.</summary>
+/// <remarks>Messages say what rule was broken and, where it helps, what value was found and what is allowed.</remarks>
+public static class Messages
+{
+    private static string N(double value) => value.ToString("G", CultureInfo.InvariantCulture);
+
+    // ---- files ----
+
+    /// <summary>The file does not exist.</summary>
+    public static string FileNotFound() => "file not found";
+
+    /// <summary>The file exists but could not be read.</summary>
+    public static string FileUnreadable(string reason) => $"cannot read the file: {reason}";
+
+    /// <summary>The file would be overwritten without permission.</summary>
+    public static string FileExists() => "the file already exists; pass --force to overwrite it";
+
+    /// <summary>Writing a file failed.</summary>
+    public static string FileNotWritten(string reason) => $"cannot write the file: {reason}";
+
+    // ---- CSV structure ----
+
+    /// <summary>A CSV file with no header row.</summary>
+    public static string EmptyCsv() => "the file is empty; expected a header row";
+
+    /// <summary>A required column is absent from the header.</summary>
+    public static string MissingColumn(string column) => $"required column '{column}' is missing";
+
+    /// <summary>A header names a column the file type does not have.</summary>
+    public static string UnknownColumn(string column, string? suggestion)
+        => suggestion is null
+            ? $"unknown column '{column}'; extra columns must be named 'note' or start with 'x_'"
+            : $"unknown column '{column}' (did you mean '{suggestion}'?); extra columns must be named 'note' or start with 'x_'";
+
+    /// <summary>A header names the same column twice.</summary>
+    public static string DuplicateColumn(string column) => $"column '{column}' appears more than once in the header";
+
+    /// <summary>A row's field count differs from the header's.</summary>
+    public static string FieldCount(int expected, int actual) => $"the row has {actual} fields but the header has {expected}";
+
+    /// <summary>A row with broken quoting.</summary>
+    public static string MalformedRow(string reason) => $"malformed row ({reason}); quote fields with \"...\" and double any quote inside";
+
+    /// <summary>An id used by an earlier row.</summary>
+    public static string DuplicateId(string id, int firstLine) => $"duplicate id '{id}' (first used on line {firstLine})";
+
+    // ---- CSV values ----
+
+    /// <summary>A required value is empty.</summary>
+    public static string ValueRequired() => "a value is required";
+
+    /// <summary>Text that is not a number.</summary>
+    public static string NotANumber(string text) => $"'{text}' is not a number (use a dot as decimal separator, e.g. 12.5)";
+
+    /// <summary>NaN or infinity, or a number too large to represent.</summary>
+    public static string NotFinite(string text) => $"'{text}' is not a finite number";
+
+    /// <summary>Text that is not a whole number.</summary>
+    public static string NotAnInteger(string text) => $"'{text}' is not a whole number";
+
+    /// <summary>Text that is not a boolean.</summary>
+    public static string NotABoolean(string text) => $"'{text}' is not true or false (accepted: true/false, yes/no, 1/0)";
+
+    /// <summary>A value that must be greater than zero.</summary>
+    public static string MustBePositive(double value) => $"must be greater than 0; got {N(value)}";
+
+    /// <summary>A value that must not be negative.</summary>
+    public static string MustBeNonNegative(double value) => $"must be 0 or more; got {N(value)}";
+
+    /// <summary>A value outside an inclusive range.</summary>
+    public static string MustBeBetween(double min, double max, double value) => $"must be between {N(min)} and {N(max)}; got {N(value)}";
+
+    /// <summary>A whole number below its minimum.</summary>
+    public static string MustBeAtLeast(int min, int value) => $"must be at least {min}; got {value}";
+
+    /// <summary>A motor pole count that is not an even number of at least 2.</summary>
+    public static string PolesMustBeEven(int value) => $"must be an even number of at least 2 (magnet poles, not pole pairs); got {value}";
+
+    /// <summary>Inner radius not below outer radius.</summary>
+    public static string InnerRadiusNotBelowOuter(double innerMm, double outerMm)
+        => $"inner radius {N(innerMm)} mm must be less than outer_radius_mm {N(outerMm)} mm";
+
+    /// <summary>Segment count not a multiple of segments per wavelength.</summary>
+    public static string SegmentsNotMultiple(int segments, int perWavelength)
+        => $"segments ({segments}) must be a whole multiple of segments_per_wavelength ({perWavelength})";
+
+    /// <summary>Burst rating below continuous rating.</summary>
+    public static string BurstBelowContinuous(string continuousColumn, double burst, double continuous)
+        => $"must be at least {continuousColumn} ({N(continuous)}); got {N(burst)}";
+
+    /// <summary>Largest cell count below the smallest.</summary>
+    public static string MaxCellsBelowMin(int max, int min) => $"must be at least min_cells ({min}); got {max}";
+
+    /// <summary>One retainer column given without the other.</summary>
+    public static string RetainerPairIncomplete(string missingColumn)
+        => $"give {missingColumn} too: the retaining ring needs both thickness and allowable stress";
+
+    /// <summary>A cell curve whose state of charge does not strictly increase.</summary>
+    public static string SocNotIncreasing(string chemistry, double previous, double value)
+        => $"soc_pct of chemistry '{chemistry}' must increase row by row; {N(value)} follows {N(previous)}";
+
+    /// <summary>A cell curve whose voltage falls as the state of charge rises.</summary>
+    public static string OcvDecreasing(string chemistry, double previous, double value)
+        => $"ocv_v of chemistry '{chemistry}' must not fall as soc_pct rises; {N(value)} follows {N(previous)}";
+
+    /// <summary>A cell curve with too few points.</summary>
+    public static string CurveTooShort(string chemistry, int points)
+        => $"the curve of chemistry '{chemistry}' has {points} point(s); at least 2 are needed";
+
+    /// <summary>A curve whose points are split by another chemistry's rows.</summary>
+    public static string CurveNotContiguous(string chemistry)
+        => $"the rows of chemistry '{chemistry}' must be together, one block per chemistry";
+
+    /// <summary>A pack chemistry with no voltage curve.</summary>
+    public static string NoCurveForChemistry(string chemistry, string curveFile)
+        => $"chemistry '{chemistry}' has no open-circuit voltage curve in {curveFile}";
+
+    // ---- rig file (JSON) ----
+
+    /// <summary>The rig file is not valid JSON.</summary>
+    public static string JsonSyntax(string detail) => $"not valid JSON: {detail}";
+
+    /// <summary>A key the rig file format does not have.</summary>
+    public static string UnknownKey(string key, string? suggestion)
+        => suggestion is null ? $"unknown key '{key}'" : $"unknown key '{key}' (did you mean '{suggestion}'?)";
+
+    /// <summary>A key given twice in one object.</summary>
+    public static string DuplicateKey(string key) => $"key '{key}' appears more than once";
+
+    /// <summary>A required key is absent.</summary>
+    public static string MissingKey(string key) => $"required key '{key}' is missing";
+
+    /// <summary>A value of the wrong JSON type.</summary>
+    public static string WrongType(string expected, string found) => $"expected {expected}, found {found}";
+
+    /// <summary>A spin direction that is neither cw nor ccw.</summary>
+    public static string BadSpin(string text) => $"'{text}' is not a spin direction; use \"cw\" or \"ccw\"";
+
+    /// <summary>A rig with no stations.</summary>
+    public static string NoStations() => "the rig needs at least one station";
+
+    /// <summary>An id not found in the named catalog.</summary>
+    public static string UnknownId(string kind, string id, string catalogFile)
+        => $"no {kind} with id '{id}' in {catalogFile}";
+
+    /// <summary>A landed gap larger than the design gap.</summary>
+    public static string LandedAboveDesign(double landedMm, double designMm)
+        => $"landed gap {N(landedMm)} mm must not exceed the design gap {N(designMm)} mm";
+
+    /// <summary>Two stations whose rotors overlap.</summary>
+    public static string StationsOverlap(int other, double distanceMm, double neededMm)
+        => $"this rotor overlaps the rotor of station {other}: axes {N(distanceMm)} mm apart, at least {N(neededMm)} mm needed";
+
+    /// <summary>A whole-number JSON value that has a fraction.</summary>
+    public static string JsonNotAnInteger(double value) => $"must be a whole number; got {N(value)}";
+
+    // ---- command line ----
+
+    /// <summary>An unexpected failure reported in one line.</summary>
+    public static string Unexpected(string detail) => $"unexpected error: {detail}";
+}

@@ -1,0 +1,168 @@
+using RotorDrive.Files.Json;
+
+namespace RotorDrive.Files.Rigs;
+
+/// <summary>Reads rig-file JSON (comments and trailing commas allowed) into a <see cref="RigDocument"/>, reporting
+/// syntax errors, unknown keys and wrong value types with their JSON path, line and column.</summary>
+/// <remarks>Values are not range-checked here; <see cref="RigResolver"/> does that, so an edited document gets the
+/// same checks as a file.</remarks>
+public static class RigDocumentReader
+{
+    /// <summary>Reads rig JSON text; never throws on bad input.</summary>
+    /// <param name="text">The whole file.</param>
+    /// <param name="file">The file name used in problems.</param>
+    public static RigDocumentReadResult Read(string text, string file)
+    {
+        ArgumentNullException.ThrowIfNull(text);
+        ArgumentNullException.ThrowIfNull(file);
+        var problems = new List<InputProblem>();
+        var map = new RigSourceMap();
+        var root = JsonTreeParser.Parse(text, file, problems);
+        if (root is null)
+        {
+            return new RigDocumentReadResult(null, map, problems);
+        }
+        Index(root, "$", map);
+        var top = JsonObjectScope.Open(root, "$", file, problems);
+        if (top is null)
+        {
+            return new RigDocumentReadResult(null, map, problems);
+        }
+
+        var doc = new RigDocument
+        {
+            Name = top.String("name"),
+            AmbientC = top.Number("ambient_c"),
+            GearYawFrictionNm = top.Number("gear_yaw_friction_nm"),
+        };
+
+        if (JsonObjectScope.Open(top.Take("catalogs"), "$.catalogs", file, problems) is { } c)
+        {
+            doc.Catalogs = new RigCatalogsSection
+            {
+                Motors = c.String("motors"),
+                Controllers = c.String("controllers"),
+                Packs = c.String("packs"),
+                CellCurves = c.String("cell_curves"),
+                Rotors = c.String("rotors"),
+                Plates = c.String("plates"),
+            };
+            c.ReportUnknownKeys();
+        }
+
+        if (JsonObjectScope.Open(top.Take("plate"), "$.plate", file, problems) is { } p)
+        {
+            doc.Plate = new RigPlateSection
+            {
+                Material = p.String("material"),
+                ThicknessMm = p.Number("thickness_mm"),
+                TemperatureC = p.Number("temperature_c"),
+                ConvectionWPerM2K = p.Number("convection_w_per_m2k"),
+            };
+            p.ReportUnknownKeys();
+        }
+
+        if (JsonObjectScope.Open(top.Take("craft"), "$.craft", file, problems) is { } k)
+        {
+            doc.Craft = new RigCraftSection
+            {
+                EmptyMassKg = k.Number("empty_mass_kg"),
+                PayloadKg = k.Number("payload_kg"),
+                CgXMm = k.Number("cg_x_mm"),
+                CgYMm = k.Number("cg_y_mm"),
+                YawInertiaKgM2 = k.Number("yaw_inertia_kg_m2"),
+                HeaveDampingRatio = k.Number("heave_damping_ratio"),
+            };
+            k.ReportUnknownKeys();
+        }
+
+        if (JsonObjectScope.Open(top.Take("gap"), "$.gap", file, problems) is { } g)
+        {
+            doc.Gap = new RigGapSection { DesignMm = g.Number("design_mm"), LandedMm = g.Number("landed_mm") };
+            g.ReportUnknownKeys();
+        }
+
+        var stationsNode = top.Take("stations");
+        if (stationsNode is JsonArrayNode array)
+        {
+            doc.Stations = [];
+            for (int i = 0; i < array.Items.Count; i++)
+            {
+                string path = $"$.stations[{i}]";
+                var s = JsonObjectScope.Open(array.Items[i], path, file, problems);
+                if (s is null)
+                {
+                    doc.Stations.Add(new RigStationSection());
+                    continue;
+                }
+                doc.Stations.Add(new RigStationSection
+                {
+                    XMm = s.Number("x_mm"),
+                    YMm = s.Number("y_mm"),
+                    Spin = s.String("spin"),
+                    Rotor = s.String("rotor"),
+                    Motor = s.String("motor"),
+                    Controller = s.String("controller"),
+                });
+                s.ReportUnknownKeys();
+            }
+        }
+        else if (stationsNode is not null)
+        {
+            problems.Add(new InputProblem(file, stationsNode.Line, stationsNode.Column, "$.stations",
+                Messages.WrongType("an array", stationsNode.Describe())));
+        }
+
+        if (JsonObjectScope.Open(top.Take("pack"), "$.pack", file, problems) is { } pk)
+        {
+            doc.Pack = new RigPackSection { Id = pk.String("id"), Count = pk.Integer("count") };
+            pk.ReportUnknownKeys();
+        }
+
+        if (JsonObjectScope.Open(top.Take("limits"), "$.limits", file, problems) is { } l)
+        {
+            doc.Limits = new RigLimitsSection
+            {
+                YawTorqueNm = l.Number("yaw_torque_nm"),
+                PlateTempC = l.Number("plate_temp_c"),
+                CellCutoffV = l.Number("cell_cutoff_v"),
+                UsableCapacityPct = l.Number("usable_capacity_pct"),
+                MaxDuty = l.Number("max_duty"),
+                LiftoffTimeS = l.Number("liftoff_time_s"),
+            };
+            l.ReportUnknownKeys();
+        }
+
+        top.ReportUnknownKeys();
+        var ordered = problems.OrderBy(x => x.Line).ThenBy(x => x.Column).ToList();
+        return new RigDocumentReadResult(doc, map, ordered);
+    }
+
+    /// <summary>Reads a rig file from disk; a missing or unreadable file is a problem, not an exception.</summary>
+    public static RigDocumentReadResult ReadFile(string path)
+    {
+        var problems = new List<InputProblem>();
+        string? text = TextFiles.TryRead(path, problems);
+        return text is null ? new RigDocumentReadResult(null, RigSourceMap.Empty, problems) : Read(text, path);
+    }
+
+    private static void Index(JsonNode node, string path, RigSourceMap map)
+    {
+        map.Add(path, node.Line, node.Column);
+        switch (node)
+        {
+            case JsonObjectNode obj:
+                foreach (var m in obj.Members)
+                {
+                    Index(m.Value, path + "." + m.Key, map);
+                }
+                break;
+            case JsonArrayNode arr:
+                for (int i = 0; i < arr.Items.Count; i++)
+                {
+                    Index(arr.Items[i], $"{path}[{i}]", map);
+                }
+                break;
+        }
+    }
+}

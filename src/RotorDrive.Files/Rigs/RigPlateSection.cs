@@ -1,0 +1,17 @@
+namespace RotorDrive.Files.Rigs;
+
+/// <summary>"plate": the conducting plate.</summary>
+public sealed class RigPlateSection
+{
+    /// <summary>"material": id in plates.csv.</summary>
+    public string? Material { get; set; }
+
+    /// <summary>"thickness_mm": plate thickness, mm.</summary>
+    public double? ThicknessMm { get; set; }
+
+    /// <summary>"temperature_c": plate temperature at the start, C.</summary>
+    public double? TemperatureC { get; set; }
+
+    /// <summary>"convection_w_per_m2k": plate-to-air heat transfer coefficient, W/(m^2 K) (optional).</summary>
+    public double? ConvectionWPerM2K { get; set; }
+}

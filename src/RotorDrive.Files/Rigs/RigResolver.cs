@@ -1,0 +1,342 @@
+using RotorDrive.Core;
+using RotorDrive.Core.Craft;
+using RotorDrive.Core.Drive;
+using RotorDrive.Core.Magnetics;
+using RotorDrive.Files.Catalogs;
+
+namespace RotorDrive.Files.Rigs;
+
+/// <summary>Checks a <see cref="RigDocument"/> (required keys, ranges, ids in the catalogs) and builds the Core
+/// <see cref="Rig"/> in SI units. Problems name the JSON path and, when the document came from a file, its line.</summary>
+public static class RigResolver
+{
+    /// <summary>The catalog paths the document names, resolved against the rig file's folder; null (after reporting
+    /// the missing keys) when the "catalogs" section is incomplete.</summary>
+    public static CatalogPaths? CatalogPathsOf(RigDocument document, string rigPath, RigSourceMap? locations, List<InputProblem> problems)
+    {
+        ArgumentNullException.ThrowIfNull(document);
+        ArgumentNullException.ThrowIfNull(rigPath);
+        ArgumentNullException.ThrowIfNull(problems);
+        var ctx = new Context(rigPath, locations ?? RigSourceMap.Empty, problems);
+        var c = document.Catalogs;
+        if (c is null)
+        {
+            ctx.Missing("$.catalogs");
+            return null;
+        }
+        string folder = Path.GetDirectoryName(rigPath) ?? "";
+        string? Resolve(string? value, string key)
+        {
+            if (string.IsNullOrWhiteSpace(value))
+            {
+                ctx.Missing("$.catalogs." + key);
+                return null;
+            }
+            return Path.IsPathRooted(value) ? value : Path.Combine(folder, value);
+        }
+        var motors = Resolve(c.Motors, "motors");
+        var controllers = Resolve(c.Controllers, "controllers");
+        var packs = Resolve(c.Packs, "packs");
+        var curves = Resolve(c.CellCurves, "cell_curves");
+        var rotors = Resolve(c.Rotors, "rotors");
+        var plates = Resolve(c.Plates, "plates");
+        if (motors is null || controllers is null || packs is null || curves is null || rotors is null || plates is null)
+        {
+            return null;
+        }
+        return new CatalogPaths(motors, controllers, packs, curves, rotors, plates);
+    }
+
+    /// <summary>Resolves a document against a catalog held in memory (catalog file names in messages are generic).</summary>
+    public static RigResolveResult Resolve(RigDocument document, PartsCatalog catalog, string rigFile, RigSourceMap? locations = null)
+    {
+        ArgumentNullException.ThrowIfNull(catalog);
+        var paths = new CatalogPaths("motors.csv", "controllers.csv", "packs.csv", "cell_curves.csv", "rotors.csv", "plates.csv");
+        return Resolve(document, new CatalogLoadResult(catalog, paths, [], new Dictionary<PartKind, IReadOnlySet<string>>()), rigFile, locations);
+    }
+
+    /// <summary>Resolves a document against loaded catalogs. With <paramref name="catalogs"/> null (catalogs could not
+    /// be located) every check that needs no catalog still runs, and the rig is null.</summary>
+    /// <param name="document">The rig document.</param>
+    /// <param name="catalogs">The loaded catalogs; ids rejected there are not reported again.</param>
+    /// <param name="rigFile">The rig file's name, for problems.</param>
+    /// <param name="locations">Positions of the document's keys in the file, or null.</param>
+    public static RigResolveResult Resolve(RigDocument document, CatalogLoadResult? catalogs, string rigFile, RigSourceMap? locations = null)
+    {
+        ArgumentNullException.ThrowIfNull(document);
+        ArgumentNullException.ThrowIfNull(rigFile);
+        var problems = new List<InputProblem>();
+        var ctx = new Context(rigFile, locations ?? RigSourceMap.Empty, problems);
+        bool partsOk = catalogs is not null;
+
+        string? name = document.Name;
+        if (string.IsNullOrWhiteSpace(name))
+        {
+            ctx.Missing("$.name");
+        }
+
+        // Plate.
+        PlateMaterial? material = null;
+        double? thickness = null, plateTemp = null, convection = null;
+        if (document.Plate is not { } plate)
+        {
+            ctx.Missing("$.plate");
+        }
+        else
+        {
+            material = ctx.Lookup(plate.Material, "$.plate.material", PartKind.Plate, "plate material", catalogs, c => c.Plates, m => m.Id);
+            thickness = ctx.Required(plate.ThicknessMm, "$.plate.thickness_mm", ValueRule.Between(0.01, 200));
+            plateTemp = ctx.Required(plate.TemperatureC, "$.plate.temperature_c", ValueRule.Between(-40, 400));
+            convection = ctx.Optional(plate.ConvectionWPerM2K, "$.plate.convection_w_per_m2k", ValueRule.Between(0.1, 1000), RigDefaults.ConvectionWPerM2K);
+        }
+
+        // Craft.
+        CraftBody? body = null;
+        if (document.Craft is not { } craft)
+        {
+            ctx.Missing("$.craft");
+        }
+        else
+        {
+            var empty = ctx.Required(craft.EmptyMassKg, "$.craft.empty_mass_kg", ValueRule.Positive);
+            var payload = ctx.Required(craft.PayloadKg, "$.craft.payload_kg", ValueRule.NonNegative);
+            var cgx = ctx.Required(craft.CgXMm, "$.craft.cg_x_mm", ValueRule.Any);
+            var cgy = ctx.Required(craft.CgYMm, "$.craft.cg_y_mm", ValueRule.Any);
+            var inertia = ctx.Required(craft.YawInertiaKgM2, "$.craft.yaw_inertia_kg_m2", ValueRule.Positive);
+            var damping = ctx.Optional(craft.HeaveDampingRatio, "$.craft.heave_damping_ratio", ValueRule.Between(0, 2), RigDefaults.HeaveDampingRatio);
+            if (empty is not null && payload is not null && cgx is not null && cgy is not null && inertia is not null && damping is not null)
+            {
+                body = new CraftBody(empty.Value, payload.Value, cgx.Value / 1000.0, cgy.Value / 1000.0, inertia.Value, damping.Value);
+            }
+        }
+
+        // Gaps and environment.
+        double? design = null, landed = null;
+        if (document.Gap is not { } gap)
+        {
+            ctx.Missing("$.gap");
+        }
+        else
+        {
+            design = ctx.Required(gap.DesignMm, "$.gap.design_mm", ValueRule.Between(0.1, 200));
+            landed = ctx.Required(gap.LandedMm, "$.gap.landed_mm", ValueRule.Between(0.1, 200));
+            if (design is { } d && landed is { } l && l > d)
+            {
+                ctx.Report("$.gap.landed_mm", Messages.LandedAboveDesign(l, d));
+                landed = null;
+            }
+        }
+        var ambient = ctx.Required(document.AmbientC, "$.ambient_c", ValueRule.Between(-40, 60));
+        var gearFriction = ctx.Optional(document.GearYawFrictionNm, "$.gear_yaw_friction_nm", ValueRule.NonNegative, RigDefaults.GearYawFrictionNm);
+
+        // Stations.
+        var stations = new List<Station>();
+        bool stationsOk = true;
+        if (document.Stations is not { } stationDocs)
+        {
+            ctx.Missing("$.stations");
+            stationsOk = false;
+        }
+        else if (stationDocs.Count == 0)
+        {
+            ctx.Report("$.stations", Messages.NoStations());
+            stationsOk = false;
+        }
+        else
+        {
+            for (int i = 0; i < stationDocs.Count; i++)
+            {
+                var s = stationDocs[i];
+                string path = $"$.stations[{i}]";
+                var x = ctx.Required(s.XMm, path + ".x_mm", ValueRule.Between(-100_000, 100_000));
+                var y = ctx.Required(s.YMm, path + ".y_mm", ValueRule.Between(-100_000, 100_000));
+                SpinDirection? spin = null;
+                if (s.Spin is null)
+                {
+                    ctx.Missing(path + ".spin");
+                }
+                else if (string.Equals(s.Spin.Trim(), "cw", StringComparison.OrdinalIgnoreCase))
+                {
+                    spin = SpinDirection.Clockwise;
+                }
+                else if (string.Equals(s.Spin.Trim(), "ccw", StringComparison.OrdinalIgnoreCase))
+                {
+                    spin = SpinDirection.CounterClockwise;
+                }
+                else
+                {
+                    ctx.Report(path + ".spin", Messages.BadSpin(s.Spin));
+                }
+                var rotor = ctx.Lookup(s.Rotor, path + ".rotor", PartKind.Rotor, "rotor", catalogs, c => c.Rotors, r => r.Id);
+                Motor? motor = s.Motor is null ? null
+                    : ctx.Lookup(s.Motor, path + ".motor", PartKind.Motor, "motor", catalogs, c => c.Motors, m => m.Id);
+                SpeedController? controller = s.Controller is null ? null
+                    : ctx.Lookup(s.Controller, path + ".controller", PartKind.Controller, "controller", catalogs, c => c.Controllers, c => c.Id);
+                bool motorOk = s.Motor is null || motor is not null;
+                bool controllerOk = s.Controller is null || controller is not null;
+                if (x is null || y is null || spin is null || rotor is null || !motorOk || !controllerOk)
+                {
+                    stationsOk = false;
+                    continue;
+                }
+                stations.Add(new Station(x.Value / 1000.0, y.Value / 1000.0, spin.Value, rotor, motor, controller));
+            }
+            if (stationsOk)
+            {
+                for (int i = 0; i < stations.Count; i++)
+                {
+                    for (int j = 0; j < i; j++)
+                    {
+                        double distance = Math.Sqrt(Math.Pow(stations[i].XM - stations[j].XM, 2) + Math.Pow(stations[i].YM - stations[j].YM, 2));
+                        double needed = stations[i].Rotor.OuterRadiusM + stations[j].Rotor.OuterRadiusM;
+                        if (distance < needed)
+                        {
+                            ctx.Report($"$.stations[{i}]", Messages.StationsOverlap(j, distance * 1000.0, needed * 1000.0));
+                            stationsOk = false;
+                        }
+                    }
+                }
+            }
+        }
+
+        // Pack.
+        PackBank? bank = null;
+        bool packOk = true;
+        if (document.Pack is { } packDoc)
+        {
+            var pack = ctx.Lookup(packDoc.Id, "$.pack.id", PartKind.Pack, "pack", catalogs, c => c.Packs, p => p.Id);
+            int? count = null;
+            if (packDoc.Count is null)
+            {
+                ctx.Missing("$.pack.count");
+            }
+            else if (packDoc.Count < 1)
+            {
+                ctx.Report("$.pack.count", Messages.MustBeAtLeast(1, packDoc.Count.Value));
+            }
+            else
+            {
+                count = packDoc.Count;
+            }
+            CellCurve? curve = null;
+            if (pack is not null && catalogs is not null)
+            {
+                curve = catalogs.Catalog.CurveFor(pack.Chemistry);
+                if (curve is null)
+                {
+                    ctx.Report("$.pack.id", Messages.NoCurveForChemistry(pack.Chemistry, catalogs.Paths.CellCurves));
+                }
+            }
+            if (pack is not null && count is not null && curve is not null)
+            {
+                bank = new PackBank(pack, count.Value, curve);
+            }
+            else
+            {
+                packOk = false;
+            }
+        }
+
+        // Limits.
+        RigLimits? limits = null;
+        if (document.Limits is not { } lim)
+        {
+            ctx.Missing("$.limits");
+        }
+        else
+        {
+            var yaw = ctx.Required(lim.YawTorqueNm, "$.limits.yaw_torque_nm", ValueRule.Positive);
+            var plateMax = ctx.Required(lim.PlateTempC, "$.limits.plate_temp_c", ValueRule.Between(-40, 400));
+            var cutoff = ctx.Optional(lim.CellCutoffV, "$.limits.cell_cutoff_v", ValueRule.Between(1.5, 4.5), RigDefaults.CellCutoffV);
+            var usable = ctx.Optional(lim.UsableCapacityPct, "$.limits.usable_capacity_pct", ValueRule.Between(1, 100), RigDefaults.UsableCapacityPct);
+            var duty = ctx.Optional(lim.MaxDuty, "$.limits.max_duty", ValueRule.Between(0.05, 1), RigDefaults.MaxDuty);
+            var liftoff = ctx.Optional(lim.LiftoffTimeS, "$.limits.liftoff_time_s", ValueRule.Positive, RigDefaults.LiftoffTimeS);
+            if (yaw is not null && plateMax is not null && cutoff is not null && usable is not null && duty is not null && liftoff is not null)
+            {
+                limits = new RigLimits(yaw.Value, plateMax.Value, cutoff.Value, usable.Value / 100.0, duty.Value, liftoff.Value);
+            }
+        }
+
+        var ordered = problems.OrderBy(p => p.Line).ThenBy(p => p.Column).ToList();
+        if (ordered.Count > 0 || !partsOk || !stationsOk || !packOk || name is null || material is null || thickness is null
+            || plateTemp is null || convection is null || body is null || design is null || landed is null || ambient is null
+            || gearFriction is null || limits is null)
+        {
+            return new RigResolveResult(null, ordered);
+        }
+        var rig = new Rig(
+            name.Trim(),
+            new Plate(material, thickness.Value / 1000.0),
+            plateTemp.Value,
+            ambient.Value,
+            body,
+            design.Value / 1000.0,
+            landed.Value / 1000.0,
+            stations,
+            bank,
+            limits,
+            gearFriction.Value,
+            convection.Value);
+        return new RigResolveResult(rig, ordered);
+    }
+
+    /// <summary>Collects problems for one resolve, placing each at its JSON path's position.</summary>
+    private sealed class Context(string file, RigSourceMap map, List<InputProblem> problems)
+    {
+        public void Report(string path, string message)
+        {
+            var (line, column) = map.Find(path);
+            problems.Add(new InputProblem(file, line, column, path, message));
+        }
+
+        public void Missing(string path) => Report(path, Messages.MissingKey(path[(path.LastIndexOf('.') + 1)..]));
+
+        public double? Required(double? value, string path, ValueRule rule)
+        {
+            if (value is null)
+            {
+                Missing(path);
+                return null;
+            }
+            return Check(value.Value, path, rule);
+        }
+
+        public double? Optional(double? value, string path, ValueRule rule, double defaultValue)
+            => value is null ? defaultValue : Check(value.Value, path, rule);
+
+        private double? Check(double value, string path, ValueRule rule)
+        {
+            if (!double.IsFinite(value))
+            {
+                Report(path, Messages.NotFinite(value.ToString(System.Globalization.CultureInfo.InvariantCulture)));
+                return null;
+            }
+            if (rule.Check(value) is { } message)
+            {
+                Report(path, message);
+                return null;
+            }
+            return value;
+        }
+
+        public T? Lookup<T>(string? id, string path, PartKind kind, string kindName, CatalogLoadResult? catalogs,
+            Func<PartsCatalog, IReadOnlyList<T>> list, Func<T, string> idOf) where T : class
+        {
+            if (string.IsNullOrWhiteSpace(id))
+            {
+                Missing(path);
+                return null;
+            }
+            if (catalogs is null)
+            {
+                return null;
+            }
+            var found = list(catalogs.Catalog).FirstOrDefault(x => string.Equals(idOf(x), id.Trim(), StringComparison.OrdinalIgnoreCase));
+            if (found is null && !catalogs.IsRejected(kind, id.Trim()))
+            {
+                Report(path, Messages.UnknownId(kindName, id, catalogs.Paths.For(kind)));
+            }
+            return found;
+        }
+    }
+}
