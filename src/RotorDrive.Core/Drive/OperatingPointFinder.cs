@@ -300,12 +300,19 @@ public static class OperatingPointFinder
         private DriveCommand _command;
         private double _x1 = double.NaN, _g1, _x2 = double.NaN, _g2;
 
+        // The last evaluation (Brent's returned root is usually the point it evaluated last).
+        private double _lastSpeed = double.NaN;
+        private BusSolution _lastBus;
+        private DrivePoint _lastPoint;
+        private LoadPoint _lastLoad;
+
         public DriveCommand Command
         {
             get => _command;
             set
             {
                 _command = value;
+                _lastSpeed = double.NaN;
                 _station = DriveStation.Prepare(new DriveInput(drive.Drivetrain, value, 0, conditions.WindingTempC, conditions.MotorMagnetTempC, conditions.Braking));
             }
         }
@@ -337,8 +344,10 @@ public static class OperatingPointFinder
         {
             Evaluations++;
             _station.SetSpeed(speed);
-            DriveBus.SolveSingle(source, ref _station, out var point, double.NaN, DriveBusOptions.Default);
-            return point.TorqueNm - LoadAt(speed).TotalTorqueNm;
+            _lastBus = DriveBus.SolveSingle(source, ref _station, out _lastPoint, double.NaN, DriveBusOptions.Default);
+            _lastLoad = LoadAt(speed);
+            _lastSpeed = speed;
+            return _lastPoint.TorqueNm - _lastLoad.TotalTorqueNm;
         }
 
         public void Cache(double x1, double g1, double x2, double g2)
@@ -365,10 +374,11 @@ public static class OperatingPointFinder
         // The full record of an equilibrium; with a slope step, also the forward-difference stability slope.
         public OperatingPoint Detail(double speed, EquilibriumKind kind, bool stable, double slopeStep = 0)
         {
-            Evaluations++;
-            _station.SetSpeed(speed);
-            var bus = DriveBus.SolveSingle(source, ref _station, out var point, double.NaN, DriveBusOptions.Default);
-            var load = LoadAt(speed);
+            if (speed != _lastSpeed)
+            {
+                F(speed);
+            }
+            var (bus, point, load) = (_lastBus, _lastPoint, _lastLoad);
             double? slope = null;
             if (slopeStep > 0)
             {
