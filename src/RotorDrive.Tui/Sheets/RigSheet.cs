@@ -24,9 +24,9 @@ public sealed class RigSheet : Sheet
     public RigSheet(WorkbenchContext context)
         : base(context, "Rig")
     {
-        _totals = new Label { X = 0, Y = 0, Width = Dim.Fill(), Text = "" };
-        _pack = new Label { X = 0, Y = 1, Width = Dim.Fill(), Text = "" };
-        _problems = new Label { X = 0, Y = 2, Width = Dim.Fill(), Text = "" };
+        _totals = new Label { X = 0, Y = 0, Width = Dim.Fill(), Height = 1, Text = "" };
+        _pack = new Label { X = 0, Y = 1, Width = Dim.Fill(), Height = 1, Text = "" };
+        _problems = new Label { X = 0, Y = 2, Width = Dim.Fill(), Height = 1, Text = "" };
         Add(_totals, _pack, _problems);
         int y = 4;
         foreach (var (heading, specs) in RigFields.Groups)
@@ -48,6 +48,14 @@ public sealed class RigSheet : Sheet
         }
         _contentRows = y;
         SetContentSize(new Size(60, _contentRows));
+        FrameChanged += (_, _) =>
+        {
+            int width = Math.Max(60, Frame.Width - 1);
+            if (GetContentSize().Width != width)
+            {
+                SetContentSize(new Size(width, _contentRows));
+            }
+        };
         ViewportSettings |= ViewportSettingsFlags.HasVerticalScrollBar;
     }
 
@@ -69,8 +77,8 @@ public sealed class RigSheet : Sheet
         {
             var (cgx, cgy) = rig.CentreOfGravity();
             int cw = rig.Stations.Count(s => s.Spin == SpinDirection.Clockwise);
-            _totals.Text = $"Mass {F(rig.TotalMassKg, 1)} kg (weight {F(rig.TotalMassKg * Units.StandardGravity, 0)} N), CG x {F(cgx * 1000, 0)} y {F(cgy * 1000, 0)} mm, "
-                + $"{rig.Stations.Count} stations ({cw} cw, {rig.Stations.Count - cw} ccw)";
+            _totals.Text = $"Mass {F(rig.TotalMassKg, 1)} kg, weight {F(rig.TotalMassKg * Units.StandardGravity, 0)} N, CG x {F(cgx * 1000, 0)} y {F(cgy * 1000, 0)} mm, "
+                + $"{cw} cw + {rig.Stations.Count - cw} ccw";
             _pack.Text = rig.Packs is { } b
                 ? $"Bus: {b.Count} x {b.Pack.Id}, {b.CellsSeries}S, {F(b.CapacityAh, 1)} Ah, {F(b.OpenCircuitVoltageAt(1.0), 1)} V full, {F(b.MassKg, 1)} kg"
                 : "Bus: no pack assigned";
@@ -81,7 +89,7 @@ public sealed class RigSheet : Sheet
             _pack.Text = "";
         }
         int count = session.Problems.Count + session.UntypedFields.Count;
-        _problems.Text = count == 0 ? "All values valid." : $"! {count} problem(s); see the marks beside the fields (full list: Stations sheet)";
+        _problems.Text = count == 0 ? "All values valid." : $"! {count} problem(s): marked beside the fields; all listed on Stations";
     }
 
     /// <inheritdoc/>

@@ -153,11 +153,17 @@ public sealed class MainWindow : Window
         Tell(failure is null ? $"Opened {path}" : "! Cannot open: " + failure);
     }
 
-    /// <summary>Asks to quit; returns true when the window was asked to stop.</summary>
+    /// <summary>Quits (F10, Ctrl+Q, Esc), asking first about unsaved edits; true when the window was asked to stop.</summary>
     public bool Quit()
     {
+        if (!_quitAnswered && !ResolveUnsaved("Quit"))
+        {
+            return false;
+        }
+        _quitAnswered = true;
+        _context.Work.Cancel();
         RequestStop();
-        return !IsRunning || _quitAnswered;
+        return true;
     }
 
     /// <inheritdoc/>
@@ -208,7 +214,7 @@ public sealed class MainWindow : Window
             _context.Work.Cancel();
             Tell("Stopped.");
         }
-        else if (key == Key.F10 || key == Key.Q.WithCtrl)
+        else if (key == Key.F10 || key == Key.Q.WithCtrl || key == Key.Esc)
         {
             Quit();
         }
