@@ -72,6 +72,8 @@ internal sealed class FieldBinding
         string? message = session.MessageFor(Spec.JsonPath);
         CurrentMessage = message ?? "";
         Message.Text = message is null ? "" : "! " + message;
+        // Colour as well as the "!" mark, never colour alone.
+        Message.SchemeName = message is null ? null : "Error";
     }
 
     private void Typed()

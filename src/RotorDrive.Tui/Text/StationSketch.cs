@@ -19,8 +19,8 @@ public static class StationSketch
     /// <summary>The legend line that explains the marks.</summary>
     public static string Legend(bool letters)
         => letters
-            ? "N cw / N ccw: station N, spin seen from above   + centre of gravity   up = forward"
-            : "↻ clockwise  ↺ counter-clockwise (from above)   + centre of gravity   up = forward";
+            ? "Ncw/Nccw: station N, spin from above  + CG  up = forward"
+            : "↻ cw  ↺ ccw (seen from above)  + CG  up = forward";
 
     /// <summary>Renders the sketch into <paramref name="rows"/> lines of <paramref name="columns"/> characters.</summary>
     /// <param name="stations">The stations.</param>

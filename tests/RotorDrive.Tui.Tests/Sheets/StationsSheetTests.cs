@@ -22,7 +22,7 @@ public class StationsSheetTests
             Assert.Contains($"{i + 1}{arrow}", sketch);
         }
         Assert.Contains("+", sketch);
-        Assert.Contains("counter-clockwise", bench.Screen);
+        Assert.Contains("↺ ccw (seen from above)", bench.Screen);
     }
 
     [Fact]
