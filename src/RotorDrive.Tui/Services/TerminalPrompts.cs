@@ -21,12 +21,29 @@ public sealed class TerminalPrompts : IWorkbenchPrompts
     {
         using var dialog = new Dialog { Title = title, Width = Dim.Percent(80) };
         dialog.Add(new Label { X = 1, Y = 1, Width = Dim.Fill(1), Height = Dim.Auto(), Text = message });
-        foreach (var answer in answers)
+        // The first answer is the safe one (Cancel): added last, it is the dialog's default and sits at the right.
+        // The answer is taken from the button actually pressed; closing the dialog any other way answers nothing.
+        int? chosen = null;
+        Button? safe = null;
+        for (int i = answers.Count - 1; i >= 0; i--)
         {
-            dialog.AddButton(new Button { Text = answer });
+            int index = i;
+            var button = new Button { Text = answers[i], IsDefault = i == 0 };
+            if (i == 0)
+            {
+                safe = button;
+            }
+            button.Accepting += (_, e) =>
+            {
+                chosen = index;
+                dialog.RequestStop();
+                e.Handled = true;
+            };
+            dialog.AddButton(button);
         }
+        FocusWhenShown(dialog, safe);
         _app.Run(dialog);
-        return dialog.Result is { } r && r >= 0 && r < answers.Count ? r : null;
+        return chosen;
     }
 
     /// <inheritdoc/>
@@ -36,11 +53,31 @@ public sealed class TerminalPrompts : IWorkbenchPrompts
         dialog.Add(new Label { X = 1, Y = 1, Text = "File (relative to the current folder or absolute):" });
         var field = new TextField { X = 1, Y = 2, Width = Dim.Fill(1), Text = initialPath };
         dialog.Add(field);
-        dialog.AddButton(new Button { Text = "OK", IsDefault = true });
-        dialog.AddButton(new Button { Text = "Cancel" });
+        bool ok = false;
+        var cancel = new Button { Text = "Cancel" };
+        cancel.Accepting += (_, e) =>
+        {
+            dialog.RequestStop();
+            e.Handled = true;
+        };
+        var accept = new Button { Text = "OK", IsDefault = true };
+        accept.Accepting += (_, e) =>
+        {
+            ok = true;
+            dialog.RequestStop();
+            e.Handled = true;
+        };
+        field.Accepting += (_, e) =>
+        {
+            ok = true;
+            dialog.RequestStop();
+            e.Handled = true;
+        };
+        dialog.AddButton(cancel);
+        dialog.AddButton(accept);
         field.SetFocus();
         _app.Run(dialog);
-        return dialog.Result == 0 && field.Text.Trim().Length > 0 ? field.Text.Trim() : null;
+        return ok && field.Text.Trim().Length > 0 ? field.Text.Trim() : null;
     }
 
     /// <inheritdoc/>
@@ -65,14 +102,44 @@ public sealed class TerminalPrompts : IWorkbenchPrompts
             e.Handled = true;
         };
         dialog.Add(list);
-        dialog.AddButton(new Button { Text = "Use", IsDefault = true });
-        dialog.AddButton(new Button { Text = "Cancel" });
+        var cancel = new Button { Text = "Cancel" };
+        cancel.Accepting += (_, e) =>
+        {
+            dialog.RequestStop();
+            e.Handled = true;
+        };
+        var use = new Button { Text = "Use", IsDefault = true };
+        use.Accepting += (_, e) =>
+        {
+            if (list.Value is { } i && i >= 0 && i < items.Count)
+            {
+                chosen = items[i];
+            }
+            dialog.RequestStop();
+            e.Handled = true;
+        };
+        dialog.AddButton(cancel);
+        dialog.AddButton(use);
         list.SetFocus();
         _app.Run(dialog);
-        if (chosen is null && dialog.Result == 0 && list.Value is { } sel && sel >= 0 && sel < items.Count)
-        {
-            chosen = items[sel];
-        }
         return chosen;
+    }
+
+    // A dialog focuses its first button when it starts; move the focus to the safe one once it is up.
+    private static void FocusWhenShown(Dialog dialog, View? view)
+    {
+        if (view is null)
+        {
+            return;
+        }
+        void OnRunning(object? sender, EventArgs e)
+        {
+            if (dialog.IsRunning)
+            {
+                dialog.IsRunningChanged -= OnRunning;
+                view.SetFocus();
+            }
+        }
+        dialog.IsRunningChanged += OnRunning;
     }
 }

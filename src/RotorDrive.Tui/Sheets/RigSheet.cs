@@ -41,6 +41,7 @@ public sealed class RigSheet : Sheet
                     {
                         ScrollIntoView(binding.Field.Frame.Y);
                     }
+                    ShowProblemLine();
                 };
                 _fields.Add(binding);
             }
@@ -88,8 +89,22 @@ public sealed class RigSheet : Sheet
             _totals.Text = "Totals appear once every value is valid.";
             _pack.Text = "";
         }
+        ShowProblemLine();
+    }
+
+    // The third line gives the focused field's whole message (the one beside the field may be cut at 80 columns).
+    private void ShowProblemLine()
+    {
+        var session = Context.Session;
         int count = session.Problems.Count + session.UntypedFields.Count;
-        _problems.Text = count == 0 ? "All values valid." : $"! {count} problem(s): marked beside the fields; all listed on Stations";
+        if (_fields.FirstOrDefault(f => f.Field.HasFocus && f.CurrentMessage.Length > 0) is { } focused)
+        {
+            _problems.Text = $"! {focused.Spec.Label}: {focused.CurrentMessage}";
+        }
+        else
+        {
+            _problems.Text = count == 0 ? "All values valid." : $"! {count} problem(s): marked beside the fields; all listed on Stations";
+        }
     }
 
     /// <inheritdoc/>
