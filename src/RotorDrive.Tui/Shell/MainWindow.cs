@@ -315,15 +315,17 @@ public sealed class MainWindow : Window
         string work = _context.Work.Current is { } job ? $" | {job.Name}..." : "";
         string failure = _context.Work.LastFailure is { } f ? $" | ! {f}" : "";
         string notice = _notice.Length > 0 ? " | " + _notice : "";
-        _status.Text = $"{session.DisplayName}{mark}{problems}{work}{failure}{notice}";
+        _status.Text = $"{session.DisplayName}{mark}{work}{failure}{notice}{problems}";
         if (_context.Work.Current is { Progress: { } fraction })
         {
             _progress.Visible = true;
             _progress.Fraction = (float)fraction;
+            _status.Width = Dim.Fill(22);
         }
         else
         {
             _progress.Visible = false;
+            _status.Width = Dim.Fill();
         }
         string sheetKeys = _current >= 0 && _sheets[_current].KeyHints.Length > 0 ? _sheets[_current].KeyHints + "  " : "";
         _keys.Text = $"F1 Help  F2 Save  F3 Open  {sheetKeys}F8 Stop  F10 Quit";
