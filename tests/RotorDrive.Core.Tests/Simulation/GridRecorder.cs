@@ -1,0 +1,11 @@
+using RotorDrive.Core.Simulation;
+
+namespace RotorDrive.Core.Tests.Simulation;
+
+/// <summary>Keeps a copy of every observed point.</summary>
+internal sealed class GridRecorder : IOdeObserver
+{
+    public List<(double Time, double[] State, ObservationKind Kind)> Points { get; } = [];
+
+    public void Observe(double timeS, ReadOnlySpan<double> state, ObservationKind kind) => Points.Add((timeS, state.ToArray(), kind));
+}
