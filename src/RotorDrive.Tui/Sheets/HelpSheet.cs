@@ -2,6 +2,7 @@ using System.Collections.ObjectModel;
 using System.Text;
 using Terminal.Gui.ViewBase;
 using Terminal.Gui.Views;
+using RotorDrive.Core.Safety;
 using RotorDrive.Tui.Shell;
 using RotorDrive.Tui.Text;
 
@@ -44,9 +45,9 @@ public sealed class HelpSheet : Sheet
         sb.AppendLine("  +      centre of gravity in the station sketch");
         sb.AppendLine();
         sb.AppendLine("CAUTIONS");
-        foreach (var (heading, text) in Cautions.All)
+        foreach (var caution in Cautions.All)
         {
-            sb.AppendLine($"  {heading}: {text}");
+            sb.AppendLine($"  {caution.Title}: {caution.Text}");
         }
         return sb.ToString();
     }

@@ -2,7 +2,10 @@ using System.Collections.ObjectModel;
 using Terminal.Gui.Input;
 using Terminal.Gui.ViewBase;
 using Terminal.Gui.Views;
+using RotorDrive.Core;
 using RotorDrive.Core.Craft;
+using RotorDrive.Core.Magnetics;
+using RotorDrive.Core.Safety;
 using RotorDrive.Tui.Session;
 using RotorDrive.Tui.Shell;
 using RotorDrive.Tui.Text;
@@ -20,6 +23,7 @@ public sealed class StationsSheet : Sheet
     private readonly ObservableCollection<string> _stationItems = [];
     private readonly List<FieldBinding> _fields = [];
     private readonly Label _detail;
+    private readonly Label _safety;
     private readonly ListView _problems;
     private readonly ObservableCollection<string> _problemItems = [];
     private int _selected;
@@ -39,6 +43,7 @@ public sealed class StationsSheet : Sheet
             {
                 _selected = i;
                 Retarget();
+                Refresh();
             }
         };
         Add(_sketch, _legend, _stations);
@@ -55,8 +60,10 @@ public sealed class StationsSheet : Sheet
             };
             _fields.Add(binding);
         }
-        _detail = new Label { X = 0, Y = SketchRows + 7, Width = Dim.Fill(), Text = "" };
-        _problems = new ListView { X = 0, Y = SketchRows + 8, Width = Dim.Fill(), Height = Dim.Fill() };
+        _detail = new Label { X = 0, Y = SketchRows + 7, Width = Dim.Fill(), Height = 1, Text = "" };
+        _safety = new Label { X = 0, Y = SketchRows + 8, Width = Dim.Fill(), Height = 1, Text = "" };
+        Add(_safety);
+        _problems = new ListView { X = 0, Y = SketchRows + 9, Width = Dim.Fill(), Height = Dim.Fill() };
         _problems.SetSource(_problemItems);
         Add(_detail, _problems);
     }
@@ -145,6 +152,21 @@ public sealed class StationsSheet : Sheet
         {
             ShowDetail(focused);
         }
+        _safety.Text = rig is not null && _selected < rig.Stations.Count ? SafetyLine(rig.Stations[_selected].Rotor) : "";
+    }
+
+    /// <summary>The rotor's burst check at its rated speed, from Core's <see cref="RotorSafety"/>, marked in text.</summary>
+    internal static string SafetyLine(RotorDesign rotor)
+    {
+        var r = RotorSafety.AtRatedSpeed(rotor);
+        string head = $"{rotor.Id} at rated {Units.RadPerSToRpm(r.SpeedRadPerS):F0} rpm: rim {r.RimSpeedMPerS:F0} m/s";
+        return r.Assessment switch
+        {
+            RetainerAssessment.Assessed => $"{head}, ring {r.HoopStressPa!.Value / 1e6:F0} of {r.AllowablePa!.Value / 1e6:F0} MPa, "
+                + (r.Margin!.Value < 0 ? $"FAIL margin {r.Margin.Value:P0}" : $"margin {r.Margin.Value:P0}"),
+            RetainerAssessment.NoAllowableStress => $"{head}, ring {r.HoopStressPa!.Value / 1e6:F0} MPa, ! no allowable stress in the rotor row",
+            _ => $"{head}, ! ring stress not assessed (no retainer thickness in the rotor row)",
+        };
     }
 
     /// <inheritdoc/>

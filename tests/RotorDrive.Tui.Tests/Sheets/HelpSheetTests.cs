@@ -15,11 +15,13 @@ public class HelpSheetTests
         {
             Assert.Contains(keys, help);
         }
-        foreach (var (heading, _) in RotorDrive.Tui.Text.Cautions.All)
+        // The cautions are Core's own (RotorDrive.Core.Safety), rendered word for word.
+        foreach (var caution in RotorDrive.Core.Safety.Cautions.All)
         {
-            Assert.Contains(heading, help);
+            Assert.Contains(caution.Title, help);
+            Assert.Contains(caution.Text, help);
         }
-        Assert.Contains("pacemakers", help);
+        Assert.Contains("pacemaker", help);
         Assert.Contains("local codes", help);
     }
 

@@ -67,4 +67,16 @@ public class StationsSheetTests
         Assert.Contains("$.stations[0].rotor", bench.Screen);
         Assert.Equal("no-such-rotor", rotor.Field.Text);
     }
+
+    [Fact]
+    public void SelectedStation_ShowsItsRotorsBurstCheck_FromCore()
+    {
+        using var bench = new Bench(columns: 120);
+        bench.Window.ShowSheet("Stations");
+        var rotor = bench.Context.Session.Rig!.Stations[0].Rotor;
+        var expected = RotorDrive.Core.Safety.RotorSafety.AtRatedSpeed(rotor);
+        string screen = bench.Screen;
+        Assert.Contains($"rim {expected.RimSpeedMPerS:F0} m/s", screen);
+        Assert.Contains(StationsSheet.SafetyLine(rotor), screen);
+    }
 }
