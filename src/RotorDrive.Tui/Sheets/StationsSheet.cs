@@ -159,13 +159,14 @@ public sealed class StationsSheet : Sheet
     internal static string SafetyLine(RotorDesign rotor)
     {
         var r = RotorSafety.AtRatedSpeed(rotor);
-        string head = $"{rotor.Id} at rated {Units.RadPerSToRpm(r.SpeedRadPerS):F0} rpm: rim {r.RimSpeedMPerS:F0} m/s";
+        string at = $"burst check {rotor.Id} at {Units.RadPerSToRpm(r.SpeedRadPerS):F0} rpm";
+        string rim = $"rim {r.RimSpeedMPerS:F0} m/s";
         return r.Assessment switch
         {
-            RetainerAssessment.Assessed => $"{head}, ring {r.HoopStressPa!.Value / 1e6:F0} of {r.AllowablePa!.Value / 1e6:F0} MPa, "
-                + (r.Margin!.Value < 0 ? $"FAIL margin {r.Margin.Value:P0}" : $"margin {r.Margin.Value:P0}"),
-            RetainerAssessment.NoAllowableStress => $"{head}, ring {r.HoopStressPa!.Value / 1e6:F0} MPa, ! no allowable stress in the rotor row",
-            _ => $"{head}, ! ring stress not assessed (no retainer thickness in the rotor row)",
+            RetainerAssessment.Assessed => (r.Margin!.Value < 0 ? "FAIL " : "ok ") + $"{at}: ring {r.HoopStressPa!.Value / 1e6:F0}/{r.AllowablePa!.Value / 1e6:F0} MPa, "
+                + $"margin {r.Margin.Value:P0}, {rim}",
+            RetainerAssessment.NoAllowableStress => $"! {at}: ring {r.HoopStressPa!.Value / 1e6:F0} MPa, no allowable in the rotor row, {rim}",
+            _ => $"! {at}: ring not assessed (no retainer thickness in the rotor row), {rim}",
         };
     }
 

@@ -13,7 +13,10 @@ public static class Wrap
         foreach (string raw in text.Replace("\r", "").Split('\n'))
         {
             int indent = raw.Length - raw.TrimStart(' ').Length;
-            string pad = new(' ', Math.Min(indent + 2, width / 2));
+            // "  KEY     description": continuation lines hang under the description.
+            int gap = raw.IndexOf("  ", indent, StringComparison.Ordinal);
+            int hang = gap > indent ? gap + raw[gap..].TakeWhile(c => c == ' ').Count() : indent + 2;
+            string pad = new(' ', Math.Min(hang, width / 2));
             string rest = raw;
             bool first = true;
             while (rest.Length > width)
