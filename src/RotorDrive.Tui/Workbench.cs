@@ -54,6 +54,9 @@ public static class Workbench
         return (window, context);
     }
 
+    /// <summary>Reads the rig file as the workbench would; returns why it cannot be opened, or null.</summary>
+    public static string? CheckOpens(string rigPath) => new RigSession(new DiskFiles()).Open(rigPath);
+
     /// <summary>Runs the workbench in the real terminal until the user quits.</summary>
     /// <param name="rigPath">The rig file to open.</param>
     /// <param name="error">Where a rig that cannot be opened is reported (before the screen is taken over).</param>
@@ -62,8 +65,7 @@ public static class Workbench
     {
         ArgumentNullException.ThrowIfNull(error);
         var files = new DiskFiles();
-        var probe = new RigSession(files);
-        if (probe.Open(rigPath) is { } failure)
+        if (CheckOpens(rigPath) is { } failure)
         {
             error.WriteLine($"rotordrive ui: cannot open the rig: {failure}");
             return 2;

@@ -30,6 +30,12 @@ public static class UiCommand
                 + "or the program's repository; pass a rig file: rotordrive ui RIG.json");
             return ExitCodes.BadInput;
         }
+        // A rig that cannot be opened is reported before the terminal is taken over (and without one).
+        if (Workbench.CheckOpens(path) is { } failure)
+        {
+            error.WriteLine($"rotordrive ui: cannot open the rig: {failure}");
+            return ExitCodes.BadInput;
+        }
         if (Console.IsInputRedirected || Console.IsOutputRedirected)
         {
             error.WriteLine("rotordrive ui: needs an interactive terminal (standard input and output must not be redirected).");
