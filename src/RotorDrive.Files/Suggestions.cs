@@ -3,11 +3,11 @@ namespace RotorDrive.Files;
 /// <summary>Finds the known name closest to a mistyped one, for "did you mean" hints.</summary>
 internal static class Suggestions
 {
-    /// <summary>The closest candidate within an edit distance of a third of the name's length (at least 2), or null.</summary>
+    /// <summary>The closest candidate within an edit distance of a third of the name's length (at least 1), or null.</summary>
     public static string? Closest(string name, IEnumerable<string> candidates)
     {
         string lowered = name.ToLowerInvariant();
-        int limit = Math.Max(2, lowered.Length / 3);
+        int limit = Math.Max(1, lowered.Length / 3);
         string? best = null;
         int bestDistance = int.MaxValue;
         foreach (var candidate in candidates)

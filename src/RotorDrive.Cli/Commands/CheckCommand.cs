@@ -114,7 +114,7 @@ public static class CheckCommand
             o.WriteLine($"  total mass       {Numbers.Format(r.TotalMassKg, 1)} kg (structure {Numbers.Format(r.StructureMassKg, 1)}, payload {Numbers.Format(r.PayloadMassKg, 1)}, "
                 + $"rotors {Numbers.Format(r.RotorsMassKg, 1)}, motors {Numbers.Format(r.MotorsMassKg, 1)}, controllers {Numbers.Format(r.ControllersMassKg, 1)}, "
                 + $"packs {Numbers.Format(r.PacksMassKg, 1)})");
-            o.WriteLine($"  centre of gravity x {Numbers.Format(r.CgXMm, 1)} mm, y {Numbers.Format(r.CgYMm, 1)} mm");
+            o.WriteLine($"  centre of mass   x {Numbers.Format(r.CgXMm, 1)} mm, y {Numbers.Format(r.CgYMm, 1)} mm");
             o.WriteLine($"  spin balance     {r.CwCount} cw, {r.CcwCount} ccw" + (r.SpinBalanced ? " (balanced)" : " (unbalanced: reaction torques will not cancel with equal throttles)"));
             o.WriteLine(r.Pack is { } pk
                 ? $"  packs            {pk.Count} x {pk.Id} in parallel ({pk.CellsSeries}S, {Numbers.Format(pk.CapacityAh, 1)} Ah)"

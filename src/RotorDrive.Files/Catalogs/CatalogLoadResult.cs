@@ -16,6 +16,11 @@ public sealed record CatalogLoadResult(
     /// <summary>True when every file was read without problems.</summary>
     public bool IsClean => Problems.Count == 0;
 
-    /// <summary>True when a row with this id exists in the file but was left out because of a problem.</summary>
-    public bool IsRejected(PartKind kind, string id) => Rejected.TryGetValue(kind, out var ids) && ids.Contains(id);
+    /// <summary>Kinds whose file could not be read at all (already reported as a problem).</summary>
+    public IReadOnlySet<PartKind> Unreadable { get; init; } = new HashSet<PartKind>();
+
+    /// <summary>True when a row with this id was left out because of a problem, or its whole file could not be read:
+    /// either way the problem is already reported, so a reference to the id is not reported again.</summary>
+    public bool IsRejected(PartKind kind, string id)
+        => Unreadable.Contains(kind) || (Rejected.TryGetValue(kind, out var ids) && ids.Contains(id));
 }

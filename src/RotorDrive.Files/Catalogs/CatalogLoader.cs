@@ -16,7 +16,8 @@ public static class CatalogLoader
             Read(paths.CellCurves) ?? "", Read(paths.Rotors) ?? "", Read(paths.Plates) ?? "");
         var unreadable = problems.Select(p => p.File).ToHashSet(StringComparer.Ordinal);
         var result = FromTexts(texts, paths, skip: unreadable);
-        return result with { Problems = problems.Concat(result.Problems).ToList() };
+        var kinds = Enum.GetValues<PartKind>().Where(k => unreadable.Contains(paths.For(k))).ToHashSet();
+        return result with { Problems = problems.Concat(result.Problems).ToList(), Unreadable = kinds };
     }
 
     /// <summary>Reads catalog texts already in memory; <paramref name="paths"/> name the files in problems.</summary>

@@ -37,23 +37,41 @@ public sealed class CellCurveFormat : CatalogFormat<CellCurvePoint>
         string file, Func<string, int> columnNumber, List<InputProblem> problems, HashSet<string> rejectedIds)
     {
         var kept = new List<(CellCurvePoint Row, int Line)>();
-        var finished = new HashSet<string>(StringComparer.OrdinalIgnoreCase);
-        int i = 0;
-        while (i < rows.Count)
+        var blocks = new List<List<(CellCurvePoint Row, int Line)>>();
+        foreach (var row in rows)
         {
-            string chemistry = rows[i].Row.Chemistry;
-            int start = i;
-            while (i < rows.Count && string.Equals(rows[i].Row.Chemistry, chemistry, StringComparison.OrdinalIgnoreCase))
+            if (blocks.Count > 0 && string.Equals(blocks[^1][0].Row.Chemistry, row.Row.Chemistry, StringComparison.OrdinalIgnoreCase))
             {
-                i++;
+                blocks[^1].Add(row);
             }
-            var block = rows.GetRange(start, i - start);
-            bool ok = true;
-            if (!finished.Add(chemistry))
+            else
+            {
+                blocks.Add([row]);
+            }
+        }
+
+        // A chemistry split over several blocks is reported once per extra block and left out as a whole.
+        var split = new HashSet<string>(StringComparer.OrdinalIgnoreCase);
+        var seen = new HashSet<string>(StringComparer.OrdinalIgnoreCase);
+        foreach (var block in blocks)
+        {
+            string chemistry = block[0].Row.Chemistry;
+            if (!seen.Add(chemistry))
             {
                 problems.Add(new InputProblem(file, block[0].Line, columnNumber("chemistry"), "chemistry", Messages.CurveNotContiguous(chemistry)));
-                ok = false;
+                split.Add(chemistry);
             }
+        }
+
+        foreach (var block in blocks)
+        {
+            string chemistry = block[0].Row.Chemistry;
+            if (split.Contains(chemistry))
+            {
+                rejectedIds.Add(chemistry);
+                continue;
+            }
+            bool ok = true;
             for (int j = 1; j < block.Count && ok; j++)
             {
                 var (previous, current) = (block[j - 1].Row, block[j].Row);
@@ -70,12 +88,17 @@ public sealed class CellCurveFormat : CatalogFormat<CellCurvePoint>
                     ok = false;
                 }
             }
-            if (ok && block.Count < 2 && !rejectedIds.Contains(chemistry))
+            // A curve that lost rows to other problems is incomplete; those problems are already reported.
+            if (ok && rejectedIds.Contains(chemistry))
+            {
+                ok = false;
+            }
+            else if (ok && block.Count < 2)
             {
                 problems.Add(new InputProblem(file, block[0].Line, columnNumber("chemistry"), "chemistry", Messages.CurveTooShort(chemistry, block.Count)));
                 ok = false;
             }
-            if (ok && !rejectedIds.Contains(chemistry))
+            if (ok)
             {
                 kept.AddRange(block);
             }

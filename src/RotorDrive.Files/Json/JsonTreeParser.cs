@@ -14,6 +14,9 @@ internal sealed class JsonTreeParser
     private readonly string _file;
     private readonly List<InputProblem> _problems;
 
+    // The path of the value read last: where a syntax error (such as a missing comma) was found.
+    private string _lastPath = "$";
+
     private JsonTreeParser(string text, string file, List<InputProblem> problems)
     {
         _utf8 = Encoding.UTF8.GetBytes(text);
@@ -41,14 +44,15 @@ internal sealed class JsonTreeParser
     private JsonNode? Run()
     {
         var options = new JsonReaderOptions { CommentHandling = JsonCommentHandling.Skip, AllowTrailingCommas = true, MaxDepth = 64 };
+        if (IsBlank())
+        {
+            _problems.Add(new InputProblem(_file, 1, 1, "$", Messages.JsonSyntax("the file is empty")));
+            return null;
+        }
         var reader = new Utf8JsonReader(_utf8, options);
         try
         {
-            if (!reader.Read())
-            {
-                _problems.Add(new InputProblem(_file, 1, 1, "$", Messages.JsonSyntax("the file is empty")));
-                return null;
-            }
+            reader.Read();
             var root = ReadValue(ref reader, "$");
             if (reader.Read())
             {
@@ -62,13 +66,49 @@ internal sealed class JsonTreeParser
         {
             int line = (int)(e.LineNumber ?? 0) + 1;
             int column = CharacterColumn(line, (int)(e.BytePositionInLine ?? 0));
-            _problems.Add(new InputProblem(_file, line, column, e.Path ?? "$", Messages.JsonSyntax(Detail(e.Message))));
+            _problems.Add(new InputProblem(_file, line, column, _lastPath, Messages.JsonSyntax(Detail(e.Message))));
             return null;
         }
     }
 
+    // True when the text holds nothing but whitespace and comments.
+    private bool IsBlank()
+    {
+        int i = 0;
+        while (i < _utf8.Length)
+        {
+            byte b = _utf8[i];
+            if (b is (byte)' ' or (byte)'\t' or (byte)'\r' or (byte)'\n')
+            {
+                i++;
+            }
+            else if (b == (byte)'/' && i + 1 < _utf8.Length && _utf8[i + 1] == (byte)'/')
+            {
+                while (i < _utf8.Length && _utf8[i] != (byte)'\n')
+                {
+                    i++;
+                }
+            }
+            else if (b == (byte)'/' && i + 1 < _utf8.Length && _utf8[i + 1] == (byte)'*')
+            {
+                int end = _utf8.AsSpan(i + 2).IndexOf("*/"u8);
+                if (end < 0)
+                {
+                    return false;
+                }
+                i += end + 4;
+            }
+            else
+            {
+                return false;
+            }
+        }
+        return true;
+    }
+
     private JsonNode ReadValue(ref Utf8JsonReader reader, string path)
     {
+        _lastPath = path;
         var (line, column) = Position(reader.TokenStartIndex);
         switch (reader.TokenType)
         {
@@ -80,8 +120,9 @@ internal sealed class JsonTreeParser
                 {
                     string key = reader.GetString() ?? "";
                     var (keyLine, keyColumn) = Position(reader.TokenStartIndex);
-                    reader.Read();
                     string childPath = path + "." + key;
+                    _lastPath = childPath;
+                    reader.Read();
                     var value = ReadValue(ref reader, childPath);
                     if (!seen.Add(key))
                     {
