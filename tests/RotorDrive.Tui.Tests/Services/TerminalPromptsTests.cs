@@ -68,4 +68,28 @@ public sealed class TerminalPromptsTests : IDisposable
         PressWhenShown(Key.Esc);
         Assert.Null(prompts.Ask("Quit", "Unsaved edits. Save them first?", ["Cancel", "Save", "Discard"]));
     }
+
+    [Fact]
+    public void AskPath_Enter_AcceptsTheTypedPath()
+    {
+        var prompts = new TerminalPrompts(_app);
+        PressWhenShown(Key.End, Key.Backspace, Key.Backspace, Key.Backspace, Key.Backspace, Key.Backspace, new Key('x'), Key.Enter);
+        Assert.Equal("/lab/rigx", prompts.AskPath("Open rig", "/lab/rig.json"));
+    }
+
+    [Fact]
+    public void AskPath_Esc_Cancels()
+    {
+        var prompts = new TerminalPrompts(_app);
+        PressWhenShown(Key.Esc);
+        Assert.Null(prompts.AskPath("Open rig", "/lab/rig.json"));
+    }
+
+    [Fact]
+    public void Choose_CursorAndEnter_PickTheItem()
+    {
+        var prompts = new TerminalPrompts(_app);
+        PressWhenShown(Key.CursorDown, Key.Enter);
+        Assert.Equal("c", prompts.Choose("Pick motor", ["a", "b", "c"], "b"));
+    }
 }
