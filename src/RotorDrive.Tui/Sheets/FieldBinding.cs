@@ -15,7 +15,7 @@ internal sealed class FieldBinding
     private readonly WorkbenchContext _context;
     private bool _updating;
 
-    public FieldBinding(View parent, int y, FieldSpec spec, WorkbenchContext context, int x = 0, int labelWidth = 16, int unitWidth = 6)
+    public FieldBinding(View parent, Pos y, FieldSpec spec, WorkbenchContext context, int x = 0, int labelWidth = 16, int unitWidth = 6)
     {
         Spec = spec;
         _context = context;

@@ -16,7 +16,8 @@ namespace RotorDrive.Tui.Sheets;
 /// position, spin, rotor, motor and controller, and the list of every problem in the rig and its catalogs.</summary>
 public sealed class StationsSheet : Sheet
 {
-    private const int SketchRows = 8;
+    private const int MinSketchRows = 8;
+    private const int RowsBelowSketch = 12;
     private readonly Label _sketch;
     private readonly Label _legend;
     private readonly ListView _stations;
@@ -28,14 +29,17 @@ public sealed class StationsSheet : Sheet
     private readonly ObservableCollection<string> _problemItems = [];
     private int _selected;
     private bool _letters = Environment.GetEnvironmentVariable("ROTORDRIVE_ASCII") == "1";
+    private List<SketchStation> _sketchStations = [];
+    private (double? X, double? Y) _cg;
 
     /// <summary>Creates the sheet.</summary>
     public StationsSheet(WorkbenchContext context)
         : base(context, "Stations")
     {
-        _sketch = new Label { X = 0, Y = 0, Width = Dim.Fill(), Height = SketchRows, Text = "" };
-        _legend = new Label { X = 0, Y = SketchRows, Width = Dim.Fill(), Text = "" };
-        _stations = new ListView { X = 0, Y = SketchRows + 1, Width = 14, Height = 6 };
+        _sketch = new Label { X = 0, Y = 0, Width = Dim.Fill(), Height = Dim.Fill(RowsBelowSketch), Text = "" };
+        _sketch.FrameChanged += (_, _) => DrawSketch();
+        _legend = new Label { X = 0, Y = Pos.Bottom(_sketch), Width = Dim.Fill(), Text = "" };
+        _stations = new ListView { X = 0, Y = Pos.Bottom(_sketch) + 1, Width = 14, Height = 6 };
         _stations.SetSource(_stationItems);
         _stations.ValueChanged += (_, _) =>
         {
@@ -50,7 +54,7 @@ public sealed class StationsSheet : Sheet
         for (int i = 0; i < 6; i++)
         {
             var spec = RigFields.Station(0)[i];
-            var binding = new FieldBinding(this, SketchRows + 1 + i, spec, context, x: 15, labelWidth: 10, unitWidth: 2);
+            var binding = new FieldBinding(this, Pos.Bottom(_sketch) + 1 + i, spec, context, x: 15, labelWidth: 10, unitWidth: 2);
             binding.Field.HasFocusChanged += (_, e) =>
             {
                 if (e.NewValue)
@@ -60,10 +64,10 @@ public sealed class StationsSheet : Sheet
             };
             _fields.Add(binding);
         }
-        _detail = new Label { X = 0, Y = SketchRows + 7, Width = Dim.Fill(), Height = 1, Text = "" };
-        _safety = new Label { X = 0, Y = SketchRows + 8, Width = Dim.Fill(), Height = 1, Text = "" };
+        _detail = new Label { X = 0, Y = Pos.Bottom(_sketch) + 7, Width = Dim.Fill(), Height = 1, Text = "" };
+        _safety = new Label { X = 0, Y = Pos.Bottom(_sketch) + 8, Width = Dim.Fill(), Height = 1, Text = "" };
         Add(_safety);
-        _problems = new ListView { X = 0, Y = SketchRows + 9, Width = Dim.Fill(), Height = Dim.Fill() };
+        _problems = new ListView { X = 0, Y = Pos.Bottom(_sketch) + 9, Width = Dim.Fill(), Height = Dim.Fill() };
         _problems.SetSource(_problemItems);
         Add(_detail, _problems);
     }
@@ -113,9 +117,9 @@ public sealed class StationsSheet : Sheet
         {
             (cgx, cgy) = (craft.CgXMm, craft.CgYMm);
         }
-        int width = Math.Max(20, Viewport.Width > 0 ? Viewport.Width : 58);
-        _sketch.Text = string.Join("\n", StationSketch.Render(sketch, cgx, cgy, width, SketchRows, _letters));
-        _legend.Text = StationSketch.Legend(_letters);
+        _sketchStations = sketch;
+        _cg = (cgx, cgy);
+        DrawSketch();
 
         var items = sketch.Select(s =>
         {
@@ -185,6 +189,18 @@ public sealed class StationsSheet : Sheet
             return true;
         }
         return false;
+    }
+
+    private void DrawSketch()
+    {
+        int width = Math.Max(20, _sketch.Frame.Width > 0 ? _sketch.Frame.Width : 58);
+        int rows = Math.Max(MinSketchRows, _sketch.Frame.Height);
+        string text = string.Join("\n", StationSketch.Render(_sketchStations, _cg.X, _cg.Y, width, rows, _letters));
+        if (_sketch.Text != text)
+        {
+            _sketch.Text = text;
+        }
+        _legend.Text = StationSketch.Legend(_letters);
     }
 
     private void Retarget()
