@@ -1,0 +1,295 @@
+using System.CommandLine;
+using System.CommandLine.Parsing;
+using System.Globalization;
+using RotorDrive.Cli.Output;
+using RotorDrive.Core;
+using RotorDrive.Core.Craft;
+using RotorDrive.Core.Loads;
+using RotorDrive.Core.Magnetics;
+
+namespace RotorDrive.Cli.Commands;
+
+/// <summary><c>rotordrive load RIG.json [--station N | --rotor ID] [--gap-mm G] [--rpm FROM:TO:STEP] [--plate-temp-c T]
+/// [--no-end-correction] [--json]</c>: one rotor's lift, torques and plate loss over a range of speeds, and its drag peak.</summary>
+/// <remarks>Defaults: station 0, the rig's design gap, 0 to the rotor's max_rpm in 25 steps, the rig's plate temperature;
+/// magnets at the rig's ambient temperature. Values come from the precomputed load table analyses use
+/// (<see cref="RotorLoadTable"/>), built over the rig's range extended to cover what was asked.</remarks>
+public static class LoadCommand
+{
+    /// <summary>Steps of the default speed sweep (0 to max_rpm).</summary>
+    public const int DefaultSteps = 25;
+
+    /// <summary>Builds the subcommand.</summary>
+    public static Command Create()
+    {
+        var rig = CommonOptions.RigArgument();
+        var station = new Option<int?>("--station")
+        {
+            Description = "Rotor station (0-based) whose rotor to use; default 0.",
+            HelpName = "N",
+        };
+        station.Validators.Add(r =>
+        {
+            if (r.GetValueOrDefault<int?>() is < 0)
+            {
+                r.AddError("--station must be 0 or more.");
+            }
+        });
+        var rotor = new Option<string?>("--rotor")
+        {
+            Description = "Rotor design id from the rotors catalog (instead of a station's rotor).",
+            HelpName = "ID",
+        };
+        var gap = new Option<double?>("--gap-mm")
+        {
+            Description = "Air gap between magnet face and plate, mm; default the rig's design gap.",
+            HelpName = "G",
+        };
+        gap.Validators.Add(r =>
+        {
+            if (r.GetValueOrDefault<double?>() is { } g && !(g > 0 && g <= 200))
+            {
+                r.AddError($"--gap-mm must lie in (0, 200] mm; got {g.ToString(CultureInfo.InvariantCulture)}.");
+            }
+        });
+        var rpm = new Option<RpmRange?>("--rpm")
+        {
+            Description = "Speeds FROM:TO:STEP in rpm (both ends included); default 0 to the rotor's max_rpm in 25 steps.",
+            HelpName = "FROM:TO:STEP",
+            CustomParser = ParseRpm,
+        };
+        var plateTemp = new Option<double?>("--plate-temp-c")
+        {
+            Description = "Plate temperature, C; default the rig's plate temperature.",
+            HelpName = "T",
+        };
+        plateTemp.Validators.Add(r =>
+        {
+            if (r.GetValueOrDefault<double?>() is { } t && !(t >= -40 && t <= 400))
+            {
+                r.AddError($"--plate-temp-c must lie in [-40, 400] C; got {t.ToString(CultureInfo.InvariantCulture)}.");
+            }
+        });
+        var noEnd = new Option<bool>("--no-end-correction")
+        {
+            Description = "Use the bare 2-D strip model, without the Russell-Norsworthy finite-width correction.",
+        };
+        var json = CommonOptions.Json();
+
+        var command = new Command("load", "One rotor's lift, eddy/windage/bearing torque and plate loss versus speed, and its drag peak.");
+        command.Arguments.Add(rig);
+        command.Options.Add(station);
+        command.Options.Add(rotor);
+        command.Options.Add(gap);
+        command.Options.Add(rpm);
+        command.Options.Add(plateTemp);
+        command.Options.Add(noEnd);
+        command.Options.Add(json);
+        command.Validators.Add(r =>
+        {
+            if (r.GetResult(station) is { Implicit: false } && r.GetResult(rotor) is { Implicit: false })
+            {
+                r.AddError("--station and --rotor cannot be used together: give one.");
+            }
+        });
+        command.SetAction(parse => Run(
+            new LoadRequest(
+                parse.GetValue(rig)!,
+                parse.GetValue(station),
+                parse.GetValue(rotor),
+                parse.GetValue(gap),
+                parse.GetValue(rpm),
+                parse.GetValue(plateTemp),
+                !parse.GetValue(noEnd),
+                parse.GetValue(json)),
+            parse.InvocationConfiguration.Output,
+            parse.InvocationConfiguration.Error));
+        return command;
+    }
+
+    // Runs the command; returns ExitCodes.Ok, or ExitCodes.BadInput when the rig, the station or the rotor cannot be used.
+    private static int Run(LoadRequest request, TextWriter output, TextWriter error)
+    {
+        ArgumentNullException.ThrowIfNull(request);
+        var loaded = RigInput.LoadOrReport(request.RigPath, error);
+        if (loaded is null)
+        {
+            return ExitCodes.BadInput;
+        }
+        Rig rig = loaded.Rig!;
+
+        RotorDesign design;
+        int? stationIndex = null;
+        if (request.RotorId is { } id)
+        {
+            RotorDesign? found = loaded.Catalog!.Rotors.FirstOrDefault(r => string.Equals(r.Id, id, StringComparison.Ordinal));
+            if (found is null)
+            {
+                error.WriteLine($"rotordrive load: error: --rotor: no rotor '{id}' in {loaded.CatalogPaths!.Rotors}; known ids: {string.Join(", ", loaded.Catalog.Rotors.Select(r => r.Id))}.");
+                return ExitCodes.BadInput;
+            }
+            design = found;
+        }
+        else
+        {
+            int index = request.Station ?? 0;
+            if (index >= rig.Stations.Count)
+            {
+                error.WriteLine($"rotordrive load: error: --station {index}: the rig has {rig.Stations.Count} station(s), numbered 0 to {rig.Stations.Count - 1}.");
+                return ExitCodes.BadInput;
+            }
+            stationIndex = index;
+            design = rig.Stations[index].Rotor;
+        }
+
+        double gapM = (request.GapMm ?? rig.DesignGapM * 1000.0) / 1000.0;
+        double plateTempC = request.PlateTempC ?? rig.PlateTemperatureC;
+        double magnetTempC = rig.AmbientC;
+        if (!(rig.Plate.Material.ConductivityAt(plateTempC) > 0))
+        {
+            error.WriteLine($"rotordrive load: error: --plate-temp-c {plateTempC.ToString(CultureInfo.InvariantCulture)}: plate '{rig.Plate.Material.Id}' would have no conductivity there.");
+            return ExitCodes.BadInput;
+        }
+        double[] speedsRpm = request.Rpm is { } range
+            ? SpeedGrid.Range(range.FromRpm, range.ToRpm, range.StepRpm)
+            : SpeedGrid.ZeroTo(Units.RadPerSToRpm(design.MaxSpeedRadPerS), DefaultSteps);
+        double[] speeds = speedsRpm.Select(Units.RpmToRadPerS).ToArray();
+
+        // The table analyses use, over the rig's range widened to what was asked.
+        double topSpeed = Math.Max(design.MaxSpeedRadPerS, speeds[^1]);
+        LoadTableRange rigRange = LoadTableRange.ForRig(rig, design);
+        var tableRange = rigRange with
+        {
+            MaxSpeedRadPerS = topSpeed,
+            MinGapM = Math.Min(rigRange.MinGapM, gapM),
+            MaxGapM = Math.Max(rigRange.MaxGapM, gapM * 1.01),
+            MinPlateTempC = Math.Min(rigRange.MinPlateTempC, plateTempC),
+            MaxPlateTempC = Math.Max(rigRange.MaxPlateTempC, plateTempC),
+        };
+        var options = new LoadModelOptions { EndEffectCorrection = request.EndCorrection };
+        TabulatedRotorLoad table = RotorLoadTable.Build(design, rig.Plate, tableRange, options);
+        LoadSweepResult result = LoadSweep.Run(table, design.Id, request.EndCorrection, gapM, plateTempC, magnetTempC, speeds, topSpeed);
+
+        var report = ToReport(result, stationIndex);
+        if (request.Json)
+        {
+            JsonOutput.Write(output, report);
+        }
+        else
+        {
+            WriteText(report, rig, design, output);
+        }
+        if (speedsRpm[^1] > Units.RadPerSToRpm(design.MaxSpeedRadPerS) * (1 + 1e-9))
+        {
+            error.WriteLine($"Caution: speeds above rotor '{design.Id}''s rated {Numbers.Format(Units.RadPerSToRpm(design.MaxSpeedRadPerS), 0)} rpm were asked for; a rotor run past its rating can burst.");
+        }
+        return ExitCodes.Ok;
+    }
+
+    private static LoadReport ToReport(LoadSweepResult result, int? station) => new(
+        result.RotorId,
+        station,
+        result.GapM * 1000.0,
+        result.PlateTempC,
+        result.MagnetTempC,
+        result.EndEffectCorrection,
+        result.Rows.Select(r => new PointEntry(r.SpeedRpm, r.LiftN, r.EddyTorqueNm, r.WindageTorqueNm, r.BearingTorqueNm, r.TotalTorqueNm, r.EddyPowerW)).ToList(),
+        new PeakEntry(result.DragPeak.SpeedRpm, result.DragPeak.TorqueNm, result.DragPeak.Status));
+
+    private static void WriteText(LoadReport report, Rig rig, RotorDesign design, TextWriter o)
+    {
+        string where = report.Station is { } s ? $" (station {s})" : "";
+        o.WriteLine($"Rotor load: {report.Rotor}{where}, {design.Segments} segments, M = {design.SegmentsPerWavelength}, "
+            + $"radii {Numbers.Format(design.InnerRadiusM * 1000, 1)}-{Numbers.Format(design.OuterRadiusM * 1000, 1)} mm");
+        o.WriteLine($"  plate {rig.Plate.Material.Id}, {Numbers.Format(rig.Plate.ThicknessM * 1000, 1)} mm at {Numbers.Format(report.PlateTempC, 1)} C; "
+            + $"air gap {Numbers.Format(report.GapMm, 2)} mm; magnets at {Numbers.Format(report.MagnetTempC, 1)} C; "
+            + $"end correction {(report.EndCorrection ? "on" : "off")}");
+        o.WriteLine();
+        var table = new TextTable(
+            new TableColumn("speed_rpm", Alignment.Right), new TableColumn("lift_n", Alignment.Right),
+            new TableColumn("eddy_torque_nm", Alignment.Right), new TableColumn("windage_torque_nm", Alignment.Right),
+            new TableColumn("bearing_torque_nm", Alignment.Right), new TableColumn("total_torque_nm", Alignment.Right),
+            new TableColumn("eddy_power_w", Alignment.Right));
+        foreach (var p in report.Points)
+        {
+            table.AddRow(Numbers.Format(p.SpeedRpm, 0), Numbers.Format(p.LiftN, 2), Numbers.Format(p.EddyTorqueNm, 3),
+                Numbers.Format(p.WindageTorqueNm, 4), Numbers.Format(p.BearingTorqueNm, 4), Numbers.Format(p.TotalTorqueNm, 3),
+                Numbers.Format(p.EddyPowerW, 1));
+        }
+        table.Write(o, 2);
+        o.WriteLine();
+        o.WriteLine(report.DragPeak.Status switch
+        {
+            DragPeakStatus.Converged or DragPeakStatus.ScanOnly =>
+                $"Drag peak: {Numbers.Format(report.DragPeak.TorqueNm, 3)} N m of eddy torque at {Numbers.Format(report.DragPeak.SpeedRpm, 0)} rpm; the motor must pass it during spin-up.",
+            DragPeakStatus.AboveSearchRange =>
+                $"Drag peak: above {Numbers.Format(report.DragPeak.SpeedRpm, 0)} rpm (eddy torque still rising there: {Numbers.Format(report.DragPeak.TorqueNm, 3)} N m).",
+            _ => "Drag peak: none (no eddy torque).",
+        });
+        o.WriteLine();
+        o.WriteLine("Model: 2-D strip layer model per radius" + (report.EndCorrection ? " with the Russell-Norsworthy finite-width correction" : " without width correction")
+            + ". It over-predicts lift at low speed and can under-predict drag above the drag peak; calibrate against bench data.");
+        o.WriteLine("Caution: the plate takes the eddy power as heat; magnet rotors crush fingers, upset pacemakers and can burst at speed. Estimates only: defer to manufacturers' ratings.");
+    }
+
+    private static RpmRange? ParseRpm(ArgumentResult result)
+    {
+        string text = result.Tokens.Count == 1 ? result.Tokens[0].Value : string.Join(' ', result.Tokens.Select(t => t.Value));
+        string[] parts = text.Split(':');
+        var values = new double[parts.Length];
+        bool numbers = parts.Length == 3 && parts.Select((p, i) =>
+            double.TryParse(p, NumberStyles.Float, CultureInfo.InvariantCulture, out values[i]) && double.IsFinite(values[i])).All(ok => ok);
+        if (!numbers)
+        {
+            result.AddError($"--rpm expects FROM:TO:STEP in rpm (for example 0:6000:250); got '{text}'.");
+            return null;
+        }
+        (double from, double to, double step) = (values[0], values[1], values[2]);
+        if (from < 0 || to < from || step <= 0)
+        {
+            result.AddError($"--rpm {text}: FROM must be 0 or more, TO at least FROM and STEP more than 0.");
+            return null;
+        }
+        if ((to - from) / step > SpeedGrid.MaxPoints - 1)
+        {
+            result.AddError($"--rpm {text}: more than {SpeedGrid.MaxPoints} speeds; use a larger STEP.");
+            return null;
+        }
+        return new RpmRange(from, to, step);
+    }
+
+    // A parsed --rpm FROM:TO:STEP.
+    private sealed record RpmRange(double FromRpm, double ToRpm, double StepRpm);
+
+    // Everything the load command was asked for.
+    private sealed record LoadRequest(
+        string RigPath,
+        int? Station,
+        string? RotorId,
+        double? GapMm,
+        RpmRange? Rpm,
+        double? PlateTempC,
+        bool EndCorrection,
+        bool Json);
+
+    private sealed record LoadReport(
+        string Rotor,
+        int? Station,
+        double GapMm,
+        double PlateTempC,
+        double MagnetTempC,
+        bool EndCorrection,
+        IReadOnlyList<PointEntry> Points,
+        PeakEntry DragPeak);
+
+    private sealed record PointEntry(
+        double SpeedRpm,
+        double LiftN,
+        double EddyTorqueNm,
+        double WindageTorqueNm,
+        double BearingTorqueNm,
+        double TotalTorqueNm,
+        double EddyPowerW);
+
+    private sealed record PeakEntry(double SpeedRpm, double TorqueNm, DragPeakStatus Status);
+}
