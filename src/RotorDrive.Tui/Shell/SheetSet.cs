@@ -10,6 +10,7 @@ public static class SheetSet
     [
         new RigSheet(context),
         new StationsSheet(context),
+        new LiftDragSheet(context),
         new PartsSheet(context),
         new HelpSheet(context),
     ];

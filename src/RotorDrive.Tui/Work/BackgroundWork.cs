@@ -84,7 +84,7 @@ public sealed class BackgroundWork : IDisposable
             var progress = new Progress(this, job);
             job.Task = Task.Run(() => work(job.Token, progress), job.Token).ContinueWith(t =>
             {
-                _app.Invoke(() =>
+                Post(() =>
                 {
                     job.Running = false;
                     bool current;
@@ -169,6 +169,10 @@ public sealed class BackgroundWork : IDisposable
 
     private void Raise() => StateChanged?.Invoke(this, EventArgs.Empty);
 
+    // Results and progress go back through the application's invoke mechanism: from a worker thread it queues the
+    // action for the UI loop's next iteration.
+    private void Post(Action action) => _app.Invoke(action);
+
     private sealed class Job(string name) : IDisposable
     {
         private readonly CancellationTokenSource _cts = new();
@@ -213,7 +217,7 @@ public sealed class BackgroundWork : IDisposable
             {
                 return;
             }
-            owner._app.Invoke(() =>
+            owner.Post(() =>
             {
                 job.Progress = percent / 100.0;
                 owner.Raise();

@@ -132,10 +132,12 @@ public class MainWindowTests
     public void AltDigit_And_CtrlPageDown_MoveBetweenSheets()
     {
         using var bench = new Bench();
-        bench.Press(Key.D3.WithAlt);
-        Assert.Equal("Parts", bench.Window.CurrentSheet.SheetName);
+        bench.Press(Key.D2.WithAlt);
+        Assert.Equal("Stations", bench.Window.CurrentSheet.SheetName);
         bench.Press(Key.PageDown.WithCtrl);
-        Assert.Equal(bench.Window.Sheets[3].SheetName, bench.Window.CurrentSheet.SheetName);
+        Assert.Equal(bench.Window.Sheets[2].SheetName, bench.Window.CurrentSheet.SheetName);
+        bench.Press(Key.PageUp.WithCtrl);
+        Assert.Equal("Stations", bench.Window.CurrentSheet.SheetName);
         bench.Press(Key.F1);
         Assert.Equal("Help", bench.Window.CurrentSheet.SheetName);
     }

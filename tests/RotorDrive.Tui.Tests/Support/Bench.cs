@@ -18,7 +18,11 @@ internal sealed class Bench : IDisposable
         Environment.SetEnvironmentVariable("DisableRealDriverIO", "1");
         Time = new VirtualTimeProvider();
         App = Application.Create(Time);
+        // Init installs the application's synchronisation context on this thread; awaits in tests would then wait for
+        // a main loop that never runs. Keep the test runner's context.
+        var testContext = SynchronizationContext.Current;
         App.Init(DriverRegistry.Names.ANSI);
+        SynchronizationContext.SetSynchronizationContext(testContext);
         App.Driver!.SetScreenSize(columns, rows);
         Files = files ?? MemoryFiles.WithDemoCatalogs();
         Prompts = new ScriptedPrompts();
@@ -27,6 +31,7 @@ internal sealed class Bench : IDisposable
         OpenFailure = failure;
         _token = App.Begin(Window);
         Draw();
+        SynchronizationContext.SetSynchronizationContext(testContext);
     }
 
     public IApplication App { get; }

@@ -16,7 +16,9 @@ public sealed class BackgroundWorkTests : IDisposable
     {
         Environment.SetEnvironmentVariable("DisableRealDriverIO", "1");
         _app = Application.Create(_time);
+        var testContext = SynchronizationContext.Current;
         _app.Init(DriverRegistry.Names.ANSI);
+        SynchronizationContext.SetSynchronizationContext(testContext);
         _work = new BackgroundWork(_app, TimeSpan.FromMilliseconds(300));
     }
 
