@@ -183,8 +183,8 @@ public sealed class LiftDragSheet : Sheet
         var top = r.Rows[^1];
         var lifting = r.Rows.FirstOrDefault(row => row.LiftN >= share);
         _readout.Text = $"{r.RotorId} at {r.GapM * 1000:0.##} mm, plate {r.PlateTempC:0.#} C: drag peak X {peak.SpeedRpm:F0} rpm, {peak.TorqueNm:F2} N m\n"
-            + $"lift at {top.SpeedRpm:F0} rpm {top.LiftN:F0} N; share of weight {share:F0} N "
-            + (lifting is null ? "! not reached below rated speed" : $"reached at {lifting.SpeedRpm:F0} rpm");
+            + $"lift {top.LiftN:F0} N at {top.SpeedRpm:F0} rpm; share of weight {share:F0} N "
+            + (lifting is null ? "! not reached by rated speed" : $"from {lifting.SpeedRpm:F0} rpm");
         var rpm = r.Rows.Select(x => x.SpeedRpm).ToList();
         ChartData data = _showLift
             ? new ChartData("speed, rpm", "lift, N",
@@ -194,8 +194,8 @@ public sealed class LiftDragSheet : Sheet
             ])
             : new ChartData("speed, rpm", "torque, N m",
             [
-                new ChartLine("total torque", '*', r.Rows.Select(x => (x.SpeedRpm, x.TotalTorqueNm)).ToList()),
                 new ChartLine("eddy", '.', r.Rows.Select(x => (x.SpeedRpm, x.EddyTorqueNm)).ToList()),
+                new ChartLine("total torque", '*', r.Rows.Select(x => (x.SpeedRpm, x.TotalTorqueNm)).ToList()),
                 new ChartLine("drag peak", 'X', [(peak.SpeedRpm, peak.TorqueNm)], Joined: false),
             ]);
         _chart.Show(data);
