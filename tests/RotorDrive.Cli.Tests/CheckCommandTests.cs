@@ -53,7 +53,7 @@ public sealed class CheckCommandTests : IDisposable
         Assert.Equal(6, rig.GetProperty("station_count").GetInt32());
         Assert.Equal(3, rig.GetProperty("cw_count").GetInt32());
         Assert.True(rig.GetProperty("spin_balanced").GetBoolean());
-        Assert.Equal(8.0, rig.GetProperty("plate_thickness_mm").GetDouble(), 12);
+        Assert.Equal(12.0, rig.GetProperty("plate_thickness_mm").GetDouble(), 12);
         // Total mass = structure + payload + rotors + motors + controllers + packs.
         double parts = new[] { "structure_mass_kg", "payload_mass_kg", "rotors_mass_kg", "motors_mass_kg", "controllers_mass_kg", "packs_mass_kg" }
             .Sum(k => rig.GetProperty(k).GetDouble());

@@ -91,7 +91,7 @@ public class RigLoaderTests
     public void Load_ReportsAWrongTypeOnce_NotAlsoAsMissing()
     {
         using var rig = new TempRig();
-        rig.Edit("demo-rig.json", "\"thickness_mm\": 8", "\"thickness_mm\": \"8 mm\"");
+        rig.Edit("demo-rig.json", "\"thickness_mm\": 12", "\"thickness_mm\": \"12 mm\"");
         var result = RigLoader.Load(rig.DemoRig);
         var problem = Assert.Single(result.Problems);
         Assert.Equal(("$.plate.thickness_mm", Messages.WrongType("a number", "a string")), (problem.Field, problem.Message));

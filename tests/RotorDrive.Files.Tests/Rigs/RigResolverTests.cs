@@ -39,7 +39,7 @@ public class RigResolverTests
         Assert.Empty(result.Problems);
         var rig = result.Rig!;
         Assert.Equal("Lab carrier H6 (invented demo)", rig.Name);
-        Assert.Equal(0.008, rig.Plate.ThicknessM, 15);
+        Assert.Equal(0.012, rig.Plate.ThicknessM, 15);
         Assert.Equal(0.010, rig.DesignGapM, 15);
         Assert.Equal(0.0065, rig.LandedGapM, 15);
         Assert.Equal(0.015, rig.Body.CgXM, 15);
@@ -92,9 +92,9 @@ public class RigResolverTests
     [Theory]
     [InlineData("\"motor\": \"or1050-kv90\"", "\"motor\": \"or1050-kv91\"", "$.stations[0].motor", "motor", "or1050-kv91", "motors.csv")]
     [InlineData("\"controller\": \"sc120-12s\"", "\"controller\": \"sc999\"", "$.stations[0].controller", "controller", "sc999", "controllers.csv")]
-    [InlineData("\"rotor\": \"hx140-p6\"", "\"rotor\": \"hx140\"", "$.stations[0].rotor", "rotor", "hx140", "rotors.csv")]
-    [InlineData("\"material\": \"al-6061-t6\"", "\"material\": \"al-7075\"", "$.plate.material", "plate material", "al-7075", "plates.csv")]
-    [InlineData("\"id\": \"lp12s-16ah\"", "\"id\": \"lp13s\"", "$.pack.id", "pack", "lp13s", "packs.csv")]
+    [InlineData("\"rotor\": \"hx130-p4\"", "\"rotor\": \"hx140\"", "$.stations[0].rotor", "rotor", "hx140", "rotors.csv")]
+    [InlineData("\"material\": \"al-1350\"", "\"material\": \"al-7075\"", "$.plate.material", "plate material", "al-7075", "plates.csv")]
+    [InlineData("\"id\": \"lp12s-20ah\"", "\"id\": \"lp13s\"", "$.pack.id", "pack", "lp13s", "packs.csv")]
     public void Resolve_ReportsAnIdMissingFromItsCatalog(string from, string to, string path, string kind, string id, string fileName)
     {
         var result = Resolve(from, to);
@@ -125,7 +125,7 @@ public class RigResolverTests
     }
 
     [Theory]
-    [InlineData("\"thickness_mm\": 8", "\"thickness_mm\": 0", "$.plate.thickness_mm", 0.01, 200, 0.0)]
+    [InlineData("\"thickness_mm\": 12", "\"thickness_mm\": 0", "$.plate.thickness_mm", 0.01, 200, 0.0)]
     [InlineData("\"ambient_c\": 22", "\"ambient_c\": 95", "$.ambient_c", -40, 60, 95.0)]
     [InlineData("\"max_duty\": 0.95", "\"max_duty\": 1.5", "$.limits.max_duty", 0.05, 1, 1.5)]
     [InlineData("\"usable_capacity_pct\": 80", "\"usable_capacity_pct\": 0.8", "$.limits.usable_capacity_pct", 1, 100, 0.8)]
@@ -165,10 +165,10 @@ public class RigResolverTests
     [Fact]
     public void Resolve_ReportsOverlappingRotors()
     {
-        // Station 1 moved to 200 mm from station 0: two 140 mm rotors need 280 mm between axes.
+        // Station 1 moved to 200 mm from station 0: two 130 mm rotors need 260 mm between axes.
         var result = Resolve("\"x_mm\": 225, \"y_mm\": 389.7", "\"x_mm\": 450, \"y_mm\": 200");
         var problem = Assert.Single(result.Problems);
-        Assert.Equal(("$.stations[1]", Messages.StationsOverlap(0, 200, 280)), (problem.Field, problem.Message));
+        Assert.Equal(("$.stations[1]", Messages.StationsOverlap(0, 200, 260)), (problem.Field, problem.Message));
     }
 
     [Fact]
