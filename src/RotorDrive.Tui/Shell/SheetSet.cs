@@ -11,6 +11,7 @@ public static class SheetSet
         new RigSheet(context),
         new StationsSheet(context),
         new LiftDragSheet(context),
+        new RunningPointsSheet(context),
         new PartsSheet(context),
         new HelpSheet(context),
     ];
