@@ -171,12 +171,12 @@ public sealed class RunningPointsSheet : Sheet
         var rpm = map.SpeedsRadPerS.Select(Units.RadPerSToRpm).ToList();
         var lines = new List<ChartLine>
         {
-            new("load torque", '*', rpm.Zip(map.LoadTorqueNm, (x, y) => (x, y)).ToList()),
+            new("load", '*', rpm.Zip(map.LoadTorqueNm, (x, y) => (x, y)).ToList()),
         };
         for (int k = 0; k < map.Curves.Count; k++)
         {
             var curve = map.Curves[k];
-            lines.Add(new ChartLine($"duty {curve.Duty:P0}", CurveGlyphs[k % CurveGlyphs.Length],
+            lines.Add(new ChartLine($"{curve.Duty * 100:F0}%", CurveGlyphs[k % CurveGlyphs.Length],
                 rpm.Zip(curve.TorqueNm, (x, y) => (x, y)).ToList()));
         }
         var all = map.Curves.SelectMany(c => c.Equilibria).Where(e => e.Kind == EquilibriumKind.Crossing).ToList();

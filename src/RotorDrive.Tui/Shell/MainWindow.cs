@@ -11,7 +11,7 @@ namespace RotorDrive.Tui.Shell;
 /// a status line (rig name, unsaved mark, work in progress) and a line of key hints.</summary>
 public sealed class MainWindow : Window
 {
-    private const int ListWidth = 17;
+    private const int ListWidth = 18;
     private readonly WorkbenchContext _context;
     private readonly List<Sheet> _sheets;
     private readonly ListView _list;
