@@ -18,6 +18,7 @@ public static class CliApp
         root.Subcommands.Add(CheckCommand.Create());
         root.Subcommands.Add(LoadCommand.Create());
         root.Subcommands.Add(OperateCommand.Create());
+        root.Subcommands.Add(UiCommand.Create());
         return root;
     }
 

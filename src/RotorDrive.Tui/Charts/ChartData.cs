@@ -1,0 +1,7 @@
+namespace RotorDrive.Tui.Charts;
+
+/// <summary>What a chart shows: axis names with units and its curves and marks.</summary>
+/// <param name="XLabel">The horizontal axis, with unit ("speed, rpm").</param>
+/// <param name="YLabel">The vertical axis, with unit ("torque, N m").</param>
+/// <param name="Lines">Curves and marks, drawn in order (later ones on top).</param>
+public sealed record ChartData(string XLabel, string YLabel, IReadOnlyList<ChartLine> Lines);

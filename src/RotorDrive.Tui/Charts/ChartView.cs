@@ -1,0 +1,136 @@
+using System.Drawing;
+using System.Globalization;
+using System.Text;
+using Terminal.Gui.ViewBase;
+using Terminal.Gui.Views;
+
+namespace RotorDrive.Tui.Charts;
+
+/// <summary>A chart in the terminal: curves drawn as lines of their own character (GraphView path annotations), marks
+/// as scatter points, axes scaled to the data, and a legend line in words under it.</summary>
+public sealed class ChartView : View
+{
+    private readonly GraphView _graph;
+    private readonly Label _legend;
+    private ChartData? _data;
+
+    /// <summary>Creates an empty chart.</summary>
+    public ChartView()
+    {
+        _graph = new GraphView { X = 0, Y = 0, Width = Dim.Fill(), Height = Dim.Fill(1) };
+        _legend = new Label { X = 0, Y = Pos.AnchorEnd(1), Width = Dim.Fill(), Height = 1, Text = "" };
+        Add(_graph, _legend);
+        FrameChanged += (_, _) => Layout(_data);
+    }
+
+    /// <summary>The legend text.</summary>
+    public string LegendText => _legend.Text;
+
+    /// <summary>The chart on show.</summary>
+    public ChartData? Chart => _data;
+
+    /// <summary>Shows new data.</summary>
+    public void Show(ChartData? data)
+    {
+        _data = data;
+        Layout(data);
+    }
+
+    /// <summary>The legend: each line's character and name.</summary>
+    public static string Legend(ChartData data)
+    {
+        ArgumentNullException.ThrowIfNull(data);
+        var sb = new StringBuilder();
+        foreach (var line in data.Lines)
+        {
+            if (sb.Length > 0)
+            {
+                sb.Append("  ");
+            }
+            sb.Append(line.Glyph).Append(' ').Append(line.Name);
+        }
+        return sb.ToString();
+    }
+
+    private void Layout(ChartData? data)
+    {
+        _graph.Reset();
+        _graph.Series.Clear();
+        _graph.Annotations.Clear();
+        if (data is null)
+        {
+            _legend.Text = "";
+            SetNeedsDraw();
+            return;
+        }
+        _legend.Text = Legend(data);
+        var finite = data.Lines.SelectMany(l => l.Points).Where(p => double.IsFinite(p.X) && double.IsFinite(p.Y)).ToList();
+        if (finite.Count == 0)
+        {
+            SetNeedsDraw();
+            return;
+        }
+        double xMin = finite.Min(p => p.X), xMax = finite.Max(p => p.X);
+        double yMin = Math.Min(0, finite.Min(p => p.Y)), yMax = finite.Max(p => p.Y);
+        if (xMax <= xMin)
+        {
+            xMax = xMin + 1;
+        }
+        if (yMax <= yMin)
+        {
+            yMax = yMin + 1;
+        }
+        yMax += (yMax - yMin) * 0.05;
+
+        const int marginLeft = 8;
+        const int marginBottom = 2;
+        int width = Math.Max(10, (_graph.Viewport.Width > 0 ? _graph.Viewport.Width : 60) - marginLeft - 1);
+        int height = Math.Max(4, (_graph.Viewport.Height > 0 ? _graph.Viewport.Height : 14) - marginBottom - 1);
+        _graph.MarginLeft = marginLeft;
+        _graph.MarginBottom = marginBottom;
+        _graph.CellSize = new PointF((float)((xMax - xMin) / width), (float)((yMax - yMin) / height));
+        _graph.ScrollOffset = new PointF((float)xMin, (float)yMin);
+        _graph.AxisX.Increment = (float)((xMax - xMin) / width * 10);
+        _graph.AxisX.ShowLabelsEvery = 1;
+        _graph.AxisX.Minimum = (float)xMin;
+        _graph.AxisX.Text = data.XLabel;
+        _graph.AxisX.LabelGetter = v => Short(v.Value);
+        _graph.AxisY.Increment = (float)((yMax - yMin) / height * 3);
+        _graph.AxisY.ShowLabelsEvery = 1;
+        _graph.AxisY.Minimum = (float)yMin;
+        _graph.AxisY.Text = data.YLabel;
+        _graph.AxisY.LabelGetter = v => Short(v.Value);
+
+        foreach (var line in data.Lines)
+        {
+            var points = line.Points.Where(p => double.IsFinite(p.X) && double.IsFinite(p.Y)).Select(p => new PointF((float)p.X, (float)p.Y)).ToList();
+            if (points.Count == 0)
+            {
+                continue;
+            }
+            if (line.Joined && points.Count > 1)
+            {
+                var path = new PathAnnotation { LineRune = new Rune(line.Glyph), BeforeSeries = true };
+                path.Points.AddRange(points);
+                _graph.Annotations.Add(path);
+            }
+            else
+            {
+                _graph.Series.Add(new ScatterSeries { Points = points, Fill = new GraphCellToRender(new Rune(line.Glyph)) });
+            }
+        }
+        SetNeedsDraw();
+    }
+
+    /// <summary>A number in at most 6 characters for an axis label.</summary>
+    public static string Short(double v)
+    {
+        double a = Math.Abs(v);
+        string s = a >= 10000 ? (v / 1000).ToString("0.#", CultureInfo.InvariantCulture) + "k"
+            : a >= 100 ? v.ToString("0", CultureInfo.InvariantCulture)
+            : a >= 1 ? v.ToString("0.#", CultureInfo.InvariantCulture)
+            : a == 0 ? "0"
+            : v.ToString("0.###", CultureInfo.InvariantCulture);
+        return s;
+    }
+}

@@ -1,0 +1,33 @@
+using Terminal.Gui.ViewBase;
+using RotorDrive.Tui.Shell;
+
+namespace RotorDrive.Tui.Sheets;
+
+/// <summary>A page of the workbench shown to the right of the sheet list.</summary>
+public abstract class Sheet : View
+{
+    /// <summary>Creates the sheet filling its frame.</summary>
+    protected Sheet(WorkbenchContext context, string name)
+    {
+        Context = context;
+        SheetName = name;
+        Width = Dim.Fill();
+        Height = Dim.Fill();
+        CanFocus = true;
+    }
+
+    /// <summary>The name in the sheet list.</summary>
+    public string SheetName { get; }
+
+    /// <summary>Keys this sheet adds, for the key-hint line ("" when none).</summary>
+    public virtual string KeyHints => "";
+
+    /// <summary>The shared context.</summary>
+    protected WorkbenchContext Context { get; }
+
+    /// <summary>Called (on the UI thread) when the sheet is shown and whenever the rig changes while it is shown.</summary>
+    public abstract void Refresh();
+
+    /// <summary>Handles a sheet-specific key; true when handled.</summary>
+    public virtual bool HandleKey(Terminal.Gui.Input.Key key) => false;
+}

@@ -1,0 +1,333 @@
+using System.Collections.ObjectModel;
+using Terminal.Gui.Drawing;
+using Terminal.Gui.Input;
+using Terminal.Gui.ViewBase;
+using Terminal.Gui.Views;
+using RotorDrive.Tui.Sheets;
+
+namespace RotorDrive.Tui.Shell;
+
+/// <summary>The workbench's one window: the list of sheets on the left, the chosen sheet on the right, and below them
+/// a status line (rig name, unsaved mark, work in progress) and a line of key hints.</summary>
+public sealed class MainWindow : Window
+{
+    private const int ListWidth = 18;
+    private readonly WorkbenchContext _context;
+    private readonly List<Sheet> _sheets;
+    private readonly ListView _list;
+    private readonly FrameView _frame;
+    private readonly Label _status;
+    private readonly ProgressBar _progress;
+    private readonly Label _keys;
+    private string _notice = "";
+    private int _current = -1;
+    private bool _quitAnswered;
+
+    /// <summary>Creates the window with its sheets (the window owns and disposes them).</summary>
+    public MainWindow(WorkbenchContext context, IReadOnlyList<Sheet> sheets)
+    {
+        _context = context;
+        _sheets = sheets.ToList();
+        Title = "RotorDrive";
+        BorderStyle = LineStyle.None;
+        var listFrame = new FrameView { Title = "Sheets", X = 0, Y = 0, Width = ListWidth, Height = Dim.Fill(2) };
+        _list = new ListView { X = 0, Y = 0, Width = Dim.Fill(), Height = Dim.Fill() };
+        _list.SetSource(new ObservableCollection<string>(_sheets.Select((s, i) => $"{i + 1} {s.SheetName}")));
+        _list.ValueChanged += (_, _) =>
+        {
+            if (_list.Value is { } i && i >= 0 && i != _current)
+            {
+                ShowSheet(i, focusSheet: false);
+            }
+        };
+        _list.Accepting += (_, e) =>
+        {
+            _sheets[_current].SetFocus();
+            e.Handled = true;
+        };
+        listFrame.Add(_list);
+        _frame = new FrameView { X = ListWidth, Y = 0, Width = Dim.Fill(), Height = Dim.Fill(2) };
+        _status = new Label { X = 0, Y = Pos.AnchorEnd(2), Width = Dim.Fill(22), Height = 1, Text = "" };
+        _progress = new ProgressBar { X = Pos.AnchorEnd(21), Y = Pos.AnchorEnd(2), Width = 20, Height = 1, Visible = false };
+        _keys = new Label { X = 0, Y = Pos.AnchorEnd(1), Width = Dim.Fill(), Height = 1, Text = "" };
+        Add(listFrame, _frame, _status, _progress, _keys);
+
+        _context.Session.Changed += (_, _) => RefreshAll();
+        _context.Work.StateChanged += (_, _) => UpdateStatus();
+        _context.Notice += (_, message) =>
+        {
+            _notice = message;
+            UpdateStatus();
+        };
+        ShowSheet(0, focusSheet: false);
+    }
+
+    /// <summary>The sheets in list order.</summary>
+    public IReadOnlyList<Sheet> Sheets => _sheets;
+
+    /// <summary>The sheet on show.</summary>
+    public Sheet CurrentSheet => _sheets[_current];
+
+    /// <summary>The status line's text.</summary>
+    public string StatusText => _status.Text;
+
+    /// <summary>Shows a sheet by index.</summary>
+    public void ShowSheet(int index, bool focusSheet = true)
+    {
+        if (index < 0 || index >= _sheets.Count)
+        {
+            return;
+        }
+        if (_current >= 0 && _current != index)
+        {
+            _frame.Remove(_sheets[_current]);
+        }
+        if (_current != index)
+        {
+            _current = index;
+            _frame.Add(_sheets[index]);
+            _frame.Title = _sheets[index].SheetName;
+        }
+        if (_list.Value != index)
+        {
+            _list.SetSelection(index, false);
+        }
+        _sheets[index].Refresh();
+        if (focusSheet)
+        {
+            _sheets[index].SetFocus();
+        }
+        UpdateStatus();
+    }
+
+    /// <summary>Shows a sheet by name.</summary>
+    public void ShowSheet(string name, bool focusSheet = true)
+        => ShowSheet(_sheets.FindIndex(s => s.SheetName == name), focusSheet);
+
+    /// <summary>Saves to the current file (F2).</summary>
+    public void Save()
+    {
+        if (!ConfirmUntypedSave())
+        {
+            return;
+        }
+        string? failure = _context.Session.Save();
+        Tell(failure is null ? $"Saved {_context.Session.RigPath} at {_context.Clock.Now:HH:mm:ss} (previous file kept as .bak)" : "! Not saved: " + failure);
+    }
+
+    /// <summary>Saves under another name (F12), asking before replacing a different existing file.</summary>
+    public void SaveAs()
+    {
+        string? path = _context.Prompts.AskPath("Save rig as", _context.Session.RigPath ?? "rig.json");
+        if (string.IsNullOrWhiteSpace(path) || !ConfirmUntypedSave())
+        {
+            return;
+        }
+        if (_context.Session.WouldReplaceOtherFile(path))
+        {
+            int? answer = _context.Prompts.Ask("Replace file?", $"{path} already exists. Replace it? (the old file is kept as .bak)", ["Cancel", "Replace"]);
+            if (answer != 1)
+            {
+                Tell("Not saved.");
+                return;
+            }
+        }
+        string? failure = _context.Session.SaveAs(path);
+        Tell(failure is null ? $"Saved as {path} at {_context.Clock.Now:HH:mm:ss}" : "! Not saved: " + failure);
+    }
+
+    /// <summary>Opens another rig (F3), asking first about unsaved edits.</summary>
+    public void Open()
+    {
+        if (!ResolveUnsaved("Open another rig"))
+        {
+            return;
+        }
+        string? path = _context.Prompts.AskPath("Open rig", _context.Session.RigPath ?? "rig.json");
+        if (string.IsNullOrWhiteSpace(path))
+        {
+            return;
+        }
+        _context.Work.Cancel();
+        string? failure = _context.Session.Open(path);
+        Tell(failure is null ? $"Opened {path}" : "! Cannot open: " + failure);
+    }
+
+    /// <summary>Quits (F10, Ctrl+Q, Esc), asking first about unsaved edits; true when the window was asked to stop.</summary>
+    public bool Quit()
+    {
+        if (!_quitAnswered && !ResolveUnsaved("Quit"))
+        {
+            return false;
+        }
+        _quitAnswered = true;
+        _context.Work.Cancel();
+        RequestStop();
+        return true;
+    }
+
+    /// <inheritdoc/>
+    protected override bool OnIsRunningChanging(bool oldIsRunning, bool newIsRunning)
+    {
+        if (!newIsRunning && oldIsRunning)
+        {
+            if (!_quitAnswered && !ResolveUnsaved("Quit"))
+            {
+                return true;
+            }
+            _quitAnswered = true;
+            _context.Work.Cancel();
+        }
+        return base.OnIsRunningChanging(oldIsRunning, newIsRunning);
+    }
+
+    /// <inheritdoc/>
+    protected override bool OnKeyDown(Key key)
+    {
+        if (_sheets[_current].HandleKey(key))
+        {
+            return true;
+        }
+        if (key == Key.F1)
+        {
+            ShowSheet("Help");
+        }
+        else if (key == Key.F2)
+        {
+            Save();
+        }
+        else if (key == Key.F12)
+        {
+            SaveAs();
+        }
+        else if (key == Key.F3)
+        {
+            Open();
+        }
+        else if (key == Key.F5)
+        {
+            _sheets[_current].Refresh();
+            Tell("Recomputed.");
+        }
+        else if (key == Key.F8)
+        {
+            _context.Work.Cancel();
+            Tell("Stopped.");
+        }
+        else if (key == Key.F10 || key == Key.Q.WithCtrl || key == Key.Esc)
+        {
+            Quit();
+        }
+        else if (key == Key.PageDown.WithCtrl)
+        {
+            ShowSheet((_current + 1) % _sheets.Count);
+        }
+        else if (key == Key.PageUp.WithCtrl)
+        {
+            ShowSheet((_current + _sheets.Count - 1) % _sheets.Count);
+        }
+        else if (key.IsAlt && key.NoAlt.AsRune.Value is >= '1' and <= '9')
+        {
+            ShowSheet(key.NoAlt.AsRune.Value - '1');
+        }
+        else
+        {
+            return base.OnKeyDown(key);
+        }
+        return true;
+    }
+
+    /// <inheritdoc/>
+    protected override void Dispose(bool disposing)
+    {
+        if (disposing)
+        {
+            // Sheets not on show are not sub-views; dispose them here so none is left behind.
+            foreach (var sheet in _sheets.Where((_, i) => i != _current))
+            {
+                sheet.Dispose();
+            }
+        }
+        base.Dispose(disposing);
+    }
+
+    /// <summary>Before a step that would drop unsaved edits: save, discard or cancel. True to go ahead.</summary>
+    private bool ResolveUnsaved(string what)
+    {
+        var session = _context.Session;
+        if (!session.IsDirty)
+        {
+            return true;
+        }
+        string typed = session.UntypedFields.Count > 0 ? $" {session.UntypedFields.Count} field(s) hold text that is not a valid value yet." : "";
+        int? answer = _context.Prompts.Ask(what, $"The rig {session.DisplayName} has unsaved edits.{typed} Save them first?",
+            ["Cancel", "Save", "Discard"]);
+        switch (answer)
+        {
+            case 1:
+                string? failure = session.Save();
+                if (failure is not null)
+                {
+                    Tell("! Not saved: " + failure);
+                    return false;
+                }
+                return true;
+            case 2:
+                return true;
+            default:
+                Tell("Cancelled; nothing was lost.");
+                return false;
+        }
+    }
+
+    private bool ConfirmUntypedSave()
+    {
+        var untyped = _context.Session.UntypedFields;
+        if (untyped.Count == 0)
+        {
+            return true;
+        }
+        int? answer = _context.Prompts.Ask("Save", $"{untyped.Count} field(s) hold text that is not a valid value ({string.Join(", ", untyped.Keys)}). "
+            + "The file will keep their last valid values. Save anyway?", ["Cancel", "Save"]);
+        return answer == 1;
+    }
+
+    private void Tell(string message)
+    {
+        _notice = message;
+        UpdateStatus();
+    }
+
+    private void RefreshAll()
+    {
+        if (_current >= 0)
+        {
+            _sheets[_current].Refresh();
+        }
+        UpdateStatus();
+    }
+
+    private void UpdateStatus()
+    {
+        var session = _context.Session;
+        string mark = session.IsDirty ? " * unsaved" : "";
+        string problems = session.Problems.Count + session.UntypedFields.Count is var n and > 0 ? $" | ! {n} problem(s)" : "";
+        string work = _context.Work.Current is { } job ? $" | {job.Name}..." : "";
+        string failure = _context.Work.LastFailure is { } f ? $" | ! {f}" : "";
+        string notice = _notice.Length > 0 ? " | " + _notice : "";
+        _status.Text = $"{session.DisplayName}{mark}{work}{failure}{notice}{problems}";
+        if (_context.Work.Current is { Progress: { } fraction })
+        {
+            _progress.Visible = true;
+            _progress.Fraction = (float)fraction;
+            _status.Width = Dim.Fill(22);
+        }
+        else
+        {
+            _progress.Visible = false;
+            _status.Width = Dim.Fill();
+        }
+        string sheetKeys = _current >= 0 && _sheets[_current].KeyHints.Length > 0 ? _sheets[_current].KeyHints + "  " : "";
+        _keys.Text = $"F1 Help  F2 Save  F3 Open  {sheetKeys}F8 Stop  F10 Quit";
+    }
+}

@@ -1,0 +1,227 @@
+using Terminal.Gui.App;
+
+namespace RotorDrive.Tui.Work;
+
+/// <summary>Runs computations off the UI thread: each named job is debounced (a new request within the delay replaces
+/// the pending one), cancellable (a newer request or <see cref="Cancel"/> cancels the running one), reports progress,
+/// and hands its result back on the UI thread through the application's invoke mechanism.</summary>
+public sealed class BackgroundWork : IDisposable
+{
+    private readonly IApplication _app;
+    private readonly TimeSpan _debounce;
+    private readonly Dictionary<string, Job> _jobs = new(StringComparer.Ordinal);
+    private readonly object _gate = new();
+    private bool _disposed;
+
+    /// <summary>Creates the runner for an application.</summary>
+    /// <param name="app">The application whose UI thread receives results.</param>
+    /// <param name="debounce">How long to wait after the last request before starting (edits come in bursts).</param>
+    public BackgroundWork(IApplication app, TimeSpan debounce)
+    {
+        _app = app ?? throw new ArgumentNullException(nameof(app));
+        _debounce = debounce;
+    }
+
+    /// <summary>Raised on the UI thread whenever a job starts, reports progress, ends or is cancelled.</summary>
+    public event EventHandler? StateChanged;
+
+    /// <summary>The job currently running or waiting, with its progress (0..1, or null when it reports none).</summary>
+    public (string Name, double? Progress)? Current
+    {
+        get
+        {
+            lock (_gate)
+            {
+                var job = _jobs.Values.Where(j => j.Running || j.Pending).OrderByDescending(j => j.Running).FirstOrDefault();
+                return job is null ? null : (job.Name, job.Progress);
+            }
+        }
+    }
+
+    /// <summary>The last failure message, if the last job of any name threw; cleared when a job completes.</summary>
+    public string? LastFailure { get; private set; }
+
+    /// <summary>Requests a computation. <paramref name="work"/> runs on a thread-pool thread and must honour its
+    /// cancellation token; <paramref name="done"/> runs on the UI thread with the result unless a newer request or a
+    /// cancellation came first.</summary>
+    /// <param name="name">The job's name; a new request replaces a pending or running one of the same name.</param>
+    /// <param name="work">The computation.</param>
+    /// <param name="done">Receives the result on the UI thread.</param>
+    /// <param name="immediately">True to start without the debounce delay.</param>
+    public void Request<T>(string name, Func<CancellationToken, IProgress<double>, T> work, Action<T> done, bool immediately = false)
+    {
+        ArgumentNullException.ThrowIfNull(work);
+        ArgumentNullException.ThrowIfNull(done);
+        if (_disposed)
+        {
+            return;
+        }
+        Job job;
+        lock (_gate)
+        {
+            if (_jobs.TryGetValue(name, out var old))
+            {
+                old.Cancel();
+                if (old.Timeout is not null)
+                {
+                    _app.RemoveTimeout(old.Timeout);
+                }
+            }
+            job = new Job(name);
+            _jobs[name] = job;
+        }
+        job.Pending = true;
+        void Start()
+        {
+            job.Timeout = null;
+            job.Pending = false;
+            if (job.Token.IsCancellationRequested)
+            {
+                return;
+            }
+            job.Running = true;
+            Raise();
+            var progress = new Progress(this, job);
+            job.Task = Task.Run(() => work(job.Token, progress), job.Token).ContinueWith(t =>
+            {
+                Post(() =>
+                {
+                    job.Running = false;
+                    bool current;
+                    lock (_gate)
+                    {
+                        current = _jobs.TryGetValue(name, out var latest) && ReferenceEquals(latest, job);
+                    }
+                    if (t.IsCompletedSuccessfully && !job.Token.IsCancellationRequested && current && !_disposed)
+                    {
+                        LastFailure = null;
+                        done(t.Result);
+                    }
+                    else if (t.IsFaulted && current)
+                    {
+                        LastFailure = $"{name}: {t.Exception!.GetBaseException().Message}";
+                    }
+                    Raise();
+                });
+            }, TaskScheduler.Default);
+        }
+        if (immediately || _debounce <= TimeSpan.Zero)
+        {
+            Start();
+        }
+        else
+        {
+            job.Timeout = _app.AddTimeout(_debounce, () =>
+            {
+                Start();
+                return false;
+            });
+            Raise();
+        }
+    }
+
+    /// <summary>Cancels every pending and running job; their results are dropped.</summary>
+    public void Cancel()
+    {
+        lock (_gate)
+        {
+            foreach (var job in _jobs.Values)
+            {
+                job.Cancel();
+                if (job.Timeout is not null)
+                {
+                    _app.RemoveTimeout(job.Timeout);
+                    job.Timeout = null;
+                }
+                job.Pending = false;
+            }
+        }
+        Raise();
+    }
+
+    /// <summary>Completes when every job started so far has finished on its worker thread (tests await this, then let
+    /// the application run its queued invokes).</summary>
+    public Task WhenWorkersDone()
+    {
+        lock (_gate)
+        {
+            return Task.WhenAll(_jobs.Values.Select(j => j.Task).Where(t => t is not null).Select(t => t!.ContinueWith(_ => { }, TaskScheduler.Default)));
+        }
+    }
+
+    /// <inheritdoc/>
+    public void Dispose()
+    {
+        if (_disposed)
+        {
+            return;
+        }
+        Cancel();
+        _disposed = true;
+        lock (_gate)
+        {
+            foreach (var job in _jobs.Values)
+            {
+                job.Dispose();
+            }
+        }
+    }
+
+    private void Raise() => StateChanged?.Invoke(this, EventArgs.Empty);
+
+    // Results and progress go back through the application's invoke mechanism: from a worker thread it queues the
+    // action for the UI loop's next iteration.
+    private void Post(Action action) => _app.Invoke(action);
+
+    private sealed class Job(string name) : IDisposable
+    {
+        private readonly CancellationTokenSource _cts = new();
+
+        public string Name { get; } = name;
+
+        public CancellationToken Token => _cts.Token;
+
+        public object? Timeout { get; set; }
+
+        public Task? Task { get; set; }
+
+        public bool Pending { get; set; }
+
+        public bool Running { get; set; }
+
+        public double? Progress { get; set; }
+
+        public void Cancel()
+        {
+            try
+            {
+                _cts.Cancel();
+            }
+            catch (ObjectDisposedException)
+            {
+                // Already finished and disposed: nothing to cancel.
+            }
+        }
+
+        public void Dispose() => _cts.Dispose();
+    }
+
+    private sealed class Progress(BackgroundWork owner, Job job) : IProgress<double>
+    {
+        private int _lastPercent = -1;
+
+        public void Report(double value)
+        {
+            int percent = (int)Math.Clamp(value * 100, 0, 100);
+            if (percent == Interlocked.Exchange(ref _lastPercent, percent))
+            {
+                return;
+            }
+            owner.Post(() =>
+            {
+                job.Progress = percent / 100.0;
+                owner.Raise();
+            });
+        }
+    }
+}

@@ -1,0 +1,82 @@
+using Terminal.Gui.Input;
+using RotorDrive.Core.Craft;
+using RotorDrive.Tui.Sheets;
+using RotorDrive.Tui.Tests.Support;
+using Xunit;
+
+namespace RotorDrive.Tui.Tests.Sheets;
+
+public class StationsSheetTests
+{
+    [Fact]
+    public void StationsSheet_DrawsEveryStationWithItsSpin_AndTheCentreOfGravity()
+    {
+        using var bench = new Bench();
+        bench.Window.ShowSheet("Stations");
+        var rig = bench.Context.Session.Rig!;
+        var sheet = Assert.IsType<StationsSheet>(bench.Window.CurrentSheet);
+        string sketch = sheet.SketchText;
+        for (int i = 0; i < rig.Stations.Count; i++)
+        {
+            string arrow = rig.Stations[i].Spin == SpinDirection.Clockwise ? "↻" : "↺";
+            Assert.Contains($"{i + 1}{arrow}", sketch);
+        }
+        Assert.Contains("+", sketch);
+        Assert.Contains("↺ ccw (seen from above)", bench.Screen);
+    }
+
+    [Fact]
+    public void F7_SpellsTheSpinInLetters_SoItIsNotArrowsOnly()
+    {
+        using var bench = new Bench();
+        bench.Window.ShowSheet("Stations");
+        var sheet = Assert.IsType<StationsSheet>(bench.Window.CurrentSheet);
+        bench.Press(Key.F7);
+        Assert.Contains("1cw", sheet.SketchText);
+        Assert.Contains("2ccw", sheet.SketchText);
+    }
+
+    [Fact]
+    public void ChoosingAMotorForAStation_UpdatesThatStationOnly()
+    {
+        using var bench = new Bench();
+        bench.Window.ShowSheet("Stations");
+        var sheet = Assert.IsType<StationsSheet>(bench.Window.CurrentSheet);
+        sheet.SelectStation(2);
+        var motor = sheet.Fields.Single(f => f.Spec.JsonPath == "$.stations[2].motor");
+        string newId = bench.Context.Session.Catalog!.Motors.First(m => m.Id != bench.Context.Session.Rig!.Stations[2].Motor!.Id).Id;
+        motor.Field.SetFocus();
+        bench.Prompts.Answers.Enqueue(newId);
+        bench.Press(Key.F4);
+        var rig = bench.Context.Session.Rig!;
+        Assert.Equal(newId, rig.Stations[2].Motor!.Id);
+        Assert.NotEqual(newId, rig.Stations[1].Motor!.Id);
+    }
+
+    [Fact]
+    public void AnUnknownRotorId_IsListedAsAProblem_WithTheFieldsMessage()
+    {
+        using var bench = new Bench(columns: 120);
+        bench.Window.ShowSheet("Stations");
+        var sheet = Assert.IsType<StationsSheet>(bench.Window.CurrentSheet);
+        var rotor = sheet.Fields.Single(f => f.Spec.JsonPath == "$.stations[0].rotor");
+        rotor.Field.SetFocus();
+        rotor.Field.Text = "no-such-rotor";
+        Assert.Null(bench.Context.Session.Rig);
+        Assert.Contains("no-such-rotor", rotor.CurrentMessage);
+        Assert.Contains("$.stations[0].rotor", bench.Screen);
+        Assert.Equal("no-such-rotor", rotor.Field.Text);
+    }
+
+    [Fact]
+    public void SelectedStation_ShowsItsRotorsBurstCheck_FromCore()
+    {
+        using var bench = new Bench(columns: 120);
+        bench.Window.ShowSheet("Stations");
+        var rotor = bench.Context.Session.Rig!.Stations[0].Rotor;
+        var expected = RotorDrive.Core.Safety.RotorSafety.AtRatedSpeed(rotor);
+        string screen = bench.Screen;
+        Assert.Contains($"rim {expected.RimSpeedMPerS:F0} m/s", screen);
+        Assert.Contains(StationsSheet.SafetyLine(rotor), screen);
+    }
+}

@@ -1,0 +1,144 @@
+using Terminal.Gui.Input;
+using RotorDrive.Tui.Sheets;
+using RotorDrive.Tui.Tests.Support;
+using Xunit;
+
+namespace RotorDrive.Tui.Tests.Shell;
+
+public class MainWindowTests
+{
+    private static void EditDesignGap(Bench bench, string text)
+    {
+        var sheet = Assert.IsType<RigSheet>(bench.Window.CurrentSheet);
+        var gap = sheet.Fields.Single(f => f.Spec.JsonPath == "$.gap.design_mm");
+        gap.Field.SetFocus();
+        gap.Field.Text = "";
+        bench.Type(text);
+    }
+
+    [Fact]
+    public void StatusLine_ShowsRigName_AndKeyHints()
+    {
+        using var bench = new Bench(columns: 80, rows: 24);
+        string screen = bench.Screen;
+        Assert.Contains("Lab carrier H6", screen);
+        Assert.Contains("F1 Help", screen);
+        Assert.Contains("F10 Quit", screen);
+        Assert.DoesNotContain("* unsaved", screen);
+    }
+
+    [Fact]
+    public void Quit_WithoutEdits_StopsWithoutAsking()
+    {
+        using var bench = new Bench();
+        bench.Press(Key.F10);
+        Assert.Empty(bench.Prompts.Asked);
+        Assert.True(bench.Window.StopRequested);
+    }
+
+    [Fact]
+    public void Quit_WithUnsavedEdits_Asks_AndCancelKeepsTheWorkbenchOpen()
+    {
+        using var bench = new Bench();
+        EditDesignGap(bench, "11");
+        bench.Prompts.Answers.Enqueue("Cancel");
+        bench.Press(Key.F10);
+        Assert.Single(bench.Prompts.Asked);
+        Assert.Contains("unsaved edits", bench.Prompts.Asked[0]);
+        Assert.False(bench.Window.StopRequested);
+        Assert.True(bench.Context.Session.IsDirty);
+        Assert.Empty(bench.Files.Writes);
+    }
+
+    [Fact]
+    public void Quit_WithUnsavedEdits_SaveAnswer_SavesWithABackup_ThenStops()
+    {
+        using var bench = new Bench();
+        string original = bench.Files["/lab/demo-rig.json"];
+        EditDesignGap(bench, "11");
+        bench.Prompts.Answers.Enqueue("Save");
+        bench.Press(Key.F10);
+        Assert.True(bench.Window.StopRequested);
+        Assert.Equal(original, bench.Files["/lab/demo-rig.json.bak"]);
+        Assert.Contains("\"design_mm\": 11", bench.Files["/lab/demo-rig.json"]);
+    }
+
+    [Fact]
+    public void Quit_WithUnsavedEdits_DiscardAnswer_StopsWithoutWriting()
+    {
+        using var bench = new Bench();
+        EditDesignGap(bench, "11");
+        bench.Prompts.Answers.Enqueue("Discard");
+        bench.Press(Key.F10);
+        Assert.True(bench.Window.StopRequested);
+        Assert.Empty(bench.Files.Writes);
+    }
+
+    [Fact]
+    public void Save_KeepsThePreviousFileAsBak_AndClearsTheUnsavedMark()
+    {
+        using var bench = new Bench();
+        string original = bench.Files["/lab/demo-rig.json"];
+        EditDesignGap(bench, "9.5");
+        bench.Press(Key.F2);
+        Assert.Equal(original, bench.Files["/lab/demo-rig.json.bak"]);
+        Assert.Equal(["/lab/demo-rig.json"], bench.Files.Writes);
+        Assert.False(bench.Context.Session.IsDirty);
+        Assert.Contains("Saved /lab/demo-rig.json at 10:00:00", bench.Window.StatusText);
+        // The saved file reads back as the edited rig.
+        var reread = new RotorDrive.Tui.Session.RigSession(bench.Files);
+        Assert.Null(reread.Open("/lab/demo-rig.json"));
+        Assert.Equal(0.0095, reread.Rig!.DesignGapM, 12);
+    }
+
+    [Fact]
+    public void SaveAs_OntoAnotherExistingFile_AsksFirst_AndCancelWritesNothing()
+    {
+        using var bench = new Bench();
+        bench.Files["/lab/other.json"] = "{}";
+        bench.Prompts.Answers.Enqueue("/lab/other.json");
+        bench.Prompts.Answers.Enqueue("Cancel");
+        bench.Press(Key.F12);
+        Assert.Contains(bench.Prompts.Asked, q => q.StartsWith("Replace file?", StringComparison.Ordinal));
+        Assert.Equal("{}", bench.Files["/lab/other.json"]);
+        Assert.Empty(bench.Files.Writes);
+    }
+
+    [Fact]
+    public void SaveAs_IntoAnotherFolder_RewritesCatalogPaths_SoTheCopyStillOpens()
+    {
+        using var bench = new Bench();
+        bench.Prompts.Answers.Enqueue("/lab/copies/rig2.json");
+        bench.Press(Key.F12);
+        Assert.Equal(["/lab/copies/rig2.json"], bench.Files.Writes);
+        Assert.Contains("\"motors\": \"../motors.csv\"", bench.Files["/lab/copies/rig2.json"]);
+        var reread = new RotorDrive.Tui.Session.RigSession(bench.Files);
+        Assert.Null(reread.Open("/lab/copies/rig2.json"));
+        Assert.NotNull(reread.Rig);
+    }
+
+    [Fact]
+    public void Open_WithUnsavedEdits_AsksFirst()
+    {
+        using var bench = new Bench();
+        EditDesignGap(bench, "11");
+        bench.Prompts.Answers.Enqueue("Cancel");
+        bench.Press(Key.F3);
+        Assert.Single(bench.Prompts.Asked);
+        Assert.Equal(0.011, bench.Context.Session.Rig!.DesignGapM, 12);
+    }
+
+    [Fact]
+    public void AltDigit_And_CtrlPageDown_MoveBetweenSheets()
+    {
+        using var bench = new Bench();
+        bench.Press(Key.D2.WithAlt);
+        Assert.Equal("Stations", bench.Window.CurrentSheet.SheetName);
+        bench.Press(Key.PageDown.WithCtrl);
+        Assert.Equal(bench.Window.Sheets[2].SheetName, bench.Window.CurrentSheet.SheetName);
+        bench.Press(Key.PageUp.WithCtrl);
+        Assert.Equal("Stations", bench.Window.CurrentSheet.SheetName);
+        bench.Press(Key.F1);
+        Assert.Equal("Help", bench.Window.CurrentSheet.SheetName);
+    }
+}
