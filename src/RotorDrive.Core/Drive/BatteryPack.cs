@@ -32,4 +32,11 @@ public sealed record BatteryPack(
 
     /// <summary>Burst current rating, A.</summary>
     public double BurstCurrentA => BurstC * CapacityAh;
+
+    /// <summary>C-rate of a discharge current: current divided by the capacity in A h, 1/h.</summary>
+    /// <remarks>Definition of the C-rate: currents as multiples of the reference current It = rated capacity / 1 h, so
+    /// 1 C discharges the rated capacity in one hour (IEC 61434, guide to designation of current in secondary cell
+    /// standards).</remarks>
+    /// <param name="currentA">Discharge current, A (negative while charging).</param>
+    public double CRate(double currentA) => currentA / CapacityAh;
 }

@@ -23,4 +23,16 @@ public sealed record SpeedController(
     double IdleCurrentA,
     double MaxErpm,
     double MassKg,
-    bool Reversible);
+    bool Reversible)
+{
+    /// <summary>True when a pack of this many series cells is within the controller's rated range.</summary>
+    /// <param name="cellsSeries">Series cell count of the pack.</param>
+    public bool AcceptsCells(int cellsSeries) => cellsSeries >= MinCells && cellsSeries <= MaxCells;
+
+    /// <summary>Largest shaft speed the controller can commutate for a motor with the given pole pairs, rad/s.</summary>
+    /// <remarks>Electrical rpm = mechanical rpm x motor pole pairs, so the shaft limit is MaxErpm / pole pairs.</remarks>
+    /// <param name="motorPolePairs">Motor pole pairs, at least 1.</param>
+    /// <exception cref="ArgumentOutOfRangeException">Fewer than one pole pair.</exception>
+    public double MaxShaftSpeedRadPerS(int motorPolePairs)
+        => Units.RpmToRadPerS(MaxErpm / Preconditions.AtLeast(motorPolePairs, 1, nameof(motorPolePairs)));
+}

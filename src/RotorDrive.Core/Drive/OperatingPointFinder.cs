@@ -1,0 +1,384 @@
+using MathNet.Numerics.RootFinding;
+using RotorDrive.Core.Loads;
+
+namespace RotorDrive.Core.Drive;
+
+/// <summary>Finds every steady operating point of one rotor on its drivetrain: each shaft speed where the motor's torque
+/// equals the load's, with its stability and its margins to every limit.</summary>
+/// <remarks>
+/// <para>A magnet rotor's eddy drag rises to a peak and falls (J. R. Reitz, J. Appl. Phys. 41, 2067, 1970), so a
+/// current-limited motor can meet it up to three times: a stable point below the drag peak, an unstable one above it and
+/// a stable one at high speed. The search never reports only one when there are more.</para>
+/// <para>Method: the torque balance f(omega) = Q_motor - Q_load (Q_motor from <see cref="DriveBus"/> with this rotor's
+/// own pack sag, Drela's first-order motor) is sampled from rest to the search top, the speed above which the motor
+/// cannot drive (back-EMF above d x open-circuit voltage, plus 5 %), so every crossing lies inside. Samples crowd toward
+/// rest (quadratic spacing), and one sits on the motor curve's current-limit corner. Each sign change is
+/// refined with MathNet's Brent solver (R. P. Brent, "Algorithms for Minimization without Derivatives", 1973). A local
+/// minimum of |f| between samples that keep their sign is probed by successive parabolic steps to find two close
+/// crossings (a drag peak grazing the current limit). Stability is the sign of df/d omega at the crossing: negative
+/// (motor torque falls below the load as speed rises) is stable. When the motor cannot start the rotor
+/// (f &lt;= 0 just above rest) the rotor stays at rest: a stable at-rest point.</para>
+/// <para>Speed hold: at the commanded speed the controller needs the current Kv Q_load / phi + I0; if the current limit
+/// and the duty allow it the speed is held (a stable held point). Below the commanded speed the controller saturates
+/// (max duty, current limited), so the saturated drive's crossings below that speed are equilibria too: a rotor started
+/// from rest stalls at the first stable one.</para>
+/// </remarks>
+public static class OperatingPointFinder
+{
+    private const double SearchMargin = 1.05;
+    private const double RestFraction = 1e-9;
+
+    /// <summary>Finds every equilibrium of a rotor at a throttle.</summary>
+    /// <param name="drive">The station's drive (drivetrain, packs, rotor, load, limits).</param>
+    /// <param name="throttle">Open-loop duty or speed to hold.</param>
+    /// <param name="conditions">Gap, temperatures, state of charge, braking.</param>
+    /// <param name="options">Numerical settings, or null for the defaults.</param>
+    /// <returns>All equilibria (slowest first) with stability and margins, and the compatibility findings.</returns>
+    /// <exception cref="ArgumentNullException">The drive or conditions are null.</exception>
+    /// <exception cref="ArgumentOutOfRangeException">A condition or option is out of range.</exception>
+    public static OperatingPointResult Find(
+        StationDrive drive,
+        ThrottleCommand throttle,
+        OperatingConditions conditions,
+        OperatingPointOptions? options = null)
+    {
+        Preconditions.NotNull(drive, nameof(drive));
+        Preconditions.NotNull(conditions, nameof(conditions));
+        options ??= OperatingPointOptions.Default;
+        Validate(conditions, options);
+        var findings = DriveCompatibility.Check(drive);
+        var source = BusSource.FromPack(drive.Packs, conditions.SocFraction);
+        var drivetrain = drive.Drivetrain;
+        var balance = new TorqueBalance(drive, conditions, source);
+        var points = new List<OperatingPoint>(3);
+        double maxDuty = drivetrain.MaxDuty;
+        bool? holdMet = null;
+        DriveRegime? stoppedBy = null;
+        double top;
+
+        if (throttle.Kind == ThrottleKind.Duty)
+        {
+            Preconditions.InRange(throttle.Value, 0, 1, "duty");
+            balance.Command = DriveCommand.Duty(throttle.Value);
+            top = SearchMargin * drivetrain.FreeSpeedRadPerS(source.OpenCircuitVoltageV, Math.Min(throttle.Value, maxDuty), conditions.MotorMagnetTempC);
+            SearchCrossings(balance, top, points, options);
+        }
+        else
+        {
+            double target = Preconditions.Positive(throttle.Value, "hold speed");
+            balance.Command = DriveCommand.Duty(maxDuty);
+            top = Math.Min(target, SearchMargin * drivetrain.FreeSpeedRadPerS(source.OpenCircuitVoltageV, maxDuty, conditions.MotorMagnetTempC));
+            SearchCrossings(balance, top, points, options);
+
+            var loadAtTarget = balance.LoadAt(target);
+            double flux = drivetrain.FluxFactorAt(conditions.MotorMagnetTempC);
+            balance.Command = DriveCommand.MotorCurrent(drivetrain.Motor.CurrentForTorqueA(loadAtTarget.TotalTorqueNm, flux));
+            var held = balance.Detail(target, EquilibriumKind.Held, stable: true);
+            if (held.Drive.Regime is DriveRegime.Regulating or DriveRegime.Freewheel)
+            {
+                holdMet = true;
+                double tolerance = 1e-6 * target;
+                points.RemoveAll(p => Math.Abs(p.SpeedRadPerS - target) <= tolerance);
+                points.Add(held);
+            }
+            else
+            {
+                holdMet = false;
+                // Back-EMF above the bus at the commanded speed means the duty ran out before the speed was reached.
+                stoppedBy = held.Drive.Regime == DriveRegime.Rectifying ? DriveRegime.MaxDuty : held.Drive.Regime;
+            }
+        }
+
+        var status = points.Count > 0 ? OperatingStatus.Found : OperatingStatus.NoEquilibrium;
+        return new OperatingPointResult(status, throttle, points, findings, holdMet, stoppedBy, source.OpenCircuitVoltageV, top, balance.Evaluations);
+    }
+
+    /// <summary>The operating points over a range of duties from 0 to 1, e.g. for a table of the point reached from rest.</summary>
+    /// <param name="drive">The station's drive.</param>
+    /// <param name="conditions">Gap, temperatures, state of charge, braking.</param>
+    /// <param name="steps">Number of duties, at least 2, evenly spaced from 0 to 1 inclusive.</param>
+    /// <param name="options">Numerical settings, or null for the defaults.</param>
+    /// <returns>One result per duty, in increasing duty.</returns>
+    /// <exception cref="ArgumentNullException">The drive or conditions are null.</exception>
+    /// <exception cref="ArgumentOutOfRangeException">Fewer than 2 steps, or a condition or option is out of range.</exception>
+    public static IReadOnlyList<OperatingPointResult> SweepDuty(
+        StationDrive drive,
+        OperatingConditions conditions,
+        int steps = 21,
+        OperatingPointOptions? options = null)
+    {
+        Preconditions.AtLeast(steps, 2, nameof(steps));
+        var results = new OperatingPointResult[steps];
+        for (int i = 0; i < steps; i++)
+        {
+            results[i] = Find(drive, ThrottleCommand.Duty(i / (double)(steps - 1)), conditions, options);
+        }
+        return results;
+    }
+
+    private static void Validate(OperatingConditions c, OperatingPointOptions o)
+    {
+        Preconditions.Positive(c.GapM, nameof(c.GapM));
+        Preconditions.Finite(c.PlateTempC, nameof(c.PlateTempC));
+        Preconditions.Finite(c.RotorMagnetTempC, nameof(c.RotorMagnetTempC));
+        Preconditions.Finite(c.WindingTempC, nameof(c.WindingTempC));
+        Preconditions.Finite(c.MotorMagnetTempC, nameof(c.MotorMagnetTempC));
+        Preconditions.InRange(c.SocFraction, 0, 1, nameof(c.SocFraction));
+        Preconditions.AtLeast(o.ScanPoints, 4, nameof(o.ScanPoints));
+        Preconditions.InRange(o.RelativeAccuracy, 1e-15, 1e-3, nameof(o.RelativeAccuracy));
+        Preconditions.AtLeast(o.MaxIterations, 1, nameof(o.MaxIterations));
+        Preconditions.AtLeast(o.TangencyProbes, 0, nameof(o.TangencyProbes));
+        Preconditions.InRange(o.SlopeStepRelative, 1e-12, 1e-2, nameof(o.SlopeStepRelative));
+    }
+
+    private static void SearchCrossings(TorqueBalance balance, double top, List<OperatingPoint> points, OperatingPointOptions options)
+    {
+        if (!(top > 0))
+        {
+            points.Add(balance.Detail(0, EquilibriumKind.AtRest, stable: true));
+            return;
+        }
+        // Samples crowd toward rest (x = top (i/(n-1))^2) where the drag peak and the stall below it usually lie, plus
+        // one at the motor's current-limit corner so that no sample interval straddles the kink of its torque curve.
+        int n = options.ScanPoints;
+        double corner = balance.CornerSpeed();
+        bool withCorner = corner > 0 && corner < top;
+        int m = withCorner ? n + 1 : n;
+        Span<double> xs = stackalloc double[m];
+        Span<double> fs = stackalloc double[m];
+        int filled = 0;
+        for (int i = 0; i < n; i++)
+        {
+            double u = i / (double)(n - 1);
+            double x = i == 0 ? RestFraction * top : top * u * u;
+            if (withCorner && corner < x && (filled == 0 || corner > xs[filled - 1]))
+            {
+                xs[filled++] = corner;
+            }
+            xs[filled++] = x;
+        }
+        if (filled < m)
+        {
+            // The corner coincided with a sample.
+            m = filled;
+            xs = xs[..m];
+            fs = fs[..m];
+        }
+        double scale = 0;
+        for (int i = 0; i < m; i++)
+        {
+            fs[i] = balance.F(xs[i]);
+            scale = Math.Max(scale, Math.Abs(fs[i]));
+        }
+        if (fs[0] <= 0)
+        {
+            points.Add(balance.Detail(0, EquilibriumKind.AtRest, stable: true));
+        }
+        if (scale == 0)
+        {
+            return;
+        }
+        balance.Top = top;
+        balance.Scale = scale;
+        // At most one sign-change bracket per sample interval, and two per probed interior sample.
+        Span<Bracket> brackets = stackalloc Bracket[3 * m];
+        int count = 0;
+        for (int i = 0; i + 1 < m; i++)
+        {
+            if (Positive(fs[i]) != Positive(fs[i + 1]))
+            {
+                brackets[count++] = new Bracket(xs[i], fs[i], xs[i + 1], fs[i + 1]);
+            }
+        }
+        for (int i = 1; i + 1 < m; i++)
+        {
+            bool sameSign = Positive(fs[i - 1]) == Positive(fs[i]) && Positive(fs[i]) == Positive(fs[i + 1]);
+            if (sameSign && Math.Abs(fs[i]) < Math.Abs(fs[i - 1]) && Math.Abs(fs[i]) <= Math.Abs(fs[i + 1]))
+            {
+                count += ProbeTangency(balance, xs[i - 1], fs[i - 1], xs[i], fs[i], xs[i + 1], fs[i + 1], options.TangencyProbes, brackets[count..]);
+            }
+        }
+        if (count == 0)
+        {
+            return;
+        }
+
+        Span<Root> roots = stackalloc Root[count];
+        Func<double, double> g = balance.Normalized;
+        for (int k = 0; k < count; k++)
+        {
+            var b = brackets[k];
+            balance.Cache(b.Lo / top, b.FLo / scale, b.Hi / top, b.FHi / scale);
+            double x = Brent.TryFindRoot(g, b.Lo / top, b.Hi / top, options.RelativeAccuracy, options.MaxIterations, out double root)
+                ? root
+                : FalsePosition(b) / top;
+            roots[k] = new Root(x * top, Positive(b.FLo));
+        }
+        roots.Sort(static (p, q) => p.Speed.CompareTo(q.Speed));
+        double merge = 10 * options.RelativeAccuracy * top;
+        double h = options.SlopeStepRelative * top;
+        for (int k = 0; k < count; k++)
+        {
+            var (speed, stable) = roots[k];
+            // Two crossings at one speed are a tangency: stable from one side only, so not stable.
+            if (k + 1 < count && roots[k + 1].Speed - speed <= merge)
+            {
+                stable = false;
+                k++;
+            }
+            points.Add(balance.Detail(speed, EquilibriumKind.Crossing, stable, slopeStep: h));
+        }
+    }
+
+    // Successive parabolic steps toward a local minimum of |f|; when f changes sign there, two crossings are bracketed.
+    private static int ProbeTangency(TorqueBalance balance, double a, double fa, double b, double fb, double c, double fc, int probes, Span<Bracket> brackets)
+    {
+        double left = a, fLeft = fa, right = c, fRight = fc;
+        for (int k = 0; k < probes; k++)
+        {
+            double num = (b - a) * (b - a) * (fb - fc) - (b - c) * (b - c) * (fb - fa);
+            double den = (b - a) * (fb - fc) - (b - c) * (fb - fa);
+            if (den == 0)
+            {
+                return 0;
+            }
+            double u = b - 0.5 * num / den;
+            if (!(u > left && u < right) || u == b)
+            {
+                return 0;
+            }
+            double fu = balance.F(u);
+            if (Positive(fu) != Positive(fb))
+            {
+                brackets[0] = new Bracket(left, fLeft, u, fu);
+                brackets[1] = new Bracket(u, fu, right, fRight);
+                return 2;
+            }
+            if (Math.Abs(fu) < Math.Abs(fb))
+            {
+                if (u < b)
+                {
+                    c = b;
+                    fc = fb;
+                }
+                else
+                {
+                    a = b;
+                    fa = fb;
+                }
+                b = u;
+                fb = fu;
+            }
+            else if (u < b)
+            {
+                a = u;
+                fa = fu;
+            }
+            else
+            {
+                c = u;
+                fc = fu;
+            }
+        }
+        return 0;
+    }
+
+    // Fallback when Brent stops on its iteration limit: the secant through the bracket's ends (always inside it).
+    private static double FalsePosition(Bracket b) => b.Lo + (b.Hi - b.Lo) * b.FLo / (b.FLo - b.FHi);
+
+    private static bool Positive(double f) => f > 0;
+
+    private readonly record struct Bracket(double Lo, double FLo, double Hi, double FHi);
+
+    private readonly record struct Root(double Speed, bool Stable);
+
+    // The torque balance of one rotor at one command; counts its evaluations and caches Brent's two starting ends.
+    private sealed class TorqueBalance(StationDrive drive, OperatingConditions conditions, BusSource source)
+    {
+        private readonly IRotorLoad _load = drive.Load;
+        private DriveStation _station;
+        private DriveCommand _command;
+        private double _x1 = double.NaN, _g1, _x2 = double.NaN, _g2;
+
+        public DriveCommand Command
+        {
+            get => _command;
+            set
+            {
+                _command = value;
+                _station = DriveStation.Prepare(new DriveInput(drive.Drivetrain, value, 0, conditions.WindingTempC, conditions.MotorMagnetTempC, conditions.Braking));
+            }
+        }
+
+        public double Top { get; set; }
+
+        // Speed where the commanded duty first drives the current limit, with the pack sagging under d I_lim + I_idle:
+        // d (Voc - R_bank (d I_lim + I_idle)) - I_lim R_t = E; 0 when there is none (current command, zero duty).
+        public double CornerSpeed()
+        {
+            if (_station.IsCurrent || _station.Duty <= 0)
+            {
+                return 0;
+            }
+            double d = _station.Duty;
+            double busAtCorner = source.OpenCircuitVoltageV - source.ResistanceOhm * (d * _station.Limit + _station.Idle);
+            double backEmf = d * busAtCorner - _station.Limit * _station.Rt;
+            return backEmf > 0 ? backEmf * _station.Kv / _station.Flux : 0;
+        }
+
+        public double Scale { get; set; }
+
+        public int Evaluations { get; private set; }
+
+        public LoadPoint LoadAt(double speed)
+            => _load.Evaluate(speed, conditions.GapM, conditions.PlateTempC, conditions.RotorMagnetTempC);
+
+        public double F(double speed)
+        {
+            Evaluations++;
+            _station.SetSpeed(speed);
+            DriveBus.SolveSingle(source, ref _station, out var point, double.NaN, DriveBusOptions.Default);
+            return point.TorqueNm - LoadAt(speed).TotalTorqueNm;
+        }
+
+        public void Cache(double x1, double g1, double x2, double g2)
+        {
+            _x1 = x1;
+            _g1 = g1;
+            _x2 = x2;
+            _g2 = g2;
+        }
+
+        public double Normalized(double x)
+        {
+            if (x == _x1)
+            {
+                return _g1;
+            }
+            if (x == _x2)
+            {
+                return _g2;
+            }
+            return F(x * Top) / Scale;
+        }
+
+        // The full record of an equilibrium; with a slope step, also the forward-difference stability slope.
+        public OperatingPoint Detail(double speed, EquilibriumKind kind, bool stable, double slopeStep = 0)
+        {
+            Evaluations++;
+            _station.SetSpeed(speed);
+            var bus = DriveBus.SolveSingle(source, ref _station, out var point, double.NaN, DriveBusOptions.Default);
+            var load = LoadAt(speed);
+            double? slope = null;
+            if (slopeStep > 0)
+            {
+                slope = (F(speed + slopeStep) - (point.TorqueNm - load.TotalTorqueNm)) / slopeStep;
+            }
+            var margins = new LimitMargin[DriveMargins.StationCount + DriveMargins.PackCount + 1];
+            DriveMargins.FillStation(margins, drive.Drivetrain, drive.Rotor, point);
+            DriveMargins.FillPack(margins.AsSpan(DriveMargins.StationCount), drive.Packs, bus.PackCurrentA, bus.BusVoltageV, drive.Limits.CellCutoffV);
+            margins[^1] = new LimitMargin(DriveLimit.DutyHeadroom, point.Duty, drive.Limits.MaxDuty);
+            return new OperatingPoint(kind, speed, stable, slope, point, load, bus.PackCurrentA, margins);
+        }
+    }
+}
