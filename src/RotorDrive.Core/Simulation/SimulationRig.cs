@@ -32,11 +32,13 @@ public sealed class SimulationRig
     /// <param name="loads">One load per station.</param>
     /// <param name="heaveDampingNsPerM">A physical heave damper coefficient, N s/m, or null to derive it from the rig's
     /// heave damping ratio.</param>
+    /// <param name="plateSpreadingFactor">Plate patch area / magnet annulus area, at least 1 (see
+    /// <see cref="PlatePatchThermalNode.UnderRotor"/>); default 1, the hottest (annulus-only) assumption.</param>
     /// <exception cref="ArgumentNullException">A reference is null.</exception>
     /// <exception cref="ArgumentException">A station lacks a motor or controller, the rig has no pack, or the load count
     /// differs from the station count.</exception>
     /// <exception cref="ArgumentOutOfRangeException">A value is out of its physical range.</exception>
-    public SimulationRig(Rig rig, IReadOnlyList<IRotorLoad> loads, double? heaveDampingNsPerM = null)
+    public SimulationRig(Rig rig, IReadOnlyList<IRotorLoad> loads, double? heaveDampingNsPerM = null, double plateSpreadingFactor = 1.0)
     {
         Rig = Preconditions.NotNull(rig, nameof(rig));
         Preconditions.NotNull(loads, nameof(loads));
@@ -68,7 +70,7 @@ public sealed class SimulationRig
             _loads[j] = Preconditions.NotNull(loads[j], $"load of station {j}");
             _drives[j] = new Drivetrain(s.Motor, s.Controller, options);
             _windings[j] = WindingThermalNode.FromMotor(s.Motor);
-            _plates[j] = PlatePatchThermalNode.UnderRotor(s.Rotor, rig.Plate, rig.PlateConvectionWPerM2K);
+            _plates[j] = PlatePatchThermalNode.UnderRotor(s.Rotor, rig.Plate, rig.PlateConvectionWPerM2K, plateSpreadingFactor);
             if (!peakCache.TryGetValue(_loads[j], out DragPeak? peak))
             {
                 peak = TotalTorquePeak(_loads[j], rig.LandedGapM, rig.PlateTemperatureC, rig.AmbientC, s.Rotor.MaxSpeedRadPerS);
@@ -88,9 +90,10 @@ public sealed class SimulationRig
     /// <param name="rig">The rig.</param>
     /// <param name="loadOptions">Load model settings, or null for the defaults.</param>
     /// <param name="heaveDampingNsPerM">A physical heave damper coefficient, N s/m, or null for the rig's damping ratio.</param>
+    /// <param name="plateSpreadingFactor">Plate patch area / magnet annulus area, at least 1; default 1.</param>
     /// <exception cref="ArgumentNullException">The rig is null.</exception>
     /// <exception cref="ArgumentException">See the constructor.</exception>
-    public static SimulationRig Build(Rig rig, LoadModelOptions? loadOptions = null, double? heaveDampingNsPerM = null)
+    public static SimulationRig Build(Rig rig, LoadModelOptions? loadOptions = null, double? heaveDampingNsPerM = null, double plateSpreadingFactor = 1.0)
     {
         Preconditions.NotNull(rig, nameof(rig));
         var tables = new Dictionary<string, IRotorLoad>(StringComparer.Ordinal);
@@ -105,7 +108,7 @@ public sealed class SimulationRig
             }
             loads[j] = load;
         }
-        return new SimulationRig(rig, loads, heaveDampingNsPerM);
+        return new SimulationRig(rig, loads, heaveDampingNsPerM, plateSpreadingFactor);
     }
 
     /// <summary>The rig.</summary>
