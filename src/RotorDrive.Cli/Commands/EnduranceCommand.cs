@@ -80,6 +80,7 @@ public static class EnduranceCommand
             result.StartPackCurrentA,
             result.FinalSocFraction * 100,
             result.FinalBusVoltageV,
+            result.FinalPackCurrentA,
             result.PeakWindingTempC,
             result.PeakPlateTempC,
             rig.Limits.PlateTempC,
@@ -95,7 +96,7 @@ public static class EnduranceCommand
             output.WriteLine($"  runtime: {Numbers.Format(report.RuntimeS, 0)} s ({Numbers.Format(report.RuntimeMin, 1)} min)");
             output.WriteLine($"  ended by: {report.FirstLimit}");
             output.WriteLine($"  at the start: {Numbers.Format(report.StartHoverSpeedRpm, 0)} rpm, pack current {Numbers.Format(report.StartPackCurrentA, 1)} A");
-            output.WriteLine($"  at the end: state of charge {Numbers.Format(report.FinalSocPct, 1)} %, bus {Numbers.Format(report.FinalBusVoltageV, 1)} V");
+            output.WriteLine($"  at the end: state of charge {Numbers.Format(report.FinalSocPct, 1)} %, bus {Numbers.Format(report.FinalBusVoltageV, 1)} V, pack current {Numbers.Format(report.FinalPackCurrentA, 1)} A");
             output.WriteLine($"  hottest winding {Numbers.Format(report.PeakWindingTempC, 1)} C, hottest plate patch {Numbers.Format(report.PeakPlateTempC, 1)} C (limit {Numbers.Format(report.PlateLimitC, 0)} C)");
             output.WriteLine();
             output.WriteLine(pass ? "Result: the pack ends the hover (no thermal or current limit first)." : "Result: FAILS: a limit other than the pack ends the hover.");
@@ -115,6 +116,7 @@ public static class EnduranceCommand
         double StartPackCurrentA,
         double FinalSocPct,
         double FinalBusVoltageV,
+        double FinalPackCurrentA,
         double PeakWindingTempC,
         double PeakPlateTempC,
         double PlateLimitC,
@@ -122,8 +124,8 @@ public static class EnduranceCommand
         bool Pass)
     {
         public EnduranceReport(string rig, double runtimeS, double runtimeMin, EnduranceLimit kind, string text, int? station, double rpm, double current,
-            double soc, double voltage, double winding, double plate, double plateLimit, int steps, bool pass)
-            : this(rig, runtimeS, runtimeMin, text, kind, station, rpm, current, soc, voltage, winding, plate, plateLimit, steps, pass)
+            double soc, double voltage, double finalCurrent, double winding, double plate, double plateLimit, int steps, bool pass)
+            : this(rig, runtimeS, runtimeMin, text, kind, station, rpm, current, soc, voltage, finalCurrent, winding, plate, plateLimit, steps, pass)
         {
         }
     }

@@ -9,6 +9,7 @@ namespace RotorDrive.Core.Simulation;
 /// <param name="StartPackCurrentA">Pack current at the start, A.</param>
 /// <param name="FinalSocFraction">State of charge at the end, 0..1.</param>
 /// <param name="FinalBusVoltageV">Bus voltage at the end, V (0 when no trim existed there).</param>
+/// <param name="FinalPackCurrentA">Pack current at the end, A (0 when no trim existed there).</param>
 /// <param name="PeakWindingTempC">Highest winding temperature, C.</param>
 /// <param name="PeakPlateTempC">Highest plate patch temperature, C.</param>
 /// <param name="Steps">Quasi-static steps taken.</param>
@@ -22,6 +23,7 @@ public sealed record EnduranceResult(
     double StartPackCurrentA,
     double FinalSocFraction,
     double FinalBusVoltageV,
+    double FinalPackCurrentA,
     double PeakWindingTempC,
     double PeakPlateTempC,
     int Steps,

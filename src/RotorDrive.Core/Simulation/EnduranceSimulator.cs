@@ -145,6 +145,7 @@ public static class EnduranceSimulator
             startCurrent,
             march.Soc(s0),
             point.Trimmed ? point.BusVoltage : 0.0,
+            point.Trimmed ? point.PackCurrent : 0.0,
             peakWinding,
             peakPlate,
             steps,
