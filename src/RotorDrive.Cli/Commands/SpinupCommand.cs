@@ -13,15 +13,15 @@ namespace RotorDrive.Cli.Commands;
 /// braking on and off.</summary>
 /// <remarks>The throttle ramps from 0 to the common-hover throttle (duty or speed) over the ramp time; the run lasts the
 /// ramp plus <see cref="SettleS"/>. Exit 1 when the rig does not lift off within the rig's lift-off time limit, a rotor
-/// stalls, a current exceeds its burst allowance, the pack sags below its cutoff or the landing pushes the bus above the
-/// controllers' rated voltage.</remarks>
+/// stalls, a current exceeds its burst allowance, or the pack sags below its cutoff; a landing that pushes the bus above the
+/// controllers' rated voltage draws a caution.</remarks>
 public static class SpinupCommand
 {
     /// <summary>Simulated time after the ramp, s.</summary>
     public const double SettleS = 6.0;
 
-    /// <summary>Ramp time of the landing profile, s.</summary>
-    public const double StopRampS = 1.0;
+    /// <summary>Ramp time of the landing profile, s: 0, the throttle cut at once (the hardest case for regeneration).</summary>
+    public const double StopRampS = 0.0;
 
     /// <summary>Full-charge voltage per lithium cell used for the controllers' rated bus voltage, V (common practice, no source).</summary>
     public const double FullCellV = 4.2;
@@ -123,7 +123,8 @@ public static class SpinupCommand
 
         double controllerMaxV = rig.Stations.Min(s => s.Controller!.MaxCells) * FullCellV;
         var findings = Findings(sim, spin, landings, controllerMaxV);
-        var report = ToReport(sim, spin, landings, mode, rampS, soc, controllerMaxV, findings);
+        var cautions = Cautions(landings, controllerMaxV);
+        var report = ToReport(sim, spin, landings, mode, rampS, soc, controllerMaxV, findings, cautions);
 
         if (csvPath is not null && spin.Trace is { } trace)
         {
@@ -186,17 +187,22 @@ public static class SpinupCommand
         {
             list.Add("the pack cannot feed the controllers at some instant (bus collapse)");
         }
-        foreach (var l in landings)
+        return list;
+    }
+
+    // Landing results worth a caution (not a failed limit: the catalogs give no regeneration or over-voltage ratings).
+    private static List<string> Cautions(SpinupResult[] landings, double controllerMaxV)
+    {
+        var list = new List<string>();
+        foreach (var l in landings.Where(l => l.MaxBusVoltageV > controllerMaxV))
         {
-            if (l.MaxBusVoltageV > controllerMaxV)
-            {
-                list.Add($"landing with braking: regeneration lifts the bus to {Numbers.Format(l.MaxBusVoltageV, 1)} V, above the controllers' {Numbers.Format(controllerMaxV, 1)} V");
-            }
+            list.Add($"landing with braking: regeneration of {Numbers.Format(l.PeakRegenCurrentA, 0)} A lifts the bus to {Numbers.Format(l.MaxBusVoltageV, 1)} V, "
+                + $"above the controllers' {Numbers.Format(controllerMaxV, 1)} V (max cells x {Numbers.Format(FullCellV, 1)} V); cut the throttle more gently or land from a part-charged pack");
         }
         return list;
     }
 
-    private static SpinupReport ToReport(SimulationRig sim, SpinupResult spin, SpinupResult[] landings, ControllerMode mode, double rampS, double soc, double controllerMaxV, List<string> findings)
+    private static SpinupReport ToReport(SimulationRig sim, SpinupResult spin, SpinupResult[] landings, ControllerMode mode, double rampS, double soc, double controllerMaxV, List<string> findings, List<string> cautions)
     {
         var rig = sim.Rig;
         var stations = spin.Stations.Select(s => new StationEntry(
@@ -253,7 +259,8 @@ public static class SpinupCommand
             stations,
             landingEntries,
             findings.Count == 0,
-            findings);
+            findings,
+            cautions);
     }
 
     private static void WriteText(SpinupReport r, Rig rig, TextWriter o)
@@ -297,6 +304,10 @@ public static class SpinupCommand
                 o.WriteLine($"  - {f}");
             }
         }
+        foreach (var c in r.Cautions)
+        {
+            o.WriteLine($"Caution: {c}.");
+        }
         o.WriteLine("Caution: spinning magnet rotors crush fingers, upset pacemakers and can burst; lithium packs can burn. Estimates only: defer to manufacturers' ratings.");
     }
 
@@ -327,7 +338,8 @@ public static class SpinupCommand
         IReadOnlyList<StationEntry> Stations,
         IReadOnlyList<LandingEntry> Landing,
         bool Pass,
-        IReadOnlyList<string> Findings);
+        IReadOnlyList<string> Findings,
+        IReadOnlyList<string> Cautions);
 
     private sealed record StationEntry(
         int Station,

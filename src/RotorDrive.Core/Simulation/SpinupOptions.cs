@@ -5,7 +5,7 @@ namespace RotorDrive.Core.Simulation;
 /// 1e-9 run to about 1e-5 relative).</param>
 /// <param name="AbsoluteTolerance">Integrator absolute tolerance per step, in state units (rad/s, mm, mm/s, C, K, rad,
 /// J); default 1e-6.</param>
-/// <param name="MaxStepS">Largest step, s; default 0.02 (so no touch-down and lift-off pass within one step).</param>
+/// <param name="MaxStepS">Largest step, s; default 0.05 (well below a heave period, so no touch-down and lift-off pass within one step).</param>
 /// <param name="OutputIntervalS">Time between trace samples, s; default 0.01. Peaks, minimum voltage and the times above
 /// continuous ratings are read on this grid (interpolated with the integrator's continuous extension), so they do
 /// not depend on the step sizes the error control chose.</param>
@@ -21,7 +21,7 @@ namespace RotorDrive.Core.Simulation;
 public sealed record SpinupOptions(
     double RelativeTolerance = 1e-6,
     double AbsoluteTolerance = 1e-6,
-    double MaxStepS = 0.02,
+    double MaxStepS = 0.05,
     double OutputIntervalS = 0.01,
     double HoldBandwidthRadPerS = 20,
     double SpeedSettleFraction = 0.01,

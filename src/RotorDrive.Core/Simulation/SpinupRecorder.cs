@@ -93,7 +93,8 @@ internal sealed class SpinupRecorder
             _peakMotor[j] = Math.Max(_peakMotor[j], i);
             _peakWinding[j] = Math.Max(_peakWinding[j], y[_model.Winding + j]);
             _peakPlate[j] = Math.Max(_peakPlate[j], y[_model.PlateTemp + j]);
-            _speed[j].Add(y[j]);
+            // A rotor braked to rest can overshoot zero by the integration error; it does not reverse (see the model).
+            _speed[j].Add(Math.Max(y[j], 0.0));
             _current[j].Add(points[j].MotorCurrentA);
             _winding[j].Add(y[_model.Winding + j]);
             _plate[j].Add(y[_model.PlateTemp + j]);

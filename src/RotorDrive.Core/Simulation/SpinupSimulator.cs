@@ -18,7 +18,8 @@ namespace RotorDrive.Core.Simulation;
 /// <para>Method. Adaptive Dormand-Prince 5(4) (<see cref="DormandPrince45"/>) with event location for lift-off and
 /// touch-down; findings are read on a fixed output grid interpolated with the continuous extension, so they do not
 /// depend on the step sizes.</para>
-/// <para>Cost: about 1-3 ms for a 3 s spin-up of a six-station rig on table-backed loads (see the benchmarks). Thread
+/// <para>Cost: about 1000 right-hand-side evaluations (5 ms) for a 3 s spin-up of the six-station demo rig on its load
+/// tables (see SpinupBenchmarks); a coarser output grid lowers it. Thread
 /// safety: <see cref="Run"/> allocates its own state; many runs may share one <see cref="SimulationRig"/>.</para>
 /// </remarks>
 public static class SpinupSimulator
@@ -115,7 +116,7 @@ public static class SpinupSimulator
             bool stalled = y[j] < peak.SpeedRadPerS && points[j].Regime == DriveRegime.CurrentLimit;
             stations[j] = new StationSpinup(
                 j,
-                y[j],
+                Math.Max(y[j], 0.0),
                 new CurrentExposure("motor", recorder.PeakMotorA(j), drive.Motor.MaxCurrentA, null, recorder.MotorAboveS(j), null),
                 new CurrentExposure("controller", recorder.PeakMotorA(j), drive.Controller.ContinuousCurrentA, drive.Controller.BurstCurrentA,
                     recorder.ControllerAboveS(j), drive.Controller.BurstDurationS),
