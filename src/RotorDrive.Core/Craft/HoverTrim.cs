@@ -325,7 +325,8 @@ public static class HoverTrim
                         $"station {i}: {m.Limit.Describe()} {m.Value:0.###} {m.Limit.Unit()} exceeds the allowed {m.Allowed:0.###} {m.Limit.Unit()}"));
                 }
             }
-            if (!stable)
+            // Where the controller cannot deliver the torque at all, the failing limit says so; stability is moot.
+            if (!stable && free)
             {
                 findings.Add(new HoverFinding("stability", i,
                     $"station {i}: {Units.RadPerSToRpm(speeds[i]):0} rpm is not a stable equilibrium at duty {requiredDuty:0.000} (load torque rises faster than the motor's)"));

@@ -70,30 +70,39 @@ public static class YawBalance
                     return double.IsNaN(c) ? double.NaN : CommonDutyHover.SpeedsAt(model, Duties(c + dd / 2, c - dd / 2), gap, options).YawTorqueNm;
                 }
                 double span = 2 * Math.Min(d, maxDuty - d);
-                // Walk out from zero until the yaw changes sign; the root then lies in the last step.
-                double prev = 0, fPrev = yaw;
+                // Walk out from zero both ways until the yaw changes sign; the root then lies in the last step. Which way
+                // depends on the regime: above the drag peak a faster rotor has less shaft torque, below it more.
                 bool found = false;
-                // Raising the clockwise duty adds clockwise reaction (sign -1), so the delta takes the sign of the residual.
-                double dir = Math.Sign(yaw);
+                Span<double> prev = [0.0, 0.0];
+                Span<double> fPrev = [yaw, yaw];
+                Span<bool> open = [true, true];
                 for (int k = 1; k <= 40 && !found && yaw != 0; k++)
                 {
-                    double x = dir * span * k / 40.0;
-                    double f = Yaw(x);
-                    if (double.IsNaN(f))
+                    for (int side = 0; side < 2 && !found; side++)
                     {
-                        break;
+                        if (!open[side])
+                        {
+                            continue;
+                        }
+                        double x = (side == 0 ? 1 : -1) * span * k / 40.0;
+                        double f = Yaw(x);
+                        if (double.IsNaN(f))
+                        {
+                            open[side] = false;
+                            continue;
+                        }
+                        if (Math.Sign(f) != Math.Sign(fPrev[side]))
+                        {
+                            double root = Brent.FindRoot(Yaw, Math.Min(prev[side], x), Math.Max(prev[side], x), 1e-12, 200);
+                            double c = Common(root);
+                            delta = root;
+                            cwDuty = c + root / 2;
+                            ccwDuty = c - root / 2;
+                            found = true;
+                        }
+                        prev[side] = x;
+                        fPrev[side] = f;
                     }
-                    if (Math.Sign(f) != Math.Sign(fPrev))
-                    {
-                        double root = Brent.FindRoot(Yaw, Math.Min(prev, x), Math.Max(prev, x), 1e-12, 200);
-                        double c = Common(root);
-                        delta = root;
-                        cwDuty = c + root / 2;
-                        ccwDuty = c - root / 2;
-                        found = true;
-                    }
-                    prev = x;
-                    fPrev = f;
                 }
                 if (yaw == 0)
                 {
