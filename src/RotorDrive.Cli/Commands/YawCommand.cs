@@ -34,7 +34,7 @@ public static class YawCommand
             model.Rig.Name,
             model.DesignGapM * 1000,
             new YawEntry(y.EqualDuty, y.ResidualTorqueNm, y.YawAccelerationRadPerS2, y.TrimDutyDelta, y.ClockwiseDuty, y.CounterClockwiseDuty,
-                y.AuthorityNm, y.AuthorityPositiveNm, y.AuthorityNegativeNm, y.AuthorityMargin, y.LimitNm, y.Pass),
+                y.AuthorityNm, y.AuthorityPositiveNm, y.AuthorityNegativeNm, y.AuthorityMargin, y.AuthorityLimitedBy, y.LimitNm, y.Pass),
             y.Sensitivity is { } s ? new SensitivityEntry(s.StationA, s.StationB, s.KvMismatchNm, s.GapDifferenceNm, s.PlateTempDifferenceNm) : null,
             y.Findings);
         if (json)
@@ -57,7 +57,8 @@ public static class YawCommand
             + $"yaw acceleration {Numbers.Format(y.AccelerationRadPerS2, 3)} rad/s^2 with {Numbers.Format(inertia, 2)} kg m^2");
         o.WriteLine($"  differential duty that cancels it (cw minus ccw): {Numbers.Format(y.TrimDutyDelta, 4)} (cw {Numbers.Format(y.CwDuty, 4)}, ccw {Numbers.Format(y.CcwDuty, 4)})");
         o.WriteLine($"  yaw authority of the trim within every limit: {Numbers.Format(y.AuthorityNm, 2)} N m "
-            + $"(ccw {Numbers.Format(y.AuthorityPositiveNm, 2)}, cw {Numbers.Format(y.AuthorityNegativeNm, 2)}); tolerance {Numbers.Format(y.LimitNm, 2)} N m, margin {Numbers.Format(y.AuthorityMargin * 100, 0)} %");
+            + $"(ccw {Numbers.Format(y.AuthorityPositiveNm, 2)}, cw {Numbers.Format(y.AuthorityNegativeNm, 2)}); tolerance {Numbers.Format(y.LimitNm, 2)} N m, margin {Numbers.Format(y.AuthorityMargin * 100, 0)} %"
+            + (y.AuthorityLimitedBy is { } l ? $"; bounded by {l}" : ""));
         if (r.Sensitivity is { } s)
         {
             o.WriteLine($"  sensitivity (station {s.StationA} against its partner {s.StationB}): 1 % Kv {Numbers.Format(s.Kv1PctNm, 3)} N m, "
@@ -75,7 +76,7 @@ public static class YawCommand
 
     private sealed record YawEntry(
         double? EqualDuty, double? ResidualTorqueNm, double? AccelerationRadPerS2, double? TrimDutyDelta, double? CwDuty, double? CcwDuty,
-        double AuthorityNm, double AuthorityPositiveNm, double AuthorityNegativeNm, double AuthorityMargin, double LimitNm, bool Pass);
+        double AuthorityNm, double AuthorityPositiveNm, double AuthorityNegativeNm, double AuthorityMargin, string? AuthorityLimitedBy, double LimitNm, bool Pass);
 
     private sealed record SensitivityEntry(int StationA, int StationB, double Kv1PctNm, double Gap1MmNm, double Plate10KNm);
 }

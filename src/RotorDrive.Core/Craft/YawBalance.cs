@@ -117,13 +117,14 @@ public static class YawBalance
             }
         }
 
-        double positive = Authority(model, gap, +1, model.Limits.YawTorqueNm, options);
-        double negative = Authority(model, gap, -1, model.Limits.YawTorqueNm, options);
+        double positive = Authority(model, gap, +1, model.Limits.YawTorqueNm, options, out string? positiveLimit);
+        double negative = Authority(model, gap, -1, model.Limits.YawTorqueNm, options, out string? negativeLimit);
         if (positive == 0 && negative == 0)
         {
             findings.Add("the trimmed hover itself breaks a limit or has no balance: no yaw authority");
         }
-        return new YawResult(equal, residual, accel, delta, cwDuty, ccwDuty, positive, negative, model.Limits.YawTorqueNm, sensitivity, findings);
+        return new YawResult(equal, residual, accel, delta, cwDuty, ccwDuty, positive, negative, model.Limits.YawTorqueNm,
+            positive <= negative ? positiveLimit : negativeLimit, sensitivity, findings);
     }
 
     private static YawSensitivity Sensitivity(RigModel model, double[] duties, double gap, double nominal, int a, int b, HoverOptions options)
@@ -138,11 +139,23 @@ public static class YawBalance
     }
 
     // Largest |yaw torque| in one direction for which the trim hovers within every limit (bisection).
-    private static double Authority(RigModel model, double gap, int sign, double limit, HoverOptions options)
+    private static double Authority(RigModel model, double gap, int sign, double limit, HoverOptions options, out string? limitedBy)
     {
-        bool Holds(double t) => HoverTrim.Solve(model, gap, sign * t, options).Status == HoverStatus.Hovering;
+        HoverResult? last = null;
+        bool Holds(double t)
+        {
+            var r = HoverTrim.Solve(model, gap, sign * t, options);
+            if (r.Status != HoverStatus.Hovering)
+            {
+                last = r;
+                return false;
+            }
+            return true;
+        }
+        limitedBy = null;
         if (!Holds(0))
         {
+            limitedBy = last?.Findings.FirstOrDefault()?.Limit;
             return 0;
         }
         double lo = 0, hi = Math.Max(limit, 1e-3);
@@ -156,6 +169,7 @@ public static class YawBalance
                 return lo;
             }
         }
+        limitedBy = last?.Findings.FirstOrDefault()?.Limit;
         for (int k = 0; k < 40 && hi - lo > 1e-4 * Math.Max(limit, hi); k++)
         {
             double mid = 0.5 * (lo + hi);

@@ -14,6 +14,7 @@ namespace RotorDrive.Core.Craft;
 /// limit, N m.</param>
 /// <param name="AuthorityNegativeNm">Largest clockwise yaw torque (as a positive number), N m.</param>
 /// <param name="LimitNm">The rig's yaw tolerance limits.yaw_torque_nm, N m.</param>
+/// <param name="AuthorityLimitedBy">The limit key that bounds the authority in the weaker direction, or null.</param>
 /// <param name="Sensitivity">Yaw torque from small pair mismatches, or null when the rig has no counter-rotating pair
 /// or no equal duty.</param>
 /// <param name="Findings">Why a part of the analysis could not be done, or what fails.</param>
@@ -27,6 +28,7 @@ public sealed record YawResult(
     double AuthorityPositiveNm,
     double AuthorityNegativeNm,
     double LimitNm,
+    string? AuthorityLimitedBy,
     YawSensitivity? Sensitivity,
     IReadOnlyList<string> Findings)
 {
