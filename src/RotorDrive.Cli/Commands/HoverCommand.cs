@@ -135,7 +135,8 @@ public static class HoverCommand
             h.Balanced ? h.LiftSpecificPowerWPerN : double.NaN, h.HeaveStiffnessNPerM / 1000, h.Balanced ? h.HeaveFrequencyHz : double.NaN,
             new ResidualEntry(h.ForceResidual, h.PitchResidual, h.RollResidual), h.YawTorqueNm,
             stations, h.PackMargins.Select(Margin).ToList(), limits, maxPayload, safetyEntry,
-            safety.Cautions.Select(c => new CautionEntry(c.Topic.ToString(), c.Level.ToString(), c.Title, c.Text, c.Reason)).ToList());
+            safety.Cautions.Select(c => new CautionEntry(c.Topic.ToString(), c.Level.ToString(), c.Title, c.Text, c.Reason)).ToList(),
+            h.Iterations);
     }
 
     private static MarginEntry Margin(LimitMargin m)
@@ -208,7 +209,7 @@ public static class HoverCommand
         double PackVoltageV, double PackCurrentA, double ElectricalPowerW, double PlatePowerW, double LiftSpecificPowerWPerN,
         double HeaveStiffnessNPerMm, double HeaveFrequencyHz, ResidualEntry Residuals, double YawTorqueNm,
         IReadOnlyList<StationEntry> Stations, IReadOnlyList<MarginEntry> PackMargins, IReadOnlyList<LimitEntry> Limits,
-        double? MaxPayloadKg, SafetyEntry Safety, IReadOnlyList<CautionEntry> Cautions);
+        double? MaxPayloadKg, SafetyEntry Safety, IReadOnlyList<CautionEntry> Cautions, int Iterations);
 
     private sealed record ResidualEntry(double Force, double Pitch, double Roll);
 

@@ -19,6 +19,11 @@ namespace RotorDrive.Core.Craft;
 public static class HoverTrim
 {
     private const double DiffStep = 1e-6;
+    private const double CurvatureStep = 1e-4;
+
+    // Newton stops once the constraints hold and the last step moved no speed by more than this fraction: the least-norm
+    // objective is then optimal to about this relative accuracy.
+    private const double StepTolerance = 1e-7;
 
     /// <summary>Trims the craft at its design gap with zero net yaw torque.</summary>
     /// <param name="model">The rig model.</param>
@@ -46,9 +51,10 @@ public static class HoverTrim
                 $"a trim needs at least four stations to balance force, pitch, roll and yaw; the rig has {n}"), 0);
         }
         double weight = model.WeightN;
-        double top = 0;
+        double rated = double.PositiveInfinity, top = 0;
         foreach (var s in model.Stations)
         {
+            rated = Math.Min(rated, s.Rotor.MaxSpeedRadPerS);
             top = Math.Max(top, s.Rotor.MaxSpeedRadPerS * options.SpeedSearchFactor);
         }
         double Mean(double w)
@@ -60,12 +66,19 @@ public static class HoverTrim
             }
             return sum - weight;
         }
-        if (Mean(top) < 0)
+        // Bracket within the rated speed first: the load tables cover it, beyond it the direct model is much slower.
+        double bracket = rated;
+        if (Mean(bracket) < 0)
         {
-            return Failed(model, gapM, HoverStatus.NoBalance, new HoverFinding(DriveLimit.RotorMaxSpeed.Key(), null,
-                $"even at {options.SpeedSearchFactor:0.#} x their rated speed the rotors lift less than the weight ({weight:0} N) at this gap"), 0);
+            bracket = top;
+            if (Mean(top) < 0)
+            {
+                return Failed(model, gapM, HoverStatus.NoBalance, new HoverFinding(DriveLimit.RotorMaxSpeed.Key(), null,
+                    $"even at {options.SpeedSearchFactor:0.#} x their rated speed the rotors lift less than the weight ({weight:0} N) at this gap"), 0);
+            }
         }
-        double w0 = Brent.FindRoot(Mean, 1e-6 * top, top, 1e-12 * top, 200);
+        // The common speed is only a starting point for Newton: a loose tolerance suffices.
+        double w0 = Brent.FindRoot(Mean, 1e-6 * bracket, bracket, 1e-6 * bracket, 200);
         var speeds = new double[n];
         Array.Fill(speeds, w0);
         if (!Newton(model, gapM, yawTorqueNm, speeds, w0, options, out int iterations))
@@ -144,6 +157,9 @@ public static class HoverTrim
         var torque = new double[n];
         var dLift = new double[n];
         var dTorque = new double[n];
+        var d2Lift = new double[n];
+        var d2Torque = new double[n];
+        var multipliers = new double[4];
         var c = new double[4];
         var trial = new double[n];
         var kkt = Matrix<double>.Build.Dense(n + 4, n + 4);
@@ -178,10 +194,14 @@ public static class HoverTrim
         {
             for (int i = 0; i < n; i++)
             {
-                double h = DiffStep * speeds[i];
-                var p = st[i].LoadAt(speeds[i] + h, gapM);
-                dLift[i] = (p.LiftN - lift[i]) / h * w0;
-                dTorque[i] = (p.TotalTorqueNm - torque[i]) / h * w0;
+                // Central differences: slopes for the Jacobian, curvatures for the Lagrangian's Hessian.
+                double h = CurvatureStep * speeds[i];
+                var up = st[i].LoadAt(speeds[i] + h, gapM);
+                var down = st[i].LoadAt(speeds[i] - h, gapM);
+                dLift[i] = (up.LiftN - down.LiftN) / (2 * h) * w0;
+                dTorque[i] = (up.TotalTorqueNm - down.TotalTorqueNm) / (2 * h) * w0;
+                d2Lift[i] = (up.LiftN - 2 * lift[i] + down.LiftN) / (h * h) * w0 * w0;
+                d2Torque[i] = (up.TotalTorqueNm - 2 * torque[i] + down.TotalTorqueNm) / (h * h) * w0 * w0;
             }
             // Unknowns u = w / w0: [P J^T; J 0] [du; lambda] = [-P u; -c], P = I - 11^T/n (centring).
             kkt.Clear();
@@ -193,11 +213,15 @@ public static class HoverTrim
             mean /= n;
             for (int i = 0; i < n; i++)
             {
+                double dx = st[i].XM - model.CgXM, dy = st[i].YM - model.CgYM;
                 for (int j = 0; j < n; j++)
                 {
-                    kkt[i, j] = (i == j ? 1.0 : 0.0) - 1.0 / n;
+                    kkt[i, j] = -1.0 / n;
                 }
-                double dx = st[i].XM - model.CgXM, dy = st[i].YM - model.CgYM;
+                // Hessian of the Lagrangian: the centring projector plus the multipliers times each constraint's curvature
+                // (diagonal: every constraint is a sum of one-speed functions). Without the curvature SQP is only linear.
+                kkt[i, i] += 1.0 + multipliers[0] * d2Lift[i] * scale[0] + multipliers[1] * d2Lift[i] * dx * scale[1]
+                    + multipliers[2] * d2Lift[i] * dy * scale[2] + multipliers[3] * st[i].Spin.Sign() * d2Torque[i] * scale[3];
                 double j0 = dLift[i] * scale[0], j1 = dLift[i] * dx * scale[1], j2 = dLift[i] * dy * scale[2];
                 double j3 = st[i].Spin.Sign() * dTorque[i] * scale[3];
                 kkt[n, i] = kkt[i, n] = j0;
@@ -211,6 +235,10 @@ public static class HoverTrim
                 rhs[n + k] = -c[k];
             }
             var step = kkt.LU().Solve(rhs);
+            for (int k = 0; k < 4; k++)
+            {
+                multipliers[k] = step[n + k];
+            }
             double largest = 0;
             for (int i = 0; i < n; i++)
             {
@@ -220,7 +248,7 @@ public static class HoverTrim
             {
                 return false;
             }
-            if (merit <= options.Tolerance && largest <= 1e-9)
+            if (merit <= options.Tolerance && largest <= StepTolerance)
             {
                 return true;
             }
@@ -245,7 +273,7 @@ public static class HoverTrim
             }
             Array.Copy(trial, speeds, n);
             merit = Residuals(speeds, lift, torque);
-            if (merit <= options.Tolerance && largest * alpha <= 1e-9)
+            if (merit <= options.Tolerance && largest * alpha <= StepTolerance)
             {
                 return true;
             }
