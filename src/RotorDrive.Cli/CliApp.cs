@@ -21,6 +21,8 @@ public static class CliApp
         root.Subcommands.Add(UiCommand.Create());
         root.Subcommands.Add(SpinupCommand.Create());
         root.Subcommands.Add(EnduranceCommand.Create());
+        root.Subcommands.Add(HoverCommand.Create());
+        root.Subcommands.Add(YawCommand.Create());
         return root;
     }
 
