@@ -101,9 +101,16 @@ public sealed partial class RankStudy
         bool ok = Hover(1.0, out var start, out _);
         bool delivered = start.Status == BusStatus.Solved && points.All(p => p.Regime == DriveRegime.Regulating);
         double fastest = -1;
+        // The motor side of a current-regulated point (current, terminal voltage I R + E, power) does not depend on the bus
+        // voltage, so the ratings are checked at what the hover needs, even when this pack cannot deliver it.
+        var needs = new DrivePoint[n];
         for (int i = 0; i < n; i++)
         {
-            var margins = DriveMargins.ForStation(hoverTrain, rig.Stations[i].Rotor, points[i]);
+            needs[i] = DriveBus.Evaluate(1e9, inputs[i]);
+        }
+        for (int i = 0; i < n; i++)
+        {
+            var margins = DriveMargins.ForStation(hoverTrain, rig.Stations[i].Rotor, needs[i]);
             if (margins[5].Exceeded)
             {
                 o.Reject(RankRejectionKind.RotorSpeed);
@@ -113,12 +120,12 @@ public sealed partial class RankStudy
                 fastest = o.Speeds[i];
                 o.FastestStation = i;
             }
-            o.Currents[i] = points[i].MotorCurrentA;
+            o.Currents[i] = needs[i].MotorCurrentA;
             o.Duties[i] = points[i].Duty;
             o.MaxCurrentA = Math.Max(o.MaxCurrentA, margins[0].Value);
             o.MaxMotorPowerW = Math.Max(o.MaxMotorPowerW, margins[1].Value);
         }
-        var fastestMargins = DriveMargins.ForStation(hoverTrain, rig.Stations[o.FastestStation].Rotor, points[o.FastestStation]);
+        var fastestMargins = DriveMargins.ForStation(hoverTrain, rig.Stations[o.FastestStation].Rotor, needs[o.FastestStation]);
         if (fastestMargins[4].Exceeded)
         {
             o.Reject(RankRejectionKind.ControllerErpm);
