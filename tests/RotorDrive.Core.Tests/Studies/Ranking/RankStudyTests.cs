@@ -215,6 +215,12 @@ public class RankStudyTests
     {
         var load = new SyntheticLoad(100, 2, 200, 30, DesignGapM);
         var rig = SquareRig(18, 4, cgXM: 0.04, cgYM: -0.03);
+        var study = RankStudy.Create(rig, MixedCatalog(), new RankOptions(Objective: objective, MaxPackCount: 2, MaxDegreeOfParallelism: threads), FourOf(load));
+        return (study, study.Run());
+    }
+
+    internal static PartsCatalog MixedCatalog()
+    {
         var motors = new[]
         {
             Motor("m-kv60", 60, 30, 0.35), Motor("m-kv80", 80, 25, 0.30), Motor("m-kv100", 100, 40, 0.32),
@@ -229,7 +235,6 @@ public class RankStudyTests
         {
             Pack("p12-sloped", "sloped", 12, 8, 1.1, 25), Pack("p10-sloped", "sloped", 10, 12, 1.3, 10), Pack("p6-flat", "flat", 6, 5, 0.5, 30),
         };
-        var study = RankStudy.Create(rig, Catalog(motors, controllers, packs), new RankOptions(Objective: objective, MaxPackCount: 2, MaxDegreeOfParallelism: threads), FourOf(load));
-        return (study, study.Run());
+        return Catalog(motors, controllers, packs);
     }
 }
