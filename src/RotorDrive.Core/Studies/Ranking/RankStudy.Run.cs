@@ -43,12 +43,18 @@ public sealed partial class RankStudy
             {
                 worker.Reset();
                 var list = new List<Accepted>();
-                for (int c = 0; c < controllers; c++)
+                // Visit the chunk so that the craft mass changes little from one combination to the next (controllers by
+                // mass, packs by mass back and forth): the trim's warm start then converges in a step or two. The order
+                // is fixed per chunk, so results do not depend on the threads.
+                int turn = 0;
+                for (int k = 1; k <= _maxPackCount; k++)
                 {
-                    for (int p = 0; p < packs; p++)
+                    foreach (int c in _controllersByMass)
                     {
-                        for (int k = 1; k <= _maxPackCount; k++)
+                        bool up = (turn++ & 1) == 0;
+                        for (int q = 0; q < packs; q++)
                         {
+                            int p = _packsByMass[up ? q : packs - 1 - q];
                             var candidate = new RankCandidate(m, c, p, k);
                             EvaluateFast(candidate, worker, fresh: false);
                             var o = worker.Outcome;

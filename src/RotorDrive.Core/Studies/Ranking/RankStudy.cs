@@ -49,6 +49,8 @@ public sealed partial class RankStudy
     private readonly int[] _motorOrder;
     private readonly int[] _controllerOrder;
     private readonly int[] _packOrder;
+    private readonly int[] _controllersByMass;
+    private readonly int[] _packsByMass;
 
     private RankStudy(Rig rig, PartsCatalog catalog, RankOptions options, IReadOnlyList<IRotorLoad> loads)
     {
@@ -56,7 +58,8 @@ public sealed partial class RankStudy
         _catalog = catalog;
         _options = options;
         _weights = options.Weights ?? RankWeights.Default;
-        _trim = new RankTrim(rig, loads);
+        (double lightest, double heaviest) = MassRange(rig, catalog, options.MaxPackCount ?? rig.Packs?.Count ?? 1);
+        _trim = new RankTrim(rig, loads, lightest, heaviest);
         Loads = loads;
         _maxPackCount = options.MaxPackCount ?? rig.Packs?.Count ?? 1;
         _packCurves = new CellCurve[catalog.Packs.Count];
@@ -78,6 +81,8 @@ public sealed partial class RankStudy
         _motorOrder = OrdinalRanks(catalog.Motors.Select(m => m.Id).ToArray());
         _controllerOrder = OrdinalRanks(catalog.Controllers.Select(c => c.Id).ToArray());
         _packOrder = OrdinalRanks(catalog.Packs.Select(p => p.Id).ToArray());
+        _controllersByMass = Enumerable.Range(0, catalog.Controllers.Count).OrderBy(i => catalog.Controllers[i].MassKg).ThenBy(i => i).ToArray();
+        _packsByMass = Enumerable.Range(0, catalog.Packs.Count).OrderBy(i => catalog.Packs[i].MassKg).ThenBy(i => i).ToArray();
     }
 
     /// <summary>Prepares a ranking: builds one load table per station rotor (or takes the given loads), finds each
@@ -249,6 +254,20 @@ public sealed partial class RankStudy
             ? 0.0
             : load.Evaluate(peak.SpeedRadPerS, _rig.LandedGapM, _rig.PlateTemperatureC, _rig.AmbientC).TotalTorqueNm;
         return (peak, torque);
+    }
+
+    // Lightest and heaviest craft any combination can make (the trim's reference table spans them).
+    private static (double Lightest, double Heaviest) MassRange(Rig rig, PartsCatalog catalog, int maxPackCount)
+    {
+        double fixedKg = rig.Body.EmptyMassKg + rig.Body.PayloadKg + rig.Stations.Sum(s => s.Rotor.RotorMassKg);
+        int n = rig.Stations.Count;
+        double motorMin = catalog.Motors.Count == 0 ? 0 : catalog.Motors.Min(m => m.MassKg);
+        double motorMax = catalog.Motors.Count == 0 ? 0 : catalog.Motors.Max(m => m.MassKg);
+        double controllerMin = catalog.Controllers.Count == 0 ? 0 : catalog.Controllers.Min(c => c.MassKg);
+        double controllerMax = catalog.Controllers.Count == 0 ? 0 : catalog.Controllers.Max(c => c.MassKg);
+        double packMin = catalog.Packs.Count == 0 ? 0 : catalog.Packs.Min(p => p.MassKg);
+        double packMax = catalog.Packs.Count == 0 ? 0 : catalog.Packs.Max(p => p.MassKg);
+        return (fixedKg + n * (motorMin + controllerMin) + packMin, fixedKg + n * (motorMax + controllerMax) + maxPackCount * packMax);
     }
 
     private static int[] OrdinalRanks(string[] ids)

@@ -10,19 +10,25 @@ namespace RotorDrive.Core.Studies.Ranking;
 /// <para>Unknowns: the station speeds. Constraints (k of them): total lift = weight; pitch and roll moments of the lifts
 /// about the centre of gravity = 0; yaw: sum of sign(spin) x shaft torque = 0 (a rotor's reaction on the frame is its
 /// shaft torque against its spin). k = 4 with four or more stations, 3 (no yaw) with three, 1 (lift only) with fewer.
-/// With more stations than constraints the trim is under-determined; Newton's least-norm step
-/// d omega = -J^T (J J^T)^-1 F (the Moore-Penrose pseudo-inverse step, Ben-Israel 1966) from equal speeds picks the
-/// solution nearest the equal-speed start, i.e. the smallest speed spread.</para>
-/// <para>Start: the common speed at which the stations' lifts sum to the weight (Brent's method, MathNet). Warm start:
-/// the previous solution and Jacobian (chord iterations), refreshed when progress is slow. Converged when the force
-/// residual is within 1e-11 of the weight, moments within 1e-11 weight x station radius and yaw within 1e-11 of the
-/// summed torque magnitudes.</para>
+/// With more stations than constraints the trim is under-determined; the Gauss-Newton step through the Moore-Penrose
+/// pseudo-inverse (A. Ben-Israel, "A Newton-Raphson method for the solution of systems of equations", J. Math. Anal. Appl.
+/// 15, 1966) picks the solution nearest the equal-speed reference, i.e. the smallest speed spread.</para>
+/// <para>Which solution: the one nearest (in speeds) to the reference, the common speed at which the stations' lifts sum
+/// to the weight (Brent's method, MathNet; tabulated over the study's weights and interpolated, so it is a fixed function
+/// of the weight). Each step goes to the nearest point of the linearised constraints,
+/// omega' = omega_ref - J^T (J J^T)^-1 (F - J (omega - omega_ref)), whose fixed point is the first-order condition of
+/// that nearest point. Warm start: the previous solution and Jacobian (chord steps), with the Jacobian refreshed by central
+/// differences at every step once the force residual is below 1e-6 of the weight. Converged when the force residual is
+/// within 1e-11 of the weight, moments within 1e-11 weight x station radius, yaw within 1e-11 of the summed torque
+/// magnitudes, and the next step below 1e-9 of the fastest speed (the finite-difference Jacobian defines the nearest point no better).</para>
 /// </remarks>
 internal sealed class RankTrim
 {
     private const double Tolerance = 1e-11;
     private const int MaxIterations = 60;
     private const int ChordIterations = 6;
+    private const double StepTolerance = 1e-9;
+    private const int ReferencePoints = 257;
     private readonly IRotorLoad[] _loads;
     private readonly double[] _x;
     private readonly double[] _y;
@@ -36,8 +42,11 @@ internal sealed class RankTrim
     private readonly double _plateT;
     private readonly double _magnetT;
     private readonly double _radius;
+    private readonly double _refWeightMin;
+    private readonly double _refWeightStep;
+    private readonly double[] _refSpeed;
 
-    public RankTrim(Rig rig, IReadOnlyList<IRotorLoad> loads)
+    public RankTrim(Rig rig, IReadOnlyList<IRotorLoad> loads, double minMassKg, double maxMassKg)
     {
         int n = rig.Stations.Count;
         StationCount = n;
@@ -55,6 +64,31 @@ internal sealed class RankTrim
         _magnetT = rig.AmbientC;
         _radius = Math.Max(1e-3, rig.Stations.Max(s => Math.Sqrt(s.XM * s.XM + s.YM * s.YM)));
         Constraints = n >= 4 ? 4 : n == 3 ? 3 : 1;
+        // Reference speeds over the weights this study can meet (a deterministic function of the weight, so that every
+        // path to a trim targets the same point): the common speed carrying the weight, linear between the nodes.
+        _refWeightMin = 0.99 * minMassKg * Units.StandardGravity;
+        double top = 1.01 * Math.Max(maxMassKg, minMassKg * 1.001) * Units.StandardGravity;
+        _refWeightStep = (top - _refWeightMin) / (ReferencePoints - 1);
+        _refSpeed = new double[ReferencePoints];
+        Span<double> common = stackalloc double[n];
+        for (int j = 0; j < ReferencePoints; j++)
+        {
+            _refSpeed[j] = CommonStart(_refWeightMin + j * _refWeightStep, common) ? common[0] : double.NaN;
+        }
+    }
+
+    // The reference speeds at a weight; false when no common speed up to 1.2 x the lowest rated speed carries it.
+    private bool Reference(double weight, Span<double> into)
+    {
+        double u = (weight - _refWeightMin) / _refWeightStep;
+        int j = (int)Math.Floor(u);
+        if (j >= 0 && j < ReferencePoints - 1 && double.IsFinite(_refSpeed[j]) && double.IsFinite(_refSpeed[j + 1]))
+        {
+            double t = u - j;
+            into.Fill(_refSpeed[j] + t * (_refSpeed[j + 1] - _refSpeed[j]));
+            return true;
+        }
+        return CommonStart(weight, into);
     }
 
     public int StationCount { get; }
@@ -81,38 +115,103 @@ internal sealed class RankTrim
     /// <summary>Solves the trim into <paramref name="state"/>; returns false when no trim exists within 1.2 x the rotors'
     /// rated speeds (or the iteration fails). Speeds above the rated speed but within that bound are returned (true) for
     /// the caller to reject with numbers.</summary>
+    /// <remarks>The solution is the point of the constraint set nearest to the reference speeds (the common speed whose
+    /// lifts carry the weight, read from a table over the weight): whatever the start, the iteration's fixed point satisfies
+    /// F = 0 with omega - omega_ref in the row space of the Jacobian there, the first-order condition of that nearest
+    /// point, so warm-started and fresh solves agree to the tolerance.</remarks>
     public bool Solve(double massKg, double cgX, double cgY, RankTrimState state, bool fresh, bool centralDifferences)
     {
         int n = StationCount;
         double weight = massKg * Units.StandardGravity;
         state.Weight = weight;
+        Span<double> reference = stackalloc double[n];
+        if (!Reference(weight, reference))
+        {
+            state.HasSolution = false;
+            state.HasJacobian = false;
+            return false;
+        }
         if (fresh || !state.HasSolution)
         {
-            if (!CommonStart(weight, state.Speeds))
-            {
-                state.HasSolution = false;
-                state.HasJacobian = false;
-                return false;
-            }
+            reference.CopyTo(state.Speeds);
             state.HasJacobian = false;
         }
         int k = Constraints;
         Span<double> f = stackalloc double[4];
         Span<double> a = stackalloc double[16];
         Span<double> lambda = stackalloc double[4];
+        Span<double> next = stackalloc double[n];
         int sinceRefresh = 0;
+        bool polish = fresh;
         for (int it = 0; it < MaxIterations; it++)
         {
             Residuals(state, weight, cgX, cgY, f);
-            double sumQ = 0;
+            double sumQ = 0, top = 0;
             for (int i = 0; i < n; i++)
             {
                 sumQ += Math.Abs(state.Torques[i]);
+                top = Math.Max(top, state.Speeds[i]);
             }
-            if (Math.Abs(f[0]) <= Tolerance * weight
+            bool small = Math.Abs(f[0]) <= Tolerance * weight
                 && (k < 3 || (Math.Abs(f[1]) <= Tolerance * weight * _radius && Math.Abs(f[2]) <= Tolerance * weight * _radius))
-                && (k < 4 || Math.Abs(f[3]) <= Tolerance * Math.Max(sumQ, 1e-12)))
+                && (k < 4 || Math.Abs(f[3]) <= Tolerance * Math.Max(sumQ, 1e-12));
+            // Close to the solution the Jacobian is refreshed (central differences) every step, so the fixed point is the
+            // nearest point for the Jacobian at the solution, not for a stale one.
+            polish |= Math.Abs(f[0]) <= 1e-6 * weight;
+            if (!state.HasJacobian || polish || sinceRefresh >= ChordIterations)
             {
+                Jacobian(state, cgX, cgY, polish || centralDifferences);
+                state.HasJacobian = true;
+                sinceRefresh = 0;
+            }
+            sinceRefresh++;
+            // Nearest point of the linearised constraints: omega' = omega_ref - J^T (J J^T)^-1 (F - J (omega - omega_ref)).
+            for (int r = 0; r < k; r++)
+            {
+                double rhs = f[r];
+                for (int c = 0; c < k; c++)
+                {
+                    double sum = 0;
+                    for (int i = 0; i < n; i++)
+                    {
+                        sum += state.Jacobian[r * n + i] * state.Jacobian[c * n + i];
+                    }
+                    a[r * 4 + c] = sum;
+                }
+                for (int i = 0; i < n; i++)
+                {
+                    rhs -= state.Jacobian[r * n + i] * (state.Speeds[i] - reference[i]);
+                }
+                lambda[r] = rhs;
+            }
+            if (!SolveSmall(a, lambda, k))
+            {
+                state.HasSolution = false;
+                return false;
+            }
+            double largestStep = 0;
+            for (int i = 0; i < n; i++)
+            {
+                double correction = 0;
+                for (int r = 0; r < k; r++)
+                {
+                    correction += state.Jacobian[r * n + i] * lambda[r];
+                }
+                next[i] = reference[i] - correction;
+                largestStep = Math.Max(largestStep, Math.Abs(next[i] - state.Speeds[i]));
+            }
+            bool done = small && polish && largestStep <= StepTolerance * top;
+            if (!done)
+            {
+                for (int i = 0; i < n; i++)
+                {
+                    // Keep the iterate where the load is defined and physical; a trim beyond 1.2 x rated speed fails below.
+                    state.Speeds[i] = Math.Clamp(next[i], 0.01 * _maxSpeed[i], 1.25 * _maxSpeed[i]);
+                }
+            }
+            if (small && polish && largestStep <= StepTolerance * top)
+            {
+                // The speeds were left as they are (their residuals are the ones in state): the step was negligible.
                 state.Iterations = it;
                 state.HasSolution = true;
                 for (int i = 0; i < n; i++)
@@ -124,43 +223,6 @@ internal sealed class RankTrim
                     }
                 }
                 return true;
-            }
-            if (!state.HasJacobian || fresh || sinceRefresh >= ChordIterations)
-            {
-                Jacobian(state, cgX, cgY, centralDifferences);
-                state.HasJacobian = true;
-                sinceRefresh = 0;
-            }
-            sinceRefresh++;
-            // Least-norm step: (J J^T) lambda = F, d omega = -J^T lambda.
-            for (int r = 0; r < k; r++)
-            {
-                for (int c = 0; c < k; c++)
-                {
-                    double s = 0;
-                    for (int i = 0; i < n; i++)
-                    {
-                        s += state.Jacobian[r * n + i] * state.Jacobian[c * n + i];
-                    }
-                    a[r * 4 + c] = s;
-                }
-                lambda[r] = f[r];
-            }
-            if (!SolveSmall(a, lambda, k))
-            {
-                state.HasSolution = false;
-                return false;
-            }
-            for (int i = 0; i < n; i++)
-            {
-                double step = 0;
-                for (int r = 0; r < k; r++)
-                {
-                    step += state.Jacobian[r * n + i] * lambda[r];
-                }
-                double next = state.Speeds[i] - step;
-                // Keep the iterate where the load is defined and physical; a trim beyond 1.2 x rated speed is a failure.
-                state.Speeds[i] = Math.Clamp(next, 0.01 * _maxSpeed[i], 1.25 * _maxSpeed[i]);
             }
         }
         state.HasSolution = false;
@@ -226,7 +288,7 @@ internal sealed class RankTrim
 
     // The common speed at which the lifts sum to the weight (Brent, MathNet); false when even the slowest-rated rotor's
     // rated speed x 1.2 does not lift it.
-    private bool CommonStart(double weight, double[] speeds)
+    private bool CommonStart(double weight, Span<double> speeds)
     {
         double top = 1.2 * _maxSpeed.Min();
         double Excess(double w)
