@@ -23,4 +23,20 @@ if (args.Length > 0 && args[0] == "rank-generated")
     }
     return;
 }
+// CPU and wall time of ranking the demo catalogs in-process (five runs after one warm-up):
+//   dotnet run -c Release --project tests/RotorDrive.Benchmarks -- rank-demo
+if (args.Length > 0 && args[0] == "rank-demo")
+{
+    var loaded = RotorDrive.Files.RigLoader.Load(RotorDrive.Benchmarks.BenchmarkPaths.DemoRig);
+    for (int run = 0; run < 6; run++)
+    {
+        var cpu = Process.GetCurrentProcess().TotalProcessorTime;
+        var clock = Stopwatch.StartNew();
+        var result = RankStudy.Create(loaded.Rig!, loaded.Catalog!).Run();
+        clock.Stop();
+        var used = Process.GetCurrentProcess().TotalProcessorTime - cpu;
+        Console.WriteLine($"run {run}: {result.TotalCombinations:N0} combinations, {result.AcceptedCount:N0} accepted: wall {clock.Elapsed.TotalSeconds:0.000} s, cpu {used.TotalSeconds:0.000} s");
+    }
+    return;
+}
 BenchmarkSwitcher.FromAssembly(typeof(Program).Assembly).Run(args);
