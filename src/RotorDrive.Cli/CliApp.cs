@@ -18,6 +18,8 @@ public static class CliApp
         root.Subcommands.Add(CheckCommand.Create());
         root.Subcommands.Add(LoadCommand.Create());
         root.Subcommands.Add(OperateCommand.Create());
+        root.Subcommands.Add(HoverCommand.Create());
+        root.Subcommands.Add(YawCommand.Create());
         root.Subcommands.Add(RankCommand.Create());
         return root;
     }

@@ -74,7 +74,7 @@ public static class DriveGenerators
         from soc in Uniform(0, 1)
         from braking in Gen.Elements(false, true)
         from temp in Uniform(-10, 100)
-        let packs = new Craft.PackBank(
+        let packs = new global::RotorDrive.Core.Craft.PackBank(
             new BatteryPack("p", "lipo", cells, parallel, 5, 20, 40, cellResistance, 1),
             1,
             new CellCurve("lipo", [0.0, 0.1, 0.5, 0.9, 1.0], [3.3, 3.6, 3.8, 4.0, 4.2]))

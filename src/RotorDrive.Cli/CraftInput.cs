@@ -1,0 +1,33 @@
+using RotorDrive.Core.Craft;
+
+namespace RotorDrive.Cli;
+
+/// <summary>Loads a rig and prepares its <see cref="RigModel"/> for the whole-craft commands, or reports why not.</summary>
+public static class CraftInput
+{
+    /// <summary>Loads the rig and builds its model; on a problem prints it to <paramref name="error"/> and returns null
+    /// (the caller returns <see cref="ExitCodes.BadInput"/>).</summary>
+    /// <param name="command">The subcommand's name, for the message.</param>
+    /// <param name="rigPath">The rig file.</param>
+    /// <param name="error">Where problems go.</param>
+    public static RigModel? ModelOrReport(string command, string rigPath, TextWriter error)
+    {
+        ArgumentNullException.ThrowIfNull(error);
+        var loaded = RigInput.LoadOrReport(rigPath, error);
+        if (loaded is null)
+        {
+            return null;
+        }
+        var rig = loaded.Rig!;
+        var missing = RigModel.MissingParts(rig);
+        if (missing.Count > 0)
+        {
+            foreach (var m in missing)
+            {
+                error.WriteLine($"rotordrive {command}: error: {rigPath}: {m}; assign one (see 'rotordrive check') before a whole-rig analysis.");
+            }
+            return null;
+        }
+        return RigModel.Build(rig);
+    }
+}

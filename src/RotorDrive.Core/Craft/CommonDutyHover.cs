@@ -1,0 +1,149 @@
+using MathNet.Numerics.RootFinding;
+using RotorDrive.Core.Drive;
+
+namespace RotorDrive.Core.Craft;
+
+/// <summary>The reverse hover question: with every station at given duties (no trim), where do the rotors settle, and
+/// at which gap does their total lift carry the weight.</summary>
+/// <remarks>Each rotor takes its highest stable equilibrium at its duty (scan down from the free speed, then Brent),
+/// the bus voltage is the root of V = Voc - R_pack sum(I_bus(V)) (Brent), and the gap is the root of total lift(gap) =
+/// weight (Brent, R. P. Brent, Algorithms for Minimization without Derivatives, 1973, via MathNet). The drive
+/// equations are the drive module's (M. Drela, First-Order DC Electric Motor Model, MIT 2007). Thread-safe.</remarks>
+public static class CommonDutyHover
+{
+    /// <summary>The speeds every station settles at with the given duties at a gap, on the shared bus.</summary>
+    /// <param name="model">The rig model.</param>
+    /// <param name="duties">One duty per station, 0..1.</param>
+    /// <param name="gapM">Rig gap, m (&gt; 0).</param>
+    /// <param name="options">Numerical settings; defaults when null.</param>
+    public static EqualDutyState SpeedsAt(RigModel model, IReadOnlyList<double> duties, double gapM, HoverOptions? options = null)
+    {
+        Preconditions.NotNull(model, nameof(model));
+        Preconditions.NotNull(duties, nameof(duties));
+        Preconditions.Positive(gapM, nameof(gapM));
+        options ??= HoverOptions.Default;
+        options.Validate();
+        int n = model.Stations.Count;
+        if (duties.Count != n)
+        {
+            throw new ArgumentException($"Expected {n} duties (one per station); got {duties.Count}.", nameof(duties));
+        }
+        foreach (double d in duties)
+        {
+            Preconditions.InRange(d, 0, 1, nameof(duties));
+        }
+        var speeds = new double[n];
+        var busCurrents = new double[n];
+        double voc = model.Source.OpenCircuitVoltageV, rp = model.Source.ResistanceOhm;
+
+        double Mismatch(double v)
+        {
+            double total = 0;
+            for (int i = 0; i < n; i++)
+            {
+                speeds[i] = TopEquilibrium(model.Stations[i], duties[i], v, gapM, options, out busCurrents[i]);
+                total += busCurrents[i];
+            }
+            return v - (voc - rp * total);
+        }
+
+        bool converged;
+        double busV;
+        if (rp == 0 || Mismatch(voc) == 0)
+        {
+            busV = voc;
+            converged = true;
+        }
+        else
+        {
+            converged = Brent.TryFindRoot(Mismatch, 0.05 * voc, voc, 1e-10 * voc, 200, out busV);
+            if (!converged)
+            {
+                busV = 0.05 * voc;
+            }
+        }
+        Mismatch(busV);
+        var lifts = new double[n];
+        var reactions = new double[n];
+        double pack = 0;
+        for (int i = 0; i < n; i++)
+        {
+            var s = model.Stations[i];
+            var load = s.LoadAt(speeds[i], gapM);
+            lifts[i] = load.LiftN;
+            reactions[i] = s.Spin.Sign() * load.TotalTorqueNm;
+            pack += busCurrents[i];
+        }
+        return new EqualDutyState(converged, speeds, lifts, reactions, busV, pack);
+    }
+
+    /// <summary>The gap at which the craft hovers with every station at one common duty, and the full hover state there
+    /// (pitch, roll and yaw are not trimmed: their residuals show how the craft would tilt and turn).</summary>
+    /// <param name="model">The rig model.</param>
+    /// <param name="duty">The common duty, 0..1.</param>
+    /// <param name="options">Numerical settings; defaults when null.</param>
+    public static HoverResult Solve(RigModel model, double duty, HoverOptions? options = null)
+    {
+        Preconditions.NotNull(model, nameof(model));
+        Preconditions.InRange(duty, 0, 1, nameof(duty));
+        options ??= HoverOptions.Default;
+        int n = model.Stations.Count;
+        var duties = Enumerable.Repeat(duty, n).ToArray();
+        double weight = model.WeightN;
+        double lo = 0.5 * model.Rig.LandedGapM, hi = 3.0 * model.DesignGapM;
+        int evaluations = 0;
+        double Excess(double g)
+        {
+            evaluations++;
+            return SpeedsAt(model, duties, g, options).TotalLiftN - weight;
+        }
+        double atLo = Excess(lo);
+        if (atLo < 0)
+        {
+            return NoGap(model, lo, $"at duty {duty:0.000} the rotors lift only {atLo + weight:0} N even at {lo * 1000:0.0} mm, less than the weight ({weight:0} N)", evaluations);
+        }
+        double atHi = Excess(hi);
+        if (atHi > 0)
+        {
+            return NoGap(model, hi, $"at duty {duty:0.000} the rotors still lift {atHi + weight:0} N at {hi * 1000:0.0} mm (3 x the design gap), more than the weight ({weight:0} N): the craft would rise beyond the searched range", evaluations);
+        }
+        double gap = Brent.FindRoot(Excess, lo, hi, 1e-10 * hi, 200);
+        var state = SpeedsAt(model, duties, gap, options);
+        var result = HoverTrim.Describe(model, HoverMode.CommonDuty, gap, state.SpeedsRadPerS.ToArray(), evaluations);
+        return result;
+    }
+
+    private static HoverResult NoGap(RigModel model, double gapM, string message, int evaluations)
+        => new(HoverMode.CommonDuty, HoverStatus.NoBalance, gapM, model.MassKg, model.WeightN, [], double.NaN, double.NaN,
+            double.NaN, double.NaN, double.NaN, double.NaN, double.NaN, double.NaN, [], [new HoverFinding("lift", null, message)], evaluations);
+
+    // The highest speed where motor torque at this duty and bus voltage meets the load torque (stable from above: the
+    // motor's torque falls below the load's beyond it); 0 when the rotor cannot leave rest.
+    internal static double TopEquilibrium(CraftStation station, double duty, double busV, double gapM, HoverOptions options, out double busCurrentA)
+    {
+        var command = DriveCommand.Duty(duty);
+        double F(double w)
+            => DriveBus.Evaluate(busV, station.Input(command, w)).TorqueNm - station.LoadAt(w, gapM).TotalTorqueNm;
+        double free = Math.Min(duty, station.Drivetrain.MaxDuty) * busV * station.Drivetrain.Motor.KvRadPerSPerV / station.FluxFactor;
+        double speed = 0;
+        if (free > 0)
+        {
+            int m = options.ScanPoints;
+            double above = free, fAbove = F(free);
+            for (int k = 1; k <= m; k++)
+            {
+                double w = free * (1 - k / (double)m);
+                double f = k == m ? F(0) : F(w);
+                if (f > 0 && fAbove <= 0)
+                {
+                    speed = Brent.TryFindRoot(F, w, above, 1e-12 * free, 200, out double root) ? root : w;
+                    break;
+                }
+                above = w;
+                fAbove = f;
+            }
+        }
+        busCurrentA = DriveBus.Evaluate(busV, station.Input(command, speed)).BusCurrentA;
+        return speed;
+    }
+}

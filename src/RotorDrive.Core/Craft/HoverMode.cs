@@ -1,0 +1,12 @@
+namespace RotorDrive.Core.Craft;
+
+/// <summary>Which hover question a <see cref="HoverResult"/> answers.</summary>
+public enum HoverMode
+{
+    /// <summary>Per-station duties trimmed for force, pitch, roll and yaw balance at a fixed gap.</summary>
+    Trimmed,
+
+    /// <summary>One common duty for all stations; the gap follows from lift = weight (pitch, roll and yaw left
+    /// unbalanced and reported).</summary>
+    CommonDuty,
+}

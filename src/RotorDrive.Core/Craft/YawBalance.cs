@@ -1,0 +1,187 @@
+using MathNet.Numerics.RootFinding;
+
+namespace RotorDrive.Core.Craft;
+
+/// <summary>Yaw balance: residual yaw torque with equal duties, the differential duty that cancels it, the yaw
+/// authority of the trim, and the yaw caused by small mismatches between paired rotors.</summary>
+/// <remarks>The reaction of each rotor on the frame equals its shaft torque signed by its spin (Newton's third law;
+/// steady speed, so no J d(omega)/dt term). Equal duty and differential duty are 1-D Brent roots (lift = weight, yaw =
+/// 0) over <see cref="CommonDutyHover.SpeedsAt"/>; the authority is a bisection on the commanded yaw torque of
+/// <see cref="HoverTrim.Solve(RigModel, double, double, HoverOptions?)"/> while every limit holds. Thread-safe.</remarks>
+public static class YawBalance
+{
+    /// <summary>Analyses the rig's yaw balance at its design gap.</summary>
+    /// <param name="model">The rig model.</param>
+    /// <param name="options">Numerical settings; defaults when null.</param>
+    public static YawResult Analyse(RigModel model, HoverOptions? options = null)
+    {
+        Preconditions.NotNull(model, nameof(model));
+        options ??= HoverOptions.Default;
+        var findings = new List<string>();
+        int n = model.Stations.Count;
+        double gap = model.DesignGapM, weight = model.WeightN;
+        double maxDuty = model.Limits.MaxDuty;
+        var cw = Enumerable.Range(0, n).Where(i => model.Stations[i].Spin == SpinDirection.Clockwise).ToArray();
+        var ccw = Enumerable.Range(0, n).Where(i => model.Stations[i].Spin == SpinDirection.CounterClockwise).ToArray();
+
+        double[] Duties(double cwDuty, double ccwDuty)
+        {
+            var d = new double[n];
+            for (int i = 0; i < n; i++)
+            {
+                d[i] = Math.Clamp(model.Stations[i].Spin == SpinDirection.Clockwise ? cwDuty : ccwDuty, 0, 1);
+            }
+            return d;
+        }
+        double Excess(RigModel m, double cwDuty, double ccwDuty) => CommonDutyHover.SpeedsAt(m, Duties(cwDuty, ccwDuty), gap, options).TotalLiftN - weight;
+
+        double? equal = null, residual = null, accel = null, delta = null, cwDuty = null, ccwDuty = null;
+        YawSensitivity? sensitivity = null;
+        if (Excess(model, maxDuty, maxDuty) < 0)
+        {
+            findings.Add($"no equal duty up to the limit {maxDuty:0.00} carries the weight at the design gap");
+        }
+        else
+        {
+            double d = Brent.FindRoot(x => Excess(model, x, x), 1e-4, maxDuty, 1e-12, 200);
+            equal = d;
+            double yaw = CommonDutyHover.SpeedsAt(model, Duties(d, d), gap, options).YawTorqueNm;
+            residual = yaw;
+            accel = yaw / model.YawInertiaKgM2;
+            if (cw.Length == 0 || ccw.Length == 0)
+            {
+                findings.Add("all rotors spin the same way: no differential duty can cancel their reaction");
+            }
+            else
+            {
+                // For a split delta, the common part that still carries the weight, then the yaw there.
+                double Common(double dd)
+                {
+                    double lo = Math.Max(1e-4, Math.Abs(dd) / 2 + 1e-4), hi = maxDuty - Math.Abs(dd) / 2;
+                    if (!(hi > lo) || Excess(model, hi + dd / 2, hi - dd / 2) < 0 || Excess(model, lo + dd / 2, lo - dd / 2) > 0)
+                    {
+                        return double.NaN;
+                    }
+                    return Brent.FindRoot(x => Excess(model, x + dd / 2, x - dd / 2), lo, hi, 1e-12, 200);
+                }
+                double Yaw(double dd)
+                {
+                    double c = Common(dd);
+                    return double.IsNaN(c) ? double.NaN : CommonDutyHover.SpeedsAt(model, Duties(c + dd / 2, c - dd / 2), gap, options).YawTorqueNm;
+                }
+                double span = 2 * Math.Min(d, maxDuty - d);
+                // Walk out from zero both ways until the yaw changes sign; the root then lies in the last step. Which way
+                // depends on the regime: above the drag peak a faster rotor has less shaft torque, below it more.
+                bool found = false;
+                Span<double> prev = [0.0, 0.0];
+                Span<double> fPrev = [yaw, yaw];
+                Span<bool> open = [true, true];
+                for (int k = 1; k <= 40 && !found && yaw != 0; k++)
+                {
+                    for (int side = 0; side < 2 && !found; side++)
+                    {
+                        if (!open[side])
+                        {
+                            continue;
+                        }
+                        double x = (side == 0 ? 1 : -1) * span * k / 40.0;
+                        double f = Yaw(x);
+                        if (double.IsNaN(f))
+                        {
+                            open[side] = false;
+                            continue;
+                        }
+                        if (Math.Sign(f) != Math.Sign(fPrev[side]))
+                        {
+                            double root = Brent.FindRoot(Yaw, Math.Min(prev[side], x), Math.Max(prev[side], x), 1e-12, 200);
+                            double c = Common(root);
+                            delta = root;
+                            cwDuty = c + root / 2;
+                            ccwDuty = c - root / 2;
+                            found = true;
+                        }
+                        prev[side] = x;
+                        fPrev[side] = f;
+                    }
+                }
+                if (yaw == 0)
+                {
+                    delta = 0;
+                    cwDuty = ccwDuty = d;
+                }
+                else if (!found)
+                {
+                    findings.Add("no differential duty within the duty limit cancels the residual yaw torque while carrying the weight");
+                }
+                sensitivity = Sensitivity(model, Duties(d, d), gap, yaw, cw[0], ccw[0], options);
+            }
+        }
+
+        double positive = Authority(model, gap, +1, model.Limits.YawTorqueNm, options, out string? positiveLimit);
+        double negative = Authority(model, gap, -1, model.Limits.YawTorqueNm, options, out string? negativeLimit);
+        if (positive == 0 && negative == 0)
+        {
+            findings.Add("the trimmed hover itself breaks a limit or has no balance: no yaw authority");
+        }
+        return new YawResult(equal, residual, accel, delta, cwDuty, ccwDuty, positive, negative, model.Limits.YawTorqueNm,
+            positive <= negative ? positiveLimit : negativeLimit, sensitivity, findings);
+    }
+
+    private static YawSensitivity Sensitivity(RigModel model, double[] duties, double gap, double nominal, int a, int b, HoverOptions options)
+    {
+        var s = model.Stations[a];
+        var motor = s.Drivetrain.Motor;
+        var kv = model.WithParts(a, motor with { KvRadPerSPerV = motor.KvRadPerSPerV * 1.01 }, s.Drivetrain.Controller);
+        var gapped = model.WithConditions(a, s.Conditions with { GapOffsetM = s.Conditions.GapOffsetM + 0.001 });
+        var warm = model.WithConditions(a, s.Conditions with { PlateTempC = s.Conditions.PlateTempC + 10 });
+        double Yaw(RigModel m) => CommonDutyHover.SpeedsAt(m, duties, gap, options).YawTorqueNm - nominal;
+        return new YawSensitivity(a, b, Yaw(kv), Yaw(gapped), Yaw(warm));
+    }
+
+    // Largest |yaw torque| in one direction for which the trim hovers within every limit (bisection).
+    private static double Authority(RigModel model, double gap, int sign, double limit, HoverOptions options, out string? limitedBy)
+    {
+        HoverResult? last = null;
+        bool Holds(double t)
+        {
+            var r = HoverTrim.Solve(model, gap, sign * t, options);
+            if (r.Status != HoverStatus.Hovering)
+            {
+                last = r;
+                return false;
+            }
+            return true;
+        }
+        limitedBy = null;
+        if (!Holds(0))
+        {
+            limitedBy = last?.Findings.FirstOrDefault()?.Limit;
+            return 0;
+        }
+        double lo = 0, hi = Math.Max(limit, 1e-3);
+        int doublings = 0;
+        while (Holds(hi))
+        {
+            lo = hi;
+            hi *= 2;
+            if (++doublings > 30)
+            {
+                return lo;
+            }
+        }
+        limitedBy = last?.Findings.FirstOrDefault()?.Limit;
+        for (int k = 0; k < 40 && hi - lo > 1e-4 * Math.Max(limit, hi); k++)
+        {
+            double mid = 0.5 * (lo + hi);
+            if (Holds(mid))
+            {
+                lo = mid;
+            }
+            else
+            {
+                hi = mid;
+            }
+        }
+        return lo;
+    }
+}

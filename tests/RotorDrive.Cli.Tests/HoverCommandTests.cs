@@ -1,0 +1,119 @@
+using System.Text.Json;
+using Xunit;
+
+namespace RotorDrive.Cli.Tests;
+
+public sealed class HoverCommandTests : IDisposable
+{
+    private readonly string _folder = Path.Combine(Path.GetTempPath(), "rotordrive-hover-" + Guid.NewGuid().ToString("N"));
+
+    public void Dispose()
+    {
+        if (Directory.Exists(_folder))
+        {
+            Directory.Delete(_folder, recursive: true);
+        }
+    }
+
+    private static string TestRig => Path.Combine(RepoPaths.Catalogs, "test-rig.json");
+
+    // Statics (force balance): the stations' lifts add up to the weight; the documented keys are all there.
+    [Theory]
+    [InlineData("demo-rig.json", 6)]
+    [InlineData("test-rig.json", 4)]
+    public async Task Hover_Json_TrimsTheRig_WithEveryDocumentedKey(string rigFile, int stations)
+    {
+        var (code, output, error) = await CliRunner.RunAsync("hover", Path.Combine(RepoPaths.Catalogs, rigFile), "--json");
+        Assert.True(code == ExitCodes.Ok, error + output);
+        using var doc = JsonDocument.Parse(output);
+        var root = doc.RootElement;
+        Assert.Equal("trimmed", root.GetProperty("mode").GetString());
+        foreach (string key in new[] { "gap_mm", "pack_current_a", "pack_voltage_v", "electrical_power_w", "plate_power_w", "lift_specific_power_w_per_n", "heave_stiffness_n_per_mm", "heave_frequency_hz", "yaw_torque_nm", "mass_kg", "weight_n" })
+        {
+            Assert.True(root.GetProperty(key).ValueKind == JsonValueKind.Number, key);
+        }
+        var st = root.GetProperty("stations").EnumerateArray().ToArray();
+        Assert.Equal(stations, st.Length);
+        foreach (string key in new[] { "duty", "speed_rpm", "lift_n", "shaft_torque_nm", "motor_current_a", "bus_current_a", "eddy_power_w", "lift_specific_power_w_per_n" })
+        {
+            Assert.True(st[0].GetProperty(key).ValueKind == JsonValueKind.Number, key);
+        }
+        Assert.NotEmpty(st[0].GetProperty("margins").EnumerateArray());
+        double lift = st.Sum(s => s.GetProperty("lift_n").GetDouble());
+        double weight = root.GetProperty("weight_n").GetDouble();
+        Assert.True(Math.Abs(lift - weight) <= 1e-6 * weight, $"lift {lift} vs weight {weight}");
+        Assert.Empty(root.GetProperty("limits").EnumerateArray());
+        Assert.True(root.GetProperty("safety").GetProperty("retainer_stress_mpa").GetDouble() > 0);
+        Assert.Contains(root.GetProperty("cautions").EnumerateArray(), c => c.GetProperty("topic").GetString() == "StrongMagnets");
+    }
+
+    [Fact]
+    public async Task Hover_Text_ShowsTheTableTotalsSafetyAndCautions()
+    {
+        var (code, output, _) = await CliRunner.RunAsync("hover", RepoPaths.DemoRig);
+        Assert.Equal(ExitCodes.Ok, code);
+        Assert.Contains("Trimmed hover", output);
+        Assert.Contains("speed_rpm", output);
+        Assert.Contains("lift-specific power", output);
+        Assert.Contains("Rotor safety", output);
+        Assert.Contains("Result: PASS", output);
+        Assert.Contains("Lithium packs", output);
+    }
+
+    // The over-loaded demo names the failing limit and a payload that does hover; re-running at that payload passes.
+    [Fact]
+    public async Task Hover_Overloaded_ExitsOne_NamesTheLimit_AndAPayloadThatHovers()
+    {
+        var (code, output, _) = await CliRunner.RunAsync("hover", RepoPaths.DemoRig, "--payload-kg", "60", "--json");
+        Assert.Equal(ExitCodes.LimitFindings, code);
+        using var doc = JsonDocument.Parse(output);
+        var limits = doc.RootElement.GetProperty("limits").EnumerateArray().ToArray();
+        Assert.NotEmpty(limits);
+        Assert.All(limits, l => Assert.False(string.IsNullOrEmpty(l.GetProperty("limit").GetString())));
+        double max = doc.RootElement.GetProperty("max_payload_kg").GetDouble();
+        Assert.InRange(max, 0, 60);
+        var again = await CliRunner.RunAsync("hover", RepoPaths.DemoRig, "--payload-kg", max.ToString("R", System.Globalization.CultureInfo.InvariantCulture));
+        Assert.Equal(ExitCodes.Ok, again.ExitCode);
+    }
+
+    [Fact]
+    public async Task Hover_CommonDuty_SolvesTheGap()
+    {
+        var (code, output, error) = await CliRunner.RunAsync("hover", TestRig, "--common-duty", "0.7", "--json");
+        Assert.True(code is ExitCodes.Ok or ExitCodes.LimitFindings, error);
+        using var doc = JsonDocument.Parse(output);
+        Assert.Equal("common_duty", doc.RootElement.GetProperty("mode").GetString());
+        double gap = doc.RootElement.GetProperty("gap_mm").GetDouble();
+        Assert.InRange(gap, 2.5, 24);
+        Assert.All(doc.RootElement.GetProperty("stations").EnumerateArray(), s => Assert.Equal(0.7, s.GetProperty("duty").GetDouble(), 6));
+    }
+
+    [Fact]
+    public async Task Hover_GapAndCommonDutyTogether_IsBadInput()
+    {
+        var (code, _, error) = await CliRunner.RunAsync("hover", RepoPaths.DemoRig, "--gap-mm", "9", "--common-duty", "0.5");
+        Assert.Equal(ExitCodes.BadInput, code);
+        Assert.Contains("cannot be used together", error);
+    }
+
+    [Fact]
+    public async Task Hover_RigWithoutAMotor_IsBadInput_NamingTheStation()
+    {
+        Directory.CreateDirectory(_folder);
+        foreach (var file in Directory.GetFiles(RepoPaths.Catalogs))
+        {
+            File.Copy(file, Path.Combine(_folder, Path.GetFileName(file)));
+        }
+        string rig = Path.Combine(_folder, "demo-rig.json");
+        string text = File.ReadAllText(rig);
+        int at = text.IndexOf("\"motor\": \"or1050-kv90\", ", StringComparison.Ordinal);
+        File.WriteAllText(rig, text.Remove(at, "\"motor\": \"or1050-kv90\", ".Length));
+        foreach (string command in new[] { "hover", "yaw" })
+        {
+            var (code, output, error) = await CliRunner.RunAsync(command, rig);
+            Assert.Equal(ExitCodes.BadInput, code);
+            Assert.Contains("station 0 has no motor", error);
+            Assert.Equal("", output);
+        }
+    }
+}
