@@ -20,6 +20,8 @@ public static class CliApp
         root.Subcommands.Add(OperateCommand.Create());
         root.Subcommands.Add(HoverCommand.Create());
         root.Subcommands.Add(YawCommand.Create());
+        root.Subcommands.Add(SpinupCommand.Create());
+        root.Subcommands.Add(EnduranceCommand.Create());
         root.Subcommands.Add(RankCommand.Create());
         return root;
     }
