@@ -23,6 +23,7 @@ public static class CliApp
         root.Subcommands.Add(EnduranceCommand.Create());
         root.Subcommands.Add(HoverCommand.Create());
         root.Subcommands.Add(YawCommand.Create());
+        root.Subcommands.Add(RankCommand.Create());
         return root;
     }
 

@@ -1,4 +1,42 @@
+using System.Diagnostics;
 using BenchmarkDotNet.Running;
+using RotorDrive.Benchmarks.Studies;
+using RotorDrive.Core.Studies.Ranking;
 
 // Run with: dotnet run -c Release --project tests/RotorDrive.Benchmarks -- --filter '*'
+// One timed run of the generated 4.8 million combination ranking (for /usr/bin/time -v peak memory):
+//   dotnet run -c Release --project tests/RotorDrive.Benchmarks -- rank-generated [MOTORS CONTROLLERS PACKS]
+if (args.Length > 0 && args[0] == "rank-generated")
+{
+    int motors = args.Length > 1 ? int.Parse(args[1], System.Globalization.CultureInfo.InvariantCulture) : 1000;
+    int controllers = args.Length > 2 ? int.Parse(args[2], System.Globalization.CultureInfo.InvariantCulture) : 60;
+    int packs = args.Length > 3 ? int.Parse(args[3], System.Globalization.CultureInfo.InvariantCulture) : 80;
+    var (rig, catalog) = RankGeneratedBenchmarks.Make(motors, controllers, packs);
+    var clock = Stopwatch.StartNew();
+    var study = RankStudy.Create(rig, catalog, new RankOptions(MaxPackCount: 1));
+    var result = study.Run();
+    clock.Stop();
+    Console.WriteLine($"{result.TotalCombinations:N0} combinations, {result.AcceptedCount:N0} accepted, Pareto {result.ParetoRanks.Count}, best {result.Top[0].Evaluation.Label}: {clock.Elapsed.TotalSeconds:0.00} s, cores {Environment.ProcessorCount}, peak working set {Process.GetCurrentProcess().PeakWorkingSet64 / 1048576.0:0} MiB");
+    foreach (var count in result.RejectionCounts)
+    {
+        Console.WriteLine($"  {count.Count,10:N0} {count.Kind.Describe()}");
+    }
+    return;
+}
+// CPU and wall time of ranking the demo catalogs in-process (five runs after one warm-up):
+//   dotnet run -c Release --project tests/RotorDrive.Benchmarks -- rank-demo
+if (args.Length > 0 && args[0] == "rank-demo")
+{
+    var loaded = RotorDrive.Files.RigLoader.Load(RotorDrive.Benchmarks.BenchmarkPaths.DemoRig);
+    for (int run = 0; run < 6; run++)
+    {
+        var cpu = Process.GetCurrentProcess().TotalProcessorTime;
+        var clock = Stopwatch.StartNew();
+        var result = RankStudy.Create(loaded.Rig!, loaded.Catalog!).Run();
+        clock.Stop();
+        var used = Process.GetCurrentProcess().TotalProcessorTime - cpu;
+        Console.WriteLine($"run {run}: {result.TotalCombinations:N0} combinations, {result.AcceptedCount:N0} accepted: wall {clock.Elapsed.TotalSeconds:0.000} s, cpu {used.TotalSeconds:0.000} s");
+    }
+    return;
+}
 BenchmarkSwitcher.FromAssembly(typeof(Program).Assembly).Run(args);

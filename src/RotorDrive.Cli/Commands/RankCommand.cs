@@ -1,0 +1,375 @@
+using System.CommandLine;
+using System.Globalization;
+using System.Text;
+using RotorDrive.Cli.Output;
+using RotorDrive.Core.Craft;
+using RotorDrive.Core.Studies.Ranking;
+using RotorDrive.Files;
+
+namespace RotorDrive.Cli.Commands;
+
+/// <summary><c>rotordrive rank RIG.json [--by runtime|mass|margin|score] [--top N] [--why-not MOTOR_ID] [--csv FILE]
+/// [--force] [--json]</c>: every motor x controller x pack (x pack count up to the rig's <c>pack.count</c>) of the rig's
+/// catalogs, the same drivetrain at every station, ranked; rejections counted by reason.</summary>
+/// <remarks>Exit 0 when at least one combination is accepted, 1 when none is, 2 on bad input. Progress goes to stderr
+/// (not with --json).</remarks>
+public static class RankCommand
+{
+    /// <summary>Builds the subcommand.</summary>
+    public static Command Create()
+    {
+        var rig = CommonOptions.RigArgument();
+        var by = new Option<RankObjective>("--by")
+        {
+            Description = "What to rank by: runtime (longest hover), mass (lightest craft), margin (largest worst-case current margin) or score (weighted).",
+            HelpName = "runtime|mass|margin|score",
+            DefaultValueFactory = _ => RankObjective.Runtime,
+        };
+        var top = new Option<int>("--top")
+        {
+            Description = "How many of the best combinations to show (1 to 1000); default 10.",
+            HelpName = "N",
+            DefaultValueFactory = _ => 10,
+        };
+        top.Validators.Add(r =>
+        {
+            int n = r.GetValueOrDefault<int>();
+            if (n < 1 || n > 1000)
+            {
+                r.AddError($"--top must lie in 1..1000; got {n.ToString(CultureInfo.InvariantCulture)}.");
+            }
+        });
+        var whyNot = new Option<string?>("--why-not")
+        {
+            Description = "Show why a motor (catalog id) was rejected with every controller and pack.",
+            HelpName = "MOTOR_ID",
+        };
+        var csv = new Option<string?>("--csv")
+        {
+            Description = "Write every accepted combination, in rank order, to this CSV file (atomically).",
+            HelpName = "FILE",
+        };
+        var force = CommonOptions.Force();
+        var json = CommonOptions.Json();
+        var command = new Command("rank", "Rank every motor x controller x pack from the catalogs for the rig, explaining every rejection.");
+        command.Arguments.Add(rig);
+        command.Options.Add(by);
+        command.Options.Add(top);
+        command.Options.Add(whyNot);
+        command.Options.Add(csv);
+        command.Options.Add(force);
+        command.Options.Add(json);
+        command.SetAction(parse => Run(
+            new RankRequest(parse.GetValue(rig)!, parse.GetValue(by), parse.GetValue(top), parse.GetValue(whyNot), parse.GetValue(csv), parse.GetValue(force), parse.GetValue(json)),
+            parse.InvocationConfiguration.Output,
+            parse.InvocationConfiguration.Error));
+        return command;
+    }
+
+    private static int Run(RankRequest request, TextWriter output, TextWriter error)
+    {
+        var loaded = RigInput.LoadOrReport(request.RigPath, error);
+        if (loaded is null)
+        {
+            return ExitCodes.BadInput;
+        }
+        Rig rig = loaded.Rig!;
+        var catalog = loaded.Catalog!;
+        int? whyNotIndex = null;
+        if (request.WhyNot is { } id)
+        {
+            int index = -1;
+            for (int i = 0; i < catalog.Motors.Count; i++)
+            {
+                if (string.Equals(catalog.Motors[i].Id, id, StringComparison.OrdinalIgnoreCase))
+                {
+                    index = i;
+                    break;
+                }
+            }
+            if (index < 0)
+            {
+                error.WriteLine($"rotordrive rank: error: --why-not: no motor '{id}' in {loaded.CatalogPaths!.Motors}; ids are listed in that file.");
+                return ExitCodes.BadInput;
+            }
+            whyNotIndex = index;
+        }
+        if (request.CsvPath is { } csvPath && !request.Force && File.Exists(csvPath))
+        {
+            error.WriteLine($"rotordrive rank: error: {csvPath}: {Messages.FileExists()}");
+            return ExitCodes.BadInput;
+        }
+        if (catalog.Motors.Count == 0 || catalog.Controllers.Count == 0 || catalog.Packs.Count == 0)
+        {
+            error.WriteLine("rotordrive rank: error: the catalogs need at least one motor, one controller and one pack to rank.");
+            return ExitCodes.BadInput;
+        }
+
+        var study = RankStudy.Create(rig, catalog, new RankOptions(Objective: request.By, Top: request.Top));
+        var progress = request.Json ? null : new ProgressPrinter(error, study.CombinationCount);
+        var result = study.Run(progress is null ? null : progress.Report);
+        progress?.Finish();
+        var explained = whyNotIndex is { } motorIndex ? study.ExplainMotor(motorIndex) : null;
+        var rankByIndex = new Dictionary<long, int>();
+        if (explained is not null)
+        {
+            for (int i = 0; i < result.Ordered.Count; i++)
+            {
+                if (result.Ordered[i].MotorIndex == whyNotIndex)
+                {
+                    rankByIndex[study.IndexOf(result.Ordered[i])] = i + 1;
+                }
+            }
+        }
+        var pareto = new HashSet<int>(result.ParetoRanks);
+
+        if (request.CsvPath is { } path)
+        {
+            var problem = AtomicFile.WriteAllText(path, Csv(study, result, pareto), request.Force);
+            if (problem is not null)
+            {
+                ProblemReport.Print([problem], error);
+                return ExitCodes.BadInput;
+            }
+        }
+
+        if (request.Json)
+        {
+            JsonOutput.Write(output, ToReport(rig, study, result, explained, rankByIndex));
+        }
+        else
+        {
+            WriteText(output, rig, study, result, pareto, explained, rankByIndex, request);
+        }
+        return result.AcceptedCount > 0 ? ExitCodes.Ok : ExitCodes.LimitFindings;
+    }
+
+    private static void WriteText(TextWriter o, Rig rig, RankStudy study, RankResult result, HashSet<int> pareto,
+        IReadOnlyList<RankEvaluation>? explained, Dictionary<long, int> rankByIndex, RankRequest request)
+    {
+        var catalog = study.Catalog;
+        o.WriteLine($"Ranking for {rig.Name}: {catalog.Motors.Count} motors x {catalog.Controllers.Count} controllers x {catalog.Packs.Count} packs"
+            + $" x 1..{study.MaxPackCount} pack(s) in parallel = {result.TotalCombinations.ToString("N0", CultureInfo.InvariantCulture)} combinations, the same drivetrain at all {rig.Stations.Count} stations");
+        o.WriteLine($"  accepted {result.AcceptedCount.ToString("N0", CultureInfo.InvariantCulture)}, rejected {result.RejectedCount.ToString("N0", CultureInfo.InvariantCulture)};"
+            + $" ranked by {Key(result.Objective)}; score weights: runtime {Numbers.Format(result.Weights.Runtime, 2)}, mass {Numbers.Format(result.Weights.Mass, 2)}, margin {Numbers.Format(result.Weights.Margin, 2)}");
+        o.WriteLine($"  hover at the {Numbers.Format(rig.DesignGapM * 1000, 1)} mm design gap, plate at {Numbers.Format(rig.PlateTemperatureC, 0)} C, motors at {Numbers.Format(rig.AmbientC, 0)} C;"
+            + $" drag peak checked on the landing gear ({Numbers.Format(rig.LandedGapM * 1000, 1)} mm) on a full pack");
+        o.WriteLine();
+        if (result.Top.Count > 0)
+        {
+            o.WriteLine($"Best {result.Top.Count} (P = in the Pareto set over runtime, mass and current margin):");
+            var table = new TextTable(
+                new TableColumn("rank", Alignment.Right), new TableColumn("P"), new TableColumn("motor"), new TableColumn("controller"),
+                new TableColumn("packs"), new TableColumn("speed_rpm", Alignment.Right), new TableColumn("current_a", Alignment.Right),
+                new TableColumn("duty", Alignment.Right), new TableColumn("pack_a", Alignment.Right), new TableColumn("runtime_min", Alignment.Right),
+                new TableColumn("mass_kg", Alignment.Right), new TableColumn("margin_%", Alignment.Right), new TableColumn("peak_margin_%", Alignment.Right),
+                new TableColumn("liftoff_s", Alignment.Right), new TableColumn("score", Alignment.Right));
+            foreach (var entry in result.Top)
+            {
+                var e = entry.Evaluation;
+                var f = e.Figures!;
+                table.AddRow(entry.Rank.ToString(CultureInfo.InvariantCulture), entry.InParetoSet ? "P" : "", e.MotorId, e.ControllerId,
+                    $"{e.Candidate.PackCount} x {e.PackId}", Numbers.Format(f.MaxSpeedRpm, 0), Numbers.Format(f.MaxMotorCurrentA, 1),
+                    Numbers.Format(f.MaxDuty, 3), Numbers.Format(f.PackCurrentA, 1), Numbers.Format(f.RuntimeS / 60, 1), Numbers.Format(f.TotalMassKg, 2),
+                    Numbers.Format(f.CurrentMargin * 100, 1), Numbers.Format(f.DragPeakTorqueMargin * 100, 0), Numbers.Format(entry.LiftoffTimeS, 2),
+                    Numbers.Format(entry.Score, 3));
+            }
+            table.Write(o, 2);
+            o.WriteLine("  speed and current: fastest station / largest motor current at hover; duty: largest, full pack; pack_a: pack current, full pack;");
+            o.WriteLine("  margin_%: worst of motor, controller and pack currents against their continuous ratings over the run; peak_margin_%: motor");
+            o.WriteLine("  torque over load torque at the landed drag peak, minus 1; liftoff_s: estimate at full allowed duty, craft held at the landed gap.");
+            o.WriteLine();
+        }
+        else
+        {
+            o.WriteLine("No combination can fly this rig; see the rejections below.");
+            o.WriteLine();
+        }
+        o.WriteLine($"Pareto set: {result.ParetoRanks.Count} combination(s); ranks {string.Join(", ", result.ParetoRanks.Take(30))}{(result.ParetoRanks.Count > 30 ? ", ..." : "")}");
+        o.WriteLine();
+        o.WriteLine("Rejections by reason (a combination with several reasons counts under each):");
+        var reasons = new TextTable(new TableColumn("combinations", Alignment.Right), new TableColumn("reason"));
+        foreach (var count in result.RejectionCounts.Where(c => c.Count > 0))
+        {
+            reasons.AddRow(count.Count.ToString("N0", CultureInfo.InvariantCulture), count.Kind.Describe());
+        }
+        reasons.Write(o, 2);
+        o.WriteLine();
+        if (result.Assigned is { } assigned)
+        {
+            string where = result.AssignedRank is { } r ? $"rank {r} of {result.AcceptedCount}" : "rejected";
+            o.WriteLine($"The rig's own drivetrain, {assigned.Label}: {where}.");
+            foreach (var reason in assigned.Rejections)
+            {
+                o.WriteLine($"  - {reason.Message}");
+            }
+            if (assigned.Figures is { } f && assigned.Accepted)
+            {
+                o.WriteLine($"  runtime {Numbers.Format(f.RuntimeS / 60, 1)} min ({f.RuntimeLimit}), mass {Numbers.Format(f.TotalMassKg, 2)} kg, current margin {Numbers.Format(f.CurrentMargin * 100, 1)} %");
+            }
+        }
+        else
+        {
+            o.WriteLine("The rig names no single drivetrain (same motor and controller at every station, and a pack) to place in the ranking.");
+        }
+        if (explained is not null)
+        {
+            o.WriteLine();
+            o.WriteLine($"Why not {explained[0].MotorId}: every controller and pack with this motor");
+            var table = new TextTable(new TableColumn("controller"), new TableColumn("packs"), new TableColumn("verdict"));
+            foreach (var e in explained)
+            {
+                string verdict = e.Accepted
+                    ? $"accepted, rank {rankByIndex.GetValueOrDefault(study.IndexOf(e.Candidate))}"
+                    : string.Join("; ", e.Rejections.Select(r => r.Message));
+                table.AddRow(e.ControllerId, $"{e.Candidate.PackCount} x {e.PackId}", verdict);
+            }
+            table.Write(o, 2);
+        }
+        o.WriteLine();
+        o.WriteLine("Method: trimmed hover at the design gap with the drivetrain's and packs' mass included (lift = weight, level, zero yaw);");
+        o.WriteLine("first-order motor model (Drela 2007) on the shared pack bus; runtime on the usable capacity without thermal drift (see README).");
+        o.WriteLine("Caution: one-way controllers are fine for a fixed spin direction (wire the motor for it) but cannot reverse-brake a rotor.");
+        o.WriteLine("Estimates only: follow the manufacturers' ratings; lithium packs, strong magnets and spinning rotors are dangerous (see README, Safety).");
+    }
+
+    private static string Key(RankObjective objective) => objective.ToString().ToLowerInvariant();
+
+    private static string Csv(RankStudy study, RankResult result, HashSet<int> pareto)
+    {
+        var ci = CultureInfo.InvariantCulture;
+        var sb = new StringBuilder();
+        sb.AppendLine("rank,pareto,motor,controller,pack,pack_count,score,total_mass_kg,hover_speed_rpm,max_motor_current_a,max_duty,pack_current_a,runtime_s,runtime_limit,current_margin_pct,drag_peak_torque_margin_pct");
+        for (int i = 0; i < result.Ordered.Count; i++)
+        {
+            var e = study.Evaluate(result.Ordered[i]);
+            var f = e.Figures!;
+            sb.Append(string.Join(",",
+                (i + 1).ToString(ci), pareto.Contains(i + 1) ? "yes" : "no", CsvText(e.MotorId), CsvText(e.ControllerId), CsvText(e.PackId),
+                e.Candidate.PackCount.ToString(ci), result.Scores[i].ToString("R", ci), f.TotalMassKg.ToString("R", ci),
+                f.MaxSpeedRpm.ToString("0.###", ci), f.MaxMotorCurrentA.ToString("0.####", ci), f.MaxDuty.ToString("0.#####", ci),
+                f.PackCurrentA.ToString("0.####", ci), f.RuntimeS.ToString("0.###", ci), CsvText(f.RuntimeLimit),
+                f.CurrentMargin is { } m ? (m * 100).ToString("0.####", ci) : "",
+                f.DragPeakTorqueMargin is { } d ? (d * 100).ToString("0.###", ci) : ""));
+            sb.Append('\n');
+        }
+        return sb.ToString();
+    }
+
+    private static string CsvText(string text) => text.Contains(',') || text.Contains('"') ? "\"" + text.Replace("\"", "\"\"") + "\"" : text;
+
+    private static RankReport ToReport(Rig rig, RankStudy study, RankResult result, IReadOnlyList<RankEvaluation>? explained, Dictionary<long, int> rankByIndex)
+    {
+        var pareto = new HashSet<int>(result.ParetoRanks);
+        var top = result.Top.Select(t => Entry(t.Evaluation, t.Rank, t.InParetoSet, t.Score, t.LiftoffTimeS)).ToList();
+        EntryReport? assigned = result.Assigned is { } a
+            ? Entry(a, result.AssignedRank, result.AssignedRank is { } r && pareto.Contains(r), result.AssignedRank is { } r2 ? result.Scores[r2 - 1] : null, null)
+            : null;
+        WhyNotReport? whyNot = explained is null ? null : new WhyNotReport(
+            explained[0].MotorId,
+            explained.Select(e => new WhyNotEntry(e.ControllerId, e.PackId, e.Candidate.PackCount, e.Accepted,
+                e.Accepted ? rankByIndex.GetValueOrDefault(study.IndexOf(e.Candidate)) : null,
+                e.Rejections.Select(x => new ReasonReport(x.Kind.Key(), x.Message)).ToList())).ToList());
+        return new RankReport(
+            rig.Name,
+            Key(result.Objective),
+            new WeightsReport(result.Weights.Runtime, result.Weights.Mass, result.Weights.Margin),
+            result.TotalCombinations,
+            result.AcceptedCount,
+            result.RejectedCount,
+            study.MaxPackCount,
+            result.RejectionCounts.Select(c => new RejectionCountReport(c.Kind.Key(), c.Kind.Describe(), c.Count)).ToList(),
+            top,
+            result.ParetoRanks,
+            assigned,
+            whyNot);
+    }
+
+    private static EntryReport Entry(RankEvaluation e, int? rank, bool pareto, double? score, double? liftoff)
+    {
+        var f = e.Figures;
+        return new EntryReport(
+            rank, e.MotorId, e.ControllerId, e.PackId, e.Candidate.PackCount, e.Accepted, pareto, score,
+            f?.TotalMassKg, f?.MaxSpeedRpm, f?.MaxMotorCurrentA, f is { StationDuties.Count: > 0 } ? f.MaxDuty : null,
+            f?.PackCurrentA, f?.BusVoltageV, f?.ElectricalPowerW, f?.LiftSpecificPowerWPerN, f?.EddyPowerW, f?.RuntimeS, f?.RuntimeLimit,
+            f?.CurrentMargin * 100, f?.DragPeakTorqueMargin * 100, liftoff,
+            e.Rejections.Select(x => new ReasonReport(x.Kind.Key(), x.Message)).ToList(),
+            e.Cautions.Select(x => x.Message).ToList());
+    }
+
+    // Prints "ranking: 45 %" lines to stderr about every tenth of the sweep; thread-safe.
+    private sealed class ProgressPrinter(TextWriter error, long total)
+    {
+        private readonly Lock _gate = new();
+        private int _lastTenth = -1;
+
+        public void Report(RankProgress progress)
+        {
+            lock (_gate)
+            {
+                int tenth = (int)(progress.Fraction * 10);
+                if (tenth > _lastTenth)
+                {
+                    _lastTenth = tenth;
+                    error.WriteLine($"ranking: {progress.Done.ToString("N0", CultureInfo.InvariantCulture)} of {total.ToString("N0", CultureInfo.InvariantCulture)} combinations ({tenth * 10} %)");
+                }
+            }
+        }
+
+        public void Finish()
+        {
+        }
+    }
+
+    private sealed record RankRequest(string RigPath, RankObjective By, int Top, string? WhyNot, string? CsvPath, bool Force, bool Json);
+
+    private sealed record RankReport(
+        string Rig,
+        string Objective,
+        WeightsReport Weights,
+        long Combinations,
+        long Accepted,
+        long Rejected,
+        int MaxPackCount,
+        IReadOnlyList<RejectionCountReport> Rejections,
+        IReadOnlyList<EntryReport> Top,
+        IReadOnlyList<int> ParetoRanks,
+        EntryReport? Assigned,
+        WhyNotReport? WhyNot);
+
+    private sealed record WeightsReport(double Runtime, double Mass, double Margin);
+
+    private sealed record RejectionCountReport(string Reason, string Description, long Count);
+
+    private sealed record ReasonReport(string Reason, string Message);
+
+    private sealed record EntryReport(
+        int? Rank,
+        string Motor,
+        string Controller,
+        string Pack,
+        int PackCount,
+        bool Accepted,
+        bool Pareto,
+        double? Score,
+        double? TotalMassKg,
+        double? HoverSpeedRpm,
+        double? MaxMotorCurrentA,
+        double? MaxDuty,
+        double? PackCurrentA,
+        double? BusVoltageV,
+        double? ElectricalPowerW,
+        double? LiftSpecificPowerWPerN,
+        double? EddyPowerW,
+        double? RuntimeS,
+        string? RuntimeLimit,
+        double? CurrentMarginPct,
+        double? DragPeakTorqueMarginPct,
+        double? LiftoffTimeS,
+        IReadOnlyList<ReasonReport> Rejections,
+        IReadOnlyList<string> Cautions);
+
+    private sealed record WhyNotReport(string Motor, IReadOnlyList<WhyNotEntry> Combinations);
+
+    private sealed record WhyNotEntry(string Controller, string Pack, int PackCount, bool Accepted, int? Rank, IReadOnlyList<ReasonReport> Rejections);
+}

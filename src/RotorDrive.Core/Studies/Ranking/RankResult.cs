@@ -1,0 +1,35 @@
+namespace RotorDrive.Core.Studies.Ranking;
+
+/// <summary>The outcome of ranking every motor x controller x pack (x pack count) for a rig.</summary>
+/// <param name="Objective">What was ranked by.</param>
+/// <param name="Weights">The score weights.</param>
+/// <param name="TotalCombinations">Combinations evaluated.</param>
+/// <param name="Ordered">Every accepted combination, best first.</param>
+/// <param name="Scores">Weighted score of each entry of <paramref name="Ordered"/>, same order.</param>
+/// <param name="ParetoRanks">1-based ranks of the accepted combinations in the Pareto set over runtime (more is
+/// better), total mass (less) and current margin (more), ascending.</param>
+/// <param name="RejectionCounts">Combinations rejected by each reason (every kind listed, zero included).</param>
+/// <param name="Top">The best <see cref="RankOptions.Top"/> combinations, fully evaluated.</param>
+/// <param name="AssignedCandidate">The rig's own drivetrain when every station has the same motor and controller and a
+/// pack is named; otherwise null.</param>
+/// <param name="Assigned">Its evaluation, or null.</param>
+/// <param name="AssignedRank">Its 1-based rank, or null when it is rejected, absent, or not within the sweep.</param>
+public sealed record RankResult(
+    RankObjective Objective,
+    RankWeights Weights,
+    long TotalCombinations,
+    IReadOnlyList<RankCandidate> Ordered,
+    IReadOnlyList<double> Scores,
+    IReadOnlyList<int> ParetoRanks,
+    IReadOnlyList<RankRejectionCount> RejectionCounts,
+    IReadOnlyList<RankedEntry> Top,
+    RankCandidate? AssignedCandidate,
+    RankEvaluation? Assigned,
+    int? AssignedRank)
+{
+    /// <summary>Accepted combinations.</summary>
+    public long AcceptedCount => Ordered.Count;
+
+    /// <summary>Rejected combinations.</summary>
+    public long RejectedCount => TotalCombinations - Ordered.Count;
+}

@@ -1,0 +1,219 @@
+using System.Globalization;
+using RotorDrive.Core.Drive;
+
+namespace RotorDrive.Core.Studies.Ranking;
+
+public sealed partial class RankStudy
+{
+    /// <summary>Evaluates one combination through the fast path with a fresh trim, with every reason in words.</summary>
+    /// <param name="candidate">The combination.</param>
+    /// <returns>Its evaluation (figures equal to the sweep's within the trim tolerance).</returns>
+    /// <exception cref="ArgumentOutOfRangeException">An index is out of range.</exception>
+    public RankEvaluation Evaluate(RankCandidate candidate)
+    {
+        CheckCandidate(candidate);
+        var worker = new RankWorker(_trim.StationCount);
+        EvaluateFast(candidate, worker, fresh: true);
+        return ToEvaluation(candidate, worker.Outcome);
+    }
+
+    /// <summary>Every combination of one motor (with every controller, pack and pack count), with its reasons: what
+    /// <c>--why-not</c> shows.</summary>
+    /// <param name="motorIndex">Index into the catalog's motors.</param>
+    /// <returns>One evaluation per controller x pack x pack count, in sweep order.</returns>
+    /// <exception cref="ArgumentOutOfRangeException">The index is out of range.</exception>
+    public IReadOnlyList<RankEvaluation> ExplainMotor(int motorIndex)
+    {
+        Preconditions.InRange(motorIndex, 0, _catalog.Motors.Count - 1, nameof(motorIndex));
+        var worker = new RankWorker(_trim.StationCount);
+        var list = new List<RankEvaluation>();
+        for (int c = 0; c < _catalog.Controllers.Count; c++)
+        {
+            for (int p = 0; p < _catalog.Packs.Count; p++)
+            {
+                for (int k = 1; k <= _maxPackCount; k++)
+                {
+                    var candidate = new RankCandidate(motorIndex, c, p, k);
+                    EvaluateFast(candidate, worker, fresh: false);
+                    list.Add(ToEvaluation(candidate, worker.Outcome));
+                }
+            }
+        }
+        return list;
+    }
+
+    /// <summary>Estimates the time from rest on the landing gear to lift-off: every rotor driven at the team's duty
+    /// limit under the controller's current limit from a full pack, the craft held at the landed gap, until the rotors'
+    /// lift at the landed gap carries the weight. Heun's method (explicit trapezoidal, E. Hairer, S. P. Norsett,
+    /// G. Wanner, Solving Ordinary Differential Equations I, 1993) with the step of <see cref="RankOptions.LiftoffTimeStepS"/>.</summary>
+    /// <remarks>A quick estimate for the ranking table (no throttle ramp, no heave, no thermal drift); the spin-up
+    /// simulation is the full answer.</remarks>
+    /// <param name="candidate">The combination.</param>
+    /// <returns>The time to lift-off, s, or null when the cells do not fit the controller or the craft does not lift
+    /// off within <see cref="RankOptions.LiftoffMaxTimeS"/>.</returns>
+    /// <exception cref="ArgumentOutOfRangeException">An index is out of range.</exception>
+    public double? EstimateLiftoffTimeS(RankCandidate candidate)
+    {
+        CheckCandidate(candidate);
+        var motor = _catalog.Motors[candidate.MotorIndex];
+        var controller = _catalog.Controllers[candidate.ControllerIndex];
+        var pack = _catalog.Packs[candidate.PackIndex];
+        if (!controller.AcceptsCells(pack.CellsSeries))
+        {
+            return null;
+        }
+        int n = _trim.StationCount;
+        (double mass, _, _) = _trim.MassAndCg(motor.MassKg + controller.MassKg, candidate.PackCount * pack.MassKg);
+        double weight = mass * Units.StandardGravity;
+        var train = new Drivetrain(motor, controller, new DriveOptions(MaxDuty: _rig.Limits.MaxDuty));
+        var source = new BusSource(pack.CellsSeries * _ocvGrid[candidate.PackIndex][0], pack.ResistanceOhm / candidate.PackCount);
+        var inputs = new DriveInput[n];
+        var points = new DrivePoint[n];
+        var speeds = new double[n];
+        var k1 = new double[n];
+        var trial = new double[n];
+        double gap = _rig.LandedGapM, plate = _rig.PlateTemperatureC, ambient = _rig.AmbientC;
+        var command = new DriveCommand(DriveCommandKind.Duty, _rig.Limits.MaxDuty);
+        void Rates(double[] w, double[] into)
+        {
+            for (int i = 0; i < n; i++)
+            {
+                inputs[i] = new DriveInput(train, command, w[i], ambient, ambient, Braking: false);
+            }
+            var solution = DriveBus.Solve(source, inputs, points);
+            for (int i = 0; i < n; i++)
+            {
+                double motorTorque = solution.Status == BusStatus.NoSolution ? 0.0 : points[i].TorqueNm;
+                double load = Loads[i].Evaluate(w[i], gap, plate, ambient).TotalTorqueNm;
+                into[i] = (motorTorque - load) / _rig.Stations[i].Rotor.InertiaKgM2;
+            }
+        }
+        double dt = _options.LiftoffTimeStepS;
+        int stepsMax = (int)Math.Ceiling(_options.LiftoffMaxTimeS / dt);
+        var k2 = new double[n];
+        for (int step = 0; step < stepsMax; step++)
+        {
+            double lift = 0;
+            for (int i = 0; i < n; i++)
+            {
+                lift += Loads[i].Evaluate(speeds[i], gap, plate, ambient).LiftN;
+            }
+            if (lift >= weight)
+            {
+                return step * dt;
+            }
+            Rates(speeds, k1);
+            for (int i = 0; i < n; i++)
+            {
+                trial[i] = Math.Max(0.0, speeds[i] + dt * k1[i]);
+            }
+            Rates(trial, k2);
+            for (int i = 0; i < n; i++)
+            {
+                speeds[i] = Math.Clamp(speeds[i] + 0.5 * dt * (k1[i] + k2[i]), 0.0, 1.2 * _trim.MaxSpeedRadPerS[i]);
+            }
+        }
+        return null;
+    }
+
+    // Turns an outcome into the public record, composing a sentence per reason.
+    private RankEvaluation ToEvaluation(RankCandidate c, RankOutcome o)
+    {
+        var ci = CultureInfo.InvariantCulture;
+        var motor = _catalog.Motors[c.MotorIndex];
+        var controller = _catalog.Controllers[c.ControllerIndex];
+        var pack = _catalog.Packs[c.PackIndex];
+        int n = _trim.StationCount;
+        var reasons = new List<RankRejection>();
+        void Add(RankRejectionKind kind, string message)
+        {
+            if (o.Has(kind))
+            {
+                reasons.Add(new RankRejection(kind, message));
+            }
+        }
+        Add(RankRejectionKind.CellsOutOfControllerRange, string.Format(ci,
+            "pack {0} has {1} cells in series; controller {2} is rated for {3} to {4}",
+            pack.Id, pack.CellsSeries, controller.Id, controller.MinCells, controller.MaxCells));
+        Add(RankRejectionKind.ControllerNotReversible, string.Format(ci,
+            "controller {0} is not reversible and reversing was required", controller.Id));
+        if (o.Has(RankRejectionKind.RotorSpeed))
+        {
+            int worst = -1;
+            double over = 0;
+            for (int i = 0; o.Trimmed && i < n; i++)
+            {
+                double ratio = o.Speeds[i] / _trim.MaxSpeedRadPerS[i];
+                if (ratio > over)
+                {
+                    over = ratio;
+                    worst = i;
+                }
+            }
+            reasons.Add(new RankRejection(RankRejectionKind.RotorSpeed, worst >= 0 && over > 1
+                ? string.Format(ci, "to lift {0:0.0} kg at the design gap station {1} must spin at {2:0} rpm, above its rotor's rated {3:0} rpm",
+                    o.MassKg, worst, Units.RadPerSToRpm(o.Speeds[worst]), Units.RadPerSToRpm(_trim.MaxSpeedRadPerS[worst]))
+                : string.Format(ci, "the rotors cannot lift {0:0.0} kg at the design gap within 1.2 x their rated speed (no trim)", o.MassKg)));
+        }
+        Add(RankRejectionKind.ControllerErpm, string.Format(ci,
+            "controller {0} commutates at most {1:0} erpm, i.e. {2:0} rpm with the {3}-pole motor {4}, below the hover speed {5:0} rpm",
+            controller.Id, controller.MaxErpm, controller.MaxErpm / Math.Max(1, motor.PolePairs), motor.Poles, motor.Id,
+            o.Trimmed ? Units.RadPerSToRpm(o.Speeds[o.FastestStation]) : 0));
+        Add(RankRejectionKind.DutyHeadroom, double.IsFinite(o.NeededDuty)
+            ? string.Format(ci, "on a full pack the hover needs {0:0.000} duty, above the limit {1:0.00}: motor {2} ({3:0} rpm/V) is too slow for {4} x {5} ({6} cells)",
+                o.NeededDuty, _rig.Limits.MaxDuty, motor.Id, motor.KvRpmPerV, c.PackCount, pack.Id, pack.CellsSeries)
+            : string.Format(ci, "{0} x {1} cannot deliver the hover power of motor {2} at any bus voltage (the pack would collapse)",
+                c.PackCount, pack.Id, motor.Id));
+        Add(RankRejectionKind.PackCutoff, string.Format(ci,
+            "on a full charge the loaded pack gives {0:0.0} V, below the cutoff {1:0.0} V", o.BusVoltageV, o.CutoffV));
+        Add(RankRejectionKind.MotorCurrent, string.Format(ci,
+            "hover needs {0:0.0} A in motor {1}, above its rated {2:0.0} A", o.MaxCurrentA, motor.Id, motor.MaxCurrentA));
+        Add(RankRejectionKind.MotorPower, string.Format(ci,
+            "hover needs {0:0} W into motor {1}, above its rated {2:0} W", o.MaxMotorPowerW, motor.Id, motor.MaxPowerW));
+        Add(RankRejectionKind.ControllerCurrent, string.Format(ci,
+            "hover needs {0:0.0} A phase current, above controller {1}'s continuous {2:0.0} A", o.MaxCurrentA, controller.Id, controller.ContinuousCurrentA));
+        Add(RankRejectionKind.PackCurrent, string.Format(ci,
+            "the packs deliver up to {0:0.0} A during the hover, above {1} x {2}'s continuous {3:0.0} A ({4:0.#} C)",
+            o.PeakPackCurrentA, c.PackCount, pack.Id, c.PackCount * pack.ContinuousCurrentA, pack.ContinuousC));
+        if (o.Has(RankRejectionKind.DragPeak))
+        {
+            int i = o.PeakStation;
+            var rotor = _rig.Stations[i].Rotor;
+            double flux = 1 + Motor.NdFeBFluxTempCoeffPerK * (_rig.AmbientC - 20.0);
+            double needA = motor.CurrentForTorqueA(_peakLoadTorqueNm[i], flux);
+            reasons.Add(new RankRejection(RankRejectionKind.DragPeak, string.Format(ci,
+                "on the landing gear ({0:0.0} mm) rotor {1} needs {2:0.00} N m at its drag peak ({3:0} rpm); motor {4} gets {5:0.00} N m there under controller {6}'s {7:0} A limit at {8:0.00} duty (it would need about {9:0} A)",
+                _rig.LandedGapM * 1000, rotor.Id, _peakLoadTorqueNm[i], _peaks[i].SpeedRpm, motor.Id, o.PeakMotorTorqueNm,
+                controller.Id, controller.BurstCurrentA, _rig.Limits.MaxDuty, needA)));
+        }
+        var cautions = new List<RankRejection>();
+        if (o.CautionNotReversible)
+        {
+            cautions.Add(new RankRejection(RankRejectionKind.ControllerNotReversible, string.Format(ci,
+                "controller {0} is not reversible: set each rotor's direction by the motor wiring (swap two phases); it cannot reverse-brake a spinning rotor when landing",
+                controller.Id)));
+        }
+        RankFigures? figures = null;
+        if (o.Trimmed)
+        {
+            double weight = o.MassKg * Units.StandardGravity;
+            double power = o.BusVoltageV * o.PackCurrentA;
+            figures = new RankFigures(
+                o.MassKg,
+                o.Speeds.ToArray(),
+                o.Currents.ToArray(),
+                double.IsFinite(o.NeededDuty) ? o.Duties.ToArray() : [],
+                o.BusVoltageV,
+                o.PackCurrentA,
+                power,
+                o.EddyPowers.Sum(),
+                power / weight,
+                o.RuntimeS,
+                o.HoverReached ? o.RuntimeLimit : "hover not reached",
+                o.PeakPackCurrentA,
+                o.HoverReached ? o.CurrentMargin : null,
+                o.PeakStation >= 0 ? o.PeakTorqueRatio - 1 : null);
+        }
+        return new RankEvaluation(c, motor.Id, controller.Id, pack.Id, figures, reasons, cautions);
+    }
+}

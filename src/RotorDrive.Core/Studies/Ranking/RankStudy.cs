@@ -1,0 +1,283 @@
+using RotorDrive.Core.Craft;
+using RotorDrive.Core.Drive;
+using RotorDrive.Core.Loads;
+
+namespace RotorDrive.Core.Studies.Ranking;
+
+/// <summary>Ranks every motor x controller x pack (x pack count) from a catalog for a rig: the same motor and controller
+/// at every station, the drivetrain's and packs' mass fed back into the craft, every rejection explained.</summary>
+/// <remarks>
+/// <para>Per combination: (1) static checks: the pack's cell count within the controller's range; a one-way controller
+/// is a caution (or a rejection with <see cref="RankOptions.RequireReversible"/>). (2) Trimmed hover at the design gap
+/// (<see cref="RankTrim"/>): per-station speeds such that total lift equals the weight, pitch and roll moments about the
+/// centre of gravity vanish and the rotors' reaction torques cancel in yaw; with the craft's mass and centre of gravity
+/// including this drivetrain and packs. At a fixed gap the speeds and shaft torques depend only on mass and centre of
+/// gravity, not on the motor, so the drivetrain enters after the trim through the first-order motor model (M. Drela,
+/// "First-Order DC Electric Motor Model", MIT, 2007): current I = Kv Q / phi + I0, back-EMF E = phi omega / Kv, and the
+/// averaged controller on the shared pack bus (V = Voc - R_bank I_pack, duty d = (I R_loop + E) / V), the same equations
+/// <see cref="DriveBus"/> solves. (3) Limits at hover: rotor rated speed, controller eRPM at the hover speed, duty
+/// against the team's limit on a full pack, motor current and power, controller continuous current, pack continuous
+/// current over the run. (4) Runtime: the pack is drawn down in equal charge steps over the usable capacity (midpoint
+/// rule in charge: dt = dQ / I_pack), re-solving the bus at each state of charge, until the usable capacity, the cutoff
+/// voltage or the duty limit ends it; temperatures stay at the rig's start values (no thermal drift: a full endurance
+/// simulation is the endurance command's job). (5) Spin-up through the drag peak: all rotors on the landing gear at their
+/// drag-peak speed at the landed gap, full allowed duty, the controller's current limit, the pack sagging under all of
+/// them (<see cref="DriveBus"/>); the motor torque must exceed the load torque there. At a fixed duty and current limit
+/// the motor's torque does not rise with speed while the load torque rises up to its peak, so passing the peak passes
+/// every lower speed too.</para>
+/// <para>Speed: the sweep runs over chunks of one motor each, in parallel; the trim of each combination is warm-started
+/// from the previous one in its chunk (chord Newton with the chunk's last Jacobian, same tolerance), and drag peaks are
+/// found once per station. Results are placed by index and reduced in index order, so they do not depend on the thread
+/// count. <see cref="EvaluateDirect"/> is the straightforward path (a rig built per combination, a fresh trim, drag peaks
+/// searched again, the bus through <see cref="DriveBus"/>, margins through <see cref="DriveMargins"/>); the tests check
+/// that both give the same ranking and figures.</para>
+/// <para>Temperatures: plate at the rig's start temperature, magnets and windings at ambient. Thread-safe after
+/// creation.</para>
+/// </remarks>
+public sealed partial class RankStudy
+{
+    private readonly Rig _rig;
+    private readonly PartsCatalog _catalog;
+    private readonly RankOptions _options;
+    private readonly RankWeights _weights;
+    private readonly RankTrim _trim;
+    private readonly int _maxPackCount;
+    private readonly CellCurve[] _packCurves;
+    private readonly double[][] _ocvGrid;
+    private readonly DragPeak[] _peaks;
+    private readonly double[] _peakLoadTorqueNm;
+    private readonly int[] _motorOrder;
+    private readonly int[] _controllerOrder;
+    private readonly int[] _packOrder;
+    private readonly int[] _controllersByMass;
+    private readonly int[] _packsByMass;
+
+    private RankStudy(Rig rig, PartsCatalog catalog, RankOptions options, IReadOnlyList<IRotorLoad> loads)
+    {
+        _rig = rig;
+        _catalog = catalog;
+        _options = options;
+        _weights = options.Weights ?? RankWeights.Default;
+        (double lightest, double heaviest) = MassRange(rig, catalog, options.MaxPackCount ?? rig.Packs?.Count ?? 1);
+        _trim = new RankTrim(rig, loads, lightest, heaviest);
+        Loads = loads;
+        _maxPackCount = options.MaxPackCount ?? rig.Packs?.Count ?? 1;
+        _packCurves = new CellCurve[catalog.Packs.Count];
+        _ocvGrid = new double[catalog.Packs.Count][];
+        for (int p = 0; p < catalog.Packs.Count; p++)
+        {
+            var pack = catalog.Packs[p];
+            _packCurves[p] = catalog.CurveFor(pack.Chemistry)
+                ?? throw new ArgumentException($"The catalog has no open-circuit voltage curve for pack {pack.Id}'s chemistry '{pack.Chemistry}'.", nameof(catalog));
+            _ocvGrid[p] = OcvGrid(_packCurves[p]);
+        }
+        int n = rig.Stations.Count;
+        _peaks = new DragPeak[n];
+        _peakLoadTorqueNm = new double[n];
+        for (int i = 0; i < n; i++)
+        {
+            (_peaks[i], _peakLoadTorqueNm[i]) = FindPeak(i);
+        }
+        _motorOrder = OrdinalRanks(catalog.Motors.Select(m => m.Id).ToArray());
+        _controllerOrder = OrdinalRanks(catalog.Controllers.Select(c => c.Id).ToArray());
+        _packOrder = OrdinalRanks(catalog.Packs.Select(p => p.Id).ToArray());
+        _controllersByMass = Enumerable.Range(0, catalog.Controllers.Count).OrderBy(i => catalog.Controllers[i].MassKg).ThenBy(i => i).ToArray();
+        _packsByMass = Enumerable.Range(0, catalog.Packs.Count).OrderBy(i => catalog.Packs[i].MassKg).ThenBy(i => i).ToArray();
+    }
+
+    /// <summary>Prepares a ranking: builds one load table per station rotor (or takes the given loads), finds each
+    /// station's drag peak at the landed gap, and reads the packs' voltage curves.</summary>
+    /// <param name="rig">The rig (stations, body, gaps, limits); its assigned parts are only used to show their rank.</param>
+    /// <param name="catalog">The parts to combine.</param>
+    /// <param name="options">Settings, or null for <see cref="RankOptions.Default"/>.</param>
+    /// <param name="stationLoads">One rotor load per station, or null to build the load tables analyses use
+    /// (<see cref="RotorLoadTable"/> over <see cref="LoadTableRange.ForRig"/>, one per distinct rotor design).</param>
+    /// <returns>The prepared study.</returns>
+    /// <exception cref="ArgumentNullException">The rig or the catalog is null.</exception>
+    /// <exception cref="ArgumentException">The loads do not match the stations, or a pack's chemistry has no curve.</exception>
+    /// <exception cref="ArgumentOutOfRangeException">An option is out of range.</exception>
+    public static RankStudy Create(Rig rig, PartsCatalog catalog, RankOptions? options = null, IReadOnlyList<IRotorLoad>? stationLoads = null)
+    {
+        Preconditions.NotNull(rig, nameof(rig));
+        Preconditions.NotNull(catalog, nameof(catalog));
+        options ??= RankOptions.Default;
+        Preconditions.InRange(options.Top, 1, 1000, nameof(options.Top));
+        Preconditions.InRange(options.RuntimeSteps, 4, 4096, nameof(options.RuntimeSteps));
+        Preconditions.InRange(options.LiftoffTimeStepS, 1e-5, 1.0, nameof(options.LiftoffTimeStepS));
+        Preconditions.InRange(options.LiftoffMaxTimeS, 0.1, 3600, nameof(options.LiftoffMaxTimeS));
+        if (options.MaxPackCount is { } maxCount)
+        {
+            Preconditions.InRange(maxCount, 1, 64, nameof(options.MaxPackCount));
+        }
+        if (options.MaxDegreeOfParallelism == 0 || options.MaxDegreeOfParallelism < -1)
+        {
+            throw new ArgumentOutOfRangeException(nameof(options), options.MaxDegreeOfParallelism, "MaxDegreeOfParallelism must be -1 (all cores) or at least 1.");
+        }
+        var weights = options.Weights ?? RankWeights.Default;
+        Preconditions.NonNegative(weights.Runtime, "runtime weight");
+        Preconditions.NonNegative(weights.Mass, "mass weight");
+        Preconditions.NonNegative(weights.Margin, "margin weight");
+        Preconditions.Positive(weights.Total, "sum of the weights");
+        if (rig.Stations.Count == 0)
+        {
+            throw new ArgumentException("The rig has no stations.", nameof(rig));
+        }
+        IReadOnlyList<IRotorLoad> loads;
+        if (stationLoads is null)
+        {
+            var tables = new Dictionary<Magnetics.RotorDesign, IRotorLoad>();
+            var list = new IRotorLoad[rig.Stations.Count];
+            for (int i = 0; i < list.Length; i++)
+            {
+                var rotor = rig.Stations[i].Rotor;
+                if (!tables.TryGetValue(rotor, out var load))
+                {
+                    load = RotorLoadTable.Build(rotor, rig.Plate, LoadTableRange.ForRig(rig, rotor));
+                    tables[rotor] = load;
+                }
+                list[i] = load;
+            }
+            loads = list;
+        }
+        else
+        {
+            if (stationLoads.Count != rig.Stations.Count || stationLoads.Any(l => l is null))
+            {
+                throw new ArgumentException($"Give one rotor load per station ({rig.Stations.Count}); got {stationLoads.Count}.", nameof(stationLoads));
+            }
+            loads = stationLoads;
+        }
+        return new RankStudy(rig, catalog, options, loads);
+    }
+
+    /// <summary>The rig.</summary>
+    public Rig Rig => _rig;
+
+    /// <summary>The catalog.</summary>
+    public PartsCatalog Catalog => _catalog;
+
+    /// <summary>The settings.</summary>
+    public RankOptions Options => _options;
+
+    /// <summary>The rotor load of each station.</summary>
+    public IReadOnlyList<IRotorLoad> Loads { get; }
+
+    /// <summary>The drag peak of each station at the landed gap (plate at its start temperature, magnets at ambient).</summary>
+    public IReadOnlyList<DragPeak> DragPeaks => _peaks;
+
+    /// <summary>Largest pack count tried.</summary>
+    public int MaxPackCount => _maxPackCount;
+
+    /// <summary>Number of combinations: motors x controllers x packs x pack counts.</summary>
+    public long CombinationCount => (long)_catalog.Motors.Count * _catalog.Controllers.Count * _catalog.Packs.Count * _maxPackCount;
+
+    /// <summary>The rig's own drivetrain as a candidate: every station with the same motor and controller, and a pack
+    /// named; null otherwise (or when its pack count is above <see cref="MaxPackCount"/>).</summary>
+    public RankCandidate? AssignedCandidate
+    {
+        get
+        {
+            var first = _rig.Stations[0];
+            if (first.Motor is null || first.Controller is null || _rig.Packs is null || _rig.Packs.Count > _maxPackCount)
+            {
+                return null;
+            }
+            if (_rig.Stations.Any(s => !Equals(s.Motor, first.Motor) || !Equals(s.Controller, first.Controller)))
+            {
+                return null;
+            }
+            int m = IndexOf(_catalog.Motors, first.Motor);
+            int c = IndexOf(_catalog.Controllers, first.Controller);
+            int p = IndexOf(_catalog.Packs, _rig.Packs.Pack);
+            return m < 0 || c < 0 || p < 0 ? null : new RankCandidate(m, c, p, _rig.Packs.Count);
+        }
+    }
+
+    private static int IndexOf<T>(IReadOnlyList<T> list, T item)
+    {
+        for (int i = 0; i < list.Count; i++)
+        {
+            if (Equals(list[i], item))
+            {
+                return i;
+            }
+        }
+        return -1;
+    }
+
+    /// <summary>Flat index of a candidate in the sweep (motor outermost, then controller, pack, pack count).</summary>
+    /// <param name="candidate">The candidate.</param>
+    public long IndexOf(RankCandidate candidate)
+        => (((long)candidate.MotorIndex * _catalog.Controllers.Count + candidate.ControllerIndex) * _catalog.Packs.Count + candidate.PackIndex) * _maxPackCount + candidate.PackCount - 1;
+
+    /// <summary>The candidate at a flat index of the sweep.</summary>
+    /// <param name="index">0 to <see cref="CombinationCount"/> - 1.</param>
+    public RankCandidate CandidateAt(long index)
+    {
+        int count = (int)(index % _maxPackCount) + 1;
+        index /= _maxPackCount;
+        int p = (int)(index % _catalog.Packs.Count);
+        index /= _catalog.Packs.Count;
+        int c = (int)(index % _catalog.Controllers.Count);
+        int m = (int)(index / _catalog.Controllers.Count);
+        return new RankCandidate(m, c, p, count);
+    }
+
+    private void CheckCandidate(RankCandidate c)
+    {
+        Preconditions.InRange(c.MotorIndex, 0, _catalog.Motors.Count - 1, "motor index");
+        Preconditions.InRange(c.ControllerIndex, 0, _catalog.Controllers.Count - 1, "controller index");
+        Preconditions.InRange(c.PackIndex, 0, _catalog.Packs.Count - 1, "pack index");
+        Preconditions.InRange(c.PackCount, 1, 64, "pack count");
+    }
+
+    // States of charge of the runtime steps: the midpoint and the end of each of K equal charge steps.
+    private double SocAt(int half) => 1.0 - half * 0.5 * _rig.Limits.UsableCapacityFraction / _options.RuntimeSteps;
+
+    private double[] OcvGrid(CellCurve curve)
+    {
+        int halves = 2 * _options.RuntimeSteps + 1;
+        var grid = new double[halves];
+        for (int h = 0; h < halves; h++)
+        {
+            grid[h] = curve.OcvAt(Math.Max(0.0, SocAt(h)));
+        }
+        return grid;
+    }
+
+    private (DragPeak Peak, double LoadTorqueNm) FindPeak(int station)
+    {
+        var rotor = _rig.Stations[station].Rotor;
+        var load = Loads[station];
+        var peak = DragPeakFinder.Find(load, _rig.LandedGapM, _rig.PlateTemperatureC, _rig.AmbientC, rotor.MaxSpeedRadPerS);
+        double torque = peak.Status == DragPeakStatus.NoDrag
+            ? 0.0
+            : load.Evaluate(peak.SpeedRadPerS, _rig.LandedGapM, _rig.PlateTemperatureC, _rig.AmbientC).TotalTorqueNm;
+        return (peak, torque);
+    }
+
+    // Lightest and heaviest craft any combination can make (the trim's reference table spans them).
+    private static (double Lightest, double Heaviest) MassRange(Rig rig, PartsCatalog catalog, int maxPackCount)
+    {
+        double fixedKg = rig.Body.EmptyMassKg + rig.Body.PayloadKg + rig.Stations.Sum(s => s.Rotor.RotorMassKg);
+        int n = rig.Stations.Count;
+        double motorMin = catalog.Motors.Count == 0 ? 0 : catalog.Motors.Min(m => m.MassKg);
+        double motorMax = catalog.Motors.Count == 0 ? 0 : catalog.Motors.Max(m => m.MassKg);
+        double controllerMin = catalog.Controllers.Count == 0 ? 0 : catalog.Controllers.Min(c => c.MassKg);
+        double controllerMax = catalog.Controllers.Count == 0 ? 0 : catalog.Controllers.Max(c => c.MassKg);
+        double packMin = catalog.Packs.Count == 0 ? 0 : catalog.Packs.Min(p => p.MassKg);
+        double packMax = catalog.Packs.Count == 0 ? 0 : catalog.Packs.Max(p => p.MassKg);
+        return (fixedKg + n * (motorMin + controllerMin) + packMin, fixedKg + n * (motorMax + controllerMax) + maxPackCount * packMax);
+    }
+
+    private static int[] OrdinalRanks(string[] ids)
+    {
+        var order = Enumerable.Range(0, ids.Length).OrderBy(i => ids[i], StringComparer.Ordinal).ThenBy(i => i).ToArray();
+        var ranks = new int[ids.Length];
+        for (int r = 0; r < order.Length; r++)
+        {
+            ranks[order[r]] = r;
+        }
+        return ranks;
+    }
+}

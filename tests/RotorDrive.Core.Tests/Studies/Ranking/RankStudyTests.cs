@@ -1,0 +1,240 @@
+using RotorDrive.Core.Craft;
+using RotorDrive.Core.Drive;
+using RotorDrive.Core.Loads;
+using RotorDrive.Core.Studies.Ranking;
+using RotorDrive.Core.Tests.Magnetics;
+using Xunit;
+using static RotorDrive.Core.Tests.Studies.Ranking.RankingFixtures;
+
+namespace RotorDrive.Core.Tests.Studies.Ranking;
+
+public class RankStudyTests
+{
+    // Thin-sheet load (Reitz 1970) with L_max 100 N, Q_peak 2 N m at omega_c 200 rad/s, k 30 /m, referenced to the design gap.
+    private static readonly SyntheticLoad HandLoad = new(100, 2, 200, 30, DesignGapM);
+
+    private static (RankStudy Study, RankResult Result) HandRanking(RankObjective objective, params Motor[] motors)
+    {
+        var pack = Pack("flat-12s", "flat");
+        var rig = SquareRig(20, 0);
+        var catalog = Catalog(motors, [Controller("esc-60", 60, 80)], [pack]);
+        var study = RankStudy.Create(rig, catalog, new RankOptions(Objective: objective, MaxPackCount: 1), FourOf(HandLoad));
+        return (study, study.Run());
+    }
+
+    [Fact]
+    public void ThreeMotorCatalog_RanksByCurrentMargin_AsWorkedByHand()
+    {
+        // Worked by hand from the first-order motor model (M. Drela, "First-Order DC Electric Motor Model", MIT, 2007) and
+        // the thin-sheet load (Reitz 1970). Mass: 20 kg body + 4 x 1 kg rotors + 4 x (0.3 + 0.05) kg drivetrain + 1 kg pack
+        // = 26.4 kg; W = 258.8956 N (g = 9.80665, ISO 80000-3); square rig, centre of gravity in the middle, alternating
+        // spins: each station lifts W/4 = 64.7239 N, so s^2 = L / (L_max - L) = 1.834780, s = 1.354540, and the shaft torque
+        // is Q = 2 Q_peak s / (1 + s^2) = 1.911317 N m at omega = 200 s = 270.908 rad/s.
+        // Motor current I = Kv Q + I0 (Kv in rad/s/V, I0 = 1 A):
+        //   A: 100 rpm/V -> I = 21.0153 A, margin to 40 A: 1 - 21.0153/40 = 0.474618 (motor current binds: controller 60 A)
+        //   B:  80 rpm/V -> I = 17.0122 A, margin to 25 A: 0.319512
+        //   C: 120 rpm/V -> I = 25.0183 A > 24 A: rejected for motor current.
+        var (study, result) = HandRanking(RankObjective.Margin, Motor("A", 100, 40), Motor("B", 80, 25), Motor("C", 120, 24));
+
+        Assert.Equal(3, result.TotalCombinations);
+        Assert.Equal(["A", "B"], result.Ordered.Select(c => study.Catalog.Motors[c.MotorIndex].Id));
+        var a = result.Top[0].Evaluation.Figures!;
+        var b = result.Top[1].Evaluation.Figures!;
+        RelAssert.Close(26.4, a.TotalMassKg, 1e-12, "mass");
+        RelAssert.Close(270.90808, a.StationSpeedsRadPerS[0], 1e-6, "hover speed");
+        RelAssert.Close(21.015261, a.MaxMotorCurrentA, 1e-6, "current A");
+        RelAssert.Close(17.012209, b.MaxMotorCurrentA, 1e-6, "current B");
+        RelAssert.Close(0.4746185, a.CurrentMargin!.Value, 1e-6, "margin A");
+        RelAssert.Close(0.3195116, b.CurrentMargin!.Value, 1e-6, "margin B");
+        var rejected = study.Evaluate(new RankCandidate(2, 0, 0, 1));
+        Assert.Equal([RankRejectionKind.MotorCurrent], rejected.Rejections.Select(r => r.Kind));
+        Assert.Contains("25.0 A in motor C, above its rated 24.0 A", rejected.Rejections[0].Message);
+        Assert.Equal(1, result.RejectionCounts.Single(c => c.Kind == RankRejectionKind.MotorCurrent).Count);
+    }
+
+    [Fact]
+    public void Runtime_OnAFlatCellCurve_IsUsableCapacityOverPackCurrent()
+    {
+        // With the open-circuit voltage flat in state of charge the bus current is constant, so the hover lasts usable
+        // capacity / current (the endurance of a constant-current draw; C-rate definition, IEC 61434).
+        var (_, result) = HandRanking(RankObjective.Runtime, Motor("A", 100, 40), Motor("B", 80, 25));
+        foreach (var entry in result.Top)
+        {
+            var f = entry.Evaluation.Figures!;
+            RelAssert.Close(0.8 * 10 * 3600 / f.PackCurrentA, f.RuntimeS, 1e-12, "runtime");
+            Assert.Equal("usable capacity", f.RuntimeLimit);
+            // Kirchhoff on the bus: V = Voc - R_pack I (12 cells x 3.7 V, 12 x 2 mOhm).
+            RelAssert.Close(44.4 - 0.024 * f.PackCurrentA, f.BusVoltageV, 1e-12, "bus voltage");
+        }
+        Assert.True(result.Top[0].Evaluation.Figures!.RuntimeS >= result.Top[1].Evaluation.Figures!.RuntimeS);
+    }
+
+    [Fact]
+    public void MotorThatCannotPassTheDragPeak_IsRejectedWithThatReason_AndPassesWithMoreCurrent()
+    {
+        // Landed gap 6.5 mm: the drag peak rises by e^(2 k 3.5 mm) = e^0.21 to 2.4674 N m at omega_c. Under a 24 A limit the
+        // 100 rpm/V motor gives Kt (I - I0) = 23 / 10.472 = 2.1963 N m < 2.4674 N m (Drela 2007): stuck. With 30 A:
+        // 29 / 10.472 = 2.7693 N m: it passes. The hover itself (21.0 A) fits the 22 A continuous rating.
+        var motor = Motor("A", 100, 40);
+        var pack = Pack("flat-12s", "flat");
+        var rig = SquareRig(20, 0);
+        var catalog = Catalog([motor], [Controller("tight", 22, 24), Controller("roomy", 22, 30)], [pack]);
+        var study = RankStudy.Create(rig, catalog, new RankOptions(MaxPackCount: 1), FourOf(HandLoad));
+
+        var stuck = study.Evaluate(new RankCandidate(0, 0, 0, 1));
+        var passes = study.Evaluate(new RankCandidate(0, 1, 0, 1));
+
+        Assert.Equal([RankRejectionKind.DragPeak], stuck.Rejections.Select(r => r.Kind));
+        Assert.Contains("drag peak", stuck.Rejections[0].Message);
+        RelAssert.Close(2.1963382 / 2.4673561 - 1, stuck.Figures!.DragPeakTorqueMargin!.Value, 1e-5, "stuck margin");
+        Assert.True(passes.Accepted);
+        RelAssert.Close(2.7692960 / 2.4673561 - 1, passes.Figures!.DragPeakTorqueMargin!.Value, 1e-5, "passing margin");
+    }
+
+    [Fact]
+    public void CellsOutsideTheControllerRange_AreRejected_AndOneWayControllersOnlyCautioned()
+    {
+        var catalog = Catalog([Motor("A", 100, 40)], [Controller("low", 60, 80, minCells: 2, maxCells: 6), Controller("oneway", 60, 80, reversible: false)], [Pack("flat-12s", "flat")]);
+        var study = RankStudy.Create(SquareRig(20, 0), catalog, new RankOptions(MaxPackCount: 1), FourOf(HandLoad));
+        var cells = study.Evaluate(new RankCandidate(0, 0, 0, 1));
+        var oneWay = study.Evaluate(new RankCandidate(0, 1, 0, 1));
+        Assert.Equal([RankRejectionKind.CellsOutOfControllerRange], cells.Rejections.Select(r => r.Kind));
+        Assert.Contains("12 cells in series; controller low is rated for 2 to 6", cells.Rejections[0].Message);
+        Assert.True(oneWay.Accepted);
+        Assert.Single(oneWay.Cautions);
+
+        var strict = RankStudy.Create(SquareRig(20, 0), catalog, new RankOptions(MaxPackCount: 1, RequireReversible: true), FourOf(HandLoad));
+        Assert.Contains(RankRejectionKind.ControllerNotReversible, strict.Evaluate(new RankCandidate(0, 1, 0, 1)).Rejections.Select(r => r.Kind));
+    }
+
+    [Fact]
+    public void FastSweep_EqualsTheStraightforwardEvaluation_OfEveryCombination()
+    {
+        // Off-centre centre of gravity (trim must shift lift between stations) and a sloped cell curve (the run ends on a limit
+        // for some), a catalog with good, marginal and failing parts.
+        var (study, result) = MixedStudy(threads: -1);
+        var byIndex = result.Ordered.Select((c, i) => (c, i)).ToDictionary(t => study.IndexOf(t.c), t => t.i);
+        for (long index = 0; index < study.CombinationCount; index++)
+        {
+            var candidate = study.CandidateAt(index);
+            var direct = study.EvaluateDirect(candidate);
+            var fast = study.Evaluate(candidate);
+            Assert.Equal(direct.Rejections.Select(r => r.Kind), fast.Rejections.Select(r => r.Kind));
+            Assert.Equal(direct.Accepted, byIndex.ContainsKey(index));
+            if (direct.Accepted)
+            {
+                var d = direct.Figures!;
+                var f = fast.Figures!;
+                RelAssert.Close(d.TotalMassKg, f.TotalMassKg, 1e-12, "mass");
+                RelAssert.Close(d.RuntimeS, f.RuntimeS, 1e-8, "runtime");
+                RelAssert.Close(d.CurrentMargin!.Value, f.CurrentMargin!.Value, 1e-7, "margin");
+                RelAssert.Close(d.PackCurrentA, f.PackCurrentA, 1e-8, "pack current");
+                RelAssert.Close(d.BusVoltageV, f.BusVoltageV, 1e-10, "bus voltage");
+                for (int i = 0; i < d.StationSpeedsRadPerS.Count; i++)
+                {
+                    RelAssert.Close(d.StationSpeedsRadPerS[i], f.StationSpeedsRadPerS[i], 1e-9, "speed");
+                    RelAssert.Close(d.StationMotorCurrentsA[i], f.StationMotorCurrentsA[i], 1e-8, "current");
+                    RelAssert.Close(d.StationDuties[i], f.StationDuties[i], 1e-8, "duty");
+                }
+                Assert.Equal(d.RuntimeLimit, f.RuntimeLimit);
+            }
+        }
+        Assert.True(result.AcceptedCount > 3 && result.RejectedCount > 3, "the catalog should hold both accepted and rejected combinations");
+        // The ranking equals sorting the straightforward results by runtime (ties by ids).
+        var expected = Enumerable.Range(0, (int)study.CombinationCount).Select(i => study.CandidateAt(i))
+            .Select(c => study.EvaluateDirect(c)).Where(e => e.Accepted)
+            .OrderByDescending(e => e.Figures!.RuntimeS).ThenBy(e => e.MotorId, StringComparer.Ordinal).ThenBy(e => e.ControllerId, StringComparer.Ordinal)
+            .ThenBy(e => e.PackId, StringComparer.Ordinal).ThenBy(e => e.Candidate.PackCount).Select(e => e.Candidate).ToList();
+        Assert.Equal(expected, result.Ordered);
+    }
+
+    [Fact]
+    public void Results_DoNotDependOnTheThreadCount()
+    {
+        var (_, one) = MixedStudy(threads: 1);
+        var (_, two) = MixedStudy(threads: 2);
+        var (_, all) = MixedStudy(threads: -1);
+        foreach (var other in new[] { two, all })
+        {
+            Assert.Equal(one.Ordered, other.Ordered);
+            Assert.Equal(one.Scores, other.Scores);
+            Assert.Equal(one.ParetoRanks, other.ParetoRanks);
+            Assert.Equal(one.RejectionCounts, other.RejectionCounts);
+        }
+    }
+
+    [Fact]
+    public void ParetoSet_EqualsBruteForceDominance()
+    {
+        // Definition of Pareto optimality (V. Pareto; e.g. K. Miettinen, Nonlinear Multiobjective Optimization, 1999):
+        // not dominated by any other point in every criterion with one strict.
+        var (study, result) = MixedStudy(threads: -1);
+        var figures = result.Ordered.Select(c => study.Evaluate(c).Figures!).ToList();
+        var expected = new List<int>();
+        for (int i = 0; i < figures.Count; i++)
+        {
+            bool dominated = false;
+            for (int j = 0; j < figures.Count && !dominated; j++)
+            {
+                var a = figures[j];
+                var b = figures[i];
+                bool noWorse = a.RuntimeS >= b.RuntimeS && a.TotalMassKg <= b.TotalMassKg && a.CurrentMargin >= b.CurrentMargin;
+                bool better = a.RuntimeS > b.RuntimeS || a.TotalMassKg < b.TotalMassKg || a.CurrentMargin > b.CurrentMargin;
+                dominated = j != i && noWorse && better;
+            }
+            if (!dominated)
+            {
+                expected.Add(i + 1);
+            }
+        }
+        Assert.Equal(expected, result.ParetoRanks);
+    }
+
+    [Fact]
+    public void Objectives_OrderAsAsked()
+    {
+        foreach (var objective in Enum.GetValues<RankObjective>())
+        {
+            var (study, result) = MixedStudy(threads: -1, objective);
+            var key = result.Ordered.Select((c, i) => objective switch
+            {
+                RankObjective.Runtime => -study.Evaluate(c).Figures!.RuntimeS,
+                RankObjective.Mass => study.Evaluate(c).Figures!.TotalMassKg,
+                RankObjective.Margin => -study.Evaluate(c).Figures!.CurrentMargin!.Value,
+                _ => -result.Scores[i],
+            }).ToList();
+            for (int i = 1; i < key.Count; i++)
+            {
+                Assert.True(key[i] >= key[i - 1] - 1e-9 * Math.Abs(key[i - 1]), $"{objective}: entry {i} out of order");
+            }
+            Assert.All(result.Scores, s => Assert.InRange(s, 0.0, 1.0));
+        }
+    }
+
+    internal static (RankStudy Study, RankResult Result) MixedStudy(int threads, RankObjective objective = RankObjective.Runtime)
+    {
+        var load = new SyntheticLoad(100, 2, 200, 30, DesignGapM);
+        var rig = SquareRig(18, 4, cgXM: 0.04, cgYM: -0.03);
+        var study = RankStudy.Create(rig, MixedCatalog(), new RankOptions(Objective: objective, MaxPackCount: 2, MaxDegreeOfParallelism: threads), FourOf(load));
+        return (study, study.Run());
+    }
+
+    internal static PartsCatalog MixedCatalog()
+    {
+        var motors = new[]
+        {
+            Motor("m-kv60", 60, 30, 0.35), Motor("m-kv80", 80, 25, 0.30), Motor("m-kv100", 100, 40, 0.32),
+            Motor("m-kv120", 120, 28, 0.28), Motor("m-kv150", 150, 45, 0.25, resistanceOhm: 0.03),
+        };
+        var controllers = new[]
+        {
+            Controller("c-30", 30, 40), Controller("c-22", 22, 24), Controller("c-60-nr", 60, 80, reversible: false, massKg: 0.08),
+            Controller("c-6s", 60, 80, minCells: 3, maxCells: 6),
+        };
+        var packs = new[]
+        {
+            Pack("p12-sloped", "sloped", 12, 8, 1.1, 25), Pack("p10-sloped", "sloped", 10, 12, 1.3, 10), Pack("p6-flat", "flat", 6, 5, 0.5, 30),
+        };
+        return Catalog(motors, controllers, packs);
+    }
+}
