@@ -17,6 +17,7 @@ public static class CliApp
         var root = new RootCommand("RotorDrive: drivetrain choice and analysis for eddy-current levitation rigs.");
         root.Subcommands.Add(CheckCommand.Create());
         root.Subcommands.Add(LoadCommand.Create());
+        root.Subcommands.Add(StressCommand.Create());
         return root;
     }
 
