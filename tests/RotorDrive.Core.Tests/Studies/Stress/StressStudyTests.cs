@@ -151,3 +151,26 @@ public class StressStudyTests
         }
     }
 }
+
+public class StressThicknessTests
+{
+    [Fact]
+    public void ThicknessSpread_InterpolatedBetweenThreeTables_MatchesATableBuiltAtTheDrawnThickness()
+    {
+        // Three-point Lagrange interpolation in thickness (Abramowitz & Stegun 25.2.11) against a model whose nominal plate
+        // is the drawn thickness itself: the figures agree to the interpolation error. Near hover the lift saturates
+        // (d ln L / d ln omega is a few tenths), which multiplies a relative lift error several times in the trimmed speed.
+        var rig = StressRigs.Square;
+        var spread = StressTolerances.None.With(StressQuantity.PlateThickness, Tolerance.Normal(0.0004, ToleranceScale.Absolute, true));
+        var interpolated = new RigStressModel(rig, spread);
+        Assert.Equal(0.0012, interpolated.ThicknessStepM, 12);
+        double drawn = rig.Plate.ThicknessM + 0.00071;
+        var parts = StressSampler.Nominal(rig) with { PlateThicknessM = drawn };
+        var direct = new RigStressModel(rig with { Plate = rig.Plate with { ThicknessM = drawn } }, StressTolerances.None);
+        var a = interpolated.CreateEvaluator().Evaluate(parts, recordTrace: false);
+        var b = direct.CreateEvaluator().Evaluate(parts, recordTrace: false);
+        Magnetics.RelAssert.Close(b.HoverSpeedRpm!.Value, a.HoverSpeedRpm!.Value, 1e-3, "hover speed");
+        Magnetics.RelAssert.Close(b.LiftoffTimeS!.Value, a.LiftoffTimeS!.Value, 1e-3, "lift-off time");
+        Magnetics.RelAssert.Close(b.HoverCurrentA!.Value, a.HoverCurrentA!.Value, 1e-3, "hover current");
+    }
+}
