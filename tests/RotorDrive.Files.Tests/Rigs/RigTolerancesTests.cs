@@ -175,6 +175,6 @@ public class RigTolerancesTests
     {
         var loaded = RigLoader.Load(RepoPaths.DemoRig);
         Assert.True(loaded.IsClean);
-        Assert.Equal(ToleranceShape.Normal, loaded.Tolerances.Of(StressQuantity.ControllerCurrentLimit).Shape);
+        Assert.Equal(ToleranceShape.Uniform, loaded.Tolerances.Of(StressQuantity.ControllerCurrentLimit).Shape);
     }
 }
