@@ -18,6 +18,7 @@ public static class CliApp
         root.Subcommands.Add(CheckCommand.Create());
         root.Subcommands.Add(LoadCommand.Create());
         root.Subcommands.Add(StressCommand.Create());
+        root.Subcommands.Add(OperateCommand.Create());
         return root;
     }
 

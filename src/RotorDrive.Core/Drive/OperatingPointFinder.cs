@@ -203,8 +203,9 @@ public static class OperatingPointFinder
             return;
         }
 
-        Span<Root> roots = stackalloc Root[count];
+        var found = new OperatingPoint[count];
         Func<double, double> g = balance.Normalized;
+        double h = options.SlopeStepRelative * top;
         for (int k = 0; k < count; k++)
         {
             var b = brackets[k];
@@ -212,21 +213,21 @@ public static class OperatingPointFinder
             double x = Brent.TryFindRoot(g, b.Lo / top, b.Hi / top, options.RelativeAccuracy, options.MaxIterations, out double root)
                 ? root
                 : FalsePosition(b) / top;
-            roots[k] = new Root(x * top, Positive(b.FLo));
+            // Positive below the crossing means the net torque turns decelerating as speed rises: stable.
+            found[k] = balance.Detail(x * top, EquilibriumKind.Crossing, stable: Positive(b.FLo), slopeStep: h);
         }
-        roots.Sort(static (p, q) => p.Speed.CompareTo(q.Speed));
+        Array.Sort(found, static (p, q) => p.SpeedRadPerS.CompareTo(q.SpeedRadPerS));
         double merge = 10 * options.RelativeAccuracy * top;
-        double h = options.SlopeStepRelative * top;
         for (int k = 0; k < count; k++)
         {
-            var (speed, stable) = roots[k];
             // Two crossings at one speed are a tangency: stable from one side only, so not stable.
-            if (k + 1 < count && roots[k + 1].Speed - speed <= merge)
+            if (k + 1 < count && found[k + 1].SpeedRadPerS - found[k].SpeedRadPerS <= merge)
             {
-                stable = false;
+                points.Add(found[k] with { Stable = false });
                 k++;
+                continue;
             }
-            points.Add(balance.Detail(speed, EquilibriumKind.Crossing, stable, slopeStep: h));
+            points.Add(found[k]);
         }
     }
 
@@ -290,7 +291,6 @@ public static class OperatingPointFinder
 
     private readonly record struct Bracket(double Lo, double FLo, double Hi, double FHi);
 
-    private readonly record struct Root(double Speed, bool Stable);
 
     // The torque balance of one rotor at one command; counts its evaluations and caches Brent's two starting ends.
     private sealed class TorqueBalance(StationDrive drive, OperatingConditions conditions, BusSource source)
@@ -300,12 +300,21 @@ public static class OperatingPointFinder
         private DriveCommand _command;
         private double _x1 = double.NaN, _g1, _x2 = double.NaN, _g2;
 
+        // The last two evaluations: Brent's returned root is usually the point it evaluated last, and the one before lies
+        // just across the root, so their secant is the stability slope at no extra cost.
+        private double _lastSpeed = double.NaN, _lastF, _previousSpeed = double.NaN, _previousF;
+        private BusSolution _lastBus;
+        private DrivePoint _lastPoint;
+        private LoadPoint _lastLoad;
+
         public DriveCommand Command
         {
             get => _command;
             set
             {
                 _command = value;
+                _lastSpeed = double.NaN;
+                _previousSpeed = double.NaN;
                 _station = DriveStation.Prepare(new DriveInput(drive.Drivetrain, value, 0, conditions.WindingTempC, conditions.MotorMagnetTempC, conditions.Braking));
             }
         }
@@ -337,8 +346,12 @@ public static class OperatingPointFinder
         {
             Evaluations++;
             _station.SetSpeed(speed);
-            DriveBus.SolveSingle(source, ref _station, out var point, double.NaN, DriveBusOptions.Default);
-            return point.TorqueNm - LoadAt(speed).TotalTorqueNm;
+            (_previousSpeed, _previousF) = (_lastSpeed, _lastF);
+            _lastBus = DriveBus.SolveSingle(source, ref _station, out _lastPoint, double.NaN, DriveBusOptions.Default);
+            _lastLoad = LoadAt(speed);
+            _lastSpeed = speed;
+            _lastF = _lastPoint.TorqueNm - _lastLoad.TotalTorqueNm;
+            return _lastF;
         }
 
         public void Cache(double x1, double g1, double x2, double g2)
@@ -365,14 +378,20 @@ public static class OperatingPointFinder
         // The full record of an equilibrium; with a slope step, also the forward-difference stability slope.
         public OperatingPoint Detail(double speed, EquilibriumKind kind, bool stable, double slopeStep = 0)
         {
-            Evaluations++;
-            _station.SetSpeed(speed);
-            var bus = DriveBus.SolveSingle(source, ref _station, out var point, double.NaN, DriveBusOptions.Default);
-            var load = LoadAt(speed);
+            if (speed != _lastSpeed)
+            {
+                F(speed);
+            }
+            var (bus, point, load) = (_lastBus, _lastPoint, _lastLoad);
             double? slope = null;
             if (slopeStep > 0)
             {
-                slope = (F(speed + slopeStep) - (point.TorqueNm - load.TotalTorqueNm)) / slopeStep;
+                double f0 = _lastF, dx = _previousSpeed - speed;
+                // The secant through Brent's last two points when they are close but not at rounding distance; else a
+                // forward difference.
+                slope = Math.Abs(dx) >= 1e-5 * slopeStep && Math.Abs(dx) <= 1e3 * slopeStep
+                    ? (_previousF - f0) / dx
+                    : (F(speed + slopeStep) - f0) / slopeStep;
             }
             var margins = new LimitMargin[DriveMargins.StationCount + DriveMargins.PackCount + 1];
             DriveMargins.FillStation(margins, drive.Drivetrain, drive.Rotor, point);

@@ -3,7 +3,7 @@ namespace RotorDrive.Core.Drive;
 /// <summary>Numerical settings of the operating-point search.</summary>
 /// <param name="ScanPoints">Speeds sampled from rest to the search top to bracket crossings, at least 4, spaced as
 /// top x (i / (n - 1))^2 so that low speeds (drag peak, stall) are sampled finely; the current-limit corner of the
-/// motor curve is added. Default 16.</param>
+/// motor curve is added. Default 12.</param>
 /// <param name="RelativeAccuracy">Brent accuracy on the speed (relative to the search top) and on the torque balance
 /// (relative to the largest torque difference sampled). Default 1e-10.</param>
 /// <param name="MaxIterations">Brent iteration limit per crossing. Default 100.</param>
@@ -12,7 +12,7 @@ namespace RotorDrive.Core.Drive;
 /// <param name="SlopeStepRelative">Speed step of the stability slope's forward difference, relative to the search top.
 /// Default 1e-6.</param>
 public sealed record OperatingPointOptions(
-    int ScanPoints = 16,
+    int ScanPoints = 12,
     double RelativeAccuracy = 1e-10,
     int MaxIterations = 100,
     int TangencyProbes = 4,

@@ -1,0 +1,200 @@
+using System.Globalization;
+using System.Text.Json;
+using RotorDrive.Core;
+using RotorDrive.Core.Craft;
+using RotorDrive.Core.Drive;
+using RotorDrive.Core.Loads;
+using RotorDrive.Core.Magnetics;
+using Xunit;
+
+namespace RotorDrive.Cli.Tests;
+
+public sealed class OperateCommandTests : IDisposable
+{
+    private readonly string _folder = Path.Combine(Path.GetTempPath(), "rotordrive-operate-" + Guid.NewGuid().ToString("N"));
+    private readonly string _rig;
+
+    public OperateCommandTests()
+    {
+        Directory.CreateDirectory(_folder);
+        _rig = OperateRigFiles.Write(_folder);
+    }
+
+    public void Dispose() => Directory.Delete(_folder, recursive: true);
+
+    // The command reports the Core finder's equilibria (its physics is tested against its sources in RotorDrive.Core.Tests):
+    // the station's 152 A limit (about 13 N m) sits below this rotor's 17 N m drag peak, so there are three equilibria,
+    // low stable, middle unstable and high stable, and the JSON carries the keys the issue lists.
+    [Fact]
+    public async Task Operate_Json_ListsEveryEquilibrium_WithStabilityAndLimits()
+    {
+        var (code, output, error) = await CliRunner.RunAsync("operate", _rig, "--duty", "1", "--soc-pct", "80", "--json");
+        Assert.Equal(ExitCodes.LimitFindings, code);
+        Assert.DoesNotContain("error", error);
+        using var doc = JsonDocument.Parse(output);
+        var equilibria = doc.RootElement.GetProperty("equilibria").EnumerateArray().ToArray();
+        Assert.Equal(3, equilibria.Length);
+        Assert.Equal([true, false, true], equilibria.Select(e => e.GetProperty("stable").GetBoolean()).ToArray());
+        foreach (string key in new[] { "speed_rpm", "stable", "motor_current_a", "bus_current_a", "duty", "shaft_power_w", "electrical_power_w", "efficiency", "lift_n", "eddy_power_w", "limits" })
+        {
+            Assert.True(equilibria[0].TryGetProperty(key, out _), $"equilibrium lacks {key}");
+        }
+
+        var expected = OperateRigFiles.Expected(socFraction: 0.8);
+        for (int i = 0; i < 3; i++)
+        {
+            Assert.Equal(expected.Equilibria[i].SpeedRpm, equilibria[i].GetProperty("speed_rpm").GetDouble(), expected.Equilibria[i].SpeedRpm * 1e-9);
+            Assert.Equal(expected.Equilibria[i].MotorCurrentA, equilibria[i].GetProperty("motor_current_a").GetDouble(), 1e-6);
+        }
+        var limits = equilibria[0].GetProperty("limits").EnumerateArray().ToArray();
+        Assert.Contains(limits, l => l.GetProperty("limit").GetString() == "controller_continuous_current" && l.GetProperty("exceeded").GetBoolean());
+        Assert.Equal(1, doc.RootElement.GetProperty("reached_from_rest").GetInt32());
+    }
+
+    // The table for people names the stall below the drag peak.
+    [Fact]
+    public async Task Operate_Text_ShowsTheTable_AndTheStallBelowThePeak()
+    {
+        var (code, output, _) = await CliRunner.RunAsync("operate", _rig, "--soc-pct", "80");
+        Assert.Equal(ExitCodes.LimitFindings, code);
+        Assert.Contains("Equilibria (3):", output);
+        Assert.Contains("speed_rpm", output);
+        Assert.Contains("settles at #1", output);
+        Assert.Contains("Caution:", output);
+    }
+
+    // Speed hold: 300 rpm is held within limits (exit 0); 3000 rpm needs more than the current limit, which is named.
+    [Fact]
+    public async Task Operate_HoldRpm_IsMetOrNamesTheLimitThatStopsIt()
+    {
+        var (okCode, okOutput, _) = await CliRunner.RunAsync("operate", _rig, "--hold-rpm", "300", "--json");
+        using (var ok = JsonDocument.Parse(okOutput))
+        {
+            Assert.True(ok.RootElement.GetProperty("hold_met").GetBoolean());
+            var held = ok.RootElement.GetProperty("equilibria").EnumerateArray().Last();
+            Assert.Equal("held", held.GetProperty("kind").GetString());
+            Assert.Equal(300, held.GetProperty("speed_rpm").GetDouble(), 1e-9);
+        }
+        Assert.Equal(ExitCodes.Ok, okCode);
+
+        var (code, output, _) = await CliRunner.RunAsync("operate", _rig, "--hold-rpm", "3000", "--json");
+        using var doc = JsonDocument.Parse(output);
+        Assert.False(doc.RootElement.GetProperty("hold_met").GetBoolean());
+        Assert.Equal("controller current limit", doc.RootElement.GetProperty("hold_stopped_by").GetString());
+        Assert.Equal(ExitCodes.LimitFindings, code);
+    }
+
+    // --sweep: 21 duties from 0 to 1; zero duty leaves the rotor at rest.
+    [Fact]
+    public async Task Operate_Sweep_TabulatesThePointReachedFromRest()
+    {
+        var (code, output, _) = await CliRunner.RunAsync("operate", _rig, "--sweep", "--json");
+        Assert.Equal(ExitCodes.Ok, code);
+        using var doc = JsonDocument.Parse(output);
+        var rows = doc.RootElement.GetProperty("sweep").EnumerateArray().ToArray();
+        Assert.Equal(21, rows.Length);
+        Assert.Equal(0.0, rows[0].GetProperty("duty").GetDouble());
+        Assert.Equal("at_rest", rows[0].GetProperty("reached_from_rest").GetProperty("kind").GetString());
+        Assert.Equal(1.0, rows[^1].GetProperty("duty").GetDouble(), 12);
+    }
+
+    // A pack whose cell count the controller does not accept is a finding (exit 1), not a crash.
+    [Fact]
+    public async Task Operate_WithAnIncompatiblePack_ReportsTheFinding()
+    {
+        var (code, output, error) = await CliRunner.RunAsync("operate", _rig, "--pack", "p-16s");
+        Assert.Equal(ExitCodes.LimitFindings, code);
+        Assert.Contains("error: pack p-16s has 16 cells in series", output);
+        Assert.DoesNotContain("   at ", error);
+    }
+
+    [Theory]
+    [InlineData("--duty", "1.5")]
+    [InlineData("--soc-pct", "120")]
+    [InlineData("--hold-rpm", "-5")]
+    [InlineData("--station", "7")]
+    [InlineData("--motor", "no-such-motor")]
+    public async Task Operate_WithBadInput_ExitsWithTwo_AndSaysWhy(string option, string value)
+    {
+        var (code, output, error) = await CliRunner.RunAsync("operate", _rig, option, value);
+        Assert.Equal(ExitCodes.BadInput, code);
+        Assert.Contains(option, error);
+        Assert.Equal("", output);
+        Assert.DoesNotContain("   at ", error);
+    }
+
+    [Fact]
+    public async Task Operate_WithDutyAndHoldTogether_ExitsWithTwo()
+    {
+        var (code, _, error) = await CliRunner.RunAsync("operate", _rig, "--duty", "0.5", "--hold-rpm", "1000");
+        Assert.Equal(ExitCodes.BadInput, code);
+        Assert.Contains("--duty and --hold-rpm", error);
+    }
+
+    private static class OperateRigFiles
+    {
+        public const double AmbientC = 20.0;
+
+        private static RotorDesign Rotor => new("r120", 24, 4, 0.07, 0.12, 0.004, 1.3, -0.0012, 7500, 2.0, 0.0193,
+            Units.RpmToRadPerS(6000), 0.01, 1e-5, null, null);
+
+        private static Plate Plate => new(new PlateMaterial("al6061", 25e6, 0.0039, 2700, 896), 0.006);
+
+        // The same numbers as the files below, through Core directly (SI).
+        public static OperatingPointResult Expected(double socFraction)
+        {
+            var motor = new Motor("m-110", Units.RpmToRadPerS(110), 0.02, 2.0, 20, 120, 6000, 14, 1.1, null, null, null);
+            var controller = new SpeedController("c-152", 120, 152, 10, 6, 14, 0.002, 0.05, 240_000, 0.2, false);
+            var packs = new PackBank(new BatteryPack("p-12s", "lipo", 12, 4, 5, 25, 50, 0.003, 3), 1,
+                new CellCurve("lipo", [0.0, 0.5, 1.0], [3.3, 3.8, 4.2]));
+            var rig = new Rig("t", Plate, AmbientC, AmbientC, new CraftBody(20, 5, 0, 0, 2, 0.2), 0.010, 0.004, [], packs,
+                new RigLimits(0.5, 90, 3.3, 0.8, 0.95, 6), 5, 12);
+            var drivetrain = new Drivetrain(motor, controller);
+            double free = drivetrain.FreeSpeedRadPerS(packs.OpenCircuitVoltageAt(1.0), 1.0, AmbientC);
+            var range = LoadTableRange.ForRig(rig, Rotor);
+            range = range with { MaxSpeedRadPerS = Math.Max(range.MaxSpeedRadPerS, 1.1 * free), MinGapM = Math.Min(range.MinGapM, 0.005), MaxGapM = Math.Max(range.MaxGapM, 0.015) };
+            var drive = new StationDrive(drivetrain, packs, Rotor, RotorLoadTable.Build(Rotor, Plate, range), rig.Limits);
+            var conditions = new OperatingConditions(0.010, AmbientC, AmbientC, AmbientC, AmbientC, socFraction);
+            return OperatingPointFinder.Find(drive, ThrottleCommand.Duty(1), conditions);
+        }
+
+        public static string Write(string folder)
+        {
+            File.WriteAllText(Path.Combine(folder, "motors.csv"),
+                "id,kv_rpm_per_v,resistance_ohm,no_load_current_a,no_load_voltage_v,max_current_a,max_power_w,poles,mass_g,thermal_resistance_k_per_w,thermal_time_constant_s,max_winding_temp_c\n"
+                + "m-110,110,0.02,2,20,120,6000,14,1100,,,\n");
+            File.WriteAllText(Path.Combine(folder, "controllers.csv"),
+                "id,continuous_current_a,burst_current_a,burst_duration_s,min_cells,max_cells,on_resistance_mohm,idle_current_a,max_erpm,mass_g,reversible\n"
+                + "c-152,120,152,10,6,14,2,0.05,240000,200,false\n");
+            File.WriteAllText(Path.Combine(folder, "packs.csv"),
+                "id,chemistry,cells_series,cells_parallel,cell_capacity_mah,continuous_c,burst_c,cell_resistance_mohm,mass_g\n"
+                + "p-12s,lipo,12,4,5000,25,50,3,3000\n"
+                + "p-16s,lipo,16,4,5000,25,50,3,4000\n");
+            File.WriteAllText(Path.Combine(folder, "cell_curves.csv"), "chemistry,soc_pct,ocv_v\nlipo,0,3.3\nlipo,50,3.8\nlipo,100,4.2\n");
+            File.WriteAllText(Path.Combine(folder, "rotors.csv"),
+                "id,segments,segments_per_wavelength,inner_radius_mm,outer_radius_mm,magnet_thickness_mm,remanence_t,remanence_temp_coeff_pct_per_k,magnet_density_kg_m3,rotor_mass_g,inertia_kg_m2,max_rpm,bearing_drag_nm,bearing_damping_nm_per_krpm,retainer_thickness_mm,retainer_allowable_mpa\n"
+                + $"r120,24,4,70,120,4,1.3,-0.12,7500,2000,0.0193,6000,0.01,{(1e-5 * 1000 * Units.RadPerSPerRpm).ToString("R", CultureInfo.InvariantCulture)},,\n");
+            File.WriteAllText(Path.Combine(folder, "plates.csv"),
+                "id,conductivity_ms_per_m,temp_coeff_per_k,density_kg_m3,specific_heat_j_per_kg_k\nal6061,25,0.0039,2700,896\n");
+            string rig = Path.Combine(folder, "rig.json");
+            File.WriteAllText(rig, $$"""
+                {
+                  "name": "operate command test rig (invented)",
+                  "catalogs": { "motors": "motors.csv", "controllers": "controllers.csv", "packs": "packs.csv",
+                                "cell_curves": "cell_curves.csv", "rotors": "rotors.csv", "plates": "plates.csv" },
+                  "plate": { "material": "al6061", "thickness_mm": 6, "temperature_c": {{AmbientC}} },
+                  "craft": { "empty_mass_kg": 20, "payload_kg": 5, "cg_x_mm": 0, "cg_y_mm": 0, "yaw_inertia_kg_m2": 2 },
+                  "gap": { "design_mm": 10, "landed_mm": 4 },
+                  "ambient_c": {{AmbientC}},
+                  "stations": [
+                    { "x_mm": 200, "y_mm": 0, "spin": "cw", "rotor": "r120", "motor": "m-110", "controller": "c-152" },
+                    { "x_mm": -200, "y_mm": 0, "spin": "ccw", "rotor": "r120", "motor": "m-110", "controller": "c-152" }
+                  ],
+                  "pack": { "id": "p-12s", "count": 1 },
+                  "limits": { "yaw_torque_nm": 0.5, "plate_temp_c": 90 }
+                }
+                """);
+            return rig;
+        }
+    }
+}
