@@ -19,6 +19,8 @@ public static class CliApp
         root.Subcommands.Add(LoadCommand.Create());
         root.Subcommands.Add(StressCommand.Create());
         root.Subcommands.Add(OperateCommand.Create());
+        root.Subcommands.Add(SpinupCommand.Create());
+        root.Subcommands.Add(EnduranceCommand.Create());
         return root;
     }
 

@@ -1,0 +1,372 @@
+using System.CommandLine;
+using System.Globalization;
+using RotorDrive.Cli.Output;
+using RotorDrive.Core;
+using RotorDrive.Core.Craft;
+using RotorDrive.Core.Simulation;
+using RotorDrive.Files;
+
+namespace RotorDrive.Cli.Commands;
+
+/// <summary><c>rotordrive spinup RIG.json [--ramp-s T] [--mode duty|hold] [--soc-pct S] [--csv FILE] [--force] [--json]</c>:
+/// the spin-up from rest on the landing gear through the drag peak to hover, then the landing (stop) profile with
+/// braking on and off.</summary>
+/// <remarks>The throttle ramps from 0 to the common-hover throttle (duty or speed) over the ramp time; the run lasts the
+/// ramp plus <see cref="SettleS"/>. Exit 1 when the rig does not lift off within the rig's lift-off time limit, a rotor
+/// stalls, a current exceeds its burst allowance, or the pack sags below its cutoff; a landing that pushes the bus above the
+/// controllers' rated voltage draws a caution.</remarks>
+public static class SpinupCommand
+{
+    /// <summary>Simulated time after the ramp, s.</summary>
+    public const double SettleS = 6.0;
+
+    /// <summary>Ramp time of the landing profile, s: 0, the throttle cut at once (the hardest case for regeneration).</summary>
+    public const double StopRampS = 0.0;
+
+    /// <summary>Full-charge voltage per lithium cell used for the controllers' rated bus voltage, V (common practice, no source).</summary>
+    public const double FullCellV = 4.2;
+
+    /// <summary>Builds the subcommand.</summary>
+    public static Command Create()
+    {
+        var rig = CommonOptions.RigArgument();
+        var ramp = new Option<double>("--ramp-s")
+        {
+            Description = "Throttle ramp time from 0 to the hover throttle, s; default 2.",
+            HelpName = "T",
+            DefaultValueFactory = _ => 2.0,
+        };
+        ramp.Validators.Add(r =>
+        {
+            double v = r.GetValueOrDefault<double>();
+            if (!(v >= 0 && v <= 120))
+            {
+                r.AddError($"--ramp-s must lie in [0, 120] s; got {v.ToString(CultureInfo.InvariantCulture)}.");
+            }
+        });
+        var mode = new Option<string>("--mode")
+        {
+            Description = "Controller mode: duty (open-loop PWM duty) or hold (speed hold at the hover speed); default duty.",
+            HelpName = "duty|hold",
+            DefaultValueFactory = _ => "duty",
+        };
+        mode.AcceptOnlyFromAmong("duty", "hold");
+        var soc = new Option<double>("--soc-pct")
+        {
+            Description = "Pack state of charge at the start, %; default 100.",
+            HelpName = "S",
+            DefaultValueFactory = _ => 100.0,
+        };
+        soc.Validators.Add(r =>
+        {
+            double v = r.GetValueOrDefault<double>();
+            if (!(v >= 0 && v <= 100))
+            {
+                r.AddError($"--soc-pct must lie in [0, 100]; got {v.ToString(CultureInfo.InvariantCulture)}.");
+            }
+        });
+        var csv = new Option<string?>("--csv")
+        {
+            Description = "Write the spin-up time traces to this CSV file (refuses to replace an existing file without --force).",
+            HelpName = "FILE",
+        };
+        var force = CommonOptions.Force();
+        var json = CommonOptions.Json();
+        var command = new Command("spinup", "Spin-up from the landing gear through the drag peak to hover, and the landing with braking on and off.");
+        command.Arguments.Add(rig);
+        command.Options.Add(ramp);
+        command.Options.Add(mode);
+        command.Options.Add(soc);
+        command.Options.Add(csv);
+        command.Options.Add(force);
+        command.Options.Add(json);
+        command.SetAction(parse => Run(
+            parse.GetValue(rig)!,
+            parse.GetValue(ramp),
+            parse.GetValue(mode) == "hold" ? ControllerMode.SpeedHold : ControllerMode.Duty,
+            parse.GetValue(soc) / 100.0,
+            parse.GetValue(csv),
+            parse.GetValue(force),
+            parse.GetValue(json),
+            parse.InvocationConfiguration.Output,
+            parse.InvocationConfiguration.Error));
+        return command;
+    }
+
+    private static int Run(string rigPath, double rampS, ControllerMode mode, double soc, string? csvPath, bool force, bool json, TextWriter output, TextWriter error)
+    {
+        if (csvPath is not null && !force && File.Exists(csvPath))
+        {
+            error.WriteLine($"rotordrive spinup: error: {csvPath}: {Messages.FileExists()}");
+            return ExitCodes.BadInput;
+        }
+        var loaded = RigInput.LoadOrReport(rigPath, error);
+        if (loaded is null)
+        {
+            return ExitCodes.BadInput;
+        }
+        Rig rig = loaded.Rig!;
+        var sim = RigSimulation.BuildOrReport(rig, rigPath, "spinup", error);
+        if (sim is null)
+        {
+            return ExitCodes.BadInput;
+        }
+
+        var targets = sim.HoverThrottle(mode, soc);
+        var spin = SpinupSimulator.Run(sim, new SpinupRequest(ThrottleProfile.SpinUp(mode, targets, rampS), rampS + SettleS, soc));
+        double socAfter = Math.Clamp(spin.FinalSocFraction, 0, 1);
+        var running = sim.HoverThrottle(mode, socAfter);
+        var landings = new[] { true, false }
+            .Select(braking => SpinupSimulator.Run(sim, new SpinupRequest(ThrottleProfile.Stop(mode, running, StopRampS, braking), StopRampS + 4.0, socAfter, StartHovering: true),
+                SpinupOptions.Default with { RecordTrace = false }))
+            .ToArray();
+
+        double controllerMaxV = rig.Stations.Min(s => s.Controller!.MaxCells) * FullCellV;
+        var findings = Findings(sim, spin, landings, controllerMaxV);
+        var cautions = Cautions(landings, controllerMaxV);
+        var report = ToReport(sim, spin, landings, mode, rampS, soc, controllerMaxV, findings, cautions);
+
+        if (csvPath is not null && spin.Trace is { } trace)
+        {
+            var problem = AtomicFile.WriteAllText(csvPath, TraceCsv.Format(trace), force);
+            if (problem is not null)
+            {
+                ProblemReport.Print([problem], error);
+                return ExitCodes.BadInput;
+            }
+        }
+        if (json)
+        {
+            JsonOutput.Write(output, report);
+        }
+        else
+        {
+            WriteText(report, rig, output);
+        }
+        return findings.Count == 0 ? ExitCodes.Ok : ExitCodes.LimitFindings;
+    }
+
+    private static List<string> Findings(SimulationRig sim, SpinupResult spin, SpinupResult[] landings, double controllerMaxV)
+    {
+        var rig = sim.Rig;
+        var list = new List<string>();
+        if (!sim.Hover.Exists)
+        {
+            list.Add($"the rotors cannot carry the craft's {Numbers.Format(sim.WeightN, 0)} N at the design gap below their rated speed");
+        }
+        if (spin.LiftoffTimeS is not { } liftoff)
+        {
+            list.Add("the craft never lifts off");
+        }
+        else if (liftoff > rig.Limits.LiftoffTimeS)
+        {
+            list.Add($"lift-off at {Numbers.Format(liftoff, 2)} s is later than the limit of {Numbers.Format(rig.Limits.LiftoffTimeS, 1)} s");
+        }
+        foreach (var s in spin.Stations)
+        {
+            if (s.Stalled)
+            {
+                list.Add($"station {s.Index} stalls below its drag peak ({Numbers.Format(Units.RadPerSToRpm(s.DragPeakSpeedRadPerS), 0)} rpm, "
+                    + $"{Numbers.Format(s.DragPeakTorqueNm, 2)} N m at the landed gap): its controller limits the current to {Numbers.Format(s.CurrentLimitA, 0)} A; "
+                    + $"{Numbers.Format(s.PassingCurrentA, 0)} A just balances the peak, a limit of {Numbers.Format(s.SuggestedCurrentLimitA, 0)} A would pass it");
+            }
+            if (s.Controller.Exceeded)
+            {
+                list.Add($"station {s.Index}: controller above its continuous {Numbers.Format(s.Controller.ContinuousA, 0)} A for {Numbers.Format(s.Controller.TimeAboveContinuousS, 2)} s (burst allowance {Numbers.Format(s.Controller.BurstAllowanceS, 1)} s)");
+            }
+        }
+        if (spin.Pack.Exceeded)
+        {
+            list.Add($"pack current {Numbers.Format(spin.Pack.PeakA, 0)} A exceeds its burst rating of {Numbers.Format(spin.Pack.BurstA, 0)} A");
+        }
+        if (spin.BelowCutoff)
+        {
+            list.Add($"pack voltage sags to {Numbers.Format(spin.MinBusVoltageV, 1)} V, below the cutoff of {Numbers.Format(spin.CutoffVoltageV, 1)} V");
+        }
+        if (spin.BusCollapsed)
+        {
+            list.Add("the pack cannot feed the controllers at some instant (bus collapse)");
+        }
+        return list;
+    }
+
+    // Landing results worth a caution (not a failed limit: the catalogs give no regeneration or over-voltage ratings).
+    private static List<string> Cautions(SpinupResult[] landings, double controllerMaxV)
+    {
+        var list = new List<string>();
+        foreach (var l in landings.Where(l => l.MaxBusVoltageV > controllerMaxV))
+        {
+            list.Add($"landing with braking: regeneration of {Numbers.Format(l.PeakRegenCurrentA, 0)} A lifts the bus to {Numbers.Format(l.MaxBusVoltageV, 1)} V, "
+                + $"above the controllers' {Numbers.Format(controllerMaxV, 1)} V (max cells x {Numbers.Format(FullCellV, 1)} V); cut the throttle more gently or land from a part-charged pack");
+        }
+        return list;
+    }
+
+    private static SpinupReport ToReport(SimulationRig sim, SpinupResult spin, SpinupResult[] landings, ControllerMode mode, double rampS, double soc, double controllerMaxV, List<string> findings, List<string> cautions)
+    {
+        var rig = sim.Rig;
+        var stations = spin.Stations.Select(s => new StationEntry(
+            s.Index,
+            rig.Stations[s.Index].Spin == SpinDirection.Clockwise ? "cw" : "ccw",
+            s.FinalSpeedRpm,
+            s.Motor.PeakA,
+            s.Motor.ContinuousA,
+            s.Motor.TimeAboveContinuousS,
+            s.Controller.ContinuousA,
+            s.Controller.BurstA ?? 0,
+            s.Controller.TimeAboveContinuousS,
+            s.Controller.BurstAllowanceS ?? 0,
+            s.CurrentLimitA,
+            Units.RadPerSToRpm(s.DragPeakSpeedRadPerS),
+            s.DragPeakTorqueNm,
+            s.Stalled,
+            s.PassingCurrentA,
+            s.SuggestedCurrentLimitA,
+            s.PeakWindingTempC,
+            s.PeakPlateTempC)).ToList();
+        var landingEntries = landings.Select((l, i) => new LandingEntry(
+            i == 0,
+            l.PeakRegenCurrentA,
+            l.MaxBusVoltageV,
+            controllerMaxV,
+            l.TouchdownTimeS,
+            l.TouchdownSpeedMPerS,
+            l.Stations.Max(s => s.FinalSpeedRpm))).ToList();
+        return new SpinupReport(
+            rig.Name,
+            mode == ControllerMode.Duty ? "duty" : "hold",
+            rampS,
+            soc * 100,
+            spin.EndTimeS,
+            sim.Hover.Exists,
+            sim.Hover.SpeedRpm,
+            sim.MassKg,
+            spin.LiftoffTimeS,
+            rig.Limits.LiftoffTimeS,
+            spin.HoverTimeS,
+            spin.StalledStations,
+            spin.Stations.Max(s => s.Motor.PeakA),
+            spin.Pack.PeakA,
+            spin.Pack.ContinuousA,
+            spin.Pack.BurstA ?? 0,
+            spin.Pack.TimeAboveContinuousS,
+            spin.MinBusVoltageV,
+            spin.CutoffVoltageV,
+            spin.PeakYawTorqueNm,
+            rig.GearYawFrictionNm,
+            spin.PeakYawRateRadPerS * 180 / Math.PI,
+            spin.FinalYawAngleRad * 180 / Math.PI,
+            stations,
+            landingEntries,
+            findings.Count == 0,
+            findings,
+            cautions);
+    }
+
+    private static void WriteText(SpinupReport r, Rig rig, TextWriter o)
+    {
+        o.WriteLine($"Spin-up: {r.Rig}, {r.Mode} mode, ramp {Numbers.Format(r.RampS, 1)} s, pack at {Numbers.Format(r.SocPct, 0)} %, {Numbers.Format(r.MassKg, 1)} kg");
+        o.WriteLine($"  hover target: {Numbers.Format(r.HoverSpeedRpm, 0)} rpm common speed at the {Numbers.Format(rig.DesignGapM * 1000, 1)} mm design gap{(r.HoverExists ? "" : " (not reachable)")}");
+        o.WriteLine($"  lift-off: {(r.TimeToLiftoffS is { } lo ? Numbers.Format(lo, 2) + " s" : "never")} (limit {Numbers.Format(r.LiftoffLimitS, 1)} s); steady hover: {(r.TimeToHoverS is { } h ? Numbers.Format(h, 2) + " s" : "not reached")}");
+        o.WriteLine($"  pack: peak {Numbers.Format(r.PeakPackCurrentA, 0)} A (continuous {Numbers.Format(r.PackContinuousA, 0)} A for "
+            + $"{Numbers.Format(r.PackTimeAboveContinuousS, 2)} s above, burst {Numbers.Format(r.PackBurstA, 0)} A); lowest voltage {Numbers.Format(r.MinPackVoltageV, 1)} V (cutoff {Numbers.Format(r.CutoffVoltageV, 1)} V)");
+        o.WriteLine($"  yaw: peak reaction {Numbers.Format(r.PeakYawTorqueNm, 2)} N m (gear holds {Numbers.Format(r.GearYawFrictionNm, 1)} N m), peak rate {Numbers.Format(r.PeakYawRateDegPerS, 2)} deg/s, final angle {Numbers.Format(r.FinalYawAngleDeg, 2)} deg");
+        o.WriteLine();
+        var table = new TextTable(
+            new TableColumn("station", Alignment.Right), new TableColumn("spin", Alignment.Left), new TableColumn("speed_rpm", Alignment.Right),
+            new TableColumn("peak_current_a", Alignment.Right), new TableColumn("limit_a", Alignment.Right),
+            new TableColumn("above_cont_s", Alignment.Right), new TableColumn("burst_s", Alignment.Right),
+            new TableColumn("peak_rpm", Alignment.Right), new TableColumn("peak_nm", Alignment.Right),
+            new TableColumn("passing_a", Alignment.Right), new TableColumn("stalled", Alignment.Left));
+        foreach (var s in r.Stations)
+        {
+            table.AddRow(s.Station.ToString(CultureInfo.InvariantCulture), s.Spin, Numbers.Format(s.FinalSpeedRpm, 0), Numbers.Format(s.PeakMotorCurrentA, 1),
+                Numbers.Format(s.CurrentLimitA, 0), Numbers.Format(s.ControllerTimeAboveContinuousS, 2), Numbers.Format(s.ControllerBurstAllowanceS, 1),
+                Numbers.Format(s.DragPeakSpeedRpm, 0), Numbers.Format(s.DragPeakTorqueNm, 2), Numbers.Format(s.PassingCurrentA, 0), s.Stalled ? "STALLED" : "no");
+        }
+        table.Write(o, 2);
+        o.WriteLine();
+        foreach (var l in r.Landing)
+        {
+            o.WriteLine($"  landing, braking {(l.Braking ? "on " : "off")}: regenerated current {Numbers.Format(l.PeakRegenCurrentA, 1)} A, bus up to {Numbers.Format(l.MaxBusVoltageV, 1)} V "
+                + $"(controllers rated {Numbers.Format(l.ControllerMaxVoltageV, 1)} V), touch-down {(l.TouchdownS is { } td ? Numbers.Format(td, 2) + " s at " + Numbers.Format(l.TouchdownSpeedMPerS, 3) + " m/s" : "none")}");
+        }
+        o.WriteLine();
+        if (r.Findings.Count == 0)
+        {
+            o.WriteLine("Result: passes (lift-off in time, no stalled rotor, currents within burst allowances, pack above cutoff).");
+        }
+        else
+        {
+            o.WriteLine("Result: FAILS");
+            foreach (var f in r.Findings)
+            {
+                o.WriteLine($"  - {f}");
+            }
+        }
+        foreach (var c in r.Cautions)
+        {
+            o.WriteLine($"Caution: {c}.");
+        }
+        o.WriteLine("Caution: spinning magnet rotors crush fingers, upset pacemakers and can burst; lithium packs can burn. Estimates only: defer to manufacturers' ratings.");
+    }
+
+    private sealed record SpinupReport(
+        string Rig,
+        string Mode,
+        double RampS,
+        double SocPct,
+        double DurationS,
+        bool HoverExists,
+        double HoverSpeedRpm,
+        double MassKg,
+        double? TimeToLiftoffS,
+        double LiftoffLimitS,
+        double? TimeToHoverS,
+        IReadOnlyList<int> StalledStations,
+        double PeakMotorCurrentA,
+        double PeakPackCurrentA,
+        double PackContinuousA,
+        double PackBurstA,
+        double PackTimeAboveContinuousS,
+        double MinPackVoltageV,
+        double CutoffVoltageV,
+        double PeakYawTorqueNm,
+        double GearYawFrictionNm,
+        double PeakYawRateDegPerS,
+        double FinalYawAngleDeg,
+        IReadOnlyList<StationEntry> Stations,
+        IReadOnlyList<LandingEntry> Landing,
+        bool Pass,
+        IReadOnlyList<string> Findings,
+        IReadOnlyList<string> Cautions);
+
+    private sealed record StationEntry(
+        int Station,
+        string Spin,
+        double FinalSpeedRpm,
+        double PeakMotorCurrentA,
+        double MotorContinuousA,
+        double MotorTimeAboveContinuousS,
+        double ControllerContinuousA,
+        double ControllerBurstA,
+        double ControllerTimeAboveContinuousS,
+        double ControllerBurstAllowanceS,
+        double CurrentLimitA,
+        double DragPeakSpeedRpm,
+        double DragPeakTorqueNm,
+        bool Stalled,
+        double PassingCurrentA,
+        double SuggestedCurrentLimitA,
+        double PeakWindingTempC,
+        double PeakPlateTempC);
+
+    private sealed record LandingEntry(
+        bool Braking,
+        double PeakRegenCurrentA,
+        double MaxBusVoltageV,
+        double ControllerMaxVoltageV,
+        double? TouchdownS,
+        double? TouchdownSpeedMPerS,
+        double FinalMaxSpeedRpm);
+}

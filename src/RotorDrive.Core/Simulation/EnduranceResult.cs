@@ -1,0 +1,30 @@
+namespace RotorDrive.Core.Simulation;
+
+/// <summary>The outcome of an endurance run: how long the rig hovered and which limit ended it.</summary>
+/// <param name="RuntimeS">Hover time until the first limit, s.</param>
+/// <param name="FirstLimit">The limit reached first.</param>
+/// <param name="FirstLimitText">That limit in words, with the station and the value where it applies.</param>
+/// <param name="LimitStation">The station the limit belongs to, or null for rig-wide limits.</param>
+/// <param name="StartHoverSpeedRadPerS">Trimmed hover speed at the start, rad/s.</param>
+/// <param name="StartPackCurrentA">Pack current at the start, A.</param>
+/// <param name="FinalSocFraction">State of charge at the end, 0..1.</param>
+/// <param name="FinalBusVoltageV">Bus voltage at the end, V (0 when no trim existed there).</param>
+/// <param name="FinalPackCurrentA">Pack current at the end, A (0 when no trim existed there).</param>
+/// <param name="PeakWindingTempC">Highest winding temperature, C.</param>
+/// <param name="PeakPlateTempC">Highest plate patch temperature, C.</param>
+/// <param name="Steps">Quasi-static steps taken.</param>
+/// <param name="Trace">One sample per step (yaw rate and angle are zero: the trim holds the yaw), or null.</param>
+public sealed record EnduranceResult(
+    double RuntimeS,
+    EnduranceLimit FirstLimit,
+    string FirstLimitText,
+    int? LimitStation,
+    double StartHoverSpeedRadPerS,
+    double StartPackCurrentA,
+    double FinalSocFraction,
+    double FinalBusVoltageV,
+    double FinalPackCurrentA,
+    double PeakWindingTempC,
+    double PeakPlateTempC,
+    int Steps,
+    SpinupTrace? Trace);

@@ -1,0 +1,156 @@
+using System.Text.Json;
+using Xunit;
+
+namespace RotorDrive.Cli.Tests;
+
+public sealed class SpinupCommandTests : IDisposable
+{
+    private readonly string _folder = Directory.CreateTempSubdirectory("rotordrive-spinup-").FullName;
+
+    public SpinupCommandTests()
+    {
+        foreach (var file in Directory.GetFiles(RepoPaths.Catalogs))
+        {
+            File.Copy(file, Path.Combine(_folder, Path.GetFileName(file)));
+        }
+    }
+
+    public void Dispose() => Directory.Delete(_folder, recursive: true);
+
+    private string Rig => Path.Combine(_folder, "demo-rig.json");
+
+    private void Edit(string name, string from, string to)
+    {
+        string path = Path.Combine(_folder, name);
+        string text = File.ReadAllText(path);
+        Assert.Contains(from, text);
+        File.WriteAllText(path, text.Replace(from, to, StringComparison.Ordinal));
+    }
+
+    // The demo rig (invented data): its rotors pass the landed-gap drag peak under the controllers' 170 A limit (the
+    // Core tests check the physics); the JSON carries the documented keys and agrees with itself.
+    [Fact]
+    public async Task Spinup_Json_OnTheDemoRig_LiftsOff_WithNoStalledRotor()
+    {
+        var (code, output, error) = await CliRunner.RunAsync("spinup", Rig, "--json");
+        Assert.True(code is ExitCodes.Ok or ExitCodes.LimitFindings, error);
+        using var doc = JsonDocument.Parse(output);
+        var root = doc.RootElement;
+        double liftoff = root.GetProperty("time_to_liftoff_s").GetDouble();
+        Assert.InRange(liftoff, 0.01, 8.0);
+        Assert.Equal(0, root.GetProperty("stalled_stations").GetArrayLength());
+        Assert.True(root.TryGetProperty("time_to_hover_s", out _));
+        var stations = root.GetProperty("stations").EnumerateArray().ToArray();
+        Assert.Equal(6, stations.Length);
+        double peak = stations.Max(s => s.GetProperty("peak_motor_current_a").GetDouble());
+        Assert.Equal(peak, root.GetProperty("peak_motor_current_a").GetDouble(), 9);
+        Assert.True(root.GetProperty("peak_pack_current_a").GetDouble() > 0);
+        Assert.Equal(2, root.GetProperty("landing").GetArrayLength());
+        Assert.Equal(code == ExitCodes.Ok, root.GetProperty("pass").GetBoolean());
+    }
+
+    // A controller limit below the current that balances the drag peak (about 114 A for the demo's motor, from
+    // I = Q_peak Kv + I0, Drela 2007) leaves every rotor stuck on the gear: named, never lifting off, exit 1.
+    [Fact]
+    public async Task Spinup_WithAWeakCurrentLimit_NamesStalledRotors_AndExitsOne()
+    {
+        Edit("controllers.csv", "sc120-12s,120,170,5,", "sc120-12s,90,100,5,");
+        var (code, output, _) = await CliRunner.RunAsync("spinup", Rig, "--json");
+        Assert.Equal(ExitCodes.LimitFindings, code);
+        using var doc = JsonDocument.Parse(output);
+        var root = doc.RootElement;
+        Assert.Equal(JsonValueKind.Null, root.GetProperty("time_to_liftoff_s").ValueKind);
+        Assert.Equal([0, 1, 2, 3, 4, 5], root.GetProperty("stalled_stations").EnumerateArray().Select(e => e.GetInt32()));
+        double suggested = root.GetProperty("stations")[0].GetProperty("suggested_current_limit_a").GetDouble();
+        Assert.InRange(suggested, 100, 170);
+    }
+
+    [Fact]
+    public async Task Spinup_Text_HoldMode_ShowsTheTable()
+    {
+        var (code, output, _) = await CliRunner.RunAsync("spinup", Rig, "--mode", "hold", "--ramp-s", "3", "--soc-pct", "60");
+        Assert.True(code is ExitCodes.Ok or ExitCodes.LimitFindings);
+        Assert.Contains("hold mode, ramp 3.0 s, pack at 60 %", output);
+        Assert.Contains("lift-off:", output);
+        Assert.Contains("landing, braking on", output);
+    }
+
+    [Fact]
+    public async Task Spinup_Csv_RefusesToOverwrite_WithoutForce()
+    {
+        string csv = Path.Combine(_folder, "trace.csv");
+        File.WriteAllText(csv, "keep me");
+        var (code, _, error) = await CliRunner.RunAsync("spinup", Rig, "--csv", csv);
+        Assert.Equal(ExitCodes.BadInput, code);
+        Assert.Contains(csv, error);
+        Assert.Equal("keep me", File.ReadAllText(csv));
+
+        (code, _, _) = await CliRunner.RunAsync("spinup", Rig, "--csv", csv, "--force");
+        Assert.True(code is ExitCodes.Ok or ExitCodes.LimitFindings);
+        string[] lines = File.ReadAllLines(csv);
+        Assert.StartsWith("time_s,speed_rpm_0,current_a_0,", lines[0]);
+        foreach (string key in new[] { "gap_mm", "pack_voltage_v", "pack_current_a", "soc_pct", "winding_temp_c_5", "plate_temp_c_5" })
+        {
+            Assert.Contains(key, lines[0]);
+        }
+        Assert.True(lines.Length > 100);
+        Assert.DoesNotContain("NaN", File.ReadAllText(csv));
+        Assert.Empty(Directory.GetFiles(_folder, "*.tmp"));
+    }
+
+    [Fact]
+    public async Task Spinup_BadOptions_ExitTwo()
+    {
+        Assert.Equal(ExitCodes.BadInput, (await CliRunner.RunAsync("spinup", Rig, "--mode", "fast")).ExitCode);
+        Assert.Equal(ExitCodes.BadInput, (await CliRunner.RunAsync("spinup", Rig, "--soc-pct", "120")).ExitCode);
+        Assert.Equal(ExitCodes.BadInput, (await CliRunner.RunAsync("spinup", Rig, "--ramp-s", "-1")).ExitCode);
+        Assert.Equal(ExitCodes.BadInput, (await CliRunner.RunAsync("spinup", Path.Combine(_folder, "missing.json"))).ExitCode);
+    }
+
+    [Fact]
+    public async Task Endurance_Json_GivesRuntimeAndFirstLimitInWords()
+    {
+        var (code, output, error) = await CliRunner.RunAsync("endurance", Rig, "--json");
+        Assert.True(code is ExitCodes.Ok or ExitCodes.LimitFindings, error);
+        using var doc = JsonDocument.Parse(output);
+        var root = doc.RootElement;
+        Assert.True(root.GetProperty("runtime_s").GetDouble() > 0);
+        string limit = root.GetProperty("first_limit").GetString()!;
+        Assert.False(string.IsNullOrWhiteSpace(limit));
+        Assert.Contains(" ", limit);
+        Assert.Equal(code == ExitCodes.Ok, root.GetProperty("pass").GetBoolean());
+    }
+
+    // With the plate limit lifted and a plate that sheds its heat, the pack ends the demo hover. Charge balance (IEC 61434
+    // capacity in ampere-hours) and the mean-value theorem: the runtime lies between usable charge / final current and
+    // usable charge / starting current, since the current only rises as the pack sags.
+    [Fact]
+    public async Task Endurance_WhenThePackEndsIt_RuntimeIsUsableChargeOverCurrent()
+    {
+        Edit("demo-rig.json", "\"plate_temp_c\": 60", "\"plate_temp_c\": 400");
+        Edit("demo-rig.json", "\"temperature_c\": 22 }", "\"temperature_c\": 22, \"convection_w_per_m2k\": 1000 }");
+        var (code, output, error) = await CliRunner.RunAsync("endurance", Rig, "--json");
+        Assert.Equal(ExitCodes.Ok, code);
+        using var doc = JsonDocument.Parse(output);
+        var root = doc.RootElement;
+        Assert.Contains("usable pack capacity", root.GetProperty("first_limit").GetString());
+        double charge = 0.8 * 40 * 3600;
+        double runtime = root.GetProperty("runtime_s").GetDouble();
+        Assert.InRange(runtime, charge / root.GetProperty("final_pack_current_a").GetDouble(), charge / root.GetProperty("start_pack_current_a").GetDouble());
+        Assert.Equal(20.0, root.GetProperty("final_soc_pct").GetDouble(), 6);
+        Assert.Equal("", error);
+    }
+
+    [Fact]
+    public async Task Endurance_Csv_RefusesToOverwrite_WithoutForce()
+    {
+        string csv = Path.Combine(_folder, "endurance.csv");
+        File.WriteAllText(csv, "keep me");
+        var (code, _, _) = await CliRunner.RunAsync("endurance", Rig, "--csv", csv);
+        Assert.Equal(ExitCodes.BadInput, code);
+        Assert.Equal("keep me", File.ReadAllText(csv));
+        (code, _, _) = await CliRunner.RunAsync("endurance", Rig, "--csv", csv, "--force");
+        Assert.True(code is ExitCodes.Ok or ExitCodes.LimitFindings);
+        Assert.StartsWith("time_s,", File.ReadAllText(csv));
+    }
+}
