@@ -24,6 +24,7 @@ public static class CliApp
         root.Subcommands.Add(HoverCommand.Create());
         root.Subcommands.Add(YawCommand.Create());
         root.Subcommands.Add(RankCommand.Create());
+        root.Subcommands.Add(StressCommand.Create());
         return root;
     }
 

@@ -158,6 +158,21 @@ public static class Messages
     /// <summary>A whole-number JSON value that has a fraction.</summary>
     public static string JsonNotAnInteger(double value) => $"must be a whole number; got {N(value)}";
 
+    // ---- tolerances ----
+
+    /// <summary>A tolerance entry without exactly one spread.</summary>
+    public static string ToleranceNeedsOneSpread(int found)
+        => found == 0
+            ? "give one spread: normal_sd_pct, normal_sd, uniform_pct or uniform"
+            : $"give only one spread (found {found}): normal_sd_pct, normal_sd, uniform_pct or uniform";
+
+    /// <summary>A percentage spread for a quantity whose nominal is zero or on an interval scale.</summary>
+    public static string ToleranceAbsoluteOnly(string key)
+        => $"'{key}' takes only absolute spreads (normal_sd or uniform, in the unit the key names); a percentage of its nominal means nothing";
+
+    /// <summary>Uniform bounds out of order.</summary>
+    public static string ToleranceBoundsOrder(double low, double high) => $"the low bound ({N(low)}) must not exceed the high bound ({N(high)})";
+
     // ---- command line ----
 
     /// <summary>An unexpected failure reported in one line.</summary>

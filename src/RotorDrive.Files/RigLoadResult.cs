@@ -1,5 +1,6 @@
 using RotorDrive.Core;
 using RotorDrive.Core.Craft;
+using RotorDrive.Core.Studies.Stress;
 using RotorDrive.Files.Catalogs;
 using RotorDrive.Files.Rigs;
 
@@ -23,6 +24,10 @@ public sealed record RigLoadResult(
     CatalogPaths? CatalogPaths,
     IReadOnlyList<InputProblem> Problems)
 {
+    /// <summary>The part spreads of the rig file's "tolerances" section in SI units; <see cref="StressTolerances.None"/>
+    /// when the section is absent or the file has problems.</summary>
+    public StressTolerances Tolerances { get; init; } = StressTolerances.None;
+
     /// <summary>True when the rig loaded with no problem.</summary>
     public bool IsClean => Problems.Count == 0 && Rig is not null;
 }

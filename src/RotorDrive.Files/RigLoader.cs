@@ -45,6 +45,9 @@ public static class RigLoader
             .ToList();
         var all = rigProblems.Concat(catalogs?.Problems ?? []).ToList();
         var rig = all.Count == 0 ? resolved.Rig : null;
-        return new RigLoadResult(rigPath, rig, catalogs?.Catalog, document, locations, paths, all);
+        return new RigLoadResult(rigPath, rig, catalogs?.Catalog, document, locations, paths, all)
+        {
+            Tolerances = rig is null ? Core.Studies.Stress.StressTolerances.None : resolved.Tolerances,
+        };
     }
 }

@@ -36,6 +36,9 @@ public sealed class RigDocument
     /// <summary>"limits": the team's limits.</summary>
     public RigLimitsSection? Limits { get; set; }
 
+    /// <summary>"tolerances": part spreads for the stress test (optional; absent means no spread).</summary>
+    public RigTolerancesSection? Tolerances { get; set; }
+
     /// <summary>A deep copy, for editing without touching the original.</summary>
     public RigDocument Clone() => RigDocumentReader.Read(RigDocumentWriter.Write(this), "(copy)").Document!;
 }

@@ -133,6 +133,8 @@ public static class RigDocumentReader
             l.ReportUnknownKeys();
         }
 
+        doc.Tolerances = ReadTolerances(top.Take("tolerances"), file, problems);
+
         top.ReportUnknownKeys();
         var ordered = problems.OrderBy(x => x.Line).ThenBy(x => x.Column).ToList();
         return new RigDocumentReadResult(doc, map, ordered);
@@ -144,6 +146,56 @@ public static class RigDocumentReader
         var problems = new List<InputProblem>();
         string? text = TextFiles.TryRead(path, problems);
         return text is null ? new RigDocumentReadResult(null, RigSourceMap.Empty, problems) : Read(text, path);
+    }
+
+    private static RigTolerancesSection? ReadTolerances(JsonNode? node, string file, List<InputProblem> problems)
+    {
+        if (node is not JsonObjectNode obj)
+        {
+            JsonObjectScope.Open(node, "$.tolerances", file, problems);
+            return null;
+        }
+        var section = new RigTolerancesSection();
+        foreach (var member in obj.Members)
+        {
+            string path = "$.tolerances." + member.Key;
+            if (!RigToleranceKeys.Keys.Contains(member.Key))
+            {
+                problems.Add(new InputProblem(file, member.KeyLine, member.KeyColumn, path,
+                    Messages.UnknownKey(member.Key, Suggestions.Closest(member.Key, RigToleranceKeys.Keys))));
+                continue;
+            }
+            if (JsonObjectScope.Open(member.Value, path, file, problems) is not { } e)
+            {
+                continue;
+            }
+            section.Entries[member.Key] = new RigToleranceEntry
+            {
+                NormalSdPct = e.Number("normal_sd_pct"),
+                NormalSd = e.Number("normal_sd"),
+                UniformPct = Pair(e.Take("uniform_pct"), path + ".uniform_pct", file, problems),
+                Uniform = Pair(e.Take("uniform"), path + ".uniform", file, problems),
+            };
+            e.ReportUnknownKeys();
+        }
+        return section;
+    }
+
+    // [low, high]: an array of exactly two finite numbers.
+    private static double[]? Pair(JsonNode? node, string path, string file, List<InputProblem> problems)
+    {
+        if (node is null)
+        {
+            return null;
+        }
+        if (node is JsonArrayNode { Items.Count: 2 } array
+            && array.Items[0] is JsonScalarNode { Kind: JsonScalarKind.Number, Number: { } low }
+            && array.Items[1] is JsonScalarNode { Kind: JsonScalarKind.Number, Number: { } high })
+        {
+            return [low, high];
+        }
+        problems.Add(new InputProblem(file, node.Line, node.Column, path, Messages.WrongType("an array of two finite numbers [low, high]", node.Describe())));
+        return null;
     }
 
     private static void Index(JsonNode node, string path, RigSourceMap map)

@@ -92,6 +92,25 @@ public static class RigDocumentWriter
                 Num(w, "liftoff_time_s", l.LiftoffTimeS);
                 w.WriteEndObject();
             }
+            if (document.Tolerances is { } t)
+            {
+                w.WriteStartObject("tolerances");
+                var order = RigToleranceKeys.Keys.Concat(t.Entries.Keys.Where(k => !RigToleranceKeys.Keys.Contains(k)).Order(StringComparer.Ordinal));
+                foreach (string key in order)
+                {
+                    if (!t.Entries.TryGetValue(key, out var e))
+                    {
+                        continue;
+                    }
+                    w.WriteStartObject(key);
+                    Num(w, "normal_sd_pct", e.NormalSdPct);
+                    Num(w, "normal_sd", e.NormalSd);
+                    Pair(w, "uniform_pct", e.UniformPct);
+                    Pair(w, "uniform", e.Uniform);
+                    w.WriteEndObject();
+                }
+                w.WriteEndObject();
+            }
             w.WriteEndObject();
         }
         return Encoding.UTF8.GetString(stream.ToArray()) + "\n";
@@ -101,6 +120,20 @@ public static class RigDocumentWriter
     /// <returns>Null on success, otherwise the problem.</returns>
     public static InputProblem? Save(RigDocument document, string path, bool overwrite)
         => AtomicFile.WriteAllText(path, Write(document), overwrite);
+
+    // A pair with a non-finite value is left out, like a non-finite number (the resolver then reports the entry).
+    private static void Pair(Utf8JsonWriter w, string key, double[]? values)
+    {
+        if (values is { Length: > 0 } && values.All(double.IsFinite))
+        {
+            w.WriteStartArray(key);
+            foreach (double v in values)
+            {
+                w.WriteNumberValue(v);
+            }
+            w.WriteEndArray();
+        }
+    }
 
     private static void Str(Utf8JsonWriter w, string key, string? value)
     {

@@ -2,6 +2,8 @@ using RotorDrive.Core;
 using RotorDrive.Core.Craft;
 using RotorDrive.Core.Drive;
 using RotorDrive.Core.Magnetics;
+using RotorDrive.Core.Studies;
+using RotorDrive.Core.Studies.Stress;
 using RotorDrive.Files.Catalogs;
 
 namespace RotorDrive.Files.Rigs;
@@ -257,6 +259,8 @@ public static class RigResolver
             }
         }
 
+        var tolerances = ResolveTolerances(document, ctx);
+
         var ordered = problems.OrderBy(p => p.Line).ThenBy(p => p.Column).ToList();
         if (ordered.Count > 0 || !partsOk || !stationsOk || !packOk || name is null || material is null || thickness is null
             || plateTemp is null || convection is null || body is null || design is null || landed is null || ambient is null
@@ -277,7 +281,106 @@ public static class RigResolver
             limits,
             gearFriction.Value,
             convection.Value);
-        return new RigResolveResult(rig, ordered);
+        return new RigResolveResult(rig, ordered) { Tolerances = tolerances ?? StressTolerances.None };
+    }
+
+    /// <summary>Checks the "tolerances" section of a document and converts it to SI; problems are added to
+    /// <paramref name="problems"/>.</summary>
+    /// <param name="document">The rig document.</param>
+    /// <param name="rigFile">The rig file's name, for problems.</param>
+    /// <param name="locations">Positions of the document's keys in the file, or null.</param>
+    /// <param name="problems">Receives every problem found.</param>
+    /// <returns>The tolerances (<see cref="StressTolerances.None"/> when the section is absent), or null when it has problems.</returns>
+    public static StressTolerances? ResolveTolerances(RigDocument document, string rigFile, RigSourceMap? locations, List<InputProblem> problems)
+    {
+        ArgumentNullException.ThrowIfNull(document);
+        ArgumentNullException.ThrowIfNull(rigFile);
+        ArgumentNullException.ThrowIfNull(problems);
+        return ResolveTolerances(document, new Context(rigFile, locations ?? RigSourceMap.Empty, problems));
+    }
+
+    private static StressTolerances? ResolveTolerances(RigDocument document, Context ctx)
+    {
+        if (document.Tolerances is not { } section)
+        {
+            return StressTolerances.None;
+        }
+        var map = new Dictionary<StressQuantity, Tolerance>();
+        bool ok = true;
+        foreach (var (key, entry) in section.Entries)
+        {
+            string path = "$.tolerances." + key;
+            var known = RigToleranceKeys.All.FirstOrDefault(k => k.Key == key);
+            if (known.Key is null)
+            {
+                ctx.Report(path, Messages.UnknownKey(key, Suggestions.Closest(key, RigToleranceKeys.Keys)));
+                ok = false;
+                continue;
+            }
+            var tolerance = ResolveEntry(entry, path, known.Key, known.Quantity, known.ToSi, ctx);
+            if (tolerance is null)
+            {
+                ok = false;
+                continue;
+            }
+            map[known.Quantity] = tolerance;
+        }
+        return ok ? new StressTolerances(map) : null;
+    }
+
+    private static Tolerance? ResolveEntry(RigToleranceEntry entry, string path, string key, StressQuantity quantity, double toSi, Context ctx)
+    {
+        int found = (entry.NormalSdPct is null ? 0 : 1) + (entry.NormalSd is null ? 0 : 1) + (entry.UniformPct is null ? 0 : 1) + (entry.Uniform is null ? 0 : 1);
+        if (found != 1)
+        {
+            ctx.Report(path, Messages.ToleranceNeedsOneSpread(found));
+            return null;
+        }
+        bool positive = quantity.IsPositive();
+        if (entry.NormalSdPct is not null || entry.UniformPct is not null)
+        {
+            if (quantity.IsAbsoluteOnly())
+            {
+                ctx.Report(path + (entry.NormalSdPct is not null ? ".normal_sd_pct" : ".uniform_pct"), Messages.ToleranceAbsoluteOnly(key));
+                return null;
+            }
+        }
+        if (entry.NormalSdPct is { } sdPct)
+        {
+            // A normal spread wider than half of nominal is no part tolerance; it would also make the truncation at zero
+            // of positive quantities matter (see Tolerance).
+            return ctx.Required(sdPct, path + ".normal_sd_pct", ValueRule.Between(0, 50)) is { } v
+                ? Tolerance.Normal(v, ToleranceScale.Percent, positive) : null;
+        }
+        if (entry.NormalSd is { } sd)
+        {
+            return ctx.Required(sd, path + ".normal_sd", ValueRule.NonNegative) is { } v
+                ? Tolerance.Normal(v * toSi, ToleranceScale.Absolute, positive) : null;
+        }
+        bool percent = entry.UniformPct is not null;
+        double[] bounds = entry.UniformPct ?? entry.Uniform!;
+        string boundsPath = path + (percent ? ".uniform_pct" : ".uniform");
+        if (bounds.Length != 2)
+        {
+            ctx.Report(boundsPath, Messages.WrongType("an array of two finite numbers [low, high]", $"{bounds.Length} numbers"));
+            return null;
+        }
+        // Percent bounds of a positive quantity stay above -100 % so some of the interval is above zero.
+        var rule = percent ? ValueRule.Between(-99, 1000) : ValueRule.Any;
+        double? low = ctx.Required(bounds[0], boundsPath, rule);
+        double? high = ctx.Required(bounds[1], boundsPath, rule);
+        if (low is null || high is null)
+        {
+            return null;
+        }
+        if (low > high)
+        {
+            ctx.Report(boundsPath, Messages.ToleranceBoundsOrder(low.Value, high.Value));
+            return null;
+        }
+        return percent
+            ? Tolerance.Uniform(low.Value, high.Value, ToleranceScale.Percent, positive)
+            : Tolerance.Uniform(low.Value * toSi, high.Value * toSi, ToleranceScale.Absolute, positive);
     }
 
     /// <summary>Collects problems for one resolve, placing each at its JSON path's position.</summary>

@@ -44,7 +44,8 @@ public class CatalogDocumentationTests
     {
         string readme = File.ReadAllText(Path.Combine(RepoPaths.Root, "README.md"));
         var keys = RigKeys.Top.Concat(RigKeys.Catalogs).Concat(RigKeys.Plate).Concat(RigKeys.Craft).Concat(RigKeys.Gap)
-            .Concat(RigKeys.Station).Concat(RigKeys.Pack).Concat(RigKeys.Limits);
+            .Concat(RigKeys.Station).Concat(RigKeys.Pack).Concat(RigKeys.Limits)
+            .Concat(RigToleranceKeys.Keys).Concat(RigToleranceKeys.EntryKeys);
         Assert.All(keys, key => Assert.True(readme.Contains("`" + key, StringComparison.Ordinal) || readme.Contains("." + key, StringComparison.Ordinal), key));
     }
 }

@@ -1,0 +1,45 @@
+namespace RotorDrive.Core.Studies.Stress;
+
+/// <summary>What one stress sample showed: a margin per criterion (pass when at least 0) and the figures reported
+/// as percentiles.</summary>
+/// <param name="Margins">Relative margin per criterion in <see cref="StressCriteria.All"/> order, dimensionless: 0 at the
+/// limit, negative when failed; null when the criterion could not be assessed (for example a rotor without retainer data),
+/// which counts as passed.</param>
+/// <param name="LiftoffTimeS">Time to lift-off, s, or null when the craft did not lift off within the time limit.</param>
+/// <param name="StalledStations">Indices of stations whose motor cannot out-pull the drag peak at the landed gap.</param>
+/// <param name="PeakMotorCurrentA">Largest motor current of any station during the spin-up, A.</param>
+/// <param name="PeakPackCurrentA">Largest pack current during the spin-up, A.</param>
+/// <param name="MinPackVoltageV">Smallest bus voltage during the spin-up, V.</param>
+/// <param name="HoverSpeedRpm">Largest trimmed hover speed of any station, rpm, or null when no trim was found.</param>
+/// <param name="HoverCurrentA">Largest trimmed hover motor current of any station, A, or null.</param>
+/// <param name="HoverPackVoltageV">Bus voltage in trimmed hover, V, or null.</param>
+/// <param name="YawResidualNm">Magnitude of the yaw torque with equal duties, N m, or null.</param>
+/// <param name="YawAuthorityNm">Yaw torque the trim can command in its weaker direction within limits, N m, or null.</param>
+/// <param name="TrimLimit">What stops the trim (a limit key), or null when it exists within limits.</param>
+/// <param name="Trace">The spin-up trace when it was asked for, otherwise null.</param>
+public sealed record StressOutcome(
+    IReadOnlyList<double?> Margins,
+    double? LiftoffTimeS,
+    IReadOnlyList<int> StalledStations,
+    double PeakMotorCurrentA,
+    double PeakPackCurrentA,
+    double MinPackVoltageV,
+    double? HoverSpeedRpm,
+    double? HoverCurrentA,
+    double? HoverPackVoltageV,
+    double? YawResidualNm,
+    double? YawAuthorityNm,
+    string? TrimLimit,
+    IReadOnlyList<StressTracePoint>? Trace)
+{
+    /// <summary>True when the criterion passed (its margin is at least 0 or was not assessed).</summary>
+    /// <param name="criterion">The criterion.</param>
+    public bool Passed(StressCriterion criterion) => Margins[(int)criterion] is not { } m || m >= 0;
+
+    /// <summary>True when every criterion passed.</summary>
+    public bool PassedAll => StressCriteria.All.All(Passed);
+
+    /// <summary>The smallest assessed margin (the sample's distance to its nearest failure), or +infinity when none was
+    /// assessed. The worst sample of a study is the one with the smallest value.</summary>
+    public double MinimumMargin => Margins.Where(m => m is not null).Select(m => m!.Value).DefaultIfEmpty(double.PositiveInfinity).Min();
+}

@@ -1,0 +1,161 @@
+namespace RotorDrive.Core.Studies.Stress;
+
+/// <summary>Monte Carlo tolerance stress test: draws every sample's parts from its own stream, evaluates the samples in
+/// parallel and aggregates failure rates, percentiles, drivers and the worst sample.</summary>
+/// <remarks>
+/// <para>Reproducibility: sample k's parts come from <see cref="SampleStreams.ForSample"/>(seed, k) alone
+/// (<see cref="StressSampler"/>), each result is stored at its index, and every aggregate is computed afterwards in index
+/// order, so the result is identical for any thread count, and <see cref="RunSample"/> reproduces sample k exactly.</para>
+/// <para>Statistics: failure probabilities with E. B. Wilson's score interval (J. Am. Stat. Assoc. 22, 1927;
+/// <see cref="WilsonInterval"/>); percentiles by Hyndman and Fan's definition 7 (<see cref="Percentiles"/>); drivers by
+/// Spearman's rank correlation (<see cref="RankCorrelation"/>), which measures monotone association without assuming a
+/// linear response, the usual screening measure of Monte Carlo sensitivity analysis (J. C. Helton and F. J. Davis,
+/// "Latin hypercube sampling and the propagation of uncertainty in analyses of complex systems", Reliab. Eng. Syst. Saf.
+/// 81, 2003).</para>
+/// <para>Cancellation stops the workers after the samples they are on; the samples finished so far are aggregated and
+/// the result is marked partial.</para>
+/// </remarks>
+public static class StressStudy
+{
+    /// <summary>Keys of the figures in <see cref="StressResult.Percentiles"/>, in order.</summary>
+    public static IReadOnlyList<string> FigureKeys { get; } =
+        ["hover_speed_rpm", "hover_current_a", "hover_pack_voltage_v", "liftoff_time_s", "yaw_residual_nm"];
+
+    /// <summary>Runs a study.</summary>
+    /// <param name="model">The rig model and its evaluators.</param>
+    /// <param name="tolerances">The spreads.</param>
+    /// <param name="options">Samples, seed, threads; null for <see cref="StressStudyOptions.Default"/>.</param>
+    /// <param name="progress">Receives the number of samples finished so far (from worker threads), or null.</param>
+    /// <param name="cancellationToken">Stops the run; the samples finished so far are reported as partial.</param>
+    /// <exception cref="ArgumentNullException">The model or tolerances are null.</exception>
+    /// <exception cref="ArgumentOutOfRangeException">Fewer than one sample or thread.</exception>
+    /// <exception cref="ArgumentException">The rig lacks a drivetrain part (see <see cref="StressSampler.Draw"/>).</exception>
+    public static StressResult Run(
+        IStressModel model,
+        StressTolerances tolerances,
+        StressStudyOptions? options = null,
+        IProgress<int>? progress = null,
+        CancellationToken cancellationToken = default)
+    {
+        Preconditions.NotNull(model, nameof(model));
+        Preconditions.NotNull(tolerances, nameof(tolerances));
+        var o = options ?? StressStudyOptions.Default;
+        int n = Preconditions.AtLeast(o.Samples, 1, nameof(o.Samples));
+        if (o.Threads is { } t)
+        {
+            Preconditions.AtLeast(t, 1, nameof(o.Threads));
+        }
+        var rig = model.Rig;
+        StressSampler.RequireParts(rig);
+
+        var samples = new StressSample?[n];
+        int finished = 0;
+        var parallel = new ParallelOptions { MaxDegreeOfParallelism = o.Threads ?? -1, CancellationToken = cancellationToken };
+        try
+        {
+            Parallel.For(0, n, parallel, () => model.CreateEvaluator(), (k, state, evaluator) =>
+            {
+                if (cancellationToken.IsCancellationRequested)
+                {
+                    state.Stop();
+                    return evaluator;
+                }
+                var parts = StressSampler.Draw(rig, tolerances, o.Seed, k);
+                samples[k] = new StressSample(k, parts, evaluator.Evaluate(parts, recordTrace: false));
+                progress?.Report(Interlocked.Increment(ref finished));
+                return evaluator;
+            }, _ => { });
+        }
+        catch (OperationCanceledException)
+        {
+            // Cancelled: what finished is reported as partial.
+        }
+        var done = samples.Where(s => s is not null).Select(s => s!).ToArray();
+        return Aggregate(done, n, o.Seed, StressInput.Varied(tolerances, rig.Stations.Count));
+    }
+
+    /// <summary>Evaluates one sample exactly as <see cref="Run"/> does, with its spin-up trace.</summary>
+    /// <param name="model">The rig model.</param>
+    /// <param name="tolerances">The spreads.</param>
+    /// <param name="seed">The study's seed.</param>
+    /// <param name="sampleIndex">The sample index, 0 or more.</param>
+    /// <exception cref="ArgumentNullException">The model or tolerances are null.</exception>
+    /// <exception cref="ArgumentOutOfRangeException">The index is negative.</exception>
+    public static StressSample RunSample(IStressModel model, StressTolerances tolerances, int seed, int sampleIndex)
+    {
+        Preconditions.NotNull(model, nameof(model));
+        var parts = StressSampler.Draw(model.Rig, tolerances, seed, Preconditions.AtLeast(sampleIndex, 0, nameof(sampleIndex)));
+        return new StressSample(sampleIndex, parts, model.CreateEvaluator().Evaluate(parts, recordTrace: true));
+    }
+
+    /// <summary>Aggregates evaluated samples (in index order) into a result.</summary>
+    /// <param name="samples">The evaluated samples, in index order.</param>
+    /// <param name="requested">Samples asked for.</param>
+    /// <param name="seed">The study's seed.</param>
+    /// <param name="inputs">The varied inputs.</param>
+    /// <exception cref="ArgumentNullException">An argument is null.</exception>
+    public static StressResult Aggregate(IReadOnlyList<StressSample> samples, int requested, int seed, IReadOnlyList<StressInput> inputs)
+    {
+        Preconditions.NotNull(samples, nameof(samples));
+        Preconditions.NotNull(inputs, nameof(inputs));
+        int n = samples.Count;
+        if (n == 0)
+        {
+            return new StressResult(0, requested, seed, requested > 0, null, [], FigureKeys.Select(k => new StressFigure(k, null)).ToArray(),
+                [], null, inputs, samples);
+        }
+
+        var overall = WilsonInterval.Compute(samples.Count(s => !s.Outcome.PassedAll), n);
+        var criteria = StressCriteria.All
+            .Select(c => new StressCriterionRate(c, WilsonInterval.Compute(samples.Count(s => !s.Outcome.Passed(c)), n)))
+            .ToArray();
+
+        var figures = new[]
+        {
+            Figure(FigureKeys[0], samples.Select(s => s.Outcome.HoverSpeedRpm)),
+            Figure(FigureKeys[1], samples.Select(s => s.Outcome.HoverCurrentA)),
+            Figure(FigureKeys[2], samples.Select(s => s.Outcome.HoverPackVoltageV)),
+            Figure(FigureKeys[3], samples.Select(s => s.Outcome.LiftoffTimeS)),
+            Figure(FigureKeys[4], samples.Select(s => s.Outcome.YawResidualNm)),
+        };
+
+        var drivers = new List<StressDriver>();
+        foreach (var criterion in StressCriteria.All)
+        {
+            var assessed = samples.Where(s => s.Outcome.Margins[(int)criterion] is not null).ToArray();
+            var margins = assessed.Select(s => s.Outcome.Margins[(int)criterion]!.Value).ToArray();
+            foreach (var input in inputs)
+            {
+                var values = assessed.Select(s => input.ValueIn(s.Parts)).ToArray();
+                if (RankCorrelation.Spearman(values, margins) is { } rho)
+                {
+                    drivers.Add(new StressDriver(input.Name, criterion, rho));
+                }
+            }
+        }
+        var ordered = drivers
+            .OrderByDescending(d => Math.Abs(d.Rho))
+            .ThenBy(d => d.Input, StringComparer.Ordinal)
+            .ThenBy(d => d.Criterion)
+            .ToArray();
+
+        int? worst = null;
+        double worstMargin = double.PositiveInfinity;
+        foreach (var s in samples)
+        {
+            double m = s.Outcome.MinimumMargin;
+            if (m < worstMargin)
+            {
+                worstMargin = m;
+                worst = s.Index;
+            }
+        }
+        return new StressResult(n, requested, seed, n < requested, overall, criteria, figures, ordered, worst, inputs, samples);
+    }
+
+    private static StressFigure Figure(string key, IEnumerable<double?> values)
+    {
+        var present = values.Where(v => v is not null && double.IsFinite(v.Value)).Select(v => v!.Value).ToArray();
+        return new StressFigure(key, present.Length == 0 ? null : Percentiles.Summarize(present));
+    }
+}

@@ -1,0 +1,145 @@
+using System.Globalization;
+using System.Text.Json;
+using RotorDrive.Files;
+using Xunit;
+
+namespace RotorDrive.Cli.Tests;
+
+public sealed class StressCommandTests : IDisposable
+{
+    private readonly string _folder = Path.Combine(Path.GetTempPath(), "rotordrive-stress-" + Guid.NewGuid().ToString("N"));
+
+    public StressCommandTests() => Directory.CreateDirectory(_folder);
+
+    public void Dispose() => Directory.Delete(_folder, recursive: true);
+
+    private string CopyDemo(Func<string, string>? edit = null)
+    {
+        foreach (var file in Directory.GetFiles(RepoPaths.Catalogs))
+        {
+            File.Copy(file, Path.Combine(_folder, Path.GetFileName(file)), overwrite: true);
+        }
+        string rig = Path.Combine(_folder, "demo-rig.json");
+        if (edit is not null)
+        {
+            File.WriteAllText(rig, edit(File.ReadAllText(rig)));
+        }
+        return rig;
+    }
+
+    [Fact]
+    public async Task Stress_Json_HasTheDocumentedKeys()
+    {
+        var (code, output, error) = await CliRunner.RunAsync("stress", RepoPaths.DemoRig, "--samples", "24", "--seed", "4", "--json");
+        Assert.True(code is ExitCodes.Ok or ExitCodes.LimitFindings, error);
+        using var doc = JsonDocument.Parse(output);
+        var root = doc.RootElement;
+        Assert.Equal(24, root.GetProperty("samples").GetInt32());
+        Assert.Equal(4, root.GetProperty("seed").GetInt32());
+        Assert.False(root.GetProperty("partial").GetBoolean());
+        var rate = root.GetProperty("failure_rate");
+        Assert.True(rate.GetProperty("ci_low").GetDouble() <= rate.GetProperty("rate").GetDouble());
+        Assert.True(rate.GetProperty("rate").GetDouble() <= rate.GetProperty("ci_high").GetDouble());
+        Assert.Equal(7, root.GetProperty("criteria").GetArrayLength());
+        Assert.Equal(5, root.GetProperty("percentiles").GetArrayLength());
+        Assert.True(root.GetProperty("drivers").GetArrayLength() > 0);
+        Assert.True(root.GetProperty("worst_sample").GetProperty("index").GetInt32() is >= 0 and < 24);
+        // Progress goes to stderr, never to stdout.
+        Assert.Contains("stress: 24/24 samples", error);
+        Assert.DoesNotContain("stress:", output);
+    }
+
+    [Fact]
+    public async Task SameSeed_GivesByteIdenticalJson_WithOneAndTwoThreads()
+    {
+        var one = await CliRunner.RunAsync("stress", RepoPaths.DemoRig, "--samples", "16", "--threads", "1", "--json");
+        var two = await CliRunner.RunAsync("stress", RepoPaths.DemoRig, "--samples", "16", "--threads", "2", "--json");
+        Assert.Equal(one.ExitCode, two.ExitCode);
+        Assert.Equal(one.Output, two.Output);
+    }
+
+    [Fact]
+    public async Task SampleK_ReproducesTheStudysRowExactly()
+    {
+        string csv = Path.Combine(_folder, "rows.csv");
+        var (code, _, error) = await CliRunner.RunAsync("stress", RepoPaths.DemoRig, "--samples", "12", "--seed", "9", "--csv", csv);
+        Assert.True(code is ExitCodes.Ok or ExitCodes.LimitFindings, error);
+        string[] lines = File.ReadAllLines(csv);
+        string[] header = lines[0].Split(',');
+        Assert.Equal(13, lines.Length);
+        foreach (int k in new[] { 3, 11 })
+        {
+            string[] row = lines[k + 1].Split(',');
+            var (sampleCode, output, _) = await CliRunner.RunAsync("stress", RepoPaths.DemoRig, "--seed", "9", "--sample", k.ToString(CultureInfo.InvariantCulture), "--json");
+            using var doc = JsonDocument.Parse(output);
+            var root = doc.RootElement;
+            Assert.Equal(k, root.GetProperty("sample").GetInt32());
+            Assert.Equal(row[1] == "true", root.GetProperty("passed").GetBoolean());
+            Assert.Equal(row[1] == "true" ? ExitCodes.Ok : ExitCodes.LimitFindings, sampleCode);
+            foreach (var margin in root.GetProperty("margins").EnumerateObject())
+            {
+                string cell = row[Array.IndexOf(header, "margin_" + margin.Name)];
+                if (margin.Value.ValueKind == JsonValueKind.Null)
+                {
+                    Assert.Equal("", cell);
+                }
+                else
+                {
+                    Assert.Equal(double.Parse(cell, CultureInfo.InvariantCulture), margin.Value.GetDouble());
+                }
+            }
+            string hover = row[Array.IndexOf(header, "hover_speed_rpm")];
+            if (hover.Length > 0)
+            {
+                Assert.Equal(double.Parse(hover, CultureInfo.InvariantCulture), root.GetProperty("hover_speed_rpm").GetDouble());
+            }
+            Assert.True(root.GetProperty("trace").GetArrayLength() > 2);
+            Assert.Equal(6, root.GetProperty("parts").GetProperty("stations").GetArrayLength());
+        }
+    }
+
+    [Fact]
+    public async Task Csv_RefusesToOverwrite_WithoutForce()
+    {
+        string csv = Path.Combine(_folder, "keep.csv");
+        File.WriteAllText(csv, "mine");
+        var (code, _, error) = await CliRunner.RunAsync("stress", RepoPaths.DemoRig, "--samples", "2", "--csv", csv);
+        Assert.Equal(ExitCodes.BadInput, code);
+        Assert.Contains(Messages.FileExists(), error);
+        Assert.Equal("mine", File.ReadAllText(csv));
+        var (forced, _, _) = await CliRunner.RunAsync("stress", RepoPaths.DemoRig, "--samples", "2", "--csv", csv, "--force");
+        Assert.NotEqual(ExitCodes.BadInput, forced);
+        Assert.StartsWith("sample,passed,margin_liftoff", File.ReadAllText(csv));
+    }
+
+    [Fact]
+    public async Task SampleTrace_GoesToCsv()
+    {
+        string csv = Path.Combine(_folder, "trace.csv");
+        var (code, output, _) = await CliRunner.RunAsync("stress", RepoPaths.DemoRig, "--sample", "0", "--csv", csv);
+        Assert.NotEqual(ExitCodes.BadInput, code);
+        Assert.Contains("Stress sample 0", output);
+        Assert.StartsWith("time_s,duty,speed_rpm_0", File.ReadAllText(csv));
+    }
+
+    [Fact]
+    public async Task BadTolerance_IsReportedWithFileLineAndRule_ExitTwo()
+    {
+        string rig = CopyDemo(t => t.Replace("\"gap_offset_mm\": { \"normal_sd\": 0.7 }", "\"gap_offset_mm\": { \"normal_sd_pct\": 5 }", StringComparison.Ordinal));
+        int line = Array.FindIndex(File.ReadAllLines(rig), l => l.Contains("\"gap_offset_mm\"", StringComparison.Ordinal)) + 1;
+        var (code, output, error) = await CliRunner.RunAsync("stress", rig, "--samples", "2");
+        Assert.Equal(ExitCodes.BadInput, code);
+        Assert.Equal("", output);
+        Assert.Contains($"demo-rig.json:{line}:", error);
+        Assert.Contains("$.tolerances.gap_offset_mm.normal_sd_pct", error);
+        Assert.Contains(Messages.ToleranceAbsoluteOnly("gap_offset_mm"), error);
+    }
+
+    [Fact]
+    public async Task BadOptions_AreRejectedAtParseTime()
+    {
+        Assert.Equal(ExitCodes.BadInput, (await CliRunner.RunAsync("stress", RepoPaths.DemoRig, "--samples", "0")).ExitCode);
+        Assert.Equal(ExitCodes.BadInput, (await CliRunner.RunAsync("stress", RepoPaths.DemoRig, "--sample", "-1")).ExitCode);
+        Assert.Equal(ExitCodes.BadInput, (await CliRunner.RunAsync("stress", RepoPaths.DemoRig, "--threads", "0")).ExitCode);
+    }
+}
