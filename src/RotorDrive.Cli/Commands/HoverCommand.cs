@@ -170,7 +170,7 @@ public static class HoverCommand
             o.WriteLine($"  residuals: force {r.Residuals.Force:0.0e+0}, pitch {r.Residuals.Pitch:0.0e+0}, roll {r.Residuals.Roll:0.0e+0} (relative); net yaw {Numbers.Format(r.YawTorqueNm, 3)} N m");
             foreach (var m in r.PackMargins)
             {
-                o.WriteLine($"  pack {m.Limit.Replace('_', ' ')}: {Numbers.Format(m.Value, 2)} of {Numbers.Format(m.Allowed, 2)} {m.Unit} (margin {Numbers.Format(m.Margin * 100, 0)} %)");
+                o.WriteLine($"  {m.Limit.Replace('_', ' ')}: {Numbers.Format(m.Value, 2)} of {Numbers.Format(m.Allowed, 2)} {m.Unit} (margin {Numbers.Format(m.Margin * 100, 0)} %)");
             }
         }
         o.WriteLine();
