@@ -151,8 +151,10 @@ public sealed class HoverTrimTests
             var mirror = CraftRigs.Model(CraftRigs.Mirrored(rig));
             var a = HoverTrim.Solve(model);
             var b = HoverTrim.Solve(mirror);
-            Assert.Equal(HoverStatus.Hovering, a.Status);
-            Assert.Equal(HoverStatus.Hovering, b.Status);
+            // Mirroring cannot change whether the craft balances or which limits fail; some drawn rigs (heavy payload,
+            // far-off CG) balance with a limit exceeded, and the mirror law holds for them too.
+            Assert.Equal(a.Status, b.Status);
+            Assert.Contains(a.Status, new[] { HoverStatus.Hovering, HoverStatus.LimitExceeded });
             for (int i = 0; i < n; i++)
             {
                 Approx.Equal(a.Stations[i].SpeedRadPerS, b.Stations[i].SpeedRadPerS, 1e-7, what: $"speed {i}");
