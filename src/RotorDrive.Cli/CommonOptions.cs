@@ -23,4 +23,12 @@ public static class CommonOptions
     {
         Description = "Replace the output file if it already exists.",
     };
+
+    /// <summary>The <c>--csv FILE</c> export option; <paramref name="what"/> says what the file holds. Exports are written
+    /// atomically and never replace an existing file without <c>--force</c>.</summary>
+    public static Option<string?> Csv(string what) => new("--csv")
+    {
+        Description = $"Write {what} to this CSV file (atomically; refuses to replace an existing file without --force).",
+        HelpName = "FILE",
+    };
 }

@@ -18,11 +18,7 @@ public static class EnduranceCommand
     public static Command Create()
     {
         var rig = CommonOptions.RigArgument();
-        var csv = new Option<string?>("--csv")
-        {
-            Description = "Write the endurance time traces to this CSV file (refuses to replace an existing file without --force).",
-            HelpName = "FILE",
-        };
+        var csv = CommonOptions.Csv("the endurance time traces");
         var force = CommonOptions.Force();
         var json = CommonOptions.Json();
         var command = new Command("endurance", "Hover time from a full pack until the first limit, with traces of charge, voltage, currents and temperatures.");

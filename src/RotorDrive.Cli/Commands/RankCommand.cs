@@ -44,11 +44,7 @@ public static class RankCommand
             Description = "Show why a motor (catalog id) was rejected with every controller and pack.",
             HelpName = "MOTOR_ID",
         };
-        var csv = new Option<string?>("--csv")
-        {
-            Description = "Write every accepted combination, in rank order, to this CSV file (atomically).",
-            HelpName = "FILE",
-        };
+        var csv = CommonOptions.Csv("every accepted combination in rank order");
         var force = CommonOptions.Force();
         var json = CommonOptions.Json();
         var command = new Command("rank", "Rank every motor x controller x pack from the catalogs for the rig, explaining every rejection.");

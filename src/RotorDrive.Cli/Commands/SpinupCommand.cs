@@ -65,11 +65,7 @@ public static class SpinupCommand
                 r.AddError($"--soc-pct must lie in [0, 100]; got {v.ToString(CultureInfo.InvariantCulture)}.");
             }
         });
-        var csv = new Option<string?>("--csv")
-        {
-            Description = "Write the spin-up time traces to this CSV file (refuses to replace an existing file without --force).",
-            HelpName = "FILE",
-        };
+        var csv = CommonOptions.Csv("the spin-up time traces");
         var force = CommonOptions.Force();
         var json = CommonOptions.Json();
         var command = new Command("spinup", "Spin-up from the landing gear through the drag peak to hover, and the landing with braking on and off.");

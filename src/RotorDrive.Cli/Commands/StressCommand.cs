@@ -66,7 +66,7 @@ public static class StressCommand
                 r.AddError("--accept-pct must lie in (0, 100].");
             }
         });
-        var csv = new Option<string?>("--csv") { Description = "Write one row per sample (with --sample: the spin-up trace) to FILE.", HelpName = "FILE" };
+        var csv = CommonOptions.Csv("one row per sample (with --sample: the spin-up trace)");
         var force = CommonOptions.Force();
         var json = CommonOptions.Json();
 
