@@ -141,6 +141,33 @@ public sealed class SpinupCommandTests : IDisposable
         Assert.Equal("", error);
     }
 
+    // The endurance says which plate patch it assumed. A patch k times the annulus has k times the heat capacity and
+    // k times the cooled area; the lumped node (Incropera et al., "Fundamentals of Heat and Mass Transfer", 5.2) then
+    // needs at least k times as long to reach the same rise -ln(1 - k x) >= -k ln(1 - x) for the same heat input, so
+    // the plate limit comes later.
+    [Fact]
+    public async Task Endurance_StatesThePlatePatch_AndAWiderPatchHoversLonger()
+    {
+        var (_, text, _) = await CliRunner.RunAsync("endurance", Rig);
+        Assert.Contains("spreading factor 1, the hottest assumption", text);
+        var (_, narrow, _) = await CliRunner.RunAsync("endurance", Rig, "--json");
+        Edit("demo-rig.json", "\"temperature_c\": 22 }", "\"temperature_c\": 22, \"spreading_factor\": 3 }");
+        var (code, wide, error) = await CliRunner.RunAsync("endurance", Rig, "--json");
+        Assert.True(code is ExitCodes.Ok or ExitCodes.LimitFindings, error);
+        using var a = JsonDocument.Parse(narrow);
+        using var b = JsonDocument.Parse(wide);
+        Assert.Equal(1.0, a.RootElement.GetProperty("plate_spreading_factor").GetDouble());
+        Assert.Equal(3.0, b.RootElement.GetProperty("plate_spreading_factor").GetDouble());
+        Assert.Contains("plate temperature", a.RootElement.GetProperty("first_limit").GetString());
+        Assert.True(b.RootElement.GetProperty("runtime_s").GetDouble() > 2.5 * a.RootElement.GetProperty("runtime_s").GetDouble());
+
+        Edit("demo-rig.json", "\"spreading_factor\": 3 }", "\"spreading_factor\": 0.5 }");
+        var (badCode, _, badError) = await CliRunner.RunAsync("endurance", Rig);
+        Assert.Equal(ExitCodes.BadInput, badCode);
+        Assert.Contains("$.plate.spreading_factor", badError);
+        Assert.Contains("demo-rig.json:", badError);
+    }
+
     [Fact]
     public async Task Endurance_Csv_RefusesToOverwrite_WithoutForce()
     {

@@ -34,6 +34,11 @@ internal sealed class SpinupModel : IOdeEvents, IOdeObserver
     private readonly double _chargeCapacityC;
     private double _voltageHint = double.NaN;
 
+    // The (t, y) of the last evaluation, so that the algebra is not solved twice at one point (the integrator's last
+    // stage, the event check and the observer all look at the end of an accepted step).
+    private readonly double[] _lastY;
+    private double _lastT = double.NaN;
+
     // Last evaluation's algebraic outputs.
     private BusSolution _bus;
     private double _lift;
@@ -70,6 +75,7 @@ internal sealed class SpinupModel : IOdeEvents, IOdeObserver
         _points = new DrivePoint[_n];
         _loadPoints = new LoadPoint[_n];
         _scratch = new double[Dimension];
+        _lastY = new double[Dimension];
         _landedMm = rig.Rig.LandedGapM * 1000.0;
         _socStart = socStart;
         _chargeCapacityC = rig.Packs.CapacityAh * 3600.0;
@@ -245,10 +251,33 @@ internal sealed class SpinupModel : IOdeEvents, IOdeObserver
         dy[e + 4] = noLoad;
         dy[e + 5] = eddy;
         dy[e + 6] = mech;
+        _lastT = t;
+        y.CopyTo(_lastY);
     }
 
     /// <summary>Evaluates the algebra at (t, y) without keeping the derivatives.</summary>
-    public void EvaluateAt(double t, ReadOnlySpan<double> y) => Derivatives(t, y, _scratch);
+    public void EvaluateAt(double t, ReadOnlySpan<double> y)
+    {
+        if (t != _lastT || !y.SequenceEqual(_lastY))
+        {
+            Derivatives(t, y, _scratch);
+        }
+    }
+
+    // Total lift at (t, y) from the loads alone (no bus solve), N.
+    private double LiftAt(double t, ReadOnlySpan<double> y)
+    {
+        if (t == _lastT && y.SequenceEqual(_lastY))
+        {
+            return _lift;
+        }
+        double gapM = Math.Max(y[Gap], 1e-3) / 1000.0, lift = 0;
+        for (int j = 0; j < _n; j++)
+        {
+            lift += _loads[j].Evaluate(Math.Max(y[j], 0.0), Math.Max(gapM + _gapOffsetM[j], 1e-6), y[PlateTemp + j], _rotorMagnetC[j]).LiftN;
+        }
+        return lift;
+    }
 
     // Event 0: lift-off (lift - weight rises through 0 on the gear). Event 1: touch-down (gap falls to the landed gap).
     public int Count => 2;
@@ -257,8 +286,7 @@ internal sealed class SpinupModel : IOdeEvents, IOdeObserver
     {
         if (Grounded)
         {
-            EvaluateAt(timeS, state);
-            values[0] = _lift - _rig.WeightN;
+            values[0] = LiftAt(timeS, state) - _rig.WeightN;
             values[1] = 1.0;
         }
         else

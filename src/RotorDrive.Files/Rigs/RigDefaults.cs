@@ -6,6 +6,10 @@ public static class RigDefaults
     /// <summary>plate.convection_w_per_m2k: a still-air natural-convection estimate, W/(m^2 K).</summary>
     public const double ConvectionWPerM2K = 12.0;
 
+    /// <summary>plate.spreading_factor: 1, the eddy heat kept in the plate under the magnet annulus (the hottest
+    /// assumption).</summary>
+    public const double PlateSpreadingFactor = 1.0;
+
     /// <summary>craft.heave_damping_ratio.</summary>
     public const double HeaveDampingRatio = 0.2;
 

@@ -58,6 +58,7 @@ public static class RigDocumentReader
                 ThicknessMm = p.Number("thickness_mm"),
                 TemperatureC = p.Number("temperature_c"),
                 ConvectionWPerM2K = p.Number("convection_w_per_m2k"),
+                SpreadingFactor = p.Number("spreading_factor"),
             };
             p.ReportUnknownKeys();
         }

@@ -33,6 +33,7 @@ public static class RigDocumentWriter
                 Num(w, "thickness_mm", p.ThicknessMm);
                 Num(w, "temperature_c", p.TemperatureC);
                 Num(w, "convection_w_per_m2k", p.ConvectionWPerM2K);
+                Num(w, "spreading_factor", p.SpreadingFactor);
                 w.WriteEndObject();
             }
             if (document.Craft is { } k)

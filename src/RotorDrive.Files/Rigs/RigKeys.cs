@@ -11,7 +11,7 @@ public static class RigKeys
     public static IReadOnlyList<string> Catalogs { get; } = ["motors", "controllers", "packs", "cell_curves", "rotors", "plates"];
 
     /// <summary>Keys of "plate".</summary>
-    public static IReadOnlyList<string> Plate { get; } = ["material", "thickness_mm", "temperature_c", "convection_w_per_m2k"];
+    public static IReadOnlyList<string> Plate { get; } = ["material", "thickness_mm", "temperature_c", "convection_w_per_m2k", "spreading_factor"];
 
     /// <summary>Keys of "craft".</summary>
     public static IReadOnlyList<string> Craft { get; } =

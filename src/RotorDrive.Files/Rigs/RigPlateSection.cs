@@ -14,4 +14,8 @@ public sealed class RigPlateSection
 
     /// <summary>"convection_w_per_m2k": plate-to-air heat transfer coefficient, W/(m^2 K) (optional).</summary>
     public double? ConvectionWPerM2K { get; set; }
+
+    /// <summary>"spreading_factor": plate patch area that takes a rotor's eddy heat / the magnet annulus area, at least 1
+    /// (optional; default 1, the heat kept under the annulus: the hottest assumption).</summary>
+    public double? SpreadingFactor { get; set; }
 }

@@ -79,7 +79,7 @@ public static class RigResolver
 
         // Plate.
         PlateMaterial? material = null;
-        double? thickness = null, plateTemp = null, convection = null;
+        double? thickness = null, plateTemp = null, convection = null, spreading = null;
         if (document.Plate is not { } plate)
         {
             ctx.Missing("$.plate");
@@ -90,6 +90,7 @@ public static class RigResolver
             thickness = ctx.Required(plate.ThicknessMm, "$.plate.thickness_mm", ValueRule.Between(0.01, 200));
             plateTemp = ctx.Required(plate.TemperatureC, "$.plate.temperature_c", ValueRule.Between(-40, 400));
             convection = ctx.Optional(plate.ConvectionWPerM2K, "$.plate.convection_w_per_m2k", ValueRule.Between(0.1, 1000), RigDefaults.ConvectionWPerM2K);
+            spreading = ctx.Optional(plate.SpreadingFactor, "$.plate.spreading_factor", ValueRule.Between(1, 100), RigDefaults.PlateSpreadingFactor);
         }
 
         // Craft.
@@ -263,7 +264,7 @@ public static class RigResolver
 
         var ordered = problems.OrderBy(p => p.Line).ThenBy(p => p.Column).ToList();
         if (ordered.Count > 0 || !partsOk || !stationsOk || !packOk || name is null || material is null || thickness is null
-            || plateTemp is null || convection is null || body is null || design is null || landed is null || ambient is null
+            || plateTemp is null || convection is null || spreading is null || body is null || design is null || landed is null || ambient is null
             || gearFriction is null || limits is null)
         {
             return new RigResolveResult(null, ordered);
@@ -280,7 +281,10 @@ public static class RigResolver
             bank,
             limits,
             gearFriction.Value,
-            convection.Value);
+            convection.Value)
+        {
+            PlateSpreadingFactor = spreading.Value,
+        };
         return new RigResolveResult(rig, ordered) { Tolerances = tolerances ?? StressTolerances.None };
     }
 

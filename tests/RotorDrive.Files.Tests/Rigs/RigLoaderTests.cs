@@ -140,7 +140,7 @@ public class RigLoaderTests
         {
             Name = "n",
             Catalogs = new RigCatalogsSection { Motors = "a", Controllers = "b", Packs = "c", CellCurves = "d", Rotors = "e", Plates = "f" },
-            Plate = new RigPlateSection { Material = "m", ThicknessMm = 1, TemperatureC = 2, ConvectionWPerM2K = 3 },
+            Plate = new RigPlateSection { Material = "m", ThicknessMm = 1, TemperatureC = 2, ConvectionWPerM2K = 3, SpreadingFactor = 1.5 },
             Craft = new RigCraftSection { EmptyMassKg = 1, PayloadKg = 2, CgXMm = 3, CgYMm = 4, YawInertiaKgM2 = 5, HeaveDampingRatio = 0.1 },
             Gap = new RigGapSection { DesignMm = 10, LandedMm = 5 },
             AmbientC = 20,

@@ -67,6 +67,23 @@ public class RigResolverTests
         Assert.Equal(RigDefaults.LiftoffTimeS, limits.LiftoffTimeS);
     }
 
+    // plate.spreading_factor: optional, default 1 (the annulus-only patch); read as given; below 1 (a patch smaller than the
+    // annulus the heat enters) is refused with the file, line, column and rule.
+    [Fact]
+    public void Resolve_ReadsThePlateSpreadingFactor_AndRefusesOneBelowOne()
+    {
+        Assert.Equal(RigDefaults.PlateSpreadingFactor, Resolve().Rig!.PlateSpreadingFactor);
+        Assert.Equal(2.5, Resolve("\"temperature_c\": 22 }", "\"temperature_c\": 22, \"spreading_factor\": 2.5 }").Rig!.PlateSpreadingFactor);
+        var bad = Resolve("\"temperature_c\": 22 }", "\"temperature_c\": 22, \"spreading_factor\": 0.5 }");
+        Assert.Null(bad.Rig);
+        var problem = Assert.Single(bad.Problems);
+        Assert.Equal(File, problem.File);
+        Assert.Equal(LineOf("\"plate\""), problem.Line);
+        Assert.Equal("$.plate.spreading_factor", problem.Field);
+        Assert.Equal(Messages.MustBeBetween(1, 100, 0.5), problem.Message);
+        Assert.True(problem.Column > 0);
+    }
+
     [Fact]
     public void Resolve_ReportsAMissingRequiredKeyAtItsParentObject()
     {
