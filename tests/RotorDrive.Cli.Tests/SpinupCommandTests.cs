@@ -169,6 +169,20 @@ public sealed class SpinupCommandTests : IDisposable
     }
 
     [Fact]
+    public async Task Spinup_AndEndurance_OnARigWithoutAMotor_AreBadInput_NamingTheStation()
+    {
+        Edit("demo-rig.json", "\"motor\": \"or1050-kv90\", ", "");
+        foreach (string command in new[] { "spinup", "endurance" })
+        {
+            var (code, output, error) = await CliRunner.RunAsync(command, Rig);
+            Assert.Equal(ExitCodes.BadInput, code);
+            Assert.Contains("station 0 has no motor", error);
+            Assert.Contains("demo-rig.json", error);
+            Assert.Equal("", output);
+        }
+    }
+
+    [Fact]
     public async Task Endurance_Csv_RefusesToOverwrite_WithoutForce()
     {
         string csv = Path.Combine(_folder, "endurance.csv");

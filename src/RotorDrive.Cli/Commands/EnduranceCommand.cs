@@ -43,17 +43,13 @@ public static class EnduranceCommand
             error.WriteLine($"rotordrive endurance: error: {csvPath}: {Messages.FileExists()}");
             return ExitCodes.BadInput;
         }
-        var loaded = RigInput.LoadOrReport(rigPath, error);
-        if (loaded is null)
+        var model = CraftInput.ModelOrReport("endurance", rigPath, error);
+        if (model is null)
         {
             return ExitCodes.BadInput;
         }
-        Rig rig = loaded.Rig!;
-        var sim = RigSimulation.BuildOrReport(rig, rigPath, "endurance", error);
-        if (sim is null)
-        {
-            return ExitCodes.BadInput;
-        }
+        Rig rig = model.Rig;
+        var sim = SimulationRig.FromModel(model);
         var result = EnduranceSimulator.Run(sim);
         if (csvPath is not null && result.Trace is { } trace)
         {

@@ -87,17 +87,13 @@ public static class SpinupCommand
             error.WriteLine($"rotordrive spinup: error: {csvPath}: {Messages.FileExists()}");
             return ExitCodes.BadInput;
         }
-        var loaded = RigInput.LoadOrReport(rigPath, error);
-        if (loaded is null)
+        var model = CraftInput.ModelOrReport("spinup", rigPath, error);
+        if (model is null)
         {
             return ExitCodes.BadInput;
         }
-        Rig rig = loaded.Rig!;
-        var sim = RigSimulation.BuildOrReport(rig, rigPath, "spinup", error);
-        if (sim is null)
-        {
-            return ExitCodes.BadInput;
-        }
+        Rig rig = model.Rig;
+        var sim = SimulationRig.FromModel(model);
 
         var study = SpinupStudy.Run(sim, new SpinupStudyRequest(mode, rampS, soc));
         var spin = study.Spinup;

@@ -14,12 +14,15 @@ internal sealed class SpinupRecorder
     private readonly double[] _prevMotorExcess, _prevControllerExcess;
     private double _prevPackExcess;
     private double _prevTime = double.NegativeInfinity;
+    private readonly bool _full;
 
     public SpinupRecorder(SpinupModel model, SimulationRig rig, SpinupOptions options)
     {
         _model = model;
         _rig = rig;
         _n = rig.StationCount;
+        // Without a trace only the times, gaps and speeds are kept (the steady-hover search reads them).
+        _full = options.RecordTrace;
         _speed = NewLists(_n);
         _current = NewLists(_n);
         _winding = NewLists(_n);
@@ -95,9 +98,12 @@ internal sealed class SpinupRecorder
             _peakPlate[j] = Math.Max(_peakPlate[j], y[_model.PlateTemp + j]);
             // A rotor braked to rest can overshoot zero by the integration error; it does not reverse (see the model).
             _speed[j].Add(Math.Max(y[j], 0.0));
-            _current[j].Add(points[j].MotorCurrentA);
-            _winding[j].Add(y[_model.Winding + j]);
-            _plate[j].Add(y[_model.PlateTemp + j]);
+            if (_full)
+            {
+                _current[j].Add(points[j].MotorCurrentA);
+                _winding[j].Add(y[_model.Winding + j]);
+                _plate[j].Add(y[_model.PlateTemp + j]);
+            }
         }
         double pack = bus.PackCurrentA;
         double packExcess = Math.Abs(pack) - _rig.Packs.ContinuousCurrentA;
@@ -122,6 +128,11 @@ internal sealed class SpinupRecorder
         PeakYawRate = Math.Max(PeakYawRate, Math.Abs(y[_model.YawRate]));
         _time.Add(t);
         _gap.Add(y[_model.Gap] / 1000.0);
+        _prevTime = t;
+        if (!_full)
+        {
+            return;
+        }
         _lift.Add(_model.Lift);
         _voltage.Add(bus.BusVoltageV);
         _packCurrent.Add(pack);
@@ -129,7 +140,6 @@ internal sealed class SpinupRecorder
         _yawTorque.Add(_model.YawTorque);
         _yawRate.Add(y[_model.YawRate]);
         _yawAngle.Add(y[_model.YawAngle]);
-        _prevTime = t;
     }
 
     public SpinupTrace ToTrace() => new(
