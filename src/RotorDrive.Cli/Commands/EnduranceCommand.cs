@@ -89,7 +89,9 @@ public static class EnduranceCommand
             output.WriteLine($"Endurance: {report.Rig}, trimmed hover at the {Numbers.Format(rig.DesignGapM * 1000, 1)} mm design gap from a full pack");
             output.WriteLine($"  runtime: {Numbers.Format(report.RuntimeS, 0)} s ({Numbers.Format(report.RuntimeMin, 1)} min)");
             output.WriteLine($"  ended by: {report.FirstLimit}");
-            output.WriteLine($"  at the start: {string.Join(" / ", report.StartSpeedsRpm.Select(r => Numbers.Format(r, 0)))} rpm (stations 0..{report.StartSpeedsRpm.Count - 1}), pack current {Numbers.Format(report.StartPackCurrentA, 1)} A");
+            output.WriteLine(report.StartSpeedsRpm.Count == 0
+                ? "  at the start: no trimmed hover exists"
+                : $"  at the start: {string.Join(" / ", report.StartSpeedsRpm.Select(r => Numbers.Format(r, 0)))} rpm (stations 0..{report.StartSpeedsRpm.Count - 1}), pack current {Numbers.Format(report.StartPackCurrentA, 1)} A");
             output.WriteLine($"  at the end: state of charge {Numbers.Format(report.FinalSocPct, 1)} %, bus {Numbers.Format(report.FinalBusVoltageV, 1)} V, pack current {Numbers.Format(report.FinalPackCurrentA, 1)} A");
             output.WriteLine($"  hottest winding {Numbers.Format(report.PeakWindingTempC, 1)} C, hottest plate patch {Numbers.Format(report.PeakPlateTempC, 1)} C (limit {Numbers.Format(report.PlateLimitC, 0)} C)");
             output.WriteLine($"  plate patch: {report.PlatePatch}");

@@ -185,7 +185,7 @@ public static class SpinupCommand
     private static void WriteText(SpinupReport r, Rig rig, TextWriter o)
     {
         o.WriteLine($"Spin-up: {r.Rig}, {r.Mode} mode, ramp {Numbers.Format(r.RampS, 1)} s, pack at {Numbers.Format(r.SocPct, 0)} %, {Numbers.Format(r.MassKg, 1)} kg");
-        o.WriteLine($"  hover target: trimmed speeds {string.Join(" / ", r.HoverSpeedsRpm.Select(v => Numbers.Format(v, 0)))} rpm (stations 0..{r.HoverSpeedsRpm.Count - 1}) at the {Numbers.Format(rig.DesignGapM * 1000, 1)} mm design gap{(r.HoverExists ? "" : " (no trim: rated speeds)")}");
+        o.WriteLine($"  hover target: {(r.HoverExists ? "trimmed speeds" : "no trim exists; full-throttle speeds")} {string.Join(" / ", r.HoverSpeedsRpm.Select(v => Numbers.Format(v, 0)))} rpm (stations 0..{r.HoverSpeedsRpm.Count - 1}) at the {Numbers.Format(rig.DesignGapM * 1000, 1)} mm design gap");
         o.WriteLine($"  lift-off: {(r.TimeToLiftoffS is { } lo ? Numbers.Format(lo, 2) + " s" : "never")} (limit {Numbers.Format(r.LiftoffLimitS, 1)} s); steady hover: {(r.TimeToHoverS is { } h ? Numbers.Format(h, 2) + " s" : "not reached")}");
         o.WriteLine($"  pack: peak {Numbers.Format(r.PeakPackCurrentA, 0)} A (continuous {Numbers.Format(r.PackContinuousA, 0)} A for "
             + $"{Numbers.Format(r.PackTimeAboveContinuousS, 2)} s above, burst {Numbers.Format(r.PackBurstA, 0)} A); lowest voltage {Numbers.Format(r.MinPackVoltageV, 1)} V (cutoff {Numbers.Format(r.CutoffVoltageV, 1)} V)");

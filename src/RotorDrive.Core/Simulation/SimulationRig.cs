@@ -22,7 +22,7 @@ namespace RotorDrive.Core.Simulation;
 /// run allocates its own work buffers.</para>
 /// <para>Heave damping: c = 2 zeta sqrt(k m) with zeta the rig's heave damping ratio and k = -dL/dg the trimmed hover's
 /// heave stiffness (viscous damping written through its ratio to critical: W. T. Thomson, "Theory of Vibration with
-/// Applications", ch. 2). Without a trim, k is taken at every rotor's rated speed.</para>
+/// Applications", ch. 2). Without a trim, k is taken at the full-throttle speeds of <see cref="HoverSpeedsRadPerS"/>.</para>
 /// <para>Rotor inertia is the rotor row's moment of inertia; the motor's own rotor inertia is not in the catalogs and is
 /// neglected.</para>
 /// </remarks>
@@ -114,11 +114,14 @@ public sealed class SimulationRig
         }
         else
         {
-            // No trim: every rotor at its rated speed; the stiffness there by a central difference in the rig gap.
+            // No trim: every rotor at full throttle (its rated speed, or its motor's free speed at the max duty on the
+            // open-circuit voltage if lower); the stiffness there by a central difference in the rig gap.
             double g = rig.DesignGapM, dg = 1e-4 * g, up = 0, down = 0;
             for (int j = 0; j < n; j++)
             {
-                _hoverSpeeds[j] = _stations[j].Rotor.MaxSpeedRadPerS;
+                var s = _stations[j];
+                double free = s.Drivetrain.FreeSpeedRadPerS(model.Source.OpenCircuitVoltageV, s.Drivetrain.MaxDuty, s.Conditions.MotorMagnetTempC);
+                _hoverSpeeds[j] = Math.Min(s.Rotor.MaxSpeedRadPerS, free);
                 up += _stations[j].LoadAt(_hoverSpeeds[j], g + dg).LiftN;
                 down += _stations[j].LoadAt(_hoverSpeeds[j], g - dg).LiftN;
             }
@@ -217,14 +220,16 @@ public sealed class SimulationRig
     /// <summary>True when the trimmed hover balances the craft.</summary>
     public bool HoverExists => Hover.Balanced;
 
-    /// <summary>Per station: the trimmed hover speed, rad/s, or the rotor's rated speed when no trim exists (a stop run
-    /// starts here).</summary>
+    /// <summary>Per station: the trimmed hover speed, rad/s, or when no trim exists the full-throttle speed (the rotor's
+    /// rated speed, or its motor's free speed at the max duty on the pack's open-circuit voltage if lower). A stop run
+    /// starts here.</summary>
     public IReadOnlyList<double> HoverSpeedsRadPerS => _hoverSpeeds;
 
     /// <summary>The throttle per station that holds the trimmed hover: the trimmed speeds (speed hold) or the duties the
     /// controllers need for them on the shared bus at a state of charge (duty), clamped to the rig's max duty.</summary>
     /// <remarks>Duties come from <see cref="HoverTrim.Solve(RigModel, HoverOptions?)"/> on the model at that state of
-    /// charge (speeds do not depend on it). Without a trim: every rotor's rated speed, or the max duty.</remarks>
+    /// charge (speeds do not depend on it). Without a trim: the full-throttle speeds of <see cref="HoverSpeedsRadPerS"/>,
+    /// or the max duty.</remarks>
     /// <param name="mode">Controller mode.</param>
     /// <param name="socFraction">Pack state of charge, 0..1, or null for the model's.</param>
     /// <exception cref="ArgumentOutOfRangeException">The state of charge is outside [0, 1].</exception>

@@ -79,4 +79,28 @@ public sealed class EnduranceSimulatorTests
         RelativeAssert.Equal(trim.PackCurrentA, result.StartPackCurrentA, 1e-9, what: "pack current");
         RelativeAssert.Equal(0.9, result.Trace!.SocFraction[0], 1e-12, what: "start state of charge from the model");
     }
+
+    // When no trim exists the run ends at once and says so: a payload the rotors cannot carry even at twice their rated
+    // speed (the lift from the same load table is checked first), and a duty limit below the duty the trimmed speeds need
+    // on this bus (Drela 2007: duty = (I R + E) / V_bus).
+    [Fact]
+    public void EnduranceWithoutATrim_EndsAtOnce_NamingTheLostTrim()
+    {
+        var model = SimulationRigs.Model(SimulationRigs.Hovering());
+        var heavy = model.WithPayload(5000);
+        double top = 2 * SimulationRigs.Rotor.MaxSpeedRadPerS;
+        Assert.True(4 * heavy.Stations[0].LoadAt(top, heavy.DesignGapM).LiftN < heavy.WeightN, "the rotors cannot carry this payload");
+        var result = EnduranceSimulator.Run(SimulationRig.FromModel(heavy));
+        Assert.Equal(EnduranceLimit.TrimLost, result.FirstLimit);
+        Assert.Equal(0, result.RuntimeS);
+        Assert.Contains("no longer exists", result.FirstLimitText);
+
+        var trim = HoverTrim.Solve(model);
+        double needed = trim.Stations.Max(s => s.Duty);
+        var capped = SimulationRigs.Model(SimulationRigs.Rig(100, motor: SimulationRigs.Motor(kvRpmPerV: 60),
+            controller: SimulationRigs.Controller(burstCurrentA: 400, continuousCurrentA: 200), maxDuty: 0.9 * needed));
+        var cappedResult = EnduranceSimulator.Run(SimulationRig.FromModel(capped));
+        Assert.Equal(EnduranceLimit.TrimLost, cappedResult.FirstLimit);
+        Assert.Equal(0, cappedResult.RuntimeS);
+    }
 }
