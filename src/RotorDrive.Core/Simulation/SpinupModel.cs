@@ -45,7 +45,7 @@ internal sealed class SpinupModel : IOdeEvents, IOdeObserver
     private double _yawTorque;
     private double _ocv;
 
-    public SpinupModel(SimulationRig rig, ThrottleProfile profile, SpinupOptions options, double socStart)
+    public SpinupModel(SimulationRig rig, ThrottleProfile profile, SpinupOptions options, double socStart, double durationS)
     {
         _rig = rig;
         _profile = profile;
@@ -79,7 +79,7 @@ internal sealed class SpinupModel : IOdeEvents, IOdeObserver
         _landedMm = rig.Rig.LandedGapM * 1000.0;
         _socStart = socStart;
         _chargeCapacityC = rig.Packs.CapacityAh * 3600.0;
-        Recorder = new SpinupRecorder(this, rig, options);
+        Recorder = new SpinupRecorder(this, rig, options, durationS);
     }
 
     public int Dimension => 3 * _n + 5 + EnergyTerms;

@@ -7,26 +7,38 @@ internal sealed class SpinupRecorder
     private readonly SpinupModel _model;
     private readonly SimulationRig _rig;
     private readonly int _n;
-    private readonly List<double> _time = [];
+    private readonly List<double> _time;
     private readonly List<double>[] _speed, _current, _winding, _plate;
-    private readonly List<double> _gap = [], _lift = [], _voltage = [], _packCurrent = [], _soc = [], _yawTorque = [], _yawRate = [], _yawAngle = [];
+    private readonly List<double> _gap, _lift, _voltage, _packCurrent, _soc, _yawTorque, _yawRate, _yawAngle;
     private readonly double[] _motorAbove, _controllerAbove, _peakMotor, _peakWinding, _peakPlate;
     private readonly double[] _prevMotorExcess, _prevControllerExcess;
     private double _prevPackExcess;
     private double _prevTime = double.NegativeInfinity;
     private readonly bool _full;
 
-    public SpinupRecorder(SpinupModel model, SimulationRig rig, SpinupOptions options)
+    public SpinupRecorder(SpinupModel model, SimulationRig rig, SpinupOptions options, double durationS)
     {
         _model = model;
         _rig = rig;
         _n = rig.StationCount;
         // Without a trace only the times, gaps and speeds are kept (the steady-hover search reads them).
         _full = options.RecordTrace;
-        _speed = NewLists(_n);
-        _current = NewLists(_n);
-        _winding = NewLists(_n);
-        _plate = NewLists(_n);
+        // One sample per grid point plus the start, the stop and the events: sized once, no regrowth.
+        int capacity = (int)Math.Min(1e6, durationS / options.OutputIntervalS) + 8;
+        int traced = _full ? capacity : 0;
+        _time = new List<double>(capacity);
+        _gap = new List<double>(capacity);
+        _speed = NewLists(_n, capacity);
+        _current = NewLists(_n, traced);
+        _winding = NewLists(_n, traced);
+        _plate = NewLists(_n, traced);
+        _lift = new List<double>(traced);
+        _voltage = new List<double>(traced);
+        _packCurrent = new List<double>(traced);
+        _soc = new List<double>(traced);
+        _yawTorque = new List<double>(traced);
+        _yawRate = new List<double>(traced);
+        _yawAngle = new List<double>(traced);
         _motorAbove = new double[_n];
         _controllerAbove = new double[_n];
         _peakMotor = new double[_n];
@@ -172,12 +184,12 @@ internal sealed class SpinupRecorder
         return dt * positive / (Math.Abs(before) + Math.Abs(after));
     }
 
-    private static List<double>[] NewLists(int n)
+    private static List<double>[] NewLists(int n, int capacity)
     {
         var lists = new List<double>[n];
         for (int j = 0; j < n; j++)
         {
-            lists[j] = [];
+            lists[j] = new List<double>(capacity);
         }
         return lists;
     }

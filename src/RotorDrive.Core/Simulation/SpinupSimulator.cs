@@ -48,7 +48,7 @@ public static class SpinupSimulator
         double soc = Preconditions.InRange(request.SocFraction ?? rig.SocFraction, 0, 1, nameof(request.SocFraction));
         Preconditions.Positive(options.OutputIntervalS, nameof(options.OutputIntervalS));
 
-        var model = new SpinupModel(rig, request.Profile, options, soc);
+        var model = new SpinupModel(rig, request.Profile, options, soc, request.DurationS);
         var baseOptions = new DormandPrince45Options
         {
             RelativeTolerance = options.RelativeTolerance,
