@@ -12,9 +12,9 @@ namespace RotorDrive.Core.Studies.Stress;
 /// one (<see cref="SimulationRig.With"/>, which also trims it: <see cref="HoverTrim.Solve(RigModel, HoverOptions?)"/>);
 /// the spin-up (<see cref="SpinupSimulator.Run"/>, with heave, from rest on the gear) ramps every station's duty to its
 /// trimmed-hover duty (<see cref="SimulationRig.HoverThrottle"/>) over the ramp time and ends at lift-off or at
-/// limits.liftoff_time_s, whichever comes first: every spin-up criterion is decided by then (a rotor still below its drag
-/// peak and at its current limit at lift-off has stalled; the current peaks and the voltage dip of the drag-peak passage
-/// lie before it). Yaw: the equal-duty residual (<see cref="YawBalance.EqualDutyResidual"/>, the first part of the yaw
+/// limits.liftoff_time_s, whichever comes first: the current peaks and the voltage dip of the drag-peak passage lie
+/// before lift-off. Only when a rotor is still below its drag peak at its current limit at lift-off is the run repeated
+/// for the spinup command's ramp plus settle time, and the stall judged at its end. Yaw: the equal-duty residual (<see cref="YawBalance.EqualDutyResidual"/>, the first part of the yaw
 /// command's analysis) and the trim's authority to command the rig's yaw tolerance both ways within every limit (two
 /// trims at plus and minus limits.yaw_torque_nm): the yaw command's pass rule (<see cref="YawResult.Pass"/>) without its
 /// bisection for the exact authority. Retainer: <see cref="RotorSafety.Assess"/> at each station's trimmed speed.</para>
@@ -40,6 +40,13 @@ internal sealed class RigStressEvaluator(RigStressModel model) : IStressEvaluato
         var targets = sim.HoverThrottle(ControllerMode.Duty);
         var profile = ThrottleProfile.SpinUp(ControllerMode.Duty, targets, model.Options.RampTimeS);
         var spin = SpinupSimulator.Run(sim, new SpinupRequest(profile, limits.LiftoffTimeS, variant.SocFraction), model.Options.Spinup(recordTrace));
+        if (spin.LiftoffTimeS is not null && spin.StalledStations.Count > 0)
+        {
+            // A rotor still climbing through its drag peak at its current limit when the others lift the craft is not
+            // necessarily stuck: run on (the spinup command's ramp plus settle time) and judge it at the end.
+            double longer = Math.Max(limits.LiftoffTimeS, model.Options.RampTimeS + SpinupStudyRequest.Default.SettleS);
+            spin = SpinupSimulator.Run(sim, new SpinupRequest(profile, longer, variant.SocFraction), model.Options.Spinup(recordTrace) with { StopAtLiftoff = false });
+        }
 
         var margins = new double?[StressCriteria.All.Count];
         margins[(int)StressCriterion.Liftoff] = LiftoffMargin(spin, variant, limits.LiftoffTimeS);

@@ -62,6 +62,21 @@ public class StressStudyTests
     }
 
     [Fact]
+    public void ARotorWhoseCurrentLimitCannotPassItsDragPeak_FailsStall_AsTheSpinUpReportsIt()
+    {
+        // Station 0's controller limits at a tenth of its burst rating: its torque cannot pass the drag peak at the landed
+        // gap (the stall definition of SpinupSimulator: below the peak speed at the current limit when the run ends).
+        var tolerances = StressTolerances.None.With(StressQuantity.ControllerCurrentLimit, Tolerance.Uniform(-90, -90, ToleranceScale.Percent, true));
+        var parts = StressSampler.Draw(StressRigs.Square, tolerances, 1, 0);
+        var model = new RigStressModel(StressRigs.Square, tolerances);
+        var outcome = model.CreateEvaluator().Evaluate(parts, recordTrace: false);
+        Assert.Equal(0.1 * StressRigs.Controller.BurstCurrentA, parts.Stations[0].CurrentLimitA, 9);
+        Assert.Contains(0, outcome.StalledStations);
+        Assert.False(outcome.Passed(StressCriterion.Stall));
+        Assert.True(outcome.Margins[(int)StressCriterion.Stall] < 0);
+    }
+
+    [Fact]
     public void Variant_CarriesEveryDrawnValue_IntoTheRigModel()
     {
         var parts = StressSampler.Draw(StressRigs.Square, StressRigs.Spreads, 3, 5);
