@@ -95,6 +95,9 @@ public sealed class RigStressModel : IStressModel
     /// <summary>The nominal rig.</summary>
     public Rig Rig { get; }
 
+    /// <summary>The rig's pack bank (nominal).</summary>
+    public PackBank Packs => Nominal.Packs;
+
     /// <summary>The nominal rig model every sample is a variant of.</summary>
     public RigModel Nominal { get; }
 
