@@ -173,6 +173,38 @@ public static class Messages
     /// <summary>Uniform bounds out of order.</summary>
     public static string ToleranceBoundsOrder(double low, double high) => $"the low bound ({N(low)}) must not exceed the high bound ({N(high)})";
 
+    /// <summary>A tolerance whose spread can carry a positive quantity to zero or below (see
+    /// <see cref="Core.Studies.Stress.StressSpreadRule"/>).</summary>
+    /// <param name="what">What must stay in range, in words.</param>
+    /// <param name="station">The first station where it fails, or null for a rig-wide quantity.</param>
+    /// <param name="nominal">The nominal value, in the key's unit.</param>
+    /// <param name="lowest">The lowest value the spread reaches, in the key's unit.</param>
+    /// <param name="unit">The key's unit.</param>
+    /// <param name="zeroAllowed">True when the quantity may reach zero but not go below it.</param>
+    /// <param name="normal">True for a normal spread, false for a uniform one.</param>
+    public static string ToleranceReachesZero(string what, int? station, double nominal, double lowest, string unit, bool zeroAllowed, bool normal)
+    {
+        string where = station is { } s ? $" at station {s}" : "";
+        string how = normal
+            ? $"{G(nominal)} {unit} minus {G(Core.Studies.Stress.StressSpreadRule.NormalReachSd)} standard deviations"
+            : $"{G(nominal)} {unit} plus the lower bound";
+        string bound = zeroAllowed ? "at or above 0" : "above 0";
+        return $"this spread can make the {what}{where} {(zeroAllowed ? "negative" : "zero or negative")}: it reaches {G(lowest)} {unit} ({how}); "
+            + $"rule: a uniform spread's lower bound, or {G(Core.Studies.Stress.StressSpreadRule.NormalReachSd)} standard deviations below nominal for a normal spread, must stay {bound}";
+    }
+
+    /// <summary>A temperature spread reaching outside the range the rig file accepts for that temperature.</summary>
+    /// <param name="what">The temperature, in words.</param>
+    /// <param name="low">Lowest value the spread reaches, C.</param>
+    /// <param name="high">Highest value the spread reaches, C.</param>
+    /// <param name="min">Lowest accepted, C.</param>
+    /// <param name="max">Highest accepted, C.</param>
+    public static string ToleranceTemperatureRange(string what, double low, double high, double min, double max)
+        => $"this spread takes the {what} to {G(low)} .. {G(high)} C, outside the {G(min)} .. {G(max)} C the rig file accepts for it; "
+            + $"rule: a uniform spread's bounds, or {G(Core.Studies.Stress.StressSpreadRule.NormalReachSd)} standard deviations either side of nominal for a normal spread, must stay within that range";
+
+    private static string G(double value) => value.ToString("G6", CultureInfo.InvariantCulture);
+
     // ---- command line ----
 
     /// <summary>An unexpected failure reported in one line.</summary>

@@ -135,6 +135,40 @@ public sealed class StressCommandTests : IDisposable
         Assert.Contains(Messages.ToleranceAbsoluteOnly("gap_offset_mm"), error);
     }
 
+    [Theory]
+    // Each spread can reach zero or below before a study runs (StressSpreadRule: a uniform lower bound, or 5 standard
+    // deviations below nominal; the demo's landed gap is 6.5 mm, its plate 12 mm, its payload 25 kg).
+    [InlineData("\"gap_offset_mm\": { \"normal_sd\": 0.7 }", "\"gap_offset_mm\": { \"uniform\": [-7, 0] }", "gap_offset_mm.uniform", "landed gap plus gap offset at station 0")]
+    [InlineData("\"gap_offset_mm\": { \"normal_sd\": 0.7 }", "\"gap_offset_mm\": { \"normal_sd\": 1.4 }", "gap_offset_mm.normal_sd", "landed gap plus gap offset at station 0")]
+    [InlineData("\"plate_thickness_mm\": { \"uniform\": [-0.3, 0.3] }", "\"plate_thickness_mm\": { \"uniform\": [-12, 0.3] }", "plate_thickness_mm.uniform", "plate thickness")]
+    [InlineData("\"pack_resistance_mohm\": { \"normal_sd_pct\": 15 }", "\"pack_resistance_mohm\": { \"normal_sd_pct\": 25 }", "pack_resistance_mohm.normal_sd_pct", "pack internal resistance")]
+    [InlineData("\"payload_kg\": { \"normal_sd\": 4 }", "\"payload_kg\": { \"normal_sd\": 6 }", "payload_kg.normal_sd", "payload")]
+    public async Task SpreadThatCanReachZero_IsABadInputAtReadTime_NamingFileLinePathAndRule(string from, string to, string path, string what)
+    {
+        string rig = CopyDemo(t => t.Replace(from, to, StringComparison.Ordinal));
+        string key = path[..path.IndexOf('.', StringComparison.Ordinal)];
+        int line = Array.FindIndex(File.ReadAllLines(rig), l => l.Contains($"\"{key}\": {{", StringComparison.Ordinal)) + 1;
+        var (code, output, error) = await CliRunner.RunAsync("stress", rig, "--samples", "2", "--json");
+        Assert.Equal(ExitCodes.BadInput, code);
+        Assert.Equal("", output);
+        Assert.Contains($"demo-rig.json:{line}:", error);
+        Assert.Contains("$.tolerances." + path, error);
+        Assert.Contains("this spread can make the " + what, error);
+        Assert.Contains("rule: a uniform spread's lower bound, or 5 standard deviations below nominal", error);
+        Assert.DoesNotContain("   at ", error);
+    }
+
+    [Fact]
+    public async Task TemperatureSpreadBeyondTheFilesRange_IsABadInputAtReadTime()
+    {
+        // Ambient 22 C; the file accepts -40 .. 60 C.
+        string rig = CopyDemo(t => t.Replace("\"ambient_c\": { \"uniform\": [-12, 12] }", "\"ambient_c\": { \"uniform\": [-70, 12] }", StringComparison.Ordinal));
+        var (code, _, error) = await CliRunner.RunAsync("stress", rig, "--samples", "2");
+        Assert.Equal(ExitCodes.BadInput, code);
+        Assert.Contains("$.tolerances.ambient_c.uniform", error);
+        Assert.Contains(Messages.ToleranceTemperatureRange("ambient temperature", -48, 34, -40, 60), error);
+    }
+
     [Fact]
     public async Task BadOptions_AreRejectedAtParseTime()
     {

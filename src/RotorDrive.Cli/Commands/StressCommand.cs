@@ -360,6 +360,13 @@ public static class StressCommand
         }
     }
 
+    private static string YawAuthorityText(double? authority) => authority switch
+    {
+        null => "yaw authority not checked (no trim)",
+        0 => "the trim cannot command the yaw tolerance both ways within limits",
+        { } a => $"the trim commands {Numbers.Format(a, 3)} N m of yaw both ways within limits",
+    };
+
     private static void WriteSampleText(SampleEntry s, TextWriter o)
     {
         o.WriteLine($"Stress sample {s.Sample} (seed {s.Seed}): {(s.Passed ? "passes every criterion" : "FAILS " + string.Join(", ", s.Failed))}");
@@ -372,7 +379,7 @@ public static class StressCommand
         o.WriteLine($"  lift-off {Numbers.Format(s.LiftoffTimeS, 2)} s; stalled stations: {(s.StalledStations.Count == 0 ? "none" : string.Join(", ", s.StalledStations))}; "
             + $"peak motor current {Numbers.Format(s.PeakMotorCurrentA, 1)} A, peak pack current {Numbers.Format(s.PeakPackCurrentA, 1)} A, min pack voltage {Numbers.Format(s.MinPackVoltageV, 2)} V");
         o.WriteLine($"  hover: speed {Numbers.Format(s.HoverSpeedRpm, 0)} rpm, current {Numbers.Format(s.HoverCurrentA, 1)} A, pack {Numbers.Format(s.HoverPackVoltageV, 2)} V; "
-            + $"yaw residual {Numbers.Format(s.YawResidualNm, 3)} N m of authority {Numbers.Format(s.YawAuthorityNm, 3)} N m" + (s.TrimLimit is { } l ? $"; trim stopped by {l}" : ""));
+            + $"yaw residual {Numbers.Format(s.YawResidualNm, 3)} N m at equal duty; " + YawAuthorityText(s.YawAuthorityNm) + (s.TrimLimit is { } l ? $"; trim stopped by {l}" : ""));
         var parts = new TextTable(new TableColumn("station", Alignment.Right), new TableColumn("kv_rpm_per_v", Alignment.Right), new TableColumn("resistance_ohm", Alignment.Right),
             new TableColumn("no_load_a", Alignment.Right), new TableColumn("current_limit_a", Alignment.Right), new TableColumn("remanence_t", Alignment.Right),
             new TableColumn("gap_offset_mm", Alignment.Right));

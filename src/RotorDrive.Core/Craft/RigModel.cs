@@ -247,6 +247,18 @@ public sealed class RigModel
         return new RigModel(Rig, copy, Packs, PayloadKg, SocFraction, Options);
     }
 
+    /// <summary>The same model with the centre of gravity of structure and payload moved (a misplaced payload, a tolerance
+    /// draw): mass unchanged, centre of gravity recomputed.</summary>
+    /// <param name="dxM">Shift along x, m.</param>
+    /// <param name="dyM">Shift along y, m.</param>
+    public RigModel WithCentreOfGravityOffset(double dxM, double dyM)
+    {
+        Preconditions.Finite(dxM, nameof(dxM));
+        Preconditions.Finite(dyM, nameof(dyM));
+        var body = Rig.Body with { CgXM = Rig.Body.CgXM + dxM, CgYM = Rig.Body.CgYM + dyM };
+        return new RigModel(Rig with { Body = body }, Stations, Packs, PayloadKg, SocFraction, Options);
+    }
+
     private int CheckIndex(int index)
     {
         if (index < 0 || index >= Stations.Count)

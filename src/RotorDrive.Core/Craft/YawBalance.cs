@@ -127,6 +127,99 @@ public static class YawBalance
             positive <= negative ? positiveLimit : negativeLimit, sensitivity, findings);
     }
 
+    /// <summary>The equal-duty yaw residual alone: the common duty that carries the weight at the design gap (Brent, to
+    /// 1e-12 in duty, as <see cref="Analyse"/>) and the net yaw torque there.</summary>
+    /// <remarks>The same root as <see cref="Analyse"/>'s <see cref="YawResult.EqualDuty"/> (the total lift rises with the
+    /// common duty), found with fewer equal-duty solves (<see cref="CommonDutyHover.SpeedsAt"/>): from a guess (by default
+    /// the mean duty that holds every rotor at the one speed carrying the weight, on the shared bus), a secant step to a
+    /// point 1 % away gives a narrow bracket for Brent; the whole duty range is searched when the bracket misses. Each
+    /// duty's state is solved once (Brent's endpoint and final evaluations reuse it). A Monte Carlo sample needs only this
+    /// part of the yaw analysis.</remarks>
+    /// <param name="model">The rig model.</param>
+    /// <param name="guessDuty">A duty near the root, in (0, 1], or null for the common-speed estimate.</param>
+    /// <param name="options">Numerical settings; defaults when null.</param>
+    /// <exception cref="ArgumentOutOfRangeException">The guess is outside (0, 1].</exception>
+    public static EqualDutyYaw EqualDutyResidual(RigModel model, double? guessDuty = null, HoverOptions? options = null)
+    {
+        Preconditions.NotNull(model, nameof(model));
+        options ??= HoverOptions.Default;
+        int n = model.Stations.Count;
+        double gap = model.DesignGapM, weight = model.WeightN, maxDuty = model.Limits.MaxDuty;
+        var solved = new List<(double Duty, EqualDutyState State)>();
+        EqualDutyState At(double d)
+        {
+            foreach (var (duty, state) in solved)
+            {
+                if (duty == d)
+                {
+                    return state;
+                }
+            }
+            var s = CommonDutyHover.SpeedsAt(model, Enumerable.Repeat(Math.Clamp(d, 0, 1), n).ToArray(), gap, options);
+            solved.Add((d, s));
+            return s;
+        }
+        double Excess(double d) => At(d).TotalLiftN - weight;
+
+        double lo = 1e-4, hi = maxDuty;
+        bool narrow = false;
+        if (guessDuty is { } given)
+        {
+            Preconditions.InRange(given, double.Epsilon, 1, nameof(guessDuty));
+        }
+        if ((guessDuty ?? CommonSpeedDuty(model, gap)) is { } g && g > lo && g < hi)
+        {
+            double h = g + 0.01 * g <= hi ? 0.01 * g : -0.01 * g;
+            double f0 = Excess(g), f1 = Excess(g + h);
+            double root = f1 != f0 ? g - f0 * h / (f1 - f0) : g;
+            // The secant's error is second order in its distance from the guess; a tenth of that distance covers it.
+            double width = Math.Max(0.1 * Math.Abs(root - g), 1e-6);
+            double a = Math.Max(lo, root - width), b = Math.Min(hi, root + width);
+            if (double.IsFinite(root) && a < b && Excess(a) < 0 && Excess(b) > 0)
+            {
+                (lo, hi, narrow) = (a, b, true);
+            }
+        }
+        if (!narrow && Excess(maxDuty) < 0)
+        {
+            return new EqualDutyYaw(null, null, solved.Count);
+        }
+        double equal = Brent.FindRoot(Excess, lo, hi, 1e-12, 200);
+        return new EqualDutyYaw(equal, At(equal).YawTorqueNm, solved.Count);
+    }
+
+    // The mean duty that holds every station at the one speed carrying the weight (motor current for its load torque,
+    // duties from the shared bus), or null when no speed up to the slowest rated speed carries it.
+    private static double? CommonSpeedDuty(RigModel model, double gapM)
+    {
+        var st = model.Stations;
+        double rated = st.Min(s => s.Rotor.MaxSpeedRadPerS);
+        double Lift(double w)
+        {
+            double sum = -model.WeightN;
+            foreach (var s in st)
+            {
+                sum += s.LoadAt(w, gapM).LiftN;
+            }
+            return sum;
+        }
+        if (!(Lift(rated) > 0) || !Brent.TryFindRoot(Lift, 1e-6 * rated, rated, 1e-9 * rated, 200, out double w0))
+        {
+            return null;
+        }
+        var inputs = new Drive.DriveInput[st.Count];
+        var points = new Drive.DrivePoint[st.Count];
+        for (int i = 0; i < st.Count; i++)
+        {
+            var s = st[i];
+            double current = s.Drivetrain.Motor.CurrentForTorqueA(s.LoadAt(w0, gapM).TotalTorqueNm, s.FluxFactor);
+            inputs[i] = s.Input(Drive.DriveCommand.MotorCurrent(current), w0);
+        }
+        Drive.DriveBus.Solve(model.Source, inputs, points);
+        double mean = points.Average(p => p.Duty);
+        return double.IsFinite(mean) ? mean : null;
+    }
+
     private static YawSensitivity Sensitivity(RigModel model, double[] duties, double gap, double nominal, int a, int b, HoverOptions options)
     {
         var s = model.Stations[a];

@@ -12,6 +12,12 @@ namespace RotorDrive.Files.Rigs;
 /// <see cref="Rig"/> in SI units. Problems name the JSON path and, when the document came from a file, its line.</summary>
 public static class RigResolver
 {
+    /// <summary>Ambient temperatures the rig file accepts (ambient_c, and the reach of its tolerance), C.</summary>
+    public static readonly (double Min, double Max) AmbientRangeC = (-40, 60);
+
+    /// <summary>Plate temperatures the rig file accepts (plate.temperature_c, and the reach of its tolerance), C.</summary>
+    public static readonly (double Min, double Max) PlateTempRangeC = (-40, 400);
+
     /// <summary>The catalog paths the document names, resolved against the rig file's folder; null (after reporting
     /// the missing keys) when the "catalogs" section is incomplete.</summary>
     public static CatalogPaths? CatalogPathsOf(RigDocument document, string rigPath, RigSourceMap? locations, List<InputProblem> problems)
@@ -88,7 +94,7 @@ public static class RigResolver
         {
             material = ctx.Lookup(plate.Material, "$.plate.material", PartKind.Plate, "plate material", catalogs, c => c.Plates, m => m.Id);
             thickness = ctx.Required(plate.ThicknessMm, "$.plate.thickness_mm", ValueRule.Between(0.01, 200));
-            plateTemp = ctx.Required(plate.TemperatureC, "$.plate.temperature_c", ValueRule.Between(-40, 400));
+            plateTemp = ctx.Required(plate.TemperatureC, "$.plate.temperature_c", ValueRule.Between(PlateTempRangeC.Min, PlateTempRangeC.Max));
             convection = ctx.Optional(plate.ConvectionWPerM2K, "$.plate.convection_w_per_m2k", ValueRule.Between(0.1, 1000), RigDefaults.ConvectionWPerM2K);
             spreading = ctx.Optional(plate.SpreadingFactor, "$.plate.spreading_factor", ValueRule.Between(1, 100), RigDefaults.PlateSpreadingFactor);
         }
@@ -129,7 +135,7 @@ public static class RigResolver
                 landed = null;
             }
         }
-        var ambient = ctx.Required(document.AmbientC, "$.ambient_c", ValueRule.Between(-40, 60));
+        var ambient = ctx.Required(document.AmbientC, "$.ambient_c", ValueRule.Between(AmbientRangeC.Min, AmbientRangeC.Max));
         var gearFriction = ctx.Optional(document.GearYawFrictionNm, "$.gear_yaw_friction_nm", ValueRule.NonNegative, RigDefaults.GearYawFrictionNm);
 
         // Stations.
@@ -261,6 +267,13 @@ public static class RigResolver
         }
 
         var tolerances = ResolveTolerances(document, ctx);
+        if (tolerances is not null && limits is not null && body is not null && material is not null && thickness is not null
+            && plateTemp is not null && ambient is not null && design is not null && landed is not null && partsOk && stationsOk)
+        {
+            var nominal = new Rig("tolerance check", new Plate(material, thickness.Value / 1000.0), plateTemp.Value, ambient.Value, body,
+                design.Value / 1000.0, landed.Value / 1000.0, stations, bank, limits, 0, 1);
+            CheckSpreads(nominal, tolerances, ctx);
+        }
 
         var ordered = problems.OrderBy(p => p.Line).ThenBy(p => p.Column).ToList();
         if (ordered.Count > 0 || !partsOk || !stationsOk || !packOk || name is null || material is null || thickness is null
@@ -331,6 +344,47 @@ public static class RigResolver
         }
         return ok ? new StressTolerances(map) : null;
     }
+
+    // Read-time rule (StressSpreadRule): no spread may carry a positive quantity to zero or below, and temperature spreads
+    // stay within the range the file accepts for the temperature itself; otherwise a study would fail mid-run.
+    private static void CheckSpreads(Rig rig, StressTolerances tolerances, Context ctx)
+    {
+        foreach (var v in StressSpreadRule.Check(rig, tolerances))
+        {
+            var (key, _, toSi) = RigToleranceKeys.All.First(k => k.Quantity == v.Quantity);
+            var t = tolerances.Of(v.Quantity);
+            // A gap offset is checked on the landed gap it is added to, which the file gives in mm like the offset.
+            double factor = v.Quantity == StressQuantity.GapOffset ? 1e-3 : toSi;
+            ctx.Report(SpreadPath(key, t), Messages.ToleranceReachesZero(v.Checked, v.Station, v.NominalSi / factor, v.LowestSi / factor,
+                RigToleranceKeys.UnitOf(key), v.ZeroAllowed, t.Shape == ToleranceShape.Normal));
+        }
+        CheckTemperature(StressQuantity.AmbientTemperature, "ambient temperature", rig.AmbientC, AmbientRangeC);
+        CheckTemperature(StressQuantity.PlateTemperature, "plate temperature", rig.PlateTemperatureC, PlateTempRangeC);
+
+        void CheckTemperature(StressQuantity quantity, string what, double nominal, (double Min, double Max) range)
+        {
+            var t = tolerances.Of(quantity);
+            double reach = StressSpreadRule.NormalReachSd * t.StandardDeviation;
+            var (low, high) = t.Shape switch
+            {
+                ToleranceShape.Normal => (nominal - reach, nominal + reach),
+                ToleranceShape.Uniform => (nominal + t.Lower, nominal + t.Upper),
+                _ => (nominal, nominal),
+            };
+            if (low < range.Min || high > range.Max)
+            {
+                ctx.Report(SpreadPath(RigToleranceKeys.KeyOf(quantity), t), Messages.ToleranceTemperatureRange(what, low, high, range.Min, range.Max));
+            }
+        }
+    }
+
+    private static string SpreadPath(string key, Tolerance t) => $"$.tolerances.{key}." + (t.Shape, t.Scale) switch
+    {
+        (ToleranceShape.Normal, ToleranceScale.Percent) => "normal_sd_pct",
+        (ToleranceShape.Normal, _) => "normal_sd",
+        (_, ToleranceScale.Percent) => "uniform_pct",
+        _ => "uniform",
+    };
 
     private static Tolerance? ResolveEntry(RigToleranceEntry entry, string path, string key, StressQuantity quantity, double toSi, Context ctx)
     {

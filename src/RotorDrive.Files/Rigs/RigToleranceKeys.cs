@@ -32,6 +32,23 @@ public static class RigToleranceKeys
     /// <summary>The keys of one entry.</summary>
     public static IReadOnlyList<string> EntryKeys { get; } = ["normal_sd_pct", "normal_sd", "uniform_pct", "uniform"];
 
+    /// <summary>The unit a key's absolute spreads and its messages are in, read from the key's suffix ("mm", "rpm/V").</summary>
+    /// <param name="key">A key of <see cref="Keys"/>.</param>
+    public static string UnitOf(string key) => key switch
+    {
+        _ when key.EndsWith("_rpm_per_v", StringComparison.Ordinal) => "rpm/V",
+        _ when key.EndsWith("_mohm", StringComparison.Ordinal) => "mOhm",
+        _ when key.EndsWith("_ohm", StringComparison.Ordinal) => "ohm",
+        _ when key.EndsWith("_ms_per_m", StringComparison.Ordinal) => "MS/m",
+        _ when key.EndsWith("_mm", StringComparison.Ordinal) => "mm",
+        _ when key.EndsWith("_pct", StringComparison.Ordinal) => "%",
+        _ when key.EndsWith("_kg", StringComparison.Ordinal) => "kg",
+        _ when key.EndsWith("_a", StringComparison.Ordinal) => "A",
+        _ when key.EndsWith("_t", StringComparison.Ordinal) => "T",
+        _ when key.EndsWith("_c", StringComparison.Ordinal) => "C",
+        _ => "",
+    };
+
     /// <summary>The file key of a quantity.</summary>
     public static string KeyOf(StressQuantity quantity) => All.First(k => k.Quantity == quantity).Key;
 }

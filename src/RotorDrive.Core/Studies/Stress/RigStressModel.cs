@@ -1,66 +1,109 @@
 using RotorDrive.Core.Craft;
+using RotorDrive.Core.Drive;
 using RotorDrive.Core.Loads;
 using RotorDrive.Core.Magnetics;
+using RotorDrive.Core.Simulation;
 
 namespace RotorDrive.Core.Studies.Stress;
 
-/// <summary>The built-in stress model of a rig: load tables built once and shared by every worker's evaluator, which
-/// runs a spin-up at the landed gap and a trimmed hover at the design gap for each sample's parts.</summary>
+/// <summary>The built-in stress model of a rig: every sample is a variant of the nominal <see cref="RigModel"/> with its
+/// drawn parts, run through the same analyses as the spinup, hover and yaw commands.</summary>
 /// <remarks>
-/// <para>Load tables: one table per rotor design over the rig's plate (<see cref="RotorLoadTable"/>), covering the
-/// drawn conductivities and temperatures through its sigma omega axis (forces depend on sigma and omega only through
-/// their product; ../DESIGN.md §4.3) and the drawn remanence through the (Br/Br20)^2 scaling of the layer model. The plate
-/// thickness changes the plate's response itself, so when it varies three tables are built, at the nominal thickness and
-/// at plus and minus a spread step h (three standard deviations of a normal spread, the half-width of a uniform one),
-/// and a sample's loads are interpolated between them by the three-point Lagrange formula in thickness (error of order
-/// h^3 times the third thickness derivative; M. Abramowitz and I. A. Stegun, "Handbook of Mathematical Functions", 1964,
-/// 25.2.11).</para>
+/// <para>A sample's variant (<see cref="Variant"/>): per station, the motor with its drawn Kv, winding resistance and
+/// no-load current and the controller's drawn current limit (<see cref="DriveOptions.CurrentLimitScale"/>), the drawn gap
+/// offset, plate temperature and ambient (windings and magnets) in its <see cref="StationConditions"/>, and its load
+/// wrapped for the drawn remanence, plate conductivity and plate thickness over the shared tables; for the rig, the
+/// drawn payload, centre-of-gravity offset, state of charge and pack resistance. Quantities that keep their nominal
+/// value leave the nominal model untouched, so with no spread a sample is the nominal model itself.</para>
+/// <para>Load tables: the nominal model's (one per rotor design). The plate thickness changes the plate's response
+/// itself, so when it varies two more tables per rotor are built at plus and minus a step h (three standard deviations of
+/// a normal spread, the larger bound of a uniform one, at most half the thickness) over the nominal table's range, and
+/// a sample's loads are interpolated between the three (see the load wrapper's three-point Lagrange rule).</para>
 /// <para>Thread safety: the model is immutable; <see cref="CreateEvaluator"/> gives each worker its own evaluator.</para>
 /// </remarks>
 public sealed class RigStressModel : IStressModel
 {
-    private readonly Dictionary<RotorDesign, TabulatedRotorLoad[]> _tables = new(ReferenceEqualityComparer.Instance);
+    private readonly Dictionary<IRotorLoad, (TabulatedRotorLoad Thinner, TabulatedRotorLoad Thicker)> _thicknessTables = new(ReferenceEqualityComparer.Instance);
+    private readonly bool _wrapsLoads;
 
-    /// <summary>Builds the load tables for a rig and its tolerances.</summary>
+    /// <summary>Builds the nominal rig model (<see cref="RigModel.Build(Rig, RigModelOptions?)"/>) and the stress model on it.</summary>
     /// <param name="rig">The nominal rig; every station needs a motor and a controller, and the rig a pack.</param>
-    /// <param name="tolerances">The spreads (the plate thickness spread decides how many tables are built).</param>
+    /// <param name="tolerances">The spreads.</param>
     /// <param name="options">Settings; null for <see cref="StressModelOptions.Default"/>.</param>
-    /// <exception cref="ArgumentNullException">The rig or tolerances are null.</exception>
-    /// <exception cref="ArgumentException">A drivetrain part is missing.</exception>
+    /// <exception cref="ArgumentNullException">An argument is null.</exception>
+    /// <exception cref="ArgumentException">A drivetrain part is missing, or a spread breaks <see cref="StressSpreadRule"/>.</exception>
     /// <exception cref="ArgumentOutOfRangeException">An option is out of range.</exception>
     public RigStressModel(Rig rig, StressTolerances tolerances, StressModelOptions? options = null)
+        : this(RigModel.Build(Preconditions.NotNull(rig, nameof(rig))), tolerances, options)
     {
-        Rig = Preconditions.NotNull(rig, nameof(rig));
+    }
+
+    /// <summary>Builds the stress model on a prepared nominal model (for example the one the hover command uses).</summary>
+    /// <param name="nominal">The nominal rig model; its stations' loads must be precomputed tables when the plate or the
+    /// magnets vary.</param>
+    /// <param name="tolerances">The spreads.</param>
+    /// <param name="options">Settings; null for <see cref="StressModelOptions.Default"/>.</param>
+    /// <exception cref="ArgumentNullException">An argument is null.</exception>
+    /// <exception cref="ArgumentException">A spread breaks <see cref="StressSpreadRule"/>, or the plate or magnets vary over
+    /// a load that is not a precomputed table.</exception>
+    /// <exception cref="ArgumentOutOfRangeException">An option is out of range.</exception>
+    public RigStressModel(RigModel nominal, StressTolerances tolerances, StressModelOptions? options = null)
+    {
+        Nominal = Preconditions.NotNull(nominal, nameof(nominal));
         Preconditions.NotNull(tolerances, nameof(tolerances));
-        Packs = StressSampler.RequireParts(rig);
+        Rig = nominal.Rig;
         Options = options ?? StressModelOptions.Default;
         Preconditions.NonNegative(Options.RampTimeS, nameof(Options.RampTimeS));
         Preconditions.InRange(Options.RelativeTolerance, 1e-10, 0.1, nameof(Options.RelativeTolerance));
         Preconditions.Positive(Options.AbsoluteToleranceRadPerS, nameof(Options.AbsoluteToleranceRadPerS));
         Preconditions.Positive(Options.MaxStepS, nameof(Options.MaxStepS));
-
-        ThicknessStepM = SpreadStep(tolerances.Of(StressQuantity.PlateThickness), rig.Plate.ThicknessM);
-        var thicknesses = ThicknessStepM > 0
-            ? new[] { rig.Plate.ThicknessM - ThicknessStepM, rig.Plate.ThicknessM, rig.Plate.ThicknessM + ThicknessStepM }
-            : new[] { rig.Plate.ThicknessM };
-        double freeSpeed = rig.Stations.Max(s => s.Motor!.KvRadPerSPerV * 1.25) * Packs.OpenCircuitVoltageAt(1.0);
-        foreach (var station in rig.Stations)
+        Preconditions.Positive(Options.OutputIntervalS, nameof(Options.OutputIntervalS));
+        var broken = StressSpreadRule.Check(Rig, tolerances);
+        if (broken.Count > 0)
         {
-            var rotor = station.Rotor;
-            if (_tables.ContainsKey(rotor))
-            {
-                continue;
-            }
-            var range = Range(rig, rotor, freeSpeed);
-            _tables[rotor] = thicknesses.Select(d => RotorLoadTable.Build(rotor, new Plate(rig.Plate.Material, d), range)).ToArray();
+            var v = broken[0];
+            throw new ArgumentException($"the spread of {v.Quantity.Key()} can make the {v.Checked} {(v.ZeroAllowed ? "negative" : "zero or negative")} "
+                + $"(it reaches {v.LowestSi:G6} {v.Quantity.SiUnit()} from {v.NominalSi:G6}); see StressSpreadRule.", nameof(tolerances));
         }
+        _wrapsLoads = tolerances.Of(StressQuantity.PlateThickness).Shape != ToleranceShape.None
+            || tolerances.Of(StressQuantity.PlateConductivity).Shape != ToleranceShape.None
+            || tolerances.Of(StressQuantity.MagnetRemanence).Shape != ToleranceShape.None;
+        ThicknessStepM = SpreadStep(tolerances.Of(StressQuantity.PlateThickness), Rig.Plate.ThicknessM);
+        foreach (var station in nominal.Stations)
+        {
+            if (!_wrapsLoads)
+            {
+                break;
+            }
+            if (station.Load is not TabulatedRotorLoad table)
+            {
+                throw new ArgumentException("the plate or the magnets vary, which the stress model applies over precomputed load tables; "
+                    + $"station loads of type {station.Load.GetType().Name} cannot be varied.", nameof(nominal));
+            }
+            if (ThicknessStepM > 0 && !_thicknessTables.ContainsKey(table))
+            {
+                var plate = table.Direct.Plate;
+                var load = nominal.Options.Load;
+                _thicknessTables[table] = (
+                    RotorLoadTable.Build(table.Direct.Rotor, plate with { ThicknessM = plate.ThicknessM - ThicknessStepM }, table.Range, load),
+                    RotorLoadTable.Build(table.Direct.Rotor, plate with { ThicknessM = plate.ThicknessM + ThicknessStepM }, table.Range, load));
+            }
+        }
+        Simulation = SimulationRig.FromModel(nominal, new SimulationRigOptions(Hover: Options.Hover));
     }
 
     /// <summary>The nominal rig.</summary>
     public Rig Rig { get; }
 
-    /// <summary>The rig's pack bank.</summary>
-    public PackBank Packs { get; }
+    /// <summary>The rig's pack bank (nominal).</summary>
+    public PackBank Packs => Nominal.Packs;
+
+    /// <summary>The nominal rig model every sample is a variant of.</summary>
+    public RigModel Nominal { get; }
+
+    /// <summary>The nominal model prepared for time simulations; each sample's is derived from it
+    /// (<see cref="SimulationRig.With"/>).</summary>
+    public SimulationRig Simulation { get; }
 
     /// <summary>The settings.</summary>
     public StressModelOptions Options { get; }
@@ -71,8 +114,73 @@ public sealed class RigStressModel : IStressModel
     /// <summary>A new evaluator for one worker thread.</summary>
     public IStressEvaluator CreateEvaluator() => new RigStressEvaluator(this);
 
-    /// <summary>The tables of a rotor design: one, or three at thickness - h, nominal, + h.</summary>
-    internal TabulatedRotorLoad[] TablesFor(RotorDesign rotor) => _tables[rotor];
+    /// <summary>The rig model of a sample: the nominal model with the sample's drawn parts (see the remarks).</summary>
+    /// <param name="parts">The sample's parts (<see cref="StressSampler.Draw"/>).</param>
+    /// <exception cref="ArgumentNullException"><paramref name="parts"/> is null.</exception>
+    /// <exception cref="ArgumentException">The parts have another station count than the rig.</exception>
+    public RigModel Variant(StressParts parts)
+    {
+        Preconditions.NotNull(parts, nameof(parts));
+        var model = Nominal;
+        if (parts.Stations.Count != model.Stations.Count)
+        {
+            throw new ArgumentException($"the parts have {parts.Stations.Count} stations; the rig has {model.Stations.Count}.", nameof(parts));
+        }
+        var plate = Rig.Plate;
+        bool plateVaries = parts.PlateThicknessM != plate.ThicknessM || parts.PlateConductivitySPerM != plate.Material.ConductivitySPerM;
+        for (int i = 0; i < model.Stations.Count; i++)
+        {
+            var s = model.Stations[i];
+            var p = parts.Stations[i];
+            var station = s;
+            var dt = s.Drivetrain;
+            var motor = dt.Motor;
+            double limitScale = p.CurrentLimitA / dt.Controller.BurstCurrentA;
+            if (p.KvRadPerSPerV != motor.KvRadPerSPerV || p.ResistanceOhm != motor.ResistanceOhm || p.NoLoadCurrentA != motor.NoLoadCurrentA
+                || limitScale != dt.Options.CurrentLimitScale)
+            {
+                motor = motor with { KvRadPerSPerV = p.KvRadPerSPerV, ResistanceOhm = p.ResistanceOhm, NoLoadCurrentA = p.NoLoadCurrentA };
+                station = station with { Drivetrain = new Drivetrain(motor, dt.Controller, dt.Options with { CurrentLimitScale = limitScale }) };
+            }
+            var conditions = new StationConditions(p.GapOffsetM, parts.PlateTempC, parts.AmbientC, parts.AmbientC, parts.AmbientC);
+            if (conditions != s.Conditions)
+            {
+                station = station with { Conditions = conditions };
+            }
+            if ((plateVaries || p.RemanenceT != s.Rotor.RemanenceT) && s.Load is TabulatedRotorLoad table)
+            {
+                var extra = _thicknessTables.TryGetValue(table, out var pair) ? pair : default;
+                station = station with
+                {
+                    Load = new SpreadRotorLoad(table, extra.Thinner, extra.Thicker, ThicknessStepM, parts.PlateThicknessM, parts.PlateConductivitySPerM, p.RemanenceT),
+                };
+            }
+            if (!ReferenceEquals(station, s))
+            {
+                model = model.WithStation(i, station);
+            }
+        }
+        if (parts.PayloadKg != model.PayloadKg)
+        {
+            model = model.WithPayload(parts.PayloadKg);
+        }
+        if (parts.CgOffsetXM != 0 || parts.CgOffsetYM != 0)
+        {
+            model = model.WithCentreOfGravityOffset(parts.CgOffsetXM, parts.CgOffsetYM);
+        }
+        if (parts.SocFraction != model.SocFraction)
+        {
+            model = model.WithSoc(parts.SocFraction);
+        }
+        if (parts.PackResistanceOhm != model.Packs.ResistanceOhm)
+        {
+            // Bank resistance = cells in series x cell resistance / cells in parallel / packs in parallel.
+            var bank = model.Packs;
+            double cell = parts.PackResistanceOhm * bank.Count * bank.Pack.CellsParallel / bank.Pack.CellsSeries;
+            model = model.WithPacks(bank with { Pack = bank.Pack with { CellResistanceOhm = cell } });
+        }
+        return model;
+    }
 
     private static double SpreadStep(Tolerance t, double nominal)
     {
@@ -85,20 +193,5 @@ public sealed class RigStressModel : IStressModel
         };
         // Keep the thinnest table above zero thickness.
         return Math.Min(step, 0.5 * nominal);
-    }
-
-    // The rig's range, widened: speeds to the drivetrain's free speed on a charged pack (with Kv spread), gaps to cover
-    // gap offsets, and a colder plate so that conductivity spreads of up to +25 % stay inside the table.
-    private static LoadTableRange Range(Rig rig, RotorDesign rotor, double freeSpeed)
-    {
-        var range = LoadTableRange.ForRig(rig, rotor);
-        double alpha = rig.Plate.Material.TempCoeffPerK;
-        double cold = alpha > 0 ? Math.Min(range.MinPlateTempC, 20 - 0.2 / alpha) : range.MinPlateTempC;
-        return range with
-        {
-            MaxSpeedRadPerS = Math.Max(range.MaxSpeedRadPerS, freeSpeed),
-            MinGapM = 0.25 * rig.LandedGapM,
-            MinPlateTempC = cold,
-        };
     }
 }

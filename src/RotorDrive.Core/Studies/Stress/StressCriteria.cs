@@ -29,7 +29,7 @@ public static class StressCriteria
         StressCriterion.Currents => "a current beyond its burst allowance",
         StressCriterion.PackVoltage => "pack voltage below cutoff",
         StressCriterion.Trim => "no trimmed hover within limits",
-        StressCriterion.Yaw => "yaw residual beyond the trim's authority",
+        StressCriterion.Yaw => "equal-duty yaw residual over the tolerance, or no trim authority for it",
         StressCriterion.Retainer => "retaining ring over its allowable stress",
         _ => throw new ArgumentOutOfRangeException(nameof(criterion), criterion, "Unknown criterion."),
     };

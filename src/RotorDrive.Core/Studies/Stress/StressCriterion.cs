@@ -6,7 +6,7 @@ public enum StressCriterion
     /// <summary>The craft lifts off within limits.liftoff_time_s.</summary>
     Liftoff,
 
-    /// <summary>Every motor can out-pull its rotor's drag peak at the landed gap within its current limit (no rotor stalls).</summary>
+    /// <summary>No rotor is left below its drag peak at its current limit when the spin-up ends (no rotor stalls).</summary>
     Stall,
 
     /// <summary>Peak currents within the motor and controller burst allowances and the pack's burst C-rate.</summary>
@@ -18,7 +18,8 @@ public enum StressCriterion
     /// <summary>A trimmed hover exists at the design gap within every limit.</summary>
     Trim,
 
-    /// <summary>The yaw residual with equal duties is within the trim's yaw authority.</summary>
+    /// <summary>The yaw residual with equal duties is within limits.yaw_torque_nm and the trim can command that torque both
+    /// ways within every limit (the yaw command's pass rule).</summary>
     Yaw,
 
     /// <summary>The magnet retaining ring's hoop stress at the hover speed is within its allowable.</summary>

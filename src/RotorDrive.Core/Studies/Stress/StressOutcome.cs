@@ -10,12 +10,15 @@ namespace RotorDrive.Core.Studies.Stress;
 /// <param name="PeakMotorCurrentA">Largest motor current of any station during the spin-up, A.</param>
 /// <param name="PeakPackCurrentA">Largest pack current during the spin-up, A.</param>
 /// <param name="MinPackVoltageV">Smallest bus voltage during the spin-up, V.</param>
-/// <param name="HoverSpeedRpm">Largest trimmed hover speed of any station, rpm, or null when no trim was found.</param>
+/// <param name="HoverSpeedRpm">Largest trimmed hover speed of any station, rpm, or null when no balance was found.</param>
 /// <param name="HoverCurrentA">Largest trimmed hover motor current of any station, A, or null.</param>
 /// <param name="HoverPackVoltageV">Bus voltage in trimmed hover, V, or null.</param>
-/// <param name="YawResidualNm">Magnitude of the yaw torque with equal duties, N m, or null.</param>
-/// <param name="YawAuthorityNm">Yaw torque the trim can command in its weaker direction within limits, N m, or null.</param>
-/// <param name="TrimLimit">What stops the trim (a limit key), or null when it exists within limits.</param>
+/// <param name="YawResidualNm">Magnitude of the yaw torque with every station at the one duty that carries the weight
+/// (<see cref="Craft.YawBalance.EqualDutyResidual"/>), N m, or null without a trim or such a duty.</param>
+/// <param name="YawAuthorityNm">The yaw torque the trim was shown to command both ways within every limit: the rig's yaw
+/// tolerance when it can, 0 when it cannot, N m; null when it was not checked (no trim).</param>
+/// <param name="TrimLimit">What stops the trimmed hover (the first finding's limit key, e.g. "duty_headroom", or the hover
+/// status), or null when it exists within limits.</param>
 /// <param name="Trace">The spin-up trace when it was asked for, otherwise null.</param>
 public sealed record StressOutcome(
     IReadOnlyList<double?> Margins,

@@ -1,5 +1,8 @@
 using MathNet.Numerics.Distributions;
+using RotorDrive.Core.Craft;
+using RotorDrive.Core.Simulation;
 using RotorDrive.Core.Studies;
+using RotorDrive.Core.Tests.Magnetics;
 using RotorDrive.Core.Studies.Stress;
 using Xunit;
 
@@ -10,35 +13,108 @@ public class StressStudyTests
     private static readonly RigStressModel Model = new(StressRigs.Square, StressRigs.Spreads);
 
     [Fact]
-    public void ZeroTolerances_GiveEverySampleTheNominalSpinUpAndHover()
+    public void ZeroTolerances_GiveEverySampleTheNominalSpinUpTrimAndYaw_FigureByFigure()
     {
-        var model = new RigStressModel(StressRigs.Square, StressTolerances.None);
-        var nominal = model.CreateEvaluator().Evaluate(StressSampler.Nominal(StressRigs.Square), recordTrace: false);
-        Assert.True(nominal.LiftoffTimeS > 0);
-        Assert.NotNull(nominal.HoverSpeedRpm);
-        var result = StressStudy.Run(model, StressTolerances.None, new StressStudyOptions(12, Seed: 7, Threads: 2));
-        Assert.Equal(12, result.Samples);
+        // A rig whose centre of gravity sits off centre (the trim spreads the speeds) and whose station 0 has a faster
+        // motor (at equal duties its rotor runs faster, so the yaw residual is not zero).
+        var square = StressRigs.Square;
+        var rig = square with
+        {
+            Body = square.Body with { CgXM = 0.02, CgYM = -0.01 },
+            Stations = [square.Stations[0] with { Motor = StressRigs.Motor with { KvRadPerSPerV = 1.03 * StressRigs.Motor.KvRadPerSPerV } }, .. square.Stations.Skip(1)],
+        };
+        var model = new RigStressModel(rig, StressTolerances.None);
+        var options = model.Options;
+
+        // The nominal analyses, exactly as the spinup, hover and yaw commands run them on the rig's model.
+        var nominal = RigModel.Build(rig);
+        var sim = SimulationRig.FromModel(nominal, new SimulationRigOptions(Hover: options.Hover));
+        var hover = HoverTrim.Solve(nominal, options.Hover);
+        var profile = ThrottleProfile.SpinUp(ControllerMode.Duty, sim.HoverThrottle(ControllerMode.Duty), options.RampTimeS);
+        var spin = SpinupSimulator.Run(sim, new SpinupRequest(profile, rig.Limits.LiftoffTimeS, nominal.SocFraction), options.Spinup(false));
+        var yaw = YawBalance.Analyse(nominal, options.Hover);
+        Assert.NotNull(spin.LiftoffTimeS);
+        Assert.Equal(HoverStatus.Hovering, hover.Status);
+        Assert.True(Math.Abs(yaw.ResidualTorqueNm!.Value) > 1e-4, $"residual {yaw.ResidualTorqueNm}");
+
+        var result = StressStudy.Run(model, StressTolerances.None, new StressStudyOptions(6, Seed: 7, Threads: 2));
+        Assert.Equal(6, result.Samples);
         Assert.All(result.SampleResults, s =>
         {
-            Assert.Equal(nominal.Margins, s.Outcome.Margins);
-            Assert.Equal(nominal.LiftoffTimeS, s.Outcome.LiftoffTimeS);
-            Assert.Equal(nominal.HoverSpeedRpm, s.Outcome.HoverSpeedRpm);
-            Assert.Equal(nominal.HoverCurrentA, s.Outcome.HoverCurrentA);
-            Assert.Equal(nominal.PeakMotorCurrentA, s.Outcome.PeakMotorCurrentA);
-            Assert.Equal(nominal.MinPackVoltageV, s.Outcome.MinPackVoltageV);
+            var o = s.Outcome;
+            Assert.Equal(spin.LiftoffTimeS, o.LiftoffTimeS);
+            Assert.Equal(spin.StalledStations, o.StalledStations);
+            Assert.Equal(spin.Stations.Max(x => x.Motor.PeakA), o.PeakMotorCurrentA);
+            Assert.Equal(spin.Pack.PeakA, o.PeakPackCurrentA);
+            Assert.Equal(spin.MinBusVoltageV, o.MinPackVoltageV);
+            Assert.Equal(hover.Stations.Max(x => x.SpeedRpm), o.HoverSpeedRpm);
+            Assert.Equal(hover.Stations.Max(x => x.MotorCurrentA), o.HoverCurrentA);
+            Assert.Equal(hover.BusVoltageV, o.HoverPackVoltageV);
+            Assert.Null(o.TrimLimit);
+            // The yaw command brackets the equal duty over the whole range, the sample next to the trim's mean duty: both are
+            // Brent roots to 1e-12 in duty of the same equal-duty lift balance.
+            RelAssert.Close(Math.Abs(yaw.ResidualTorqueNm.Value), o.YawResidualNm!.Value, 1e-9, "yaw residual");
+            Assert.Equal(yaw.Pass, o.Passed(StressCriterion.Yaw));
+            Assert.True(o.PassedAll);
         });
         // No input varies, so there is nothing to rank.
         Assert.Empty(result.Drivers);
     }
 
     [Fact]
+    public void ARotorWhoseCurrentLimitCannotPassItsDragPeak_FailsStall_AsTheSpinUpReportsIt()
+    {
+        // Station 0's controller limits at a tenth of its burst rating: its torque cannot pass the drag peak at the landed
+        // gap (the stall definition of SpinupSimulator: below the peak speed at the current limit when the run ends).
+        var tolerances = StressTolerances.None.With(StressQuantity.ControllerCurrentLimit, Tolerance.Uniform(-90, -90, ToleranceScale.Percent, true));
+        var parts = StressSampler.Draw(StressRigs.Square, tolerances, 1, 0);
+        var model = new RigStressModel(StressRigs.Square, tolerances);
+        var outcome = model.CreateEvaluator().Evaluate(parts, recordTrace: false);
+        Assert.Equal(0.1 * StressRigs.Controller.BurstCurrentA, parts.Stations[0].CurrentLimitA, 9);
+        Assert.Contains(0, outcome.StalledStations);
+        Assert.False(outcome.Passed(StressCriterion.Stall));
+        Assert.True(outcome.Margins[(int)StressCriterion.Stall] < 0);
+    }
+
+    [Fact]
+    public void Variant_CarriesEveryDrawnValue_IntoTheRigModel()
+    {
+        var parts = StressSampler.Draw(StressRigs.Square, StressRigs.Spreads, 3, 5);
+        var variant = Model.Variant(parts);
+        for (int i = 0; i < 4; i++)
+        {
+            var s = variant.Stations[i];
+            var p = parts.Stations[i];
+            Assert.Equal(p.KvRadPerSPerV, s.Drivetrain.Motor.KvRadPerSPerV);
+            Assert.Equal(p.ResistanceOhm, s.Drivetrain.Motor.ResistanceOhm);
+            Assert.Equal(p.NoLoadCurrentA, s.Drivetrain.Motor.NoLoadCurrentA);
+            RelAssert.Close(p.CurrentLimitA, s.Drivetrain.CurrentLimitA, 1e-15, "current limit");
+            Assert.Equal(new StationConditions(p.GapOffsetM, parts.PlateTempC, parts.AmbientC, parts.AmbientC, parts.AmbientC), s.Conditions);
+        }
+        Assert.Equal(parts.PayloadKg, variant.PayloadKg);
+        Assert.Equal(parts.SocFraction, variant.SocFraction);
+        RelAssert.Close(parts.PackResistanceOhm, variant.Packs.ResistanceOhm, 1e-14, "pack resistance");
+        Assert.Equal(StressRigs.Square.Body.CgXM + parts.CgOffsetXM, variant.Rig.Body.CgXM);
+        // Remanence: lift scales as (Br'/Br)^2 (the layer model's pressures go as the source field squared; Halbach 1980).
+        var nominalLoad = Model.Nominal.Stations[0].Load.Evaluate(300, 0.01, 20, 20);
+        var onlyBr = StressSampler.Nominal(StressRigs.Square) with
+        {
+            Stations = [parts.Stations[0] with { KvRadPerSPerV = StressRigs.Motor.KvRadPerSPerV }, .. StressSampler.Nominal(StressRigs.Square).Stations.Skip(1)],
+        };
+        var scaled = Model.Variant(onlyBr).Stations[0].Load.Evaluate(300, 0.01, 20, 20);
+        double ratio = parts.Stations[0].RemanenceT / StressRigs.Rotor.RemanenceT;
+        RelAssert.Close(nominalLoad.LiftN * ratio * ratio, scaled.LiftN, 1e-12, "lift with drawn remanence");
+    }
+
+    [Fact]
     public void SymmetricNominalRig_TrimsWithoutYawResidual()
     {
         // Four identical stations, centre of gravity at the centre, pairs spinning opposite ways: statics gives equal
-        // shares and the reactions cancel, so the linearised equal-duty residual is zero (to rounding).
+        // shares and the reactions cancel, so the equal-duty residual is zero (to rounding) and the trim can command the
+        // rig's yaw tolerance both ways.
         var nominal = Model.CreateEvaluator().Evaluate(StressSampler.Nominal(StressRigs.Square), recordTrace: false);
         Assert.True(nominal.YawResidualNm < 1e-9, $"residual {nominal.YawResidualNm}");
-        Assert.True(nominal.YawAuthorityNm > 0);
+        Assert.Equal(StressRigs.Square.Limits.YawTorqueNm, nominal.YawAuthorityNm);
         Assert.True(nominal.PassedAll);
     }
 
@@ -169,8 +245,8 @@ public class StressThicknessTests
         var direct = new RigStressModel(rig with { Plate = rig.Plate with { ThicknessM = drawn } }, StressTolerances.None);
         var a = interpolated.CreateEvaluator().Evaluate(parts, recordTrace: false);
         var b = direct.CreateEvaluator().Evaluate(parts, recordTrace: false);
-        Magnetics.RelAssert.Close(b.HoverSpeedRpm!.Value, a.HoverSpeedRpm!.Value, 1e-3, "hover speed");
-        Magnetics.RelAssert.Close(b.LiftoffTimeS!.Value, a.LiftoffTimeS!.Value, 1e-3, "lift-off time");
-        Magnetics.RelAssert.Close(b.HoverCurrentA!.Value, a.HoverCurrentA!.Value, 1e-3, "hover current");
+        RelAssert.Close(b.HoverSpeedRpm!.Value, a.HoverSpeedRpm!.Value, 1e-3, "hover speed");
+        RelAssert.Close(b.LiftoffTimeS!.Value, a.LiftoffTimeS!.Value, 1e-3, "lift-off time");
+        RelAssert.Close(b.HoverCurrentA!.Value, a.HoverCurrentA!.Value, 1e-3, "hover current");
     }
 }
