@@ -12,7 +12,7 @@ public sealed partial class RankStudy
     public RankEvaluation Evaluate(RankCandidate candidate)
     {
         CheckCandidate(candidate);
-        var worker = new RankWorker(_trim.StationCount);
+        var worker = new RankWorker(_model.Stations.Count);
         EvaluateFast(candidate, worker, fresh: true);
         return ToEvaluation(candidate, worker.Outcome);
     }
@@ -25,7 +25,7 @@ public sealed partial class RankStudy
     public IReadOnlyList<RankEvaluation> ExplainMotor(int motorIndex)
     {
         Preconditions.InRange(motorIndex, 0, _catalog.Motors.Count - 1, nameof(motorIndex));
-        var worker = new RankWorker(_trim.StationCount);
+        var worker = new RankWorker(_model.Stations.Count);
         var list = new List<RankEvaluation>();
         for (int c = 0; c < _catalog.Controllers.Count; c++)
         {
@@ -62,8 +62,8 @@ public sealed partial class RankStudy
         {
             return null;
         }
-        int n = _trim.StationCount;
-        (double mass, _, _) = _trim.MassAndCg(motor.MassKg + controller.MassKg, candidate.PackCount * pack.MassKg);
+        int n = _model.Stations.Count;
+        (double mass, _, _) = MassAndCg(motor.MassKg + controller.MassKg, candidate.PackCount * pack.MassKg);
         double weight = mass * Units.StandardGravity;
         var train = new Drivetrain(motor, controller, new DriveOptions(MaxDuty: _rig.Limits.MaxDuty));
         var source = new BusSource(pack.CellsSeries * _ocvGrid[candidate.PackIndex][0], pack.ResistanceOhm / candidate.PackCount);
@@ -110,7 +110,7 @@ public sealed partial class RankStudy
             Rates(trial, k2);
             for (int i = 0; i < n; i++)
             {
-                speeds[i] = Math.Clamp(speeds[i] + 0.5 * dt * (k1[i] + k2[i]), 0.0, 1.2 * _trim.MaxSpeedRadPerS[i]);
+                speeds[i] = Math.Clamp(speeds[i] + 0.5 * dt * (k1[i] + k2[i]), 0.0, 1.2 * _maxSpeed[i]);
             }
         }
         return null;
@@ -123,7 +123,7 @@ public sealed partial class RankStudy
         var motor = _catalog.Motors[c.MotorIndex];
         var controller = _catalog.Controllers[c.ControllerIndex];
         var pack = _catalog.Packs[c.PackIndex];
-        int n = _trim.StationCount;
+        int n = _model.Stations.Count;
         var reasons = new List<RankRejection>();
         void Add(RankRejectionKind kind, string message)
         {
@@ -143,7 +143,7 @@ public sealed partial class RankStudy
             double over = 0;
             for (int i = 0; o.Trimmed && i < n; i++)
             {
-                double ratio = o.Speeds[i] / _trim.MaxSpeedRadPerS[i];
+                double ratio = o.Speeds[i] / _maxSpeed[i];
                 if (ratio > over)
                 {
                     over = ratio;
@@ -152,8 +152,8 @@ public sealed partial class RankStudy
             }
             reasons.Add(new RankRejection(RankRejectionKind.RotorSpeed, worst >= 0 && over > 1
                 ? string.Format(ci, "to lift {0:0.0} kg at the design gap station {1} must spin at {2:0} rpm, above its rotor's rated {3:0} rpm",
-                    o.MassKg, worst, Units.RadPerSToRpm(o.Speeds[worst]), Units.RadPerSToRpm(_trim.MaxSpeedRadPerS[worst]))
-                : string.Format(ci, "the rotors cannot lift {0:0.0} kg at the design gap within 1.2 x their rated speed (no trim)", o.MassKg)));
+                    o.MassKg, worst, Units.RadPerSToRpm(o.Speeds[worst]), Units.RadPerSToRpm(_maxSpeed[worst]))
+                : string.Format(ci, "the rotors cannot lift {0:0.0} kg at the design gap within {1:0.#} x their rated speed (no trim)", o.MassKg, _hoverOptions.SpeedSearchFactor)));
         }
         Add(RankRejectionKind.ControllerErpm, string.Format(ci,
             "controller {0} commutates at most {1:0} erpm, i.e. {2:0} rpm with the {3}-pole motor {4}, below the hover speed {5:0} rpm",

@@ -38,46 +38,36 @@ public sealed partial class RankStudy
             0,
             motors,
             parallel,
-            () => new RankWorker(_trim.StationCount),
+            () => new RankWorker(_model.Stations.Count),
             (m, _, worker) =>
             {
                 worker.Reset();
                 var list = new List<Accepted>();
-                // Visit the chunk so that the craft mass changes little from one combination to the next (controllers by
-                // mass, packs by mass back and forth): the trim's warm start then converges in a step or two. The order
-                // is fixed per chunk, so results do not depend on the threads.
-                int turn = 0;
-                for (int k = 1; k <= _maxPackCount; k++)
+                // Visit the chunk in order of craft mass (the same order for every motor): the trim's warm start then
+                // sits next to its answer. The order is fixed per chunk, so results do not depend on the threads.
+                foreach (var (c, p, k) in _massOrder)
                 {
-                    foreach (int c in _controllersByMass)
+                    var candidate = new RankCandidate(m, c, p, k);
+                    EvaluateFast(candidate, worker, fresh: false);
+                    var o = worker.Outcome;
+                    if (o.Reasons == 0)
                     {
-                        bool up = (turn++ & 1) == 0;
-                        for (int q = 0; q < packs; q++)
+                        list.Add(new Accepted
                         {
-                            int p = _packsByMass[up ? q : packs - 1 - q];
-                            var candidate = new RankCandidate(m, c, p, k);
-                            EvaluateFast(candidate, worker, fresh: false);
-                            var o = worker.Outcome;
-                            if (o.Reasons == 0)
+                            Index = IndexOf(candidate),
+                            TieKey = TieKey(candidate),
+                            RuntimeS = o.RuntimeS,
+                            MassKg = o.MassKg,
+                            Margin = o.CurrentMargin,
+                        });
+                    }
+                    else
+                    {
+                        for (int r = 0; r < kinds; r++)
+                        {
+                            if ((o.Reasons & (1u << r)) != 0)
                             {
-                                list.Add(new Accepted
-                                {
-                                    Index = IndexOf(candidate),
-                                    TieKey = TieKey(candidate),
-                                    RuntimeS = o.RuntimeS,
-                                    MassKg = o.MassKg,
-                                    Margin = o.CurrentMargin,
-                                });
-                            }
-                            else
-                            {
-                                for (int r = 0; r < kinds; r++)
-                                {
-                                    if ((o.Reasons & (1u << r)) != 0)
-                                    {
-                                        counts[m * kinds + r]++;
-                                    }
-                                }
+                                counts[m * kinds + r]++;
                             }
                         }
                     }

@@ -1,27 +1,35 @@
+using RotorDrive.Core.Craft;
 using RotorDrive.Core.Drive;
 
 namespace RotorDrive.Core.Studies.Ranking;
 
-/// <summary>Per-thread scratch of a ranking sweep: the trim's warm start, its exact-mass cache, the drivetrain of the
-/// current motor and controller, and the bus solver's buffers. Reset at the start of every chunk so that results do not
-/// depend on which thread ran which chunk.</summary>
+/// <summary>Per-thread scratch of a ranking sweep: the trim's workspace and warm start, its exact-mass cache, the
+/// drivetrain of the current motor and controller, and the bus solver's buffers. Reset at the start of every chunk so
+/// that results do not depend on which thread ran which chunk.</summary>
 internal sealed class RankWorker
 {
     public RankWorker(int stations)
     {
-        Trim = new RankTrimState(stations);
+        TrimSpace = new HoverTrimWorkspace(stations);
+        TrimSpeeds = new double[stations];
         Outcome = new RankOutcome(stations);
         Inputs = new DriveInput[stations];
         Points = new DrivePoint[stations];
     }
 
-    public RankTrimState Trim { get; }
+    public HoverTrimWorkspace TrimSpace { get; }
+
+    /// <summary>The last trim's speeds (the next trim's warm start), rad/s.</summary>
+    public double[] TrimSpeeds { get; }
 
     public RankOutcome Outcome { get; }
 
     public DriveInput[] Inputs { get; }
 
     public DrivePoint[] Points { get; }
+
+    /// <summary>Whether <see cref="TrimSpeeds"/> holds a converged trim.</summary>
+    public bool HasSpeeds;
 
     public bool TrimCached;
 
@@ -39,7 +47,7 @@ internal sealed class RankWorker
 
     public void Reset()
     {
-        Trim.Reset();
+        HasSpeeds = false;
         TrimCached = false;
         DrivetrainMotor = -1;
         DrivetrainController = -1;
