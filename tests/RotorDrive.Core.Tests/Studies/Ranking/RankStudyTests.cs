@@ -123,20 +123,7 @@ public class RankStudyTests
             Assert.Equal(direct.Accepted, byIndex.ContainsKey(index));
             if (direct.Accepted)
             {
-                var d = direct.Figures!;
-                var f = fast.Figures!;
-                RelAssert.Close(d.TotalMassKg, f.TotalMassKg, 1e-12, "mass");
-                RelAssert.Close(d.RuntimeS, f.RuntimeS, 1e-8, "runtime");
-                RelAssert.Close(d.CurrentMargin!.Value, f.CurrentMargin!.Value, 1e-7, "margin");
-                RelAssert.Close(d.PackCurrentA, f.PackCurrentA, 1e-8, "pack current");
-                RelAssert.Close(d.BusVoltageV, f.BusVoltageV, 1e-10, "bus voltage");
-                for (int i = 0; i < d.StationSpeedsRadPerS.Count; i++)
-                {
-                    RelAssert.Close(d.StationSpeedsRadPerS[i], f.StationSpeedsRadPerS[i], 1e-9, "speed");
-                    RelAssert.Close(d.StationMotorCurrentsA[i], f.StationMotorCurrentsA[i], 1e-8, "current");
-                    RelAssert.Close(d.StationDuties[i], f.StationDuties[i], 1e-8, "duty");
-                }
-                Assert.Equal(d.RuntimeLimit, f.RuntimeLimit);
+                AssertSameFigures(direct.Figures!, fast.Figures!);
             }
         }
         Assert.True(result.AcceptedCount > 3 && result.RejectedCount > 3, "the catalog should hold both accepted and rejected combinations");
@@ -146,6 +133,76 @@ public class RankStudyTests
             .OrderByDescending(e => e.Figures!.RuntimeS).ThenBy(e => e.MotorId, StringComparer.Ordinal).ThenBy(e => e.ControllerId, StringComparer.Ordinal)
             .ThenBy(e => e.PackId, StringComparer.Ordinal).ThenBy(e => e.Candidate.PackCount).Select(e => e.Candidate).ToList();
         Assert.Equal(expected, result.Ordered);
+    }
+
+    // Every figure a ranking reports, straightforward against fast: the trim agrees to the square of HoverTrim's step
+    // tolerance (1e-7, so ~1e-14), the closed-form bus to DriveBus's voltage tolerance; the runtime adds up 32 steps.
+    private static void AssertSameFigures(RankFigures d, RankFigures f)
+    {
+        RelAssert.Close(d.TotalMassKg, f.TotalMassKg, 1e-12, "mass");
+        RelAssert.Close(d.RuntimeS, f.RuntimeS, 1e-8, "runtime");
+        RelAssert.Close(d.CurrentMargin!.Value, f.CurrentMargin!.Value, 1e-7, "margin");
+        RelAssert.Close(d.PackCurrentA, f.PackCurrentA, 1e-9, "pack current");
+        RelAssert.Close(d.PeakPackCurrentA, f.PeakPackCurrentA, 1e-9, "peak pack current");
+        RelAssert.Close(d.BusVoltageV, f.BusVoltageV, 1e-10, "bus voltage");
+        RelAssert.Close(d.ElectricalPowerW, f.ElectricalPowerW, 1e-9, "electrical power");
+        RelAssert.Close(d.EddyPowerW, f.EddyPowerW, 1e-9, "eddy power");
+        RelAssert.Close(d.LiftSpecificPowerWPerN, f.LiftSpecificPowerWPerN, 1e-9, "W/N");
+        RelAssert.Close(d.DragPeakTorqueMargin!.Value, f.DragPeakTorqueMargin!.Value, 1e-9, "drag-peak margin");
+        Assert.Equal(d.StationSpeedsRadPerS.Count, f.StationSpeedsRadPerS.Count);
+        for (int i = 0; i < d.StationSpeedsRadPerS.Count; i++)
+        {
+            RelAssert.Close(d.StationSpeedsRadPerS[i], f.StationSpeedsRadPerS[i], 1e-9, "speed");
+            RelAssert.Close(d.StationMotorCurrentsA[i], f.StationMotorCurrentsA[i], 1e-9, "current");
+            RelAssert.Close(d.StationDuties[i], f.StationDuties[i], 1e-9, "duty");
+        }
+        Assert.Equal(d.RuntimeLimit, f.RuntimeLimit);
+    }
+
+    // The issue's own check: the ranking's winner hovers exactly as `rotordrive hover` trims that drivetrain. Six stations
+    // and an off-centre centre of gravity, so the trim's least-spread choice is exercised. Agreement within 1e-9: HoverTrim
+    // stops when its step is below StepTolerance (1e-7 of the scale speed) and applies that step, so both paths land
+    // within ~1e-14 of the same fixed point; the ranking's closed-form bus equals DriveBus to its voltage tolerance.
+    [Fact]
+    public void WinnersFigures_EqualTheTrimmedHover_OfTheSameDrivetrain()
+    {
+        const double Agreement = 1e-9;
+        var load = new SyntheticLoad(70, 1.5, 200, 30, DesignGapM);
+        var rig = HexRig(18, 4, cgXM: 0.05, cgYM: -0.04);
+        var study = RankStudy.Create(rig, MixedCatalog(), new RankOptions(MaxPackCount: 2), SixOf(load));
+        var result = study.Run();
+        Assert.True(result.AcceptedCount > 3, "the catalog should fly this rig");
+        var winner = result.Top[0].Evaluation;
+        var figures = winner.Figures!;
+        var catalog = study.Catalog;
+        var motor = catalog.Motors[winner.Candidate.MotorIndex];
+        var controller = catalog.Controllers[winner.Candidate.ControllerIndex];
+        var pack = catalog.Packs[winner.Candidate.PackIndex];
+        var bank = new PackBank(pack, winner.Candidate.PackCount, catalog.CurveFor(pack.Chemistry)!);
+        // The hover command's path: a rig model from the rig (here with analytic loads), parts and packs assigned.
+        var assigned = rig with { Stations = rig.Stations.Select(s => s with { Motor = motor, Controller = controller }).ToArray(), Packs = bank };
+        var model = RigModel.Build(assigned, SixOf(load)).WithParts(motor, controller).WithPacks(bank);
+        var hover = HoverTrim.Solve(model);
+
+        Assert.True(hover.Balanced);
+        RelAssert.Close(hover.MassKg, figures.TotalMassKg, 1e-15, "mass");
+        for (int i = 0; i < 6; i++)
+        {
+            RelAssert.Close(hover.Stations[i].SpeedRadPerS, figures.StationSpeedsRadPerS[i], Agreement, "speed");
+            RelAssert.Close(hover.Stations[i].MotorCurrentA, figures.StationMotorCurrentsA[i], Agreement, "motor current");
+            RelAssert.Close(hover.Stations[i].Duty, figures.StationDuties[i], Agreement, "duty");
+        }
+        // The trim spreads the speeds to hold the off-centre weight level (not a common speed).
+        Assert.True(figures.StationSpeedsRadPerS.Max() / figures.StationSpeedsRadPerS.Min() > 1.01);
+        RelAssert.Close(hover.PackCurrentA, figures.PackCurrentA, Agreement, "pack current");
+        RelAssert.Close(hover.BusVoltageV, figures.BusVoltageV, Agreement, "bus voltage");
+        RelAssert.Close(hover.LiftSpecificPowerWPerN, figures.LiftSpecificPowerWPerN, Agreement, "W/N");
+        RelAssert.Close(hover.PlatePowerW, figures.EddyPowerW, Agreement, "plate power");
+        // The study's own model variant is that model.
+        var variant = study.ModelFor(winner.Candidate);
+        Assert.Equal(model.MassKg, variant.MassKg);
+        Assert.Equal(model.CgXM, variant.CgXM);
+        Assert.Equal(model.CgYM, variant.CgYM);
     }
 
     [Fact]
