@@ -2,6 +2,7 @@ using System.CommandLine;
 using System.Globalization;
 using System.Text;
 using RotorDrive.Cli.Output;
+using RotorDrive.Core;
 using RotorDrive.Core.Craft;
 using RotorDrive.Core.Studies.Ranking;
 using RotorDrive.Files;
@@ -98,6 +99,11 @@ public static class RankCommand
         if (catalog.Motors.Count == 0 || catalog.Controllers.Count == 0 || catalog.Packs.Count == 0)
         {
             error.WriteLine("rotordrive rank: error: the catalogs need at least one motor, one controller and one pack to rank.");
+            return ExitCodes.BadInput;
+        }
+        if (rig.Stations.Count < 4)
+        {
+            error.WriteLine($"rotordrive rank: error: {request.RigPath}: $.stations: a trimmed hover needs at least four stations to balance force, pitch, roll and yaw; the rig has {rig.Stations.Count}.");
             return ExitCodes.BadInput;
         }
 
@@ -289,6 +295,8 @@ public static class RankCommand
             f?.TotalMassKg, f?.MaxSpeedRpm, f?.MaxMotorCurrentA, f is { StationDuties.Count: > 0 } ? f.MaxDuty : null,
             f?.PackCurrentA, f?.BusVoltageV, f?.ElectricalPowerW, f?.LiftSpecificPowerWPerN, f?.EddyPowerW, f?.RuntimeS, f?.RuntimeLimit,
             f?.CurrentMargin * 100, f?.DragPeakTorqueMargin * 100, liftoff,
+            f is null ? [] : f.StationSpeedsRadPerS.Select((w, i) => new StationReport(i, Units.RadPerSToRpm(w), f.StationMotorCurrentsA[i],
+                i < f.StationDuties.Count ? f.StationDuties[i] : null)).ToList(),
             e.Rejections.Select(x => new ReasonReport(x.Kind.Key(), x.Message)).ToList(),
             e.Cautions.Select(x => x.Message).ToList());
     }
@@ -362,8 +370,11 @@ public static class RankCommand
         double? CurrentMarginPct,
         double? DragPeakTorqueMarginPct,
         double? LiftoffTimeS,
+        IReadOnlyList<StationReport> Stations,
         IReadOnlyList<ReasonReport> Rejections,
         IReadOnlyList<string> Cautions);
+
+    private sealed record StationReport(int Index, double SpeedRpm, double MotorCurrentA, double? Duty);
 
     private sealed record WhyNotReport(string Motor, IReadOnlyList<WhyNotEntry> Combinations);
 
