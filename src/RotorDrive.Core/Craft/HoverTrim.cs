@@ -87,28 +87,23 @@ public static class HoverTrim
     /// <param name="cgXM">Centre of gravity x, m.</param>
     /// <param name="cgYM">Centre of gravity y, m.</param>
     /// <param name="yawTorqueNm">Commanded net yaw torque, N m.</param>
-    /// <param name="speeds">In: the warm start (when <paramref name="warm"/>); out: the trimmed speeds, rad/s.</param>
-    /// <param name="warm">Whether <paramref name="speeds"/> holds a start.</param>
+    /// <param name="speeds">Receives the trimmed speeds, rad/s.</param>
+    /// <param name="warm">Start from the workspace's last trim, carried to the new weight, centre of gravity and yaw
+    /// demand by one tangent step; cold when the workspace holds none.</param>
     /// <param name="options">Numerical settings (validated by the caller).</param>
-    /// <param name="workspace">Scratch for this station count.</param>
+    /// <param name="workspace">Scratch for this station count; remembers the last trim for the next warm start.</param>
     /// <param name="iterations">Newton iterations of the successful attempt.</param>
     internal static SpeedSolve SolveSpeeds(IReadOnlyList<CraftStation> stations, double gapM, double weightN, double cgXM, double cgYM,
         double yawTorqueNm, double[] speeds, bool warm, HoverOptions options, HoverTrimWorkspace workspace, out int iterations)
     {
         int n = stations.Count;
-        if (warm)
+        var ws = workspace;
+        bool continued = warm && ws.Solved;
+        ws.Solved = false;
+        if (continued && Predict(stations, weightN, cgXM, cgYM, yawTorqueNm, speeds, ws, out double mean)
+            && Newton(stations, gapM, weightN, cgXM, cgYM, yawTorqueNm, speeds, mean, warmMultipliers: true, options, ws, out iterations))
         {
-            double sum = 0;
-            bool usable = true;
-            for (int i = 0; i < n; i++)
-            {
-                usable &= speeds[i] > 0 && double.IsFinite(speeds[i]);
-                sum += speeds[i];
-            }
-            if (usable && Newton(stations, gapM, weightN, cgXM, cgYM, yawTorqueNm, speeds, sum / n, options, workspace, out iterations))
-            {
-                return SpeedSolve.Converged;
-            }
+            return SpeedSolve.Converged;
         }
         double rated = double.PositiveInfinity, top = 0;
         foreach (var s in stations)
@@ -139,9 +134,62 @@ public static class HoverTrim
         // The common speed is only a starting point for Newton: a loose tolerance suffices.
         double w0 = Brent.FindRoot(Excess, 1e-6 * bracket, bracket, 1e-6 * bracket, 200);
         Array.Fill(speeds, w0, 0, n);
-        return Newton(stations, gapM, weightN, cgXM, cgYM, yawTorqueNm, speeds, w0, options, workspace, out iterations)
+        return Newton(stations, gapM, weightN, cgXM, cgYM, yawTorqueNm, speeds, w0, warmMultipliers: false, options, ws, out iterations)
             ? SpeedSolve.Converged
             : SpeedSolve.NoConvergence;
+    }
+
+    // The continuation's predictor (E. L. Allgower & K. Georg, Introduction to Numerical Continuation Methods, 1990, ch. 2):
+    // the last trim's KKT system, whose rows hold the constraints' speed derivatives, taken with the constraints' change
+    // under the new weight, centre of gravity and yaw demand (d lift-balance / dW = -1, d pitch / d cg_x = -W,
+    // d roll / d cg_y = -W, d yaw / d demand = -1, each scaled as in the last solve) gives the first-order change of the
+    // speeds and the multipliers. Newton then starts a step's square away from its fixed point. False when the step
+    // is unusable (a speed not positive).
+    private static bool Predict(IReadOnlyList<CraftStation> st, double weightN, double cgXM, double cgYM, double yawTorqueNm,
+        double[] speeds, HoverTrimWorkspace ws, out double mean)
+    {
+        int n = st.Count;
+        int size = n + 4;
+        double w0 = ws.SolvedW0;
+        var kkt = ws.Kkt.AsSpan(0, size * size);
+        var rhs = ws.Rhs.AsSpan(0, size);
+        ws.LastKkt.AsSpan(0, size * size).CopyTo(kkt);
+        double um = 0;
+        for (int i = 0; i < n; i++)
+        {
+            um += ws.SolvedSpeeds[i] / w0;
+        }
+        um /= n;
+        for (int i = 0; i < n; i++)
+        {
+            rhs[i] = -(ws.SolvedSpeeds[i] / w0 - um);
+        }
+        double w = ws.SolvedWeightN;
+        rhs[n] = (weightN - w) * ws.SolvedScale[0];
+        rhs[n + 1] = w * (cgXM - ws.SolvedCgXM) * ws.SolvedScale[1];
+        rhs[n + 2] = w * (cgYM - ws.SolvedCgYM) * ws.SolvedScale[2];
+        rhs[n + 3] = (yawTorqueNm - ws.SolvedYawNm) * ws.SolvedScale[3];
+        mean = 0;
+        if (!DenseSolve.Solve(kkt, rhs, size))
+        {
+            return false;
+        }
+        for (int i = 0; i < n; i++)
+        {
+            speeds[i] = ws.SolvedSpeeds[i] + rhs[i] * w0;
+            if (!(speeds[i] > 0) || !double.IsFinite(speeds[i]))
+            {
+                return false;
+            }
+            mean += speeds[i];
+        }
+        mean /= n;
+        for (int k = 0; k < 4; k++)
+        {
+            // Scale-free multipliers (lambda x constraint scale x w0^2 does not depend on the scaling; see Newton).
+            ws.Mu[k] = rhs[n + k] * ws.SolvedScale[k] * w0 * w0;
+        }
+        return true;
     }
 
     /// <summary>The largest payload with which the craft still trims and every limit holds, by bisection on the payload
@@ -193,8 +241,10 @@ public static class HoverTrim
     // vanishes, so P u + J^T lambda = 0 and c = 0 with the Jacobian J taken at that point — the first-order conditions of
     // the least-spread trim, which do not involve w0 or the start. Every accepted step is applied, the last (small) one
     // included, so the result lies within about the square of StepTolerance of that point, whatever the start.
+    // Multipliers: lambda_k x scale_k x w0^2 is what the stationarity condition fixes (the centring term is (P w) / w0 and the
+    // constraint gradients carry scale_k x w0), so warm multipliers are carried in that form (workspace Mu).
     private static bool Newton(IReadOnlyList<CraftStation> st, double gapM, double weight, double cgX, double cgY, double yawTarget,
-        double[] speeds, double w0, HoverOptions options, HoverTrimWorkspace ws, out int iterations)
+        double[] speeds, double w0, bool warmMultipliers, HoverOptions options, HoverTrimWorkspace ws, out int iterations)
     {
         int n = st.Count;
         int size = n + 4;
@@ -204,10 +254,20 @@ public static class HoverTrim
             arm = Math.Max(arm, Math.Max(Math.Abs(s.XM - cgX), Math.Abs(s.YM - cgY)));
         }
         arm = Math.Max(arm, 1e-3);
+        var lift = ws.Lift;
+        var torque = ws.Torque;
         double torqueScale = 0;
-        foreach (var s in st)
+        for (int i = 0; i < n; i++)
         {
-            torqueScale += Math.Abs(s.LoadAt(w0, gapM).TotalTorqueNm);
+            if (!(speeds[i] > 0))
+            {
+                iterations = 0;
+                return false;
+            }
+            var p = st[i].LoadAt(speeds[i], gapM);
+            lift[i] = p.LiftN;
+            torque[i] = p.TotalTorqueNm;
+            torqueScale += Math.Abs(p.TotalTorqueNm);
         }
         torqueScale = Math.Max(torqueScale, Math.Max(Math.Abs(yawTarget), 1e-6 * weight * arm));
         var scale = ws.Scale;
@@ -215,18 +275,36 @@ public static class HoverTrim
         scale[1] = 1 / (weight * arm);
         scale[2] = 1 / (weight * arm);
         scale[3] = 1 / torqueScale;
-        var lift = ws.Lift;
-        var torque = ws.Torque;
         var dLift = ws.DLift;
         var dTorque = ws.DTorque;
         var d2Lift = ws.D2Lift;
         var d2Torque = ws.D2Torque;
         var multipliers = ws.Multipliers;
-        Array.Clear(multipliers);
+        for (int k = 0; k < 4; k++)
+        {
+            multipliers[k] = warmMultipliers ? ws.Mu[k] / (scale[k] * w0 * w0) : 0.0;
+        }
         var c = ws.Residuals;
         var trial = ws.Trial;
         var kkt = ws.Kkt.AsSpan(0, size * size);
         var rhs = ws.Rhs.AsSpan(0, size);
+
+        double Scaled()
+        {
+            double f = -weight, pitch = 0, roll = 0, yaw = -yawTarget;
+            for (int i = 0; i < n; i++)
+            {
+                f += lift[i];
+                pitch += lift[i] * (st[i].XM - cgX);
+                roll += lift[i] * (st[i].YM - cgY);
+                yaw += st[i].Spin.Sign() * torque[i];
+            }
+            c[0] = f * scale[0];
+            c[1] = pitch * scale[1];
+            c[2] = roll * scale[2];
+            c[3] = yaw * scale[3];
+            return Math.Max(Math.Max(Math.Abs(c[0]), Math.Abs(c[1])), Math.Max(Math.Abs(c[2]), Math.Abs(c[3])));
+        }
 
         double Residuals(double[] w)
         {
@@ -252,7 +330,8 @@ public static class HoverTrim
             return Math.Max(Math.Max(Math.Abs(c[0]), Math.Abs(c[1])), Math.Max(Math.Abs(c[2]), Math.Abs(c[3])));
         }
 
-        double merit = Residuals(speeds);
+        // The loads at the start are in the workspace already.
+        double merit = Scaled();
         for (iterations = 1; iterations <= options.MaxIterations; iterations++)
         {
             if (!double.IsFinite(merit))
@@ -303,6 +382,7 @@ public static class HoverTrim
             {
                 rhs[n + k] = -c[k];
             }
+            kkt.CopyTo(ws.LastKkt);
             if (!DenseSolve.Solve(kkt, rhs, size))
             {
                 return false;
@@ -327,6 +407,7 @@ public static class HoverTrim
                 {
                     speeds[i] += rhs[i] * w0;
                 }
+                Remember(ws, st.Count, speeds, w0, weight, cgX, cgY, yawTarget);
                 return true;
             }
             double alpha = 1;
@@ -353,10 +434,34 @@ public static class HoverTrim
             merit = newMerit;
             if (merit <= options.Tolerance && largest * alpha <= StepTolerance)
             {
+                Remember(ws, st.Count, speeds, w0, weight, cgX, cgY, yawTarget);
                 return true;
             }
         }
-        return merit <= options.Tolerance;
+        if (merit <= options.Tolerance)
+        {
+            Remember(ws, st.Count, speeds, w0, weight, cgX, cgY, yawTarget);
+            return true;
+        }
+        return false;
+    }
+
+    // Keeps what the next warm start's predictor needs: the trim, its parameters, scaling and multipliers (LastKkt holds
+    // the last KKT matrix already).
+    private static void Remember(HoverTrimWorkspace ws, int n, double[] speeds, double w0, double weight, double cgX, double cgY, double yaw)
+    {
+        Array.Copy(speeds, ws.SolvedSpeeds, n);
+        ws.SolvedW0 = w0;
+        ws.SolvedWeightN = weight;
+        ws.SolvedCgXM = cgX;
+        ws.SolvedCgYM = cgY;
+        ws.SolvedYawNm = yaw;
+        for (int k = 0; k < 4; k++)
+        {
+            ws.SolvedScale[k] = ws.Scale[k];
+            ws.Mu[k] = ws.Multipliers[k] * ws.Scale[k] * w0 * w0;
+        }
+        ws.Solved = true;
     }
 
     private static HoverResult Failed(RigModel model, double gapM, HoverStatus status, HoverFinding finding, int iterations)

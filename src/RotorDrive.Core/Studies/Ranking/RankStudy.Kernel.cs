@@ -187,12 +187,8 @@ public sealed partial class RankStudy
     // The trim at this mass and centre of gravity through HoverTrim's speed solve, warm-started from the worker's last
     // trim when asked (the fixed point does not depend on the start; a failed warm start falls back to the cold one).
     private bool Trim(double massKg, double cgXM, double cgYM, RankWorker w, bool warm)
-    {
-        var outcome = HoverTrim.SolveSpeeds(_model.Stations, _model.DesignGapM, massKg * Units.StandardGravity, cgXM, cgYM, 0.0,
-            w.TrimSpeeds, warm && w.HasSpeeds, _hoverOptions, w.TrimSpace, out _);
-        w.HasSpeeds = outcome == HoverTrim.SpeedSolve.Converged;
-        return w.HasSpeeds;
-    }
+        => HoverTrim.SolveSpeeds(_model.Stations, _model.DesignGapM, massKg * Units.StandardGravity, cgXM, cgYM, 0.0,
+            w.TrimSpeeds, warm, _hoverOptions, w.TrimSpace, out _) == HoverTrim.SpeedSolve.Converged;
 
     // The bus with every station drawing a fixed motor current (constant-power terms sum P = sum (I R_loop + E) I):
     // V = Voc - R_bank (sum P / V + idle), the larger root; false when there is none or it is below Voc / 2 (past the

@@ -19,7 +19,7 @@ internal sealed class RankWorker
 
     public HoverTrimWorkspace TrimSpace { get; }
 
-    /// <summary>The last trim's speeds (the next trim's warm start), rad/s.</summary>
+    /// <summary>The last trim's speeds, rad/s (the workspace keeps its own copy for the next warm start).</summary>
     public double[] TrimSpeeds { get; }
 
     public RankOutcome Outcome { get; }
@@ -27,9 +27,6 @@ internal sealed class RankWorker
     public DriveInput[] Inputs { get; }
 
     public DrivePoint[] Points { get; }
-
-    /// <summary>Whether <see cref="TrimSpeeds"/> holds a converged trim.</summary>
-    public bool HasSpeeds;
 
     public bool TrimCached;
 
@@ -47,7 +44,7 @@ internal sealed class RankWorker
 
     public void Reset()
     {
-        HasSpeeds = false;
+        TrimSpace.Solved = false;
         TrimCached = false;
         DrivetrainMotor = -1;
         DrivetrainController = -1;
