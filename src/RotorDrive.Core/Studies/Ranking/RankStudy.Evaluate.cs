@@ -1,5 +1,6 @@
 using System.Globalization;
 using RotorDrive.Core.Drive;
+using RotorDrive.Core.Simulation;
 
 namespace RotorDrive.Core.Studies.Ranking;
 
@@ -42,78 +43,57 @@ public sealed partial class RankStudy
         return list;
     }
 
-    /// <summary>Estimates the time from rest on the landing gear to lift-off: every rotor driven at the team's duty
-    /// limit under the controller's current limit from a full pack, the craft held at the landed gap, until the rotors'
-    /// lift at the landed gap carries the weight. Heun's method (explicit trapezoidal, E. Hairer, S. P. Norsett,
-    /// G. Wanner, Solving Ordinary Differential Equations I, 1993) with the step of <see cref="RankOptions.LiftoffTimeStepS"/>.</summary>
-    /// <remarks>A quick estimate for the ranking table (no throttle ramp, no heave, no thermal drift); the spin-up
-    /// simulation is the full answer.</remarks>
+    /// <summary>Runs the full simulations of one combination on its rig model variant (<see cref="ModelFor"/>, prepared by
+    /// <see cref="SimulationRig.FromModel"/>): the spin-up from rest on the landing gear, every controller's duty ramped
+    /// to its trimmed-hover duty (the ramp and settle times of <see cref="SpinupStudyRequest.Default"/>) under its current
+    /// limit, through the drag peak at the landed gap to lift-off (<see cref="SpinupSimulator"/>, no traces), and the
+    /// endurance run from the model's state of charge (<see cref="EnduranceSimulator"/>).</summary>
+    /// <remarks>Tens of milliseconds on the demo rig: the ranking runs it for its shortlist only. Thread-safe.</remarks>
     /// <param name="candidate">The combination.</param>
-    /// <returns>The time to lift-off, s, or null when the cells do not fit the controller or the craft does not lift
-    /// off within <see cref="RankOptions.LiftoffMaxTimeS"/>.</returns>
+    /// <returns>Lift-off time, stalled stations, spin-up findings, endurance runtime and its first limit.</returns>
     /// <exception cref="ArgumentOutOfRangeException">An index is out of range.</exception>
-    public double? EstimateLiftoffTimeS(RankCandidate candidate)
+    public RankSimulation Simulate(RankCandidate candidate)
     {
-        CheckCandidate(candidate);
-        var motor = _catalog.Motors[candidate.MotorIndex];
+        var sim = SimulationRig.FromModel(ModelFor(candidate));
+        var request = SpinupStudyRequest.Default;
+        var quiet = SpinupOptions.Default with { RecordTrace = false };
+        var targets = sim.HoverThrottle(request.Mode, sim.SocFraction);
+        var spin = SpinupSimulator.Run(sim, new SpinupRequest(ThrottleProfile.SpinUp(request.Mode, targets, request.RampS),
+            request.RampS + request.SettleS, sim.SocFraction), quiet);
+        var ci = CultureInfo.InvariantCulture;
         var controller = _catalog.Controllers[candidate.ControllerIndex];
-        var pack = _catalog.Packs[candidate.PackIndex];
-        if (!controller.AcceptsCells(pack.CellsSeries))
+        var findings = new List<string>();
+        foreach (var s in spin.Stations.Where(s => s.Stalled))
         {
-            return null;
+            findings.Add(string.Format(ci,
+                "station {0} stalls below its drag peak ({1:0} rpm, {2:0.00} N m at the landed gap) under controller {3}'s {4:0} A limit at the hover duty; {5:0} A would pass it",
+                s.Index, Units.RadPerSToRpm(s.DragPeakSpeedRadPerS), s.DragPeakTorqueNm, controller.Id, s.CurrentLimitA, s.SuggestedCurrentLimitA));
         }
-        int n = _model.Stations.Count;
-        (double mass, _, _) = MassAndCg(motor.MassKg + controller.MassKg, candidate.PackCount * pack.MassKg);
-        double weight = mass * Units.StandardGravity;
-        var train = new Drivetrain(motor, controller, new DriveOptions(MaxDuty: _rig.Limits.MaxDuty));
-        var source = new BusSource(pack.CellsSeries * _ocvGrid[candidate.PackIndex][0], pack.ResistanceOhm / candidate.PackCount);
-        var inputs = new DriveInput[n];
-        var points = new DrivePoint[n];
-        var speeds = new double[n];
-        var k1 = new double[n];
-        var trial = new double[n];
-        double gap = _rig.LandedGapM, plate = _rig.PlateTemperatureC, ambient = _rig.AmbientC;
-        var command = new DriveCommand(DriveCommandKind.Duty, _rig.Limits.MaxDuty);
-        void Rates(double[] w, double[] into)
+        if (spin.LiftoffTimeS is not { } liftoff)
         {
-            for (int i = 0; i < n; i++)
-            {
-                inputs[i] = new DriveInput(train, command, w[i], ambient, ambient, Braking: false);
-            }
-            var solution = DriveBus.Solve(source, inputs, points);
-            for (int i = 0; i < n; i++)
-            {
-                double motorTorque = solution.Status == BusStatus.NoSolution ? 0.0 : points[i].TorqueNm;
-                double load = Loads[i].Evaluate(w[i], gap, plate, ambient).TotalTorqueNm;
-                into[i] = (motorTorque - load) / _rig.Stations[i].Rotor.InertiaKgM2;
-            }
+            findings.Add(string.Format(ci, "the craft never lifts off in {0:0.#} s (duty ramped to the hover duty over {1:0.#} s)",
+                request.RampS + request.SettleS, request.RampS));
         }
-        double dt = _options.LiftoffTimeStepS;
-        int stepsMax = (int)Math.Ceiling(_options.LiftoffMaxTimeS / dt);
-        var k2 = new double[n];
-        for (int step = 0; step < stepsMax; step++)
+        else if (liftoff > _rig.Limits.LiftoffTimeS)
         {
-            double lift = 0;
-            for (int i = 0; i < n; i++)
-            {
-                lift += Loads[i].Evaluate(speeds[i], gap, plate, ambient).LiftN;
-            }
-            if (lift >= weight)
-            {
-                return step * dt;
-            }
-            Rates(speeds, k1);
-            for (int i = 0; i < n; i++)
-            {
-                trial[i] = Math.Max(0.0, speeds[i] + dt * k1[i]);
-            }
-            Rates(trial, k2);
-            for (int i = 0; i < n; i++)
-            {
-                speeds[i] = Math.Clamp(speeds[i] + 0.5 * dt * (k1[i] + k2[i]), 0.0, 1.2 * _maxSpeed[i]);
-            }
+            findings.Add(string.Format(ci, "lift-off at {0:0.00} s is later than the limit of {1:0.#} s", liftoff, _rig.Limits.LiftoffTimeS));
         }
-        return null;
+        foreach (var s in spin.Stations.Where(s => s.Controller.Exceeded))
+        {
+            findings.Add(string.Format(ci, "station {0}: controller above its continuous {1:0} A for {2:0.00} s, longer than its burst allowance",
+                s.Index, s.Controller.ContinuousA, s.Controller.TimeAboveContinuousS));
+        }
+        if (spin.Pack.Exceeded)
+        {
+            findings.Add(string.Format(ci, "pack current {0:0} A during the spin-up exceeds its burst rating", spin.Pack.PeakA));
+        }
+        if (spin.BelowCutoff)
+        {
+            findings.Add(string.Format(ci, "the pack sags to {0:0.0} V during the spin-up, below its cutoff {1:0.0} V", spin.MinBusVoltageV, spin.CutoffVoltageV));
+        }
+        var endurance = EnduranceSimulator.Run(sim, null, EnduranceOptions.Default with { RecordTrace = false });
+        return new RankSimulation(spin.LiftoffTimeS, spin.StalledStations, findings, spin.MinBusVoltageV, spin.Pack.PeakA,
+            endurance.RuntimeS, endurance.FirstLimit, endurance.FirstLimitText, endurance.PeakWindingTempC, endurance.PeakPlateTempC);
     }
 
     // Turns an outcome into the public record, composing a sentence per reason.

@@ -117,8 +117,6 @@ public sealed partial class RankStudy
         options ??= RankOptions.Default;
         Preconditions.InRange(options.Top, 1, 1000, nameof(options.Top));
         Preconditions.InRange(options.RuntimeSteps, 4, 4096, nameof(options.RuntimeSteps));
-        Preconditions.InRange(options.LiftoffTimeStepS, 1e-5, 1.0, nameof(options.LiftoffTimeStepS));
-        Preconditions.InRange(options.LiftoffMaxTimeS, 0.1, 3600, nameof(options.LiftoffMaxTimeS));
         if (options.MaxPackCount is { } maxCount)
         {
             Preconditions.InRange(maxCount, 1, 64, nameof(options.MaxPackCount));

@@ -92,6 +92,39 @@ public class RankStudyTests
     }
 
     [Fact]
+    public void ShortlistedMotorThatStallsInTheFullSpinup_IsRejected_AndTheNextOneMovesUp()
+    {
+        // Worked by hand (Drela 2007 motor, Reitz 1970 load as in the three-motor test): the craft hovers at s = 1.3545
+        // (271 rad/s), and on the gear its lift (x e^0.21) reaches the weight only at s = 1.050, so every rotor must pass
+        // the landed drag peak (2.467 N m at 200 rad/s). Motor "lean" (200 rpm/V, 0.5 ohm) hovers at 41.0 A needing
+        // 41.0 x 0.502 + 12.9 = 33.5 V, duty about 0.81 on the sagging 12-cell pack. The quick check drives it at duty
+        // 0.95: (0.95 x ~41 V - 9.55 V) / 0.502 ohm = 58.6 A, 2.75 N m > 2.467 N m: it passes. The spin-up simulation
+        // ramps the duty only to the hover duty: (0.81 x ~42.5 V - 9.55 V) / 0.502 = 49.7 A, 2.33 N m < 2.467 N m: the
+        // rotors settle below the peak (voltage-limited, under the 80 A limit) and the craft never lifts off. Lighter, it
+        // ranks first by mass, is shortlisted (top 1), fails, and "A" takes its place.
+        var lean = Motor("lean", 200, 60, massKg: 0.2, resistanceOhm: 0.5);
+        var good = Motor("A", 100, 40);
+        var catalog = Catalog([lean, good], [Controller("c-60", 60, 80)], [Pack("flat-12s", "flat")]);
+        var study = RankStudy.Create(SquareRig(20, 0), catalog, new RankOptions(Objective: RankObjective.Mass, Top: 1, MaxPackCount: 1), FourOf(HandLoad));
+
+        Assert.True(study.Evaluate(new RankCandidate(0, 0, 0, 1)).Accepted, "the quick checks pass the lean motor");
+        var result = study.Run();
+
+        Assert.Equal(["A"], result.Ordered.Select(c => catalog.Motors[c.MotorIndex].Id));
+        var rejected = Assert.Single(result.SimulationRejections);
+        Assert.Equal("lean", rejected.MotorId);
+        Assert.Equal(RankRejectionKind.SpinupSimulation, rejected.Rejections[^1].Kind);
+        Assert.False(rejected.Simulation!.PassesSpinup);
+        Assert.Null(rejected.Simulation.LiftoffTimeS);
+        Assert.Contains("never lifts off", rejected.Rejections[^1].Message);
+        Assert.Equal(1, result.RejectionCounts.Single(c => c.Kind == RankRejectionKind.SpinupSimulation).Count);
+        var winner = result.Top.Single();
+        Assert.True(winner.Evaluation.Simulation!.PassesSpinup);
+        Assert.NotNull(winner.LiftoffTimeS);
+        Assert.True(winner.Evaluation.Simulation.EnduranceRuntimeS > 0);
+    }
+
+    [Fact]
     public void CellsOutsideTheControllerRange_AreRejected_AndOneWayControllersOnlyCautioned()
     {
         var catalog = Catalog([Motor("A", 100, 40)], [Controller("low", 60, 80, minCells: 2, maxCells: 6), Controller("oneway", 60, 80, reversible: false)], [Pack("flat-12s", "flat")]);
@@ -272,7 +305,7 @@ public class RankStudyTests
     {
         var load = new SyntheticLoad(100, 2, 200, 30, DesignGapM);
         var rig = SquareRig(18, 4, cgXM: 0.04, cgYM: -0.03);
-        var study = RankStudy.Create(rig, MixedCatalog(), new RankOptions(Objective: objective, MaxPackCount: 2, MaxDegreeOfParallelism: threads), FourOf(load));
+        var study = RankStudy.Create(rig, MixedCatalog(), new RankOptions(Objective: objective, Top: 3, MaxPackCount: 2, MaxDegreeOfParallelism: threads), FourOf(load));
         return (study, study.Run());
     }
 
