@@ -241,6 +241,10 @@ public static class RankCommand
         {
             o.WriteLine();
             o.WriteLine($"Why not {explained[0].MotorId}: every controller and pack with this motor");
+            int acceptedHere = explained.Count(e => e.Accepted);
+            var byReason = explained.SelectMany(e => e.Rejections.Select(r => r.Kind).Distinct()).GroupBy(k => k).OrderByDescending(g => g.Count()).ThenBy(g => g.Key);
+            o.WriteLine($"  {acceptedHere} of {explained.Count} accepted; rejected for: "
+                + string.Join(", ", byReason.Select(g => $"{g.Key.Describe()} ({g.Count()})")));
             var table = new TextTable(new TableColumn("controller"), new TableColumn("packs"), new TableColumn("verdict"));
             foreach (var e in explained)
             {
@@ -252,8 +256,9 @@ public static class RankCommand
             table.Write(o, 2);
         }
         o.WriteLine();
-        o.WriteLine("Method: trimmed hover at the design gap with the drivetrain's and packs' mass included (lift = weight, level, zero yaw);");
-        o.WriteLine("first-order motor model (Drela 2007) on the shared pack bus; runtime on the usable capacity without thermal drift (see README).");
+        o.WriteLine("Method: trimmed hover at the design gap with the drivetrain's and packs' mass included (lift = weight, level, zero yaw; the");
+        o.WriteLine("same trim as 'hover'); first-order motor model (Drela 2007) on the shared pack bus; runtime on the usable capacity without");
+        o.WriteLine("thermal drift; the shortlist simulated in full (spin-up as 'spinup', endurance as 'endurance'); see README.");
         o.WriteLine("Caution: one-way controllers are fine for a fixed spin direction (wire the motor for it) but cannot reverse-brake a rotor.");
         o.WriteLine("Estimates only: follow the manufacturers' ratings; lithium packs, strong magnets and spinning rotors are dangerous (see README, Safety).");
     }
