@@ -100,16 +100,26 @@ public static class HoverTrim
         var ws = workspace;
         bool continued = warm && ws.Solved;
         ws.Solved = false;
-        if (continued && Predict(stations, weightN, cgXM, cgYM, yawTorqueNm, speeds, ws, out double mean)
-            && Newton(stations, gapM, weightN, cgXM, cgYM, yawTorqueNm, speeds, mean, warmMultipliers: true, options, ws, out iterations))
-        {
-            return SpeedSolve.Converged;
-        }
         double rated = double.PositiveInfinity, top = 0;
         foreach (var s in stations)
         {
             rated = Math.Min(rated, s.Rotor.MaxSpeedRadPerS);
             top = Math.Max(top, s.Rotor.MaxSpeedRadPerS * options.SpeedSearchFactor);
+        }
+        if (continued && Predict(stations, weightN, cgXM, cgYM, yawTorqueNm, speeds, ws, out double mean)
+            && Newton(stations, gapM, weightN, cgXM, cgYM, yawTorqueNm, speeds, mean, warmMultipliers: true, options, ws, out iterations))
+        {
+            // Beyond the search limit the cold solve would have declared the craft too heavy: let it decide.
+            bool within = true;
+            for (int i = 0; i < n; i++)
+            {
+                within &= speeds[i] <= top;
+            }
+            if (within)
+            {
+                return SpeedSolve.Converged;
+            }
+            ws.Solved = false;
         }
         double Excess(double w)
         {
