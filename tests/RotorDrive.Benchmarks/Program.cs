@@ -12,11 +12,13 @@ if (args.Length > 0 && args[0] == "rank-generated")
     int controllers = args.Length > 2 ? int.Parse(args[2], System.Globalization.CultureInfo.InvariantCulture) : 60;
     int packs = args.Length > 3 ? int.Parse(args[3], System.Globalization.CultureInfo.InvariantCulture) : 80;
     var (rig, catalog) = RankGeneratedBenchmarks.Make(motors, controllers, packs);
+    var cpu = Process.GetCurrentProcess().TotalProcessorTime;
     var clock = Stopwatch.StartNew();
     var study = RankStudy.Create(rig, catalog, new RankOptions(MaxPackCount: 1));
     var result = study.Run();
     clock.Stop();
-    Console.WriteLine($"{result.TotalCombinations:N0} combinations, {result.AcceptedCount:N0} accepted, Pareto {result.ParetoRanks.Count}, best {result.Top[0].Evaluation.Label}: {clock.Elapsed.TotalSeconds:0.00} s, cores {Environment.ProcessorCount}, peak working set {Process.GetCurrentProcess().PeakWorkingSet64 / 1048576.0:0} MiB");
+    var used = Process.GetCurrentProcess().TotalProcessorTime - cpu;
+    Console.WriteLine($"{result.TotalCombinations:N0} combinations, {result.AcceptedCount:N0} accepted, Pareto {result.ParetoRanks.Count}, best {result.Top[0].Evaluation.Label}: wall {clock.Elapsed.TotalSeconds:0.00} s, cpu {used.TotalSeconds:0.00} s, cores {Environment.ProcessorCount}, peak working set {Process.GetCurrentProcess().PeakWorkingSet64 / 1048576.0:0} MiB");
     foreach (var count in result.RejectionCounts)
     {
         Console.WriteLine($"  {count.Count,10:N0} {count.Kind.Describe()}");
@@ -37,6 +39,13 @@ if (args.Length > 0 && args[0] == "rank-demo")
         var used = Process.GetCurrentProcess().TotalProcessorTime - cpu;
         Console.WriteLine($"run {run}: {result.TotalCombinations:N0} combinations, {result.AcceptedCount:N0} accepted: wall {clock.Elapsed.TotalSeconds:0.000} s, cpu {used.TotalSeconds:0.000} s");
     }
+    return;
+}
+// Stopwatch figures for the pieces of a ranking (trim, bus solve, load evaluation):
+//   dotnet run -c Release --project tests/RotorDrive.Benchmarks -- rank-parts
+if (args.Length > 0 && args[0] == "rank-parts")
+{
+    RankParts.Run();
     return;
 }
 BenchmarkSwitcher.FromAssembly(typeof(Program).Assembly).Run(args);

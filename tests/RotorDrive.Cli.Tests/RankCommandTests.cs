@@ -37,6 +37,55 @@ public sealed class RankCommandTests : IDisposable
         Assert.Equal(JsonValueKind.Number, assigned.GetProperty("rank").ValueKind);
     }
 
+    // The check at the command line: the ranking's winner, assigned to the demo rig, hovers under `rotordrive
+    // hover` with the figures the ranking reported. Both trim through HoverTrim's speed solve (the ranking warm-started,
+    // the hover from its common speed); agreement to 1e-9 relative (the trim's step tolerance squared is ~1e-14; JSON
+    // numbers are written round-trip).
+    [Fact]
+    public async Task Rank_Winner_EqualsHover_OfTheRigWithThatDrivetrain()
+    {
+        const double Agreement = 1e-9;
+        var (code, output, error) = await CliRunner.RunAsync("rank", RepoPaths.DemoRig, "--top", "1", "--json");
+        Assert.True(code == ExitCodes.Ok, error);
+        using var ranked = JsonDocument.Parse(output);
+        var winner = ranked.RootElement.GetProperty("top")[0];
+        string motor = winner.GetProperty("motor").GetString()!;
+        string controller = winner.GetProperty("controller").GetString()!;
+        string pack = winner.GetProperty("pack").GetString()!;
+        int count = winner.GetProperty("pack_count").GetInt32();
+
+        // The demo rig with the winner assigned, its catalogs referred to by absolute path.
+        string text = File.ReadAllText(RepoPaths.DemoRig)
+            .Replace("\"motor\": \"or1050-kv90\", \"controller\": \"sc120-12s\"", $"\"motor\": \"{motor}\", \"controller\": \"{controller}\"")
+            .Replace("\"pack\": { \"id\": \"lp12s-20ah\", \"count\": 2 }", $"\"pack\": {{ \"id\": \"{pack}\", \"count\": {count} }}");
+        foreach (string file in new[] { "motors.csv", "controllers.csv", "packs.csv", "cell_curves.csv", "rotors.csv", "plates.csv" })
+        {
+            text = text.Replace($"\"{file}\"", JsonSerializer.Serialize(Path.Combine(RepoPaths.Catalogs, file)));
+        }
+        string rigPath = Path.Combine(_folder, "winner-rig.json");
+        File.WriteAllText(rigPath, text);
+        var hover = await CliRunner.RunAsync("hover", rigPath, "--json");
+        Assert.True(hover.ExitCode is ExitCodes.Ok or ExitCodes.LimitFindings, hover.Error);
+        using var hovered = JsonDocument.Parse(hover.Output);
+        var h = hovered.RootElement;
+        Assert.Equal("trimmed", h.GetProperty("mode").GetString());
+
+        Close(h.GetProperty("mass_kg").GetDouble(), winner.GetProperty("total_mass_kg").GetDouble(), 1e-14);
+        Close(h.GetProperty("pack_current_a").GetDouble(), winner.GetProperty("pack_current_a").GetDouble(), Agreement);
+        Close(h.GetProperty("pack_voltage_v").GetDouble(), winner.GetProperty("bus_voltage_v").GetDouble(), Agreement);
+        Close(h.GetProperty("lift_specific_power_w_per_n").GetDouble(), winner.GetProperty("lift_specific_power_w_per_n").GetDouble(), Agreement);
+        var hs = h.GetProperty("stations").EnumerateArray().ToArray();
+        var rs = winner.GetProperty("stations").EnumerateArray().ToArray();
+        Assert.Equal(6, rs.Length);
+        Assert.Equal(hs.Length, rs.Length);
+        for (int i = 0; i < hs.Length; i++)
+        {
+            Close(hs[i].GetProperty("speed_rpm").GetDouble(), rs[i].GetProperty("speed_rpm").GetDouble(), Agreement);
+            Close(hs[i].GetProperty("motor_current_a").GetDouble(), rs[i].GetProperty("motor_current_a").GetDouble(), Agreement);
+            Close(hs[i].GetProperty("duty").GetDouble(), rs[i].GetProperty("duty").GetDouble(), Agreement);
+        }
+    }
+
     [Fact]
     public async Task Rank_Text_ShowsProgressOnStderr_ParetoMarks_AndWhyNot()
     {

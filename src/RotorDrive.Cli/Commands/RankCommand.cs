@@ -1,8 +1,11 @@
 using System.CommandLine;
 using System.Globalization;
 using System.Text;
+using System.Text.Json;
 using RotorDrive.Cli.Output;
+using RotorDrive.Core;
 using RotorDrive.Core.Craft;
+using RotorDrive.Core.Simulation;
 using RotorDrive.Core.Studies.Ranking;
 using RotorDrive.Files;
 
@@ -100,12 +103,21 @@ public static class RankCommand
             error.WriteLine("rotordrive rank: error: the catalogs need at least one motor, one controller and one pack to rank.");
             return ExitCodes.BadInput;
         }
+        if (rig.Stations.Count < 4)
+        {
+            error.WriteLine($"rotordrive rank: error: {request.RigPath}: $.stations: a trimmed hover needs at least four stations to balance force, pitch, roll and yaw; the rig has {rig.Stations.Count}.");
+            return ExitCodes.BadInput;
+        }
 
         var study = RankStudy.Create(rig, catalog, new RankOptions(Objective: request.By, Top: request.Top));
         var progress = request.Json ? null : new ProgressPrinter(error, study.CombinationCount);
         var result = study.Run(progress is null ? null : progress.Report);
         progress?.Finish();
-        var explained = whyNotIndex is { } motorIndex ? study.ExplainMotor(motorIndex) : null;
+        // A combination the shortlist's simulation rejected carries that reason (the quick evaluation alone passes it).
+        var simulationRejected = result.SimulationRejections.ToDictionary(e => e.Candidate);
+        var explained = whyNotIndex is { } motorIndex
+            ? study.ExplainMotor(motorIndex).Select(e => simulationRejected.GetValueOrDefault(e.Candidate) ?? e).ToList()
+            : null;
         var rankByIndex = new Dictionary<long, int>();
         if (explained is not null)
         {
@@ -159,7 +171,8 @@ public static class RankCommand
                 new TableColumn("packs"), new TableColumn("speed_rpm", Alignment.Right), new TableColumn("current_a", Alignment.Right),
                 new TableColumn("duty", Alignment.Right), new TableColumn("pack_a", Alignment.Right), new TableColumn("runtime_min", Alignment.Right),
                 new TableColumn("mass_kg", Alignment.Right), new TableColumn("margin_%", Alignment.Right), new TableColumn("peak_margin_%", Alignment.Right),
-                new TableColumn("liftoff_s", Alignment.Right), new TableColumn("score", Alignment.Right));
+                new TableColumn("liftoff_s", Alignment.Right), new TableColumn("endur_min", Alignment.Right), new TableColumn("ends_by"),
+                new TableColumn("score", Alignment.Right));
             foreach (var entry in result.Top)
             {
                 var e = entry.Evaluation;
@@ -168,17 +181,33 @@ public static class RankCommand
                     $"{e.Candidate.PackCount} x {e.PackId}", Numbers.Format(f.MaxSpeedRpm, 0), Numbers.Format(f.MaxMotorCurrentA, 1),
                     Numbers.Format(f.MaxDuty, 3), Numbers.Format(f.PackCurrentA, 1), Numbers.Format(f.RuntimeS / 60, 1), Numbers.Format(f.TotalMassKg, 2),
                     Numbers.Format(f.CurrentMargin * 100, 1), Numbers.Format(f.DragPeakTorqueMargin * 100, 0), Numbers.Format(entry.LiftoffTimeS, 2),
+                    Numbers.Format(e.Simulation?.EnduranceRuntimeS / 60, 1), e.Simulation is { } sim ? LimitKey(sim.EnduranceLimit) : "",
                     Numbers.Format(entry.Score, 3));
             }
             table.Write(o, 2);
             o.WriteLine("  speed and current: fastest station / largest motor current at hover; duty: largest, full pack; pack_a: pack current, full pack;");
             o.WriteLine("  margin_%: worst of motor, controller and pack currents against their continuous ratings over the run; peak_margin_%: motor");
-            o.WriteLine("  torque over load torque at the landed drag peak, minus 1; liftoff_s: estimate at full allowed duty, craft held at the landed gap.");
+            o.WriteLine("  torque over load torque at the landed drag peak, minus 1 (the quick spin-up check every combination gets). The shortlist");
+            o.WriteLine("  shown is simulated in full: liftoff_s from the spin-up simulation (duty ramped to the hover duty, current limits, pack sag),");
+            o.WriteLine("  endur_min and ends_by from the endurance simulation (pack, windings and plate evolving) and the limit that ends it.");
+            foreach (var entry in result.Top.Where(t => t.Evaluation.Simulation is { SpinupFindings.Count: > 0 }))
+            {
+                o.WriteLine($"  rank {entry.Rank} spin-up: {string.Join("; ", entry.Evaluation.Simulation!.SpinupFindings)}");
+            }
             o.WriteLine();
         }
         else
         {
             o.WriteLine("No combination can fly this rig; see the rejections below.");
+            o.WriteLine();
+        }
+        if (result.SimulationRejections.Count > 0)
+        {
+            o.WriteLine("Shortlisted but rejected by the full spin-up simulation (the next ones moved up):");
+            foreach (var e in result.SimulationRejections)
+            {
+                o.WriteLine($"  - {e.Label}: {e.Rejections[^1].Message}");
+            }
             o.WriteLine();
         }
         o.WriteLine($"Pareto set: {result.ParetoRanks.Count} combination(s); ranks {string.Join(", ", result.ParetoRanks.Take(30))}{(result.ParetoRanks.Count > 30 ? ", ..." : "")}");
@@ -212,6 +241,10 @@ public static class RankCommand
         {
             o.WriteLine();
             o.WriteLine($"Why not {explained[0].MotorId}: every controller and pack with this motor");
+            int acceptedHere = explained.Count(e => e.Accepted);
+            var byReason = explained.SelectMany(e => e.Rejections.Select(r => r.Kind).Distinct()).GroupBy(k => k).OrderByDescending(g => g.Count()).ThenBy(g => g.Key);
+            o.WriteLine($"  {acceptedHere} of {explained.Count} accepted; rejected for: "
+                + string.Join(", ", byReason.Select(g => $"{g.Key.Describe()} ({g.Count()})")));
             var table = new TextTable(new TableColumn("controller"), new TableColumn("packs"), new TableColumn("verdict"));
             foreach (var e in explained)
             {
@@ -223,19 +256,23 @@ public static class RankCommand
             table.Write(o, 2);
         }
         o.WriteLine();
-        o.WriteLine("Method: trimmed hover at the design gap with the drivetrain's and packs' mass included (lift = weight, level, zero yaw);");
-        o.WriteLine("first-order motor model (Drela 2007) on the shared pack bus; runtime on the usable capacity without thermal drift (see README).");
+        o.WriteLine("Method: trimmed hover at the design gap with the drivetrain's and packs' mass included (lift = weight, level, zero yaw; the");
+        o.WriteLine("same trim as 'hover'); first-order motor model (Drela 2007) on the shared pack bus; runtime on the usable capacity without");
+        o.WriteLine("thermal drift; the shortlist simulated in full (spin-up as 'spinup', endurance as 'endurance'); see README.");
         o.WriteLine("Caution: one-way controllers are fine for a fixed spin direction (wire the motor for it) but cannot reverse-brake a rotor.");
         o.WriteLine("Estimates only: follow the manufacturers' ratings; lithium packs, strong magnets and spinning rotors are dangerous (see README, Safety).");
     }
 
     private static string Key(RankObjective objective) => objective.ToString().ToLowerInvariant();
 
+    private static string LimitKey(EnduranceLimit limit) => JsonNamingPolicy.SnakeCaseLower.ConvertName(limit.ToString());
+
     private static string Csv(RankStudy study, RankResult result, HashSet<int> pareto)
     {
         var ci = CultureInfo.InvariantCulture;
         var sb = new StringBuilder();
-        sb.AppendLine("rank,pareto,motor,controller,pack,pack_count,score,total_mass_kg,hover_speed_rpm,max_motor_current_a,max_duty,pack_current_a,runtime_s,runtime_limit,current_margin_pct,drag_peak_torque_margin_pct");
+        sb.AppendLine("rank,pareto,motor,controller,pack,pack_count,score,total_mass_kg,hover_speed_rpm,max_motor_current_a,max_duty,pack_current_a,runtime_s,runtime_limit,current_margin_pct,drag_peak_torque_margin_pct,liftoff_time_s,endurance_runtime_s,endurance_limit");
+        var shortlist = result.Top.ToDictionary(t => t.Rank, t => t.Evaluation.Simulation);
         for (int i = 0; i < result.Ordered.Count; i++)
         {
             var e = study.Evaluate(result.Ordered[i]);
@@ -246,7 +283,10 @@ public static class RankCommand
                 f.MaxSpeedRpm.ToString("0.###", ci), f.MaxMotorCurrentA.ToString("0.####", ci), f.MaxDuty.ToString("0.#####", ci),
                 f.PackCurrentA.ToString("0.####", ci), f.RuntimeS.ToString("0.###", ci), CsvText(f.RuntimeLimit),
                 f.CurrentMargin is { } m ? (m * 100).ToString("0.####", ci) : "",
-                f.DragPeakTorqueMargin is { } d ? (d * 100).ToString("0.###", ci) : ""));
+                f.DragPeakTorqueMargin is { } d ? (d * 100).ToString("0.###", ci) : "",
+                shortlist.GetValueOrDefault(i + 1) is { LiftoffTimeS: { } lift } ? lift.ToString("0.###", ci) : "",
+                shortlist.GetValueOrDefault(i + 1) is { } sim ? sim.EnduranceRuntimeS.ToString("0.###", ci) : "",
+                shortlist.GetValueOrDefault(i + 1) is { } sim2 ? LimitKey(sim2.EnduranceLimit) : ""));
             sb.Append('\n');
         }
         return sb.ToString();
@@ -278,6 +318,7 @@ public static class RankCommand
             top,
             result.ParetoRanks,
             assigned,
+            result.SimulationRejections.Select(e => Entry(e, null, false, null, e.Simulation?.LiftoffTimeS)).ToList(),
             whyNot);
     }
 
@@ -289,6 +330,10 @@ public static class RankCommand
             f?.TotalMassKg, f?.MaxSpeedRpm, f?.MaxMotorCurrentA, f is { StationDuties.Count: > 0 } ? f.MaxDuty : null,
             f?.PackCurrentA, f?.BusVoltageV, f?.ElectricalPowerW, f?.LiftSpecificPowerWPerN, f?.EddyPowerW, f?.RuntimeS, f?.RuntimeLimit,
             f?.CurrentMargin * 100, f?.DragPeakTorqueMargin * 100, liftoff,
+            e.Simulation is { } sim ? new SimulationReport(sim.LiftoffTimeS, sim.StalledStations, sim.SpinupFindings, sim.MinBusVoltageV, sim.PeakPackCurrentA,
+                sim.EnduranceRuntimeS, sim.EnduranceLimit, sim.EnduranceLimitText, sim.PeakWindingTempC, sim.PeakPlateTempC) : null,
+            f is null ? [] : f.StationSpeedsRadPerS.Select((w, i) => new StationReport(i, Units.RadPerSToRpm(w), f.StationMotorCurrentsA[i],
+                i < f.StationDuties.Count ? f.StationDuties[i] : null)).ToList(),
             e.Rejections.Select(x => new ReasonReport(x.Kind.Key(), x.Message)).ToList(),
             e.Cautions.Select(x => x.Message).ToList());
     }
@@ -331,6 +376,7 @@ public static class RankCommand
         IReadOnlyList<EntryReport> Top,
         IReadOnlyList<int> ParetoRanks,
         EntryReport? Assigned,
+        IReadOnlyList<EntryReport> SimulationRejections,
         WhyNotReport? WhyNot);
 
     private sealed record WeightsReport(double Runtime, double Mass, double Margin);
@@ -362,8 +408,16 @@ public static class RankCommand
         double? CurrentMarginPct,
         double? DragPeakTorqueMarginPct,
         double? LiftoffTimeS,
+        SimulationReport? Simulation,
+        IReadOnlyList<StationReport> Stations,
         IReadOnlyList<ReasonReport> Rejections,
         IReadOnlyList<string> Cautions);
+
+    private sealed record SimulationReport(
+        double? LiftoffTimeS, IReadOnlyList<int> StalledStations, IReadOnlyList<string> SpinupFindings, double MinBusVoltageV, double PeakPackCurrentA,
+        double EnduranceRuntimeS, EnduranceLimit EnduranceLimit, string EnduranceLimitText, double PeakWindingTempC, double PeakPlateTempC);
+
+    private sealed record StationReport(int Index, double SpeedRpm, double MotorCurrentA, double? Duty);
 
     private sealed record WhyNotReport(string Motor, IReadOnlyList<WhyNotEntry> Combinations);
 

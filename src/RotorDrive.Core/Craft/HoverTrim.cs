@@ -1,4 +1,3 @@
-using MathNet.Numerics.LinearAlgebra;
 using MathNet.Numerics.RootFinding;
 using RotorDrive.Core.Drive;
 
@@ -7,23 +6,26 @@ namespace RotorDrive.Core.Craft;
 /// <summary>Trimmed hover: per-station speeds and duties that hold the craft level at a given gap with total lift =
 /// weight, zero pitch and roll moment about the centre of gravity and a commanded (normally zero) net yaw torque.</summary>
 /// <remarks>At a fixed gap each rotor's lift and shaft torque depend only on its own speed and conditions, so the balance
-/// is solved in speed space: Newton's method on the four constraints with a forward-difference Jacobian (J. Nocedal &amp;
+/// is solved in speed space: Newton's method on the four constraints with a central-difference Jacobian (J. Nocedal &amp;
 /// S. J. Wright, Numerical Optimization, 2nd ed. 2006, ch. 11 and 18). Four stations give a square system. With more,
 /// each step solves the equality-constrained least-norm problem min sum (w_i - mean w)^2 subject to the linearised
-/// constraints (KKT system, Nocedal &amp; Wright eq. 16.4) with MathNet's LU: the speeds, not the duties, are spread as
+/// constraints (KKT system, Nocedal &amp; Wright eq. 16.4, solved by Gaussian elimination with partial pivoting): the speeds, not the duties, are spread as
 /// little as possible, because lift, torque and plate heating are functions of speed, so equal speeds mean equal
 /// loading and wear and the solution is independent of the drivetrain (the same trim serves every candidate motor in a
 /// ranking). Each station's duty then follows from the drive equations on the shared bus (<see cref="DriveBus"/> with
 /// the motor current that gives the shaft torque, M. Drela, First-Order DC Electric Motor Model, MIT 2007), and the
-/// equilibrium is checked for stability at that duty. Thread-safe; allocates only small arrays.</remarks>
+/// equilibrium is checked for stability at that duty. The speed solve is shared with the catalog ranking, which warm-starts
+/// it from its previous candidate: Newton's fixed point does not depend on the start, so the ranking's speeds are the
+/// hover's. Thread-safe; allocates only small arrays.</remarks>
 public static class HoverTrim
 {
     private const double DiffStep = 1e-6;
     private const double CurvatureStep = 1e-4;
 
-    // Newton stops once the constraints hold and the last step moved no speed by more than this fraction: the least-norm
-    // objective is then optimal to about this relative accuracy.
-    private const double StepTolerance = 1e-7;
+    // Newton stops once the constraints hold and the last step moved no speed by more than this fraction of the scale
+    // speed; that step is applied, and Newton's convergence then leaves the speeds within about its square (relative) of
+    // the least-spread trim.
+    internal const double StepTolerance = 1e-7;
 
     /// <summary>Trims the craft at its design gap with zero net yaw torque.</summary>
     /// <param name="model">The rig model.</param>
@@ -50,43 +52,154 @@ public static class HoverTrim
             return Failed(model, gapM, HoverStatus.TooFewStations, new HoverFinding("stations", null,
                 $"a trim needs at least four stations to balance force, pitch, roll and yaw; the rig has {n}"), 0);
         }
-        double weight = model.WeightN;
+        var speeds = new double[n];
+        var outcome = SolveSpeeds(model.Stations, gapM, model.WeightN, model.CgXM, model.CgYM, yawTorqueNm, speeds, warm: false,
+            options, new HoverTrimWorkspace(n), out int iterations);
+        return outcome switch
+        {
+            SpeedSolve.Converged => Describe(model, HoverMode.Trimmed, gapM, speeds, iterations),
+            SpeedSolve.TooHeavy => Failed(model, gapM, HoverStatus.NoBalance, new HoverFinding(DriveLimit.RotorMaxSpeed.Key(), null,
+                $"even at {options.SpeedSearchFactor:0.#} x their rated speed the rotors lift less than the weight ({model.WeightN:0} N) at this gap"), 0),
+            _ => Failed(model, gapM, HoverStatus.NoBalance, new HoverFinding("convergence", null,
+                $"no speeds balance force, pitch, roll and yaw together within {options.MaxIterations} iterations (the centre of gravity may lie outside the stations, or the yaw demand is too large)"), iterations),
+        };
+    }
+
+    /// <summary>How a speed solve ended.</summary>
+    internal enum SpeedSolve
+    {
+        Converged,
+        TooHeavy,
+        NoConvergence,
+    }
+
+    /// <summary>The trim in speed space alone: the speeds that balance force, pitch, roll and yaw at a gap for a weight and
+    /// centre of gravity, with the least spread about their mean. Every trim goes through here: the public <c>Solve</c> overloads
+    /// and the catalog ranking (whose candidates differ only in mass and centre of
+    /// gravity, so it warm-starts each from the last).</summary>
+    /// <remarks>Cold: all stations start at the common speed whose lifts carry the weight (Brent, MathNet). Warm: from the
+    /// given speeds; should Newton fail from there, the cold start is tried, so a warm solve returns what a cold one would.
+    /// Newton's fixed point does not depend on the start (see the comment on <c>Newton</c>), so both agree to the convergence
+    /// tolerance. Allocates nothing beyond the workspace.</remarks>
+    /// <param name="stations">The stations (position, spin, load and conditions are used; the drivetrain is not).</param>
+    /// <param name="gapM">Rig gap, m.</param>
+    /// <param name="weightN">Weight, N.</param>
+    /// <param name="cgXM">Centre of gravity x, m.</param>
+    /// <param name="cgYM">Centre of gravity y, m.</param>
+    /// <param name="yawTorqueNm">Commanded net yaw torque, N m.</param>
+    /// <param name="speeds">Receives the trimmed speeds, rad/s.</param>
+    /// <param name="warm">Start from the workspace's last trim, carried to the new weight, centre of gravity and yaw
+    /// demand by one tangent step; cold when the workspace holds none.</param>
+    /// <param name="options">Numerical settings (validated by the caller).</param>
+    /// <param name="workspace">Scratch for this station count; remembers the last trim for the next warm start.</param>
+    /// <param name="iterations">Newton iterations of the successful attempt.</param>
+    internal static SpeedSolve SolveSpeeds(IReadOnlyList<CraftStation> stations, double gapM, double weightN, double cgXM, double cgYM,
+        double yawTorqueNm, double[] speeds, bool warm, HoverOptions options, HoverTrimWorkspace workspace, out int iterations)
+    {
+        int n = stations.Count;
+        var ws = workspace;
+        bool continued = warm && ws.Solved;
+        ws.Solved = false;
         double rated = double.PositiveInfinity, top = 0;
-        foreach (var s in model.Stations)
+        foreach (var s in stations)
         {
             rated = Math.Min(rated, s.Rotor.MaxSpeedRadPerS);
             top = Math.Max(top, s.Rotor.MaxSpeedRadPerS * options.SpeedSearchFactor);
         }
-        double Mean(double w)
+        if (continued && Predict(stations, weightN, cgXM, cgYM, yawTorqueNm, speeds, ws, out double mean)
+            && Newton(stations, gapM, weightN, cgXM, cgYM, yawTorqueNm, speeds, mean, warmMultipliers: true, options, ws, out iterations))
+        {
+            // Beyond the search limit the cold solve would have declared the craft too heavy: let it decide.
+            bool within = true;
+            for (int i = 0; i < n; i++)
+            {
+                within &= speeds[i] <= top;
+            }
+            if (within)
+            {
+                return SpeedSolve.Converged;
+            }
+            ws.Solved = false;
+        }
+        double Excess(double w)
         {
             double sum = 0;
-            foreach (var s in model.Stations)
+            foreach (var s in stations)
             {
                 sum += s.LoadAt(w, gapM).LiftN;
             }
-            return sum - weight;
+            return sum - weightN;
         }
         // Bracket within the rated speed first: the load tables cover it, beyond it the direct model is much slower.
         double bracket = rated;
-        if (Mean(bracket) < 0)
+        if (Excess(bracket) < 0)
         {
             bracket = top;
-            if (Mean(top) < 0)
+            if (Excess(top) < 0)
             {
-                return Failed(model, gapM, HoverStatus.NoBalance, new HoverFinding(DriveLimit.RotorMaxSpeed.Key(), null,
-                    $"even at {options.SpeedSearchFactor:0.#} x their rated speed the rotors lift less than the weight ({weight:0} N) at this gap"), 0);
+                iterations = 0;
+                return SpeedSolve.TooHeavy;
             }
         }
         // The common speed is only a starting point for Newton: a loose tolerance suffices.
-        double w0 = Brent.FindRoot(Mean, 1e-6 * bracket, bracket, 1e-6 * bracket, 200);
-        var speeds = new double[n];
-        Array.Fill(speeds, w0);
-        if (!Newton(model, gapM, yawTorqueNm, speeds, w0, options, out int iterations))
+        double w0 = Brent.FindRoot(Excess, 1e-6 * bracket, bracket, 1e-6 * bracket, 200);
+        Array.Fill(speeds, w0, 0, n);
+        return Newton(stations, gapM, weightN, cgXM, cgYM, yawTorqueNm, speeds, w0, warmMultipliers: false, options, ws, out iterations)
+            ? SpeedSolve.Converged
+            : SpeedSolve.NoConvergence;
+    }
+
+    // The continuation's predictor (E. L. Allgower & K. Georg, Introduction to Numerical Continuation Methods, 1990, ch. 2):
+    // the last trim's KKT system, whose rows hold the constraints' speed derivatives, taken with the constraints' change
+    // under the new weight, centre of gravity and yaw demand (d lift-balance / dW = -1, d pitch / d cg_x = -W,
+    // d roll / d cg_y = -W, d yaw / d demand = -1, each scaled as in the last solve) gives the first-order change of the
+    // speeds and the multipliers. Newton then starts a step's square away from its fixed point. False when the step
+    // is unusable (a speed not positive).
+    private static bool Predict(IReadOnlyList<CraftStation> st, double weightN, double cgXM, double cgYM, double yawTorqueNm,
+        double[] speeds, HoverTrimWorkspace ws, out double mean)
+    {
+        int n = st.Count;
+        int size = n + 4;
+        double w0 = ws.SolvedW0;
+        var kkt = ws.Kkt.AsSpan(0, size * size);
+        var rhs = ws.Rhs.AsSpan(0, size);
+        ws.LastKkt.AsSpan(0, size * size).CopyTo(kkt);
+        double um = 0;
+        for (int i = 0; i < n; i++)
         {
-            return Failed(model, gapM, HoverStatus.NoBalance, new HoverFinding("convergence", null,
-                $"no speeds balance force, pitch, roll and yaw together within {options.MaxIterations} iterations (the centre of gravity may lie outside the stations, or the yaw demand is too large)"), iterations);
+            um += ws.SolvedSpeeds[i] / w0;
         }
-        return Describe(model, HoverMode.Trimmed, gapM, speeds, iterations);
+        um /= n;
+        for (int i = 0; i < n; i++)
+        {
+            rhs[i] = -(ws.SolvedSpeeds[i] / w0 - um);
+        }
+        double w = ws.SolvedWeightN;
+        rhs[n] = (weightN - w) * ws.SolvedScale[0];
+        rhs[n + 1] = w * (cgXM - ws.SolvedCgXM) * ws.SolvedScale[1];
+        rhs[n + 2] = w * (cgYM - ws.SolvedCgYM) * ws.SolvedScale[2];
+        rhs[n + 3] = (yawTorqueNm - ws.SolvedYawNm) * ws.SolvedScale[3];
+        mean = 0;
+        if (!DenseSolve.Solve(kkt, rhs, size))
+        {
+            return false;
+        }
+        for (int i = 0; i < n; i++)
+        {
+            speeds[i] = ws.SolvedSpeeds[i] + rhs[i] * w0;
+            if (!(speeds[i] > 0) || !double.IsFinite(speeds[i]))
+            {
+                return false;
+            }
+            mean += speeds[i];
+        }
+        mean /= n;
+        for (int k = 0; k < 4; k++)
+        {
+            // Scale-free multipliers (lambda x constraint scale x w0^2 does not depend on the scaling; see Newton).
+            ws.Mu[k] = rhs[n + k] * ws.SolvedScale[k] * w0 * w0;
+        }
+        return true;
     }
 
     /// <summary>The largest payload with which the craft still trims and every limit holds, by bisection on the payload
@@ -134,38 +247,76 @@ public static class HoverTrim
         return lo;
     }
 
-    private static bool Newton(RigModel model, double gapM, double yawTarget, double[] speeds, double w0, HoverOptions options, out int iterations)
+    // SQP on the four constraints (see the class remarks). Unknowns u = w / w0 for scaling only: at a fixed point the step
+    // vanishes, so P u + J^T lambda = 0 and c = 0 with the Jacobian J taken at that point — the first-order conditions of
+    // the least-spread trim, which do not involve w0 or the start. Every accepted step is applied, the last (small) one
+    // included, so the result lies within about the square of StepTolerance of that point, whatever the start.
+    // Multipliers: lambda_k x scale_k x w0^2 is what the stationarity condition fixes (the centring term is (P w) / w0 and the
+    // constraint gradients carry scale_k x w0), so warm multipliers are carried in that form (workspace Mu).
+    private static bool Newton(IReadOnlyList<CraftStation> st, double gapM, double weight, double cgX, double cgY, double yawTarget,
+        double[] speeds, double w0, bool warmMultipliers, HoverOptions options, HoverTrimWorkspace ws, out int iterations)
     {
-        var st = model.Stations;
         int n = st.Count;
-        double weight = model.WeightN;
+        int size = n + 4;
         double arm = 0;
         foreach (var s in st)
         {
-            arm = Math.Max(arm, Math.Max(Math.Abs(s.XM - model.CgXM), Math.Abs(s.YM - model.CgYM)));
+            arm = Math.Max(arm, Math.Max(Math.Abs(s.XM - cgX), Math.Abs(s.YM - cgY)));
         }
         arm = Math.Max(arm, 1e-3);
+        var lift = ws.Lift;
+        var torque = ws.Torque;
         double torqueScale = 0;
-        foreach (var s in st)
+        for (int i = 0; i < n; i++)
         {
-            torqueScale += Math.Abs(s.LoadAt(w0, gapM).TotalTorqueNm);
+            if (!(speeds[i] > 0))
+            {
+                iterations = 0;
+                return false;
+            }
+            var p = st[i].LoadAt(speeds[i], gapM);
+            lift[i] = p.LiftN;
+            torque[i] = p.TotalTorqueNm;
+            torqueScale += Math.Abs(p.TotalTorqueNm);
         }
         torqueScale = Math.Max(torqueScale, Math.Max(Math.Abs(yawTarget), 1e-6 * weight * arm));
-        var scale = new[] { 1 / weight, 1 / (weight * arm), 1 / (weight * arm), 1 / torqueScale };
+        var scale = ws.Scale;
+        scale[0] = 1 / weight;
+        scale[1] = 1 / (weight * arm);
+        scale[2] = 1 / (weight * arm);
+        scale[3] = 1 / torqueScale;
+        var dLift = ws.DLift;
+        var dTorque = ws.DTorque;
+        var d2Lift = ws.D2Lift;
+        var d2Torque = ws.D2Torque;
+        var multipliers = ws.Multipliers;
+        for (int k = 0; k < 4; k++)
+        {
+            multipliers[k] = warmMultipliers ? ws.Mu[k] / (scale[k] * w0 * w0) : 0.0;
+        }
+        var c = ws.Residuals;
+        var trial = ws.Trial;
+        var kkt = ws.Kkt.AsSpan(0, size * size);
+        var rhs = ws.Rhs.AsSpan(0, size);
 
-        var lift = new double[n];
-        var torque = new double[n];
-        var dLift = new double[n];
-        var dTorque = new double[n];
-        var d2Lift = new double[n];
-        var d2Torque = new double[n];
-        var multipliers = new double[4];
-        var c = new double[4];
-        var trial = new double[n];
-        var kkt = Matrix<double>.Build.Dense(n + 4, n + 4);
-        var rhs = Vector<double>.Build.Dense(n + 4);
+        double Scaled()
+        {
+            double f = -weight, pitch = 0, roll = 0, yaw = -yawTarget;
+            for (int i = 0; i < n; i++)
+            {
+                f += lift[i];
+                pitch += lift[i] * (st[i].XM - cgX);
+                roll += lift[i] * (st[i].YM - cgY);
+                yaw += st[i].Spin.Sign() * torque[i];
+            }
+            c[0] = f * scale[0];
+            c[1] = pitch * scale[1];
+            c[2] = roll * scale[2];
+            c[3] = yaw * scale[3];
+            return Math.Max(Math.Max(Math.Abs(c[0]), Math.Abs(c[1])), Math.Max(Math.Abs(c[2]), Math.Abs(c[3])));
+        }
 
-        double Residuals(double[] w, double[] l, double[] q)
+        double Residuals(double[] w)
         {
             double f = -weight, pitch = 0, roll = 0, yaw = -yawTarget;
             for (int i = 0; i < n; i++)
@@ -175,11 +326,11 @@ public static class HoverTrim
                     return double.PositiveInfinity;
                 }
                 var p = st[i].LoadAt(w[i], gapM);
-                l[i] = p.LiftN;
-                q[i] = p.TotalTorqueNm;
+                lift[i] = p.LiftN;
+                torque[i] = p.TotalTorqueNm;
                 f += p.LiftN;
-                pitch += p.LiftN * (st[i].XM - model.CgXM);
-                roll += p.LiftN * (st[i].YM - model.CgYM);
+                pitch += p.LiftN * (st[i].XM - cgX);
+                roll += p.LiftN * (st[i].YM - cgY);
                 yaw += st[i].Spin.Sign() * p.TotalTorqueNm;
             }
             c[0] = f * scale[0];
@@ -189,9 +340,14 @@ public static class HoverTrim
             return Math.Max(Math.Max(Math.Abs(c[0]), Math.Abs(c[1])), Math.Max(Math.Abs(c[2]), Math.Abs(c[3])));
         }
 
-        double merit = Residuals(speeds, lift, torque);
+        // The loads at the start are in the workspace already.
+        double merit = Scaled();
         for (iterations = 1; iterations <= options.MaxIterations; iterations++)
         {
+            if (!double.IsFinite(merit))
+            {
+                return false;
+            }
             for (int i = 0; i < n; i++)
             {
                 // Central differences: slopes for the Jacobian, curvatures for the Lagrangian's Hessian.
@@ -203,7 +359,7 @@ public static class HoverTrim
                 d2Lift[i] = (up.LiftN - 2 * lift[i] + down.LiftN) / (h * h) * w0 * w0;
                 d2Torque[i] = (up.TotalTorqueNm - 2 * torque[i] + down.TotalTorqueNm) / (h * h) * w0 * w0;
             }
-            // Unknowns u = w / w0: [P J^T; J 0] [du; lambda] = [-P u; -c], P = I - 11^T/n (centring).
+            // Unknowns u = w / w0: [P + H J^T; J 0] [du; lambda] = [-P u; -c], P = I - 11^T/n (centring).
             kkt.Clear();
             double mean = 0;
             for (int i = 0; i < n; i++)
@@ -213,36 +369,42 @@ public static class HoverTrim
             mean /= n;
             for (int i = 0; i < n; i++)
             {
-                double dx = st[i].XM - model.CgXM, dy = st[i].YM - model.CgYM;
+                double dx = st[i].XM - cgX, dy = st[i].YM - cgY;
+                double sign = st[i].Spin.Sign();
+                var row = kkt.Slice(i * size, size);
                 for (int j = 0; j < n; j++)
                 {
-                    kkt[i, j] = -1.0 / n;
+                    row[j] = -1.0 / n;
                 }
                 // Hessian of the Lagrangian: the centring projector plus the multipliers times each constraint's curvature
                 // (diagonal: every constraint is a sum of one-speed functions). Without the curvature SQP is only linear.
-                kkt[i, i] += 1.0 + multipliers[0] * d2Lift[i] * scale[0] + multipliers[1] * d2Lift[i] * dx * scale[1]
-                    + multipliers[2] * d2Lift[i] * dy * scale[2] + multipliers[3] * st[i].Spin.Sign() * d2Torque[i] * scale[3];
+                row[i] += 1.0 + multipliers[0] * d2Lift[i] * scale[0] + multipliers[1] * d2Lift[i] * dx * scale[1]
+                    + multipliers[2] * d2Lift[i] * dy * scale[2] + multipliers[3] * sign * d2Torque[i] * scale[3];
                 double j0 = dLift[i] * scale[0], j1 = dLift[i] * dx * scale[1], j2 = dLift[i] * dy * scale[2];
-                double j3 = st[i].Spin.Sign() * dTorque[i] * scale[3];
-                kkt[n, i] = kkt[i, n] = j0;
-                kkt[n + 1, i] = kkt[i, n + 1] = j1;
-                kkt[n + 2, i] = kkt[i, n + 2] = j2;
-                kkt[n + 3, i] = kkt[i, n + 3] = j3;
+                double j3 = sign * dTorque[i] * scale[3];
+                row[n] = kkt[n * size + i] = j0;
+                row[n + 1] = kkt[(n + 1) * size + i] = j1;
+                row[n + 2] = kkt[(n + 2) * size + i] = j2;
+                row[n + 3] = kkt[(n + 3) * size + i] = j3;
                 rhs[i] = -(speeds[i] / w0 - mean);
             }
             for (int k = 0; k < 4; k++)
             {
                 rhs[n + k] = -c[k];
             }
-            var step = kkt.LU().Solve(rhs);
+            kkt.CopyTo(ws.LastKkt);
+            if (!DenseSolve.Solve(kkt, rhs, size))
+            {
+                return false;
+            }
             for (int k = 0; k < 4; k++)
             {
-                multipliers[k] = step[n + k];
+                multipliers[k] = rhs[n + k];
             }
             double largest = 0;
             for (int i = 0; i < n; i++)
             {
-                largest = Math.Max(largest, Math.Abs(step[i]));
+                largest = Math.Max(largest, Math.Abs(rhs[i]));
             }
             if (!double.IsFinite(largest))
             {
@@ -250,6 +412,12 @@ public static class HoverTrim
             }
             if (merit <= options.Tolerance && largest <= StepTolerance)
             {
+                // Already balanced: take the last, tiny step too (it settles the spread), and stop.
+                for (int i = 0; i < n; i++)
+                {
+                    speeds[i] += rhs[i] * w0;
+                }
+                Remember(ws, st.Count, speeds, w0, weight, cgX, cgY, yawTarget);
                 return true;
             }
             double alpha = 1;
@@ -258,9 +426,9 @@ public static class HoverTrim
             {
                 for (int i = 0; i < n; i++)
                 {
-                    trial[i] = speeds[i] + alpha * step[i] * w0;
+                    trial[i] = speeds[i] + alpha * rhs[i] * w0;
                 }
-                newMerit = Residuals(trial, lift, torque);
+                newMerit = Residuals(trial);
                 if (newMerit <= Math.Max((1 - 1e-4 * alpha) * merit, 0.5 * options.Tolerance))
                 {
                     break;
@@ -271,14 +439,39 @@ public static class HoverTrim
             {
                 return false;
             }
+            // The trial's loads are the ones in the workspace now (the last evaluated).
             Array.Copy(trial, speeds, n);
-            merit = Residuals(speeds, lift, torque);
+            merit = newMerit;
             if (merit <= options.Tolerance && largest * alpha <= StepTolerance)
             {
+                Remember(ws, st.Count, speeds, w0, weight, cgX, cgY, yawTarget);
                 return true;
             }
         }
-        return merit <= options.Tolerance;
+        if (merit <= options.Tolerance)
+        {
+            Remember(ws, st.Count, speeds, w0, weight, cgX, cgY, yawTarget);
+            return true;
+        }
+        return false;
+    }
+
+    // Keeps what the next warm start's predictor needs: the trim, its parameters, scaling and multipliers (LastKkt holds
+    // the last KKT matrix already).
+    private static void Remember(HoverTrimWorkspace ws, int n, double[] speeds, double w0, double weight, double cgX, double cgY, double yaw)
+    {
+        Array.Copy(speeds, ws.SolvedSpeeds, n);
+        ws.SolvedW0 = w0;
+        ws.SolvedWeightN = weight;
+        ws.SolvedCgXM = cgX;
+        ws.SolvedCgYM = cgY;
+        ws.SolvedYawNm = yaw;
+        for (int k = 0; k < 4; k++)
+        {
+            ws.SolvedScale[k] = ws.Scale[k];
+            ws.Mu[k] = ws.Multipliers[k] * ws.Scale[k] * w0 * w0;
+        }
+        ws.Solved = true;
     }
 
     private static HoverResult Failed(RigModel model, double gapM, HoverStatus status, HoverFinding finding, int iterations)

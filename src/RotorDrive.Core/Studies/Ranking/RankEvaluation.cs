@@ -17,6 +17,9 @@ public sealed record RankEvaluation(
     IReadOnlyList<RankRejection> Rejections,
     IReadOnlyList<RankRejection> Cautions)
 {
+    /// <summary>The full spin-up and endurance simulations, when the combination was shortlisted; otherwise null.</summary>
+    public RankSimulation? Simulation { get; init; }
+
     /// <summary>True when no reason rejects the combination.</summary>
     public bool Accepted => Rejections.Count == 0;
 

@@ -4,7 +4,8 @@ namespace RotorDrive.Core.Studies.Ranking;
 /// <param name="Objective">What to rank by (default <see cref="RankObjective.Runtime"/>).</param>
 /// <param name="Weights">Score weights, used by <see cref="RankObjective.Score"/> and reported always; null for
 /// <see cref="RankWeights.Default"/>.</param>
-/// <param name="Top">How many of the best combinations to evaluate fully for the report, 1..1000 (default 10).</param>
+/// <param name="Top">The shortlist: how many of the best combinations to evaluate fully and simulate (spin-up and
+/// endurance), 1..1000 (default 10).</param>
 /// <param name="MaxPackCount">Largest number of identical packs in parallel to try (1 up to this); null takes the rig's
 /// <c>pack.count</c>, or 1 when the rig names no pack.</param>
 /// <param name="RequireReversible">True rejects controllers that are not reversible. Default false: a fixed spin
@@ -12,8 +13,6 @@ namespace RotorDrive.Core.Studies.Ranking;
 /// counter-rotating pair; what it cannot do is reverse-brake a spinning rotor, which is then only a caution.</param>
 /// <param name="MaxDegreeOfParallelism">Worker threads, -1 for all cores (default). Results do not depend on it.</param>
 /// <param name="RuntimeSteps">Equal charge steps over the usable capacity in the runtime estimate, 4..4096 (default 32).</param>
-/// <param name="LiftoffTimeStepS">Time step of the lift-off estimate for the reported combinations, s (default 0.002).</param>
-/// <param name="LiftoffMaxTimeS">Longest simulated time of the lift-off estimate, s (default 60).</param>
 public sealed record RankOptions(
     RankObjective Objective = RankObjective.Runtime,
     RankWeights? Weights = null,
@@ -21,9 +20,7 @@ public sealed record RankOptions(
     int? MaxPackCount = null,
     bool RequireReversible = false,
     int MaxDegreeOfParallelism = -1,
-    int RuntimeSteps = 32,
-    double LiftoffTimeStepS = 0.002,
-    double LiftoffMaxTimeS = 60)
+    int RuntimeSteps = 32)
 {
     /// <summary>The defaults.</summary>
     public static RankOptions Default { get; } = new();

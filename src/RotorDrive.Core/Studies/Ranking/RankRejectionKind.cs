@@ -36,4 +36,8 @@ public enum RankRejectionKind
 
     /// <summary>On the landing gear, the current-limited motor cannot push its rotor through the drag peak.</summary>
     DragPeak,
+
+    /// <summary>Shortlisted, it fails the full spin-up simulation: a rotor stalls below its drag peak or the craft never
+    /// lifts off (only the shortlist is simulated; see <see cref="RankStudy.Run"/>).</summary>
+    SpinupSimulation,
 }

@@ -22,6 +22,7 @@ public static class RankRejectionKinds
         RankRejectionKind.ControllerCurrent => "controller_current",
         RankRejectionKind.PackCurrent => "pack_current",
         RankRejectionKind.DragPeak => "drag_peak",
+        RankRejectionKind.SpinupSimulation => "spinup_simulation",
         _ => throw new ArgumentOutOfRangeException(nameof(kind), kind, "Unknown rejection kind."),
     };
 
@@ -41,6 +42,7 @@ public static class RankRejectionKinds
         RankRejectionKind.ControllerCurrent => "hover current above the controller's continuous rating",
         RankRejectionKind.PackCurrent => "pack current above its continuous C-rate rating",
         RankRejectionKind.DragPeak => "cannot pass the drag peak on the landing gear",
+        RankRejectionKind.SpinupSimulation => "shortlisted, but stalls or never lifts off in the full spin-up simulation",
         _ => throw new ArgumentOutOfRangeException(nameof(kind), kind, "Unknown rejection kind."),
     };
 }

@@ -9,7 +9,8 @@ namespace RotorDrive.Core.Studies.Ranking;
 /// <param name="ParetoRanks">1-based ranks of the accepted combinations in the Pareto set over runtime (more is
 /// better), total mass (less) and current margin (more), ascending.</param>
 /// <param name="RejectionCounts">Combinations rejected by each reason (every kind listed, zero included).</param>
-/// <param name="Top">The best <see cref="RankOptions.Top"/> combinations, fully evaluated.</param>
+/// <param name="Top">The shortlist: the best <see cref="RankOptions.Top"/> combinations, fully evaluated and simulated
+/// (spin-up and endurance, <see cref="RankEvaluation.Simulation"/>).</param>
 /// <param name="AssignedCandidate">The rig's own drivetrain when every station has the same motor and controller and a
 /// pack is named; otherwise null.</param>
 /// <param name="Assigned">Its evaluation, or null.</param>
@@ -27,6 +28,11 @@ public sealed record RankResult(
     RankEvaluation? Assigned,
     int? AssignedRank)
 {
+    /// <summary>Combinations that passed every quick check and reached the shortlist, but failed the full spin-up
+    /// simulation, best first (each with its <see cref="RankRejectionKind.SpinupSimulation"/> reason and simulation);
+    /// they are counted under that reason in <see cref="RejectionCounts"/> and are not in <see cref="Ordered"/>.</summary>
+    public IReadOnlyList<RankEvaluation> SimulationRejections { get; init; } = [];
+
     /// <summary>Accepted combinations.</summary>
     public long AcceptedCount => Ordered.Count;
 

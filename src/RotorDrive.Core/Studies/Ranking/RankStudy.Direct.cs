@@ -6,9 +6,9 @@ namespace RotorDrive.Core.Studies.Ranking;
 
 public sealed partial class RankStudy
 {
-    /// <summary>Evaluates one combination the straightforward way: a rig built with these parts (mass and centre of gravity
-    /// from <see cref="Rig.TotalMassKg"/> and <see cref="Rig.CentreOfGravity"/>), a fresh trim with full Newton steps and
-    /// central differences, drag peaks searched again, every bus state through <see cref="DriveBus"/> with motor-current
+    /// <summary>Evaluates one combination the straightforward way: a rig built with these parts (mass from
+    /// <see cref="Rig.TotalMassKg"/>), the trimmed hover of its model variant (<see cref="ModelFor"/>) by
+    /// <see cref="HoverTrim.Solve(RigModel, HoverOptions)"/> from a cold start, drag peaks searched again, every bus state through <see cref="DriveBus"/> with motor-current
     /// commands and every limit through <see cref="DriveMargins"/>. Slow; the reference the fast sweep is tested against.</summary>
     /// <param name="candidate">The combination.</param>
     /// <returns>Its evaluation.</returns>
@@ -16,7 +16,7 @@ public sealed partial class RankStudy
     public RankEvaluation EvaluateDirect(RankCandidate candidate)
     {
         CheckCandidate(candidate);
-        int n = _trim.StationCount;
+        int n = _model.Stations.Count;
         var o = new RankOutcome(n);
         o.Clear();
         var motor = _catalog.Motors[candidate.MotorIndex];
@@ -59,17 +59,19 @@ public sealed partial class RankStudy
         var spin = DriveBus.Solve(BusSource.FromPack(bank, 1.0), spinInputs, spinPoints);
         JudgePeaks(spin, spinPoints, peakTorques, peaks, o);
 
-        var (cgX, cgY) = rig.CentreOfGravity();
-        var state = new RankTrimState(n);
-        if (!_trim.Solve(o.MassKg, cgX, cgY, state, fresh: true, centralDifferences: true))
+        var hover = HoverTrim.Solve(ModelFor(candidate), _hoverOptions);
+        if (!hover.Balanced)
         {
             o.Reject(RankRejectionKind.RotorSpeed);
             return ToEvaluation(candidate, o);
         }
         o.Trimmed = true;
-        Array.Copy(state.Speeds, o.Speeds, n);
-        Array.Copy(state.Torques, o.Torques, n);
-        Array.Copy(state.EddyPowers, o.EddyPowers, n);
+        for (int i = 0; i < n; i++)
+        {
+            o.Speeds[i] = hover.Stations[i].SpeedRadPerS;
+            o.Torques[i] = hover.Stations[i].ShaftTorqueNm;
+            o.EddyPowers[i] = hover.Stations[i].EddyPowerW;
+        }
 
         // Hover: each motor draws the current its trimmed torque needs; no current limit or duty clamp may interfere here.
         var hoverTrain = new Drivetrain(motor, controller, new DriveOptions(CurrentLimitScale: 1e9, MaxDuty: 1.0));

@@ -1,5 +1,6 @@
 using System.Globalization;
 using RotorDrive.Core.Drive;
+using RotorDrive.Core.Simulation;
 
 namespace RotorDrive.Core.Studies.Ranking;
 
@@ -12,7 +13,7 @@ public sealed partial class RankStudy
     public RankEvaluation Evaluate(RankCandidate candidate)
     {
         CheckCandidate(candidate);
-        var worker = new RankWorker(_trim.StationCount);
+        var worker = new RankWorker(_model.Stations.Count);
         EvaluateFast(candidate, worker, fresh: true);
         return ToEvaluation(candidate, worker.Outcome);
     }
@@ -25,7 +26,7 @@ public sealed partial class RankStudy
     public IReadOnlyList<RankEvaluation> ExplainMotor(int motorIndex)
     {
         Preconditions.InRange(motorIndex, 0, _catalog.Motors.Count - 1, nameof(motorIndex));
-        var worker = new RankWorker(_trim.StationCount);
+        var worker = new RankWorker(_model.Stations.Count);
         var list = new List<RankEvaluation>();
         for (int c = 0; c < _catalog.Controllers.Count; c++)
         {
@@ -42,78 +43,57 @@ public sealed partial class RankStudy
         return list;
     }
 
-    /// <summary>Estimates the time from rest on the landing gear to lift-off: every rotor driven at the team's duty
-    /// limit under the controller's current limit from a full pack, the craft held at the landed gap, until the rotors'
-    /// lift at the landed gap carries the weight. Heun's method (explicit trapezoidal, E. Hairer, S. P. Norsett,
-    /// G. Wanner, Solving Ordinary Differential Equations I, 1993) with the step of <see cref="RankOptions.LiftoffTimeStepS"/>.</summary>
-    /// <remarks>A quick estimate for the ranking table (no throttle ramp, no heave, no thermal drift); the spin-up
-    /// simulation is the full answer.</remarks>
+    /// <summary>Runs the full simulations of one combination on its rig model variant (<see cref="ModelFor"/>, prepared by
+    /// <see cref="SimulationRig.FromModel"/>): the spin-up from rest on the landing gear, every controller's duty ramped
+    /// to its trimmed-hover duty (the ramp and settle times of <see cref="SpinupStudyRequest.Default"/>) under its current
+    /// limit, through the drag peak at the landed gap to lift-off (<see cref="SpinupSimulator"/>, no traces), and the
+    /// endurance run from the model's state of charge (<see cref="EnduranceSimulator"/>).</summary>
+    /// <remarks>Tens of milliseconds on the demo rig: the ranking runs it for its shortlist only. Thread-safe.</remarks>
     /// <param name="candidate">The combination.</param>
-    /// <returns>The time to lift-off, s, or null when the cells do not fit the controller or the craft does not lift
-    /// off within <see cref="RankOptions.LiftoffMaxTimeS"/>.</returns>
+    /// <returns>Lift-off time, stalled stations, spin-up findings, endurance runtime and its first limit.</returns>
     /// <exception cref="ArgumentOutOfRangeException">An index is out of range.</exception>
-    public double? EstimateLiftoffTimeS(RankCandidate candidate)
+    public RankSimulation Simulate(RankCandidate candidate)
     {
-        CheckCandidate(candidate);
-        var motor = _catalog.Motors[candidate.MotorIndex];
+        var sim = SimulationRig.FromModel(ModelFor(candidate));
+        var request = SpinupStudyRequest.Default;
+        var quiet = SpinupOptions.Default with { RecordTrace = false };
+        var targets = sim.HoverThrottle(request.Mode, sim.SocFraction);
+        var spin = SpinupSimulator.Run(sim, new SpinupRequest(ThrottleProfile.SpinUp(request.Mode, targets, request.RampS),
+            request.RampS + request.SettleS, sim.SocFraction), quiet);
+        var ci = CultureInfo.InvariantCulture;
         var controller = _catalog.Controllers[candidate.ControllerIndex];
-        var pack = _catalog.Packs[candidate.PackIndex];
-        if (!controller.AcceptsCells(pack.CellsSeries))
+        var findings = new List<string>();
+        foreach (var s in spin.Stations.Where(s => s.Stalled))
         {
-            return null;
+            findings.Add(string.Format(ci,
+                "station {0} stalls below its drag peak ({1:0} rpm, {2:0.00} N m at the landed gap) under controller {3}'s {4:0} A limit at the hover duty; {5:0} A would pass it",
+                s.Index, Units.RadPerSToRpm(s.DragPeakSpeedRadPerS), s.DragPeakTorqueNm, controller.Id, s.CurrentLimitA, s.SuggestedCurrentLimitA));
         }
-        int n = _trim.StationCount;
-        (double mass, _, _) = _trim.MassAndCg(motor.MassKg + controller.MassKg, candidate.PackCount * pack.MassKg);
-        double weight = mass * Units.StandardGravity;
-        var train = new Drivetrain(motor, controller, new DriveOptions(MaxDuty: _rig.Limits.MaxDuty));
-        var source = new BusSource(pack.CellsSeries * _ocvGrid[candidate.PackIndex][0], pack.ResistanceOhm / candidate.PackCount);
-        var inputs = new DriveInput[n];
-        var points = new DrivePoint[n];
-        var speeds = new double[n];
-        var k1 = new double[n];
-        var trial = new double[n];
-        double gap = _rig.LandedGapM, plate = _rig.PlateTemperatureC, ambient = _rig.AmbientC;
-        var command = new DriveCommand(DriveCommandKind.Duty, _rig.Limits.MaxDuty);
-        void Rates(double[] w, double[] into)
+        if (spin.LiftoffTimeS is not { } liftoff)
         {
-            for (int i = 0; i < n; i++)
-            {
-                inputs[i] = new DriveInput(train, command, w[i], ambient, ambient, Braking: false);
-            }
-            var solution = DriveBus.Solve(source, inputs, points);
-            for (int i = 0; i < n; i++)
-            {
-                double motorTorque = solution.Status == BusStatus.NoSolution ? 0.0 : points[i].TorqueNm;
-                double load = Loads[i].Evaluate(w[i], gap, plate, ambient).TotalTorqueNm;
-                into[i] = (motorTorque - load) / _rig.Stations[i].Rotor.InertiaKgM2;
-            }
+            findings.Add(string.Format(ci, "the craft never lifts off in {0:0.#} s (duty ramped to the hover duty over {1:0.#} s)",
+                request.RampS + request.SettleS, request.RampS));
         }
-        double dt = _options.LiftoffTimeStepS;
-        int stepsMax = (int)Math.Ceiling(_options.LiftoffMaxTimeS / dt);
-        var k2 = new double[n];
-        for (int step = 0; step < stepsMax; step++)
+        else if (liftoff > _rig.Limits.LiftoffTimeS)
         {
-            double lift = 0;
-            for (int i = 0; i < n; i++)
-            {
-                lift += Loads[i].Evaluate(speeds[i], gap, plate, ambient).LiftN;
-            }
-            if (lift >= weight)
-            {
-                return step * dt;
-            }
-            Rates(speeds, k1);
-            for (int i = 0; i < n; i++)
-            {
-                trial[i] = Math.Max(0.0, speeds[i] + dt * k1[i]);
-            }
-            Rates(trial, k2);
-            for (int i = 0; i < n; i++)
-            {
-                speeds[i] = Math.Clamp(speeds[i] + 0.5 * dt * (k1[i] + k2[i]), 0.0, 1.2 * _trim.MaxSpeedRadPerS[i]);
-            }
+            findings.Add(string.Format(ci, "lift-off at {0:0.00} s is later than the limit of {1:0.#} s", liftoff, _rig.Limits.LiftoffTimeS));
         }
-        return null;
+        foreach (var s in spin.Stations.Where(s => s.Controller.Exceeded))
+        {
+            findings.Add(string.Format(ci, "station {0}: controller above its continuous {1:0} A for {2:0.00} s, longer than its burst allowance",
+                s.Index, s.Controller.ContinuousA, s.Controller.TimeAboveContinuousS));
+        }
+        if (spin.Pack.Exceeded)
+        {
+            findings.Add(string.Format(ci, "pack current {0:0} A during the spin-up exceeds its burst rating", spin.Pack.PeakA));
+        }
+        if (spin.BelowCutoff)
+        {
+            findings.Add(string.Format(ci, "the pack sags to {0:0.0} V during the spin-up, below its cutoff {1:0.0} V", spin.MinBusVoltageV, spin.CutoffVoltageV));
+        }
+        var endurance = EnduranceSimulator.Run(sim, null, EnduranceOptions.Default with { RecordTrace = false });
+        return new RankSimulation(spin.LiftoffTimeS, spin.StalledStations, findings, spin.MinBusVoltageV, spin.Pack.PeakA,
+            endurance.RuntimeS, endurance.FirstLimit, endurance.FirstLimitText, endurance.PeakWindingTempC, endurance.PeakPlateTempC);
     }
 
     // Turns an outcome into the public record, composing a sentence per reason.
@@ -123,7 +103,7 @@ public sealed partial class RankStudy
         var motor = _catalog.Motors[c.MotorIndex];
         var controller = _catalog.Controllers[c.ControllerIndex];
         var pack = _catalog.Packs[c.PackIndex];
-        int n = _trim.StationCount;
+        int n = _model.Stations.Count;
         var reasons = new List<RankRejection>();
         void Add(RankRejectionKind kind, string message)
         {
@@ -143,7 +123,7 @@ public sealed partial class RankStudy
             double over = 0;
             for (int i = 0; o.Trimmed && i < n; i++)
             {
-                double ratio = o.Speeds[i] / _trim.MaxSpeedRadPerS[i];
+                double ratio = o.Speeds[i] / _maxSpeed[i];
                 if (ratio > over)
                 {
                     over = ratio;
@@ -152,8 +132,8 @@ public sealed partial class RankStudy
             }
             reasons.Add(new RankRejection(RankRejectionKind.RotorSpeed, worst >= 0 && over > 1
                 ? string.Format(ci, "to lift {0:0.0} kg at the design gap station {1} must spin at {2:0} rpm, above its rotor's rated {3:0} rpm",
-                    o.MassKg, worst, Units.RadPerSToRpm(o.Speeds[worst]), Units.RadPerSToRpm(_trim.MaxSpeedRadPerS[worst]))
-                : string.Format(ci, "the rotors cannot lift {0:0.0} kg at the design gap within 1.2 x their rated speed (no trim)", o.MassKg)));
+                    o.MassKg, worst, Units.RadPerSToRpm(o.Speeds[worst]), Units.RadPerSToRpm(_maxSpeed[worst]))
+                : string.Format(ci, "the rotors cannot lift {0:0.0} kg at the design gap within {1:0.#} x their rated speed (no trim)", o.MassKg, _hoverOptions.SpeedSearchFactor)));
         }
         Add(RankRejectionKind.ControllerErpm, string.Format(ci,
             "controller {0} commutates at most {1:0} erpm, i.e. {2:0} rpm with the {3}-pole motor {4}, below the hover speed {5:0} rpm",

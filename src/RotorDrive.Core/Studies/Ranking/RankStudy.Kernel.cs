@@ -14,7 +14,7 @@ public sealed partial class RankStudy
         var motor = _catalog.Motors[c.MotorIndex];
         var controller = _catalog.Controllers[c.ControllerIndex];
         var pack = _catalog.Packs[c.PackIndex];
-        int n = _trim.StationCount;
+        int n = _model.Stations.Count;
         int cells = pack.CellsSeries;
         if (!controller.Reversible)
         {
@@ -29,7 +29,7 @@ public sealed partial class RankStudy
         }
         double drivetrainKg = motor.MassKg + controller.MassKg;
         double packsKg = c.PackCount * pack.MassKg;
-        (double mass, double cgX, double cgY) = _trim.MassAndCg(drivetrainKg, packsKg);
+        (double mass, double cgX, double cgY) = MassAndCg(drivetrainKg, packsKg);
         o.MassKg = mass;
         if (!controller.AcceptsCells(cells))
         {
@@ -45,7 +45,7 @@ public sealed partial class RankStudy
 
         if (fresh || !w.TrimCached || w.LastDrivetrainKg != drivetrainKg || w.LastPacksKg != packsKg)
         {
-            w.TrimOk = _trim.Solve(mass, cgX, cgY, w.Trim, fresh, centralDifferences: false);
+            w.TrimOk = Trim(mass, cgX, cgY, w, warm: !fresh);
             w.TrimCached = true;
             w.LastDrivetrainKg = drivetrainKg;
             w.LastPacksKg = packsKg;
@@ -56,20 +56,25 @@ public sealed partial class RankStudy
             return;
         }
         o.Trimmed = true;
-        Array.Copy(w.Trim.Speeds, o.Speeds, n);
-        Array.Copy(w.Trim.Torques, o.Torques, n);
-        Array.Copy(w.Trim.EddyPowers, o.EddyPowers, n);
+        for (int i = 0; i < n; i++)
+        {
+            var load = _model.Stations[i].LoadAt(w.TrimSpeeds[i], _model.DesignGapM);
+            o.Speeds[i] = w.TrimSpeeds[i];
+            o.Torques[i] = load.TotalTorqueNm;
+            o.EddyPowers[i] = load.EddyPowerW;
+        }
 
         var limits = _rig.Limits;
-        double flux = 1 + Motor.NdFeBFluxTempCoeffPerK * (_rig.AmbientC - 20.0);
-        double r = motor.ResistanceAt(_rig.AmbientC);
-        double rt = r + controller.OnResistanceOhm;
         double kv = motor.KvRadPerSPerV;
         double sumP = 0, numMax = 0, fastest = 0;
         for (int i = 0; i < n; i++)
         {
+            // The station's flux factor does not depend on the motor (drive options and magnet temperature only).
+            double flux = _model.Stations[i].FluxFactor;
+            double r = motor.ResistanceAt(_model.Stations[i].Conditions.WindingTempC);
+            double rt = r + controller.OnResistanceOhm;
             double speed = o.Speeds[i];
-            if (speed > _trim.MaxSpeedRadPerS[i])
+            if (speed > _maxSpeed[i])
             {
                 o.Reject(RankRejectionKind.RotorSpeed);
             }
@@ -179,6 +184,12 @@ public sealed partial class RankStudy
         o.CurrentMargin = Math.Min(Math.Min(1 - o.MaxCurrentA / motor.MaxCurrentA, 1 - o.MaxCurrentA / controller.ContinuousCurrentA), 1 - peak / bankContinuous);
     }
 
+    // The trim at this mass and centre of gravity through HoverTrim's speed solve, warm-started from the worker's last
+    // trim when asked (the fixed point does not depend on the start; a failed warm start falls back to the cold one).
+    private bool Trim(double massKg, double cgXM, double cgYM, RankWorker w, bool warm)
+        => HoverTrim.SolveSpeeds(_model.Stations, _model.DesignGapM, massKg * Units.StandardGravity, cgXM, cgYM, 0.0,
+            w.TrimSpeeds, warm, _hoverOptions, w.TrimSpace, out _) == HoverTrim.SpeedSolve.Converged;
+
     // The bus with every station drawing a fixed motor current (constant-power terms sum P = sum (I R_loop + E) I):
     // V = Voc - R_bank (sum P / V + idle), the larger root; false when there is none or it is below Voc / 2 (past the
     // pack's maximum-power point, where DriveBus reports a collapse).
@@ -231,7 +242,7 @@ public sealed partial class RankStudy
             w.DrivetrainMotor = c.MotorIndex;
             w.DrivetrainController = c.ControllerIndex;
         }
-        int n = _trim.StationCount;
+        int n = _model.Stations.Count;
         var command = new DriveCommand(DriveCommandKind.Duty, _rig.Limits.MaxDuty);
         for (int i = 0; i < n; i++)
         {

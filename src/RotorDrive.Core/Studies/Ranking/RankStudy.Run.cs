@@ -38,46 +38,36 @@ public sealed partial class RankStudy
             0,
             motors,
             parallel,
-            () => new RankWorker(_trim.StationCount),
+            () => new RankWorker(_model.Stations.Count),
             (m, _, worker) =>
             {
                 worker.Reset();
                 var list = new List<Accepted>();
-                // Visit the chunk so that the craft mass changes little from one combination to the next (controllers by
-                // mass, packs by mass back and forth): the trim's warm start then converges in a step or two. The order
-                // is fixed per chunk, so results do not depend on the threads.
-                int turn = 0;
-                for (int k = 1; k <= _maxPackCount; k++)
+                // Visit the chunk in order of craft mass (the same order for every motor): the trim's warm start then
+                // sits next to its answer. The order is fixed per chunk, so results do not depend on the threads.
+                foreach (var (c, p, k) in _massOrder)
                 {
-                    foreach (int c in _controllersByMass)
+                    var candidate = new RankCandidate(m, c, p, k);
+                    EvaluateFast(candidate, worker, fresh: false);
+                    var o = worker.Outcome;
+                    if (o.Reasons == 0)
                     {
-                        bool up = (turn++ & 1) == 0;
-                        for (int q = 0; q < packs; q++)
+                        list.Add(new Accepted
                         {
-                            int p = _packsByMass[up ? q : packs - 1 - q];
-                            var candidate = new RankCandidate(m, c, p, k);
-                            EvaluateFast(candidate, worker, fresh: false);
-                            var o = worker.Outcome;
-                            if (o.Reasons == 0)
+                            Index = IndexOf(candidate),
+                            TieKey = TieKey(candidate),
+                            RuntimeS = o.RuntimeS,
+                            MassKg = o.MassKg,
+                            Margin = o.CurrentMargin,
+                        });
+                    }
+                    else
+                    {
+                        for (int r = 0; r < kinds; r++)
+                        {
+                            if ((o.Reasons & (1u << r)) != 0)
                             {
-                                list.Add(new Accepted
-                                {
-                                    Index = IndexOf(candidate),
-                                    TieKey = TieKey(candidate),
-                                    RuntimeS = o.RuntimeS,
-                                    MassKg = o.MassKg,
-                                    Margin = o.CurrentMargin,
-                                });
-                            }
-                            else
-                            {
-                                for (int r = 0; r < kinds; r++)
-                                {
-                                    if ((o.Reasons & (1u << r)) != 0)
-                                    {
-                                        counts[m * kinds + r]++;
-                                    }
-                                }
+                                counts[m * kinds + r]++;
                             }
                         }
                     }
@@ -107,9 +97,52 @@ public sealed partial class RankStudy
             rejectionCounts[r] = new RankRejectionCount(RankRejectionKinds.All[r], sum);
         }
 
-        Score(accepted);
-        Array.Sort(accepted, Comparer());
+        // The shortlist: the best Top by the quick checks get the full spin-up and endurance simulations. One that stalls
+        // or never lifts off is rejected with that reason and the ranking is redone without it (scores and Pareto set over
+        // the remaining), until the best Top have all been simulated and pass: the next one enters deterministically.
+        var simulated = new Dictionary<long, RankSimulation>();
+        var failed = new List<RankEvaluation>();
+        while (true)
+        {
+            Score(accepted);
+            Array.Sort(accepted, Comparer());
+            int shortlist = Math.Min(_options.Top, accepted.Length);
+            var pending = new List<long>();
+            for (int i = 0; i < shortlist; i++)
+            {
+                if (!simulated.ContainsKey(accepted[i].Index))
+                {
+                    pending.Add(accepted[i].Index);
+                }
+            }
+            if (pending.Count == 0)
+            {
+                break;
+            }
+            var runs = new RankSimulation[pending.Count];
+            Parallel.For(0, pending.Count, parallel, k => runs[k] = Simulate(CandidateAt(pending[k])));
+            var dropped = new HashSet<long>();
+            for (int k = 0; k < pending.Count; k++)
+            {
+                simulated[pending[k]] = runs[k];
+                if (!runs[k].PassesSpinup)
+                {
+                    dropped.Add(pending[k]);
+                }
+            }
+            if (dropped.Count > 0)
+            {
+                // Best first, as they stood in this ranking.
+                foreach (var a in accepted.Where(a => dropped.Contains(a.Index)))
+                {
+                    var candidate = CandidateAt(a.Index);
+                    failed.Add(WithSimulation(Evaluate(candidate), simulated[a.Index], reject: true));
+                }
+                accepted = accepted.Where(a => !dropped.Contains(a.Index)).ToArray();
+            }
+        }
         MarkPareto(accepted);
+        rejectionCounts[(int)RankRejectionKind.SpinupSimulation] = new RankRejectionCount(RankRejectionKind.SpinupSimulation, failed.Count);
 
         var ordered = new RankCandidate[accepted.Length];
         var scores = new double[accepted.Length];
@@ -126,10 +159,18 @@ public sealed partial class RankStudy
         var top = new List<RankedEntry>();
         for (int i = 0; i < Math.Min(_options.Top, accepted.Length); i++)
         {
-            top.Add(new RankedEntry(i + 1, Evaluate(ordered[i]), scores[i], accepted[i].Pareto, EstimateLiftoffTimeS(ordered[i])));
+            var simulation = simulated[accepted[i].Index];
+            top.Add(new RankedEntry(i + 1, WithSimulation(Evaluate(ordered[i]), simulation, reject: false), scores[i], accepted[i].Pareto, simulation.LiftoffTimeS));
         }
         var assigned = AssignedCandidate;
-        RankEvaluation? assignedEvaluation = assigned is { } a ? Evaluate(a) : null;
+        RankEvaluation? assignedEvaluation = null;
+        if (assigned is { } own)
+        {
+            var evaluation = Evaluate(own);
+            var wasFailed = failed.FirstOrDefault(f => f.Candidate == own);
+            assignedEvaluation = wasFailed
+                ?? (simulated.TryGetValue(IndexOf(own), out var ran) ? WithSimulation(evaluation, ran, reject: false) : evaluation);
+        }
         int? assignedRank = null;
         if (assigned is { } candidateOfRig)
         {
@@ -143,7 +184,22 @@ public sealed partial class RankStudy
                 }
             }
         }
-        return new RankResult(_options.Objective, _weights, total, ordered, scores, paretoRanks, rejectionCounts, top, assigned, assignedEvaluation, assignedRank);
+        return new RankResult(_options.Objective, _weights, total, ordered, scores, paretoRanks, rejectionCounts, top, assigned, assignedEvaluation, assignedRank)
+        {
+            SimulationRejections = failed,
+        };
+    }
+
+    // The evaluation with its simulation attached and, when it failed the spin-up, that reason added.
+    private RankEvaluation WithSimulation(RankEvaluation evaluation, RankSimulation simulation, bool reject)
+    {
+        if (!reject)
+        {
+            return evaluation with { Simulation = simulation };
+        }
+        var reasons = evaluation.Rejections.ToList();
+        reasons.Add(new RankRejection(RankRejectionKind.SpinupSimulation, "full spin-up simulation: " + simulation.FailureText));
+        return evaluation with { Simulation = simulation, Rejections = reasons };
     }
 
     private long TieKey(RankCandidate c)

@@ -9,28 +9,31 @@ namespace RotorDrive.Core.Studies.Ranking;
 /// <remarks>
 /// <para>Per combination: (1) static checks: the pack's cell count within the controller's range; a one-way controller
 /// is a caution (or a rejection with <see cref="RankOptions.RequireReversible"/>). (2) Trimmed hover at the design gap
-/// (<see cref="RankTrim"/>): per-station speeds such that total lift equals the weight, pitch and roll moments about the
-/// centre of gravity vanish and the rotors' reaction torques cancel in yaw; with the craft's mass and centre of gravity
-/// including this drivetrain and packs. At a fixed gap the speeds and shaft torques depend only on mass and centre of
-/// gravity, not on the motor, so the drivetrain enters after the trim through the first-order motor model (M. Drela,
-/// "First-Order DC Electric Motor Model", MIT, 2007): current I = Kv Q / phi + I0, back-EMF E = phi omega / Kv, and the
-/// averaged controller on the shared pack bus (V = Voc - R_bank I_pack, duty d = (I R_loop + E) / V), the same equations
-/// <see cref="DriveBus"/> solves. (3) Limits at hover: rotor rated speed, controller eRPM at the hover speed, duty
-/// against the team's limit on a full pack, motor current and power, controller continuous current, pack continuous
-/// current over the run. (4) Runtime: the pack is drawn down in equal charge steps over the usable capacity (midpoint
-/// rule in charge: dt = dQ / I_pack), re-solving the bus at each state of charge, until the usable capacity, the cutoff
-/// voltage or the duty limit ends it; temperatures stay at the rig's start values (no thermal drift: a full endurance
-/// simulation is the endurance command's job). (5) Spin-up through the drag peak: all rotors on the landing gear at their
-/// drag-peak speed at the landed gap, full allowed duty, the controller's current limit, the pack sagging under all of
-/// them (<see cref="DriveBus"/>); the motor torque must exceed the load torque there. At a fixed duty and current limit
-/// the motor's torque does not rise with speed while the load torque rises up to its peak, so passing the peak passes
-/// every lower speed too.</para>
-/// <para>Speed: the sweep runs over chunks of one motor each, in parallel; the trim of each combination is warm-started
-/// from the previous one in its chunk (chord Newton with the chunk's last Jacobian, same tolerance), and drag peaks are
-/// found once per station. Results are placed by index and reduced in index order, so they do not depend on the thread
-/// count. <see cref="EvaluateDirect"/> is the straightforward path (a rig built per combination, a fresh trim, drag peaks
-/// searched again, the bus through <see cref="DriveBus"/>, margins through <see cref="DriveMargins"/>); the tests check
-/// that both give the same ranking and figures.</para>
+/// by the very speed solve of <see cref="HoverTrim"/> (least speed spread about the mean, KKT, Newton in speed space) on
+/// the rig's <see cref="RigModel"/>, with the craft's mass and centre of gravity including this drivetrain and packs
+/// (as <see cref="RigModel.WithParts(Motor, SpeedController)"/> and <see cref="RigModel.WithPacks"/> compute them). At a
+/// fixed gap the speeds and shaft torques depend only on mass and centre of gravity, not on the motor, so the drivetrain
+/// enters after the trim through the first-order motor model (M. Drela, "First-Order DC Electric Motor Model", MIT,
+/// 2007): current I = Kv Q / phi + I0, back-EMF E = phi omega / Kv, and the averaged controller on the shared pack bus
+/// (V = Voc - R_bank I_pack, duty d = (I R_loop + E) / V), the same equations <see cref="DriveBus"/> solves for
+/// <see cref="HoverTrim.Solve(RigModel, HoverOptions)"/>. (3) Limits at hover: rotor rated speed, controller eRPM at the
+/// hover speed, duty against the team's limit on a full pack, motor current and power, controller continuous current,
+/// pack continuous current over the run. (4) Runtime: the pack is drawn down in equal charge steps over the usable
+/// capacity (midpoint rule in charge: dt = dQ / I_pack), re-solving the bus at each state of charge, until the usable
+/// capacity, the cutoff voltage or the duty limit ends it; temperatures stay at the rig's start values (no thermal drift:
+/// the shortlist gets the full endurance simulation). (5) Spin-up through the drag peak, the quick filter: all rotors on
+/// the landing gear at their drag-peak speed at the landed gap, full allowed duty, the controller's current limit, the
+/// pack sagging under all of them (<see cref="DriveBus"/>); the motor torque must exceed the load torque there. At a
+/// fixed duty and current limit the motor's torque does not rise with speed while the load torque rises up to its peak,
+/// so passing the peak passes every lower speed too.</para>
+/// <para>Speed: the sweep runs over chunks of one motor each, in parallel. Within a chunk the controllers, packs and
+/// pack counts are visited in order of craft mass (the same order for every motor, since the motor adds the same mass
+/// to all), and each trim is warm-started from the previous one; the trim's fixed point does not depend on its start, so
+/// this changes the work, not the answer. Drag peaks are found once per station. Results are placed by index and reduced
+/// in index order, so they do not depend on the thread count. <see cref="EvaluateDirect"/> is the straightforward path
+/// (the candidate's <see cref="RigModel"/> variant through <see cref="HoverTrim.Solve(RigModel, HoverOptions)"/>, drag
+/// peaks searched again, every bus state through <see cref="DriveBus"/>, margins through <see cref="DriveMargins"/>);
+/// the tests check that both give the same ranking and figures.</para>
 /// <para>Temperatures: plate at the rig's start temperature, magnets and windings at ambient. Thread-safe after
 /// creation.</para>
 /// </remarks>
@@ -40,7 +43,10 @@ public sealed partial class RankStudy
     private readonly PartsCatalog _catalog;
     private readonly RankOptions _options;
     private readonly RankWeights _weights;
-    private readonly RankTrim _trim;
+    private readonly RigModel _model;
+    private readonly HoverOptions _hoverOptions;
+    private readonly double[] _maxSpeed;
+    private readonly (int Controller, int Pack, int Count)[] _massOrder;
     private readonly int _maxPackCount;
     private readonly CellCurve[] _packCurves;
     private readonly double[][] _ocvGrid;
@@ -49,26 +55,22 @@ public sealed partial class RankStudy
     private readonly int[] _motorOrder;
     private readonly int[] _controllerOrder;
     private readonly int[] _packOrder;
-    private readonly int[] _controllersByMass;
-    private readonly int[] _packsByMass;
 
-    private RankStudy(Rig rig, PartsCatalog catalog, RankOptions options, IReadOnlyList<IRotorLoad> loads)
+    private RankStudy(Rig rig, PartsCatalog catalog, RankOptions options, RigModel model)
     {
         _rig = rig;
         _catalog = catalog;
         _options = options;
         _weights = options.Weights ?? RankWeights.Default;
-        (double lightest, double heaviest) = MassRange(rig, catalog, options.MaxPackCount ?? rig.Packs?.Count ?? 1);
-        _trim = new RankTrim(rig, loads, lightest, heaviest);
-        Loads = loads;
+        _model = model;
+        Loads = model.Stations.Select(s => s.Load).ToArray();
         _maxPackCount = options.MaxPackCount ?? rig.Packs?.Count ?? 1;
-        _packCurves = new CellCurve[catalog.Packs.Count];
+        _hoverOptions = HoverOptions.Default;
+        _maxSpeed = rig.Stations.Select(s => s.Rotor.MaxSpeedRadPerS).ToArray();
+        _packCurves = PackCurves(catalog);
         _ocvGrid = new double[catalog.Packs.Count][];
         for (int p = 0; p < catalog.Packs.Count; p++)
         {
-            var pack = catalog.Packs[p];
-            _packCurves[p] = catalog.CurveFor(pack.Chemistry)
-                ?? throw new ArgumentException($"The catalog has no open-circuit voltage curve for pack {pack.Id}'s chemistry '{pack.Chemistry}'.", nameof(catalog));
             _ocvGrid[p] = OcvGrid(_packCurves[p]);
         }
         int n = rig.Stations.Count;
@@ -81,8 +83,20 @@ public sealed partial class RankStudy
         _motorOrder = OrdinalRanks(catalog.Motors.Select(m => m.Id).ToArray());
         _controllerOrder = OrdinalRanks(catalog.Controllers.Select(c => c.Id).ToArray());
         _packOrder = OrdinalRanks(catalog.Packs.Select(p => p.Id).ToArray());
-        _controllersByMass = Enumerable.Range(0, catalog.Controllers.Count).OrderBy(i => catalog.Controllers[i].MassKg).ThenBy(i => i).ToArray();
-        _packsByMass = Enumerable.Range(0, catalog.Packs.Count).OrderBy(i => catalog.Packs[i].MassKg).ThenBy(i => i).ToArray();
+        int stations = rig.Stations.Count;
+        var order = new List<(int, int, int)>(catalog.Controllers.Count * catalog.Packs.Count * _maxPackCount);
+        for (int c = 0; c < catalog.Controllers.Count; c++)
+        {
+            for (int p = 0; p < catalog.Packs.Count; p++)
+            {
+                for (int k = 1; k <= _maxPackCount; k++)
+                {
+                    order.Add((c, p, k));
+                }
+            }
+        }
+        double Added((int C, int P, int K) t) => stations * catalog.Controllers[t.C].MassKg + t.K * catalog.Packs[t.P].MassKg;
+        _massOrder = order.OrderBy(Added).ThenBy(t => t.Item1).ThenBy(t => t.Item2).ThenBy(t => t.Item3).ToArray();
     }
 
     /// <summary>Prepares a ranking: builds one load table per station rotor (or takes the given loads), finds each
@@ -103,8 +117,6 @@ public sealed partial class RankStudy
         options ??= RankOptions.Default;
         Preconditions.InRange(options.Top, 1, 1000, nameof(options.Top));
         Preconditions.InRange(options.RuntimeSteps, 4, 4096, nameof(options.RuntimeSteps));
-        Preconditions.InRange(options.LiftoffTimeStepS, 1e-5, 1.0, nameof(options.LiftoffTimeStepS));
-        Preconditions.InRange(options.LiftoffMaxTimeS, 0.1, 3600, nameof(options.LiftoffMaxTimeS));
         if (options.MaxPackCount is { } maxCount)
         {
             Preconditions.InRange(maxCount, 1, 64, nameof(options.MaxPackCount));
@@ -118,26 +130,26 @@ public sealed partial class RankStudy
         Preconditions.NonNegative(weights.Mass, "mass weight");
         Preconditions.NonNegative(weights.Margin, "margin weight");
         Preconditions.Positive(weights.Total, "sum of the weights");
-        if (rig.Stations.Count == 0)
+        if (rig.Stations.Count < 4)
         {
-            throw new ArgumentException("The rig has no stations.", nameof(rig));
+            throw new ArgumentException($"A trimmed hover needs at least four stations to balance force, pitch, roll and yaw; the rig has {rig.Stations.Count}.", nameof(rig));
         }
-        IReadOnlyList<IRotorLoad> loads;
+        if (catalog.Motors.Count == 0 || catalog.Controllers.Count == 0 || catalog.Packs.Count == 0)
+        {
+            throw new ArgumentException("The catalog needs at least one motor, one controller and one pack to rank.", nameof(catalog));
+        }
+        // The rig as analyses see it (RigModel: the same load tables as the hover command builds); its stations' parts
+        // are placeholders, the first of the catalog, replaced per candidate.
+        var curves = PackCurves(catalog);
+        var placeholder = rig with
+        {
+            Stations = rig.Stations.Select(s => s with { Motor = catalog.Motors[0], Controller = catalog.Controllers[0] }).ToArray(),
+            Packs = new PackBank(catalog.Packs[0], 1, curves[0]),
+        };
+        RigModel model;
         if (stationLoads is null)
         {
-            var tables = new Dictionary<Magnetics.RotorDesign, IRotorLoad>();
-            var list = new IRotorLoad[rig.Stations.Count];
-            for (int i = 0; i < list.Length; i++)
-            {
-                var rotor = rig.Stations[i].Rotor;
-                if (!tables.TryGetValue(rotor, out var load))
-                {
-                    load = RotorLoadTable.Build(rotor, rig.Plate, LoadTableRange.ForRig(rig, rotor));
-                    tables[rotor] = load;
-                }
-                list[i] = load;
-            }
-            loads = list;
+            model = RigModel.Build(placeholder);
         }
         else
         {
@@ -145,9 +157,9 @@ public sealed partial class RankStudy
             {
                 throw new ArgumentException($"Give one rotor load per station ({rig.Stations.Count}); got {stationLoads.Count}.", nameof(stationLoads));
             }
-            loads = stationLoads;
+            model = RigModel.Build(placeholder, stationLoads);
         }
-        return new RankStudy(rig, catalog, options, loads);
+        return new RankStudy(rig, catalog, options, model);
     }
 
     /// <summary>The rig.</summary>
@@ -158,6 +170,21 @@ public sealed partial class RankStudy
 
     /// <summary>The settings.</summary>
     public RankOptions Options => _options;
+
+    /// <summary>The rig model of the study (its stations' parts are placeholders; see <see cref="ModelFor"/>).</summary>
+    public RigModel Model => _model;
+
+    /// <summary>The rig model of one candidate: every station with its motor and controller, its packs on the bus — the
+    /// model on which <see cref="HoverTrim.Solve(RigModel, HoverOptions)"/> gives the hover this ranking reports.</summary>
+    /// <param name="candidate">The combination.</param>
+    /// <exception cref="ArgumentOutOfRangeException">An index is out of range.</exception>
+    public RigModel ModelFor(RankCandidate candidate)
+    {
+        CheckCandidate(candidate);
+        return _model
+            .WithParts(_catalog.Motors[candidate.MotorIndex], _catalog.Controllers[candidate.ControllerIndex])
+            .WithPacks(new PackBank(_catalog.Packs[candidate.PackIndex], candidate.PackCount, _packCurves[candidate.PackIndex]));
+    }
 
     /// <summary>The rotor load of each station.</summary>
     public IReadOnlyList<IRotorLoad> Loads { get; }
@@ -256,18 +283,33 @@ public sealed partial class RankStudy
         return (peak, torque);
     }
 
-    // Lightest and heaviest craft any combination can make (the trim's reference table spans them).
-    private static (double Lightest, double Heaviest) MassRange(Rig rig, PartsCatalog catalog, int maxPackCount)
+    // Craft mass and centre of gravity with this drivetrain at every station and these packs: the arithmetic of
+    // RigModel's constructor, in its order, so that the trim sees the very numbers the candidate's model variant has.
+    private (double MassKg, double CgXM, double CgYM) MassAndCg(double drivetrainKg, double packsKg)
     {
-        double fixedKg = rig.Body.EmptyMassKg + rig.Body.PayloadKg + rig.Stations.Sum(s => s.Rotor.RotorMassKg);
-        int n = rig.Stations.Count;
-        double motorMin = catalog.Motors.Count == 0 ? 0 : catalog.Motors.Min(m => m.MassKg);
-        double motorMax = catalog.Motors.Count == 0 ? 0 : catalog.Motors.Max(m => m.MassKg);
-        double controllerMin = catalog.Controllers.Count == 0 ? 0 : catalog.Controllers.Min(c => c.MassKg);
-        double controllerMax = catalog.Controllers.Count == 0 ? 0 : catalog.Controllers.Max(c => c.MassKg);
-        double packMin = catalog.Packs.Count == 0 ? 0 : catalog.Packs.Min(p => p.MassKg);
-        double packMax = catalog.Packs.Count == 0 ? 0 : catalog.Packs.Max(p => p.MassKg);
-        return (fixedKg + n * (motorMin + controllerMin) + packMin, fixedKg + n * (motorMax + controllerMax) + maxPackCount * packMax);
+        var body = _rig.Body;
+        double bodyMass = body.EmptyMassKg + body.PayloadKg + packsKg;
+        double m = bodyMass, mx = bodyMass * body.CgXM, my = bodyMass * body.CgYM;
+        foreach (var s in _model.Stations)
+        {
+            double ms = s.Rotor.RotorMassKg + drivetrainKg;
+            m += ms;
+            mx += ms * s.XM;
+            my += ms * s.YM;
+        }
+        return (m, mx / m, my / m);
+    }
+
+    private static CellCurve[] PackCurves(PartsCatalog catalog)
+    {
+        var curves = new CellCurve[catalog.Packs.Count];
+        for (int p = 0; p < curves.Length; p++)
+        {
+            var pack = catalog.Packs[p];
+            curves[p] = catalog.CurveFor(pack.Chemistry)
+                ?? throw new ArgumentException($"The catalog has no open-circuit voltage curve for pack {pack.Id}'s chemistry '{pack.Chemistry}'.", nameof(catalog));
+        }
+        return curves;
     }
 
     private static int[] OrdinalRanks(string[] ids)

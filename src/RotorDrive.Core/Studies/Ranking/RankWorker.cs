@@ -1,21 +1,26 @@
+using RotorDrive.Core.Craft;
 using RotorDrive.Core.Drive;
 
 namespace RotorDrive.Core.Studies.Ranking;
 
-/// <summary>Per-thread scratch of a ranking sweep: the trim's warm start, its exact-mass cache, the drivetrain of the
-/// current motor and controller, and the bus solver's buffers. Reset at the start of every chunk so that results do not
-/// depend on which thread ran which chunk.</summary>
+/// <summary>Per-thread scratch of a ranking sweep: the trim's workspace and warm start, its exact-mass cache, the
+/// drivetrain of the current motor and controller, and the bus solver's buffers. Reset at the start of every chunk so
+/// that results do not depend on which thread ran which chunk.</summary>
 internal sealed class RankWorker
 {
     public RankWorker(int stations)
     {
-        Trim = new RankTrimState(stations);
+        TrimSpace = new HoverTrimWorkspace(stations);
+        TrimSpeeds = new double[stations];
         Outcome = new RankOutcome(stations);
         Inputs = new DriveInput[stations];
         Points = new DrivePoint[stations];
     }
 
-    public RankTrimState Trim { get; }
+    public HoverTrimWorkspace TrimSpace { get; }
+
+    /// <summary>The last trim's speeds, rad/s (the workspace keeps its own copy for the next warm start).</summary>
+    public double[] TrimSpeeds { get; }
 
     public RankOutcome Outcome { get; }
 
@@ -39,7 +44,7 @@ internal sealed class RankWorker
 
     public void Reset()
     {
-        Trim.Reset();
+        TrimSpace.Solved = false;
         TrimCached = false;
         DrivetrainMotor = -1;
         DrivetrainController = -1;

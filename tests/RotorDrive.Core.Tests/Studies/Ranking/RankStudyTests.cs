@@ -92,6 +92,39 @@ public class RankStudyTests
     }
 
     [Fact]
+    public void ShortlistedMotorThatStallsInTheFullSpinup_IsRejected_AndTheNextOneMovesUp()
+    {
+        // Worked by hand (Drela 2007 motor, Reitz 1970 load as in the three-motor test): the craft hovers at s = 1.3545
+        // (271 rad/s), and on the gear its lift (x e^0.21) reaches the weight only at s = 1.050, so every rotor must pass
+        // the landed drag peak (2.467 N m at 200 rad/s). Motor "lean" (200 rpm/V, 0.5 ohm) hovers at 41.0 A needing
+        // 41.0 x 0.502 + 12.9 = 33.5 V, duty about 0.81 on the sagging 12-cell pack. The quick check drives it at duty
+        // 0.95: (0.95 x ~41 V - 9.55 V) / 0.502 ohm = 58.6 A, 2.75 N m > 2.467 N m: it passes. The spin-up simulation
+        // ramps the duty only to the hover duty: (0.81 x ~42.5 V - 9.55 V) / 0.502 = 49.7 A, 2.33 N m < 2.467 N m: the
+        // rotors settle below the peak (voltage-limited, under the 80 A limit) and the craft never lifts off. Lighter, it
+        // ranks first by mass, is shortlisted (top 1), fails, and "A" takes its place.
+        var lean = Motor("lean", 200, 60, massKg: 0.2, resistanceOhm: 0.5);
+        var good = Motor("A", 100, 40);
+        var catalog = Catalog([lean, good], [Controller("c-60", 60, 80)], [Pack("flat-12s", "flat")]);
+        var study = RankStudy.Create(SquareRig(20, 0), catalog, new RankOptions(Objective: RankObjective.Mass, Top: 1, MaxPackCount: 1), FourOf(HandLoad));
+
+        Assert.True(study.Evaluate(new RankCandidate(0, 0, 0, 1)).Accepted, "the quick checks pass the lean motor");
+        var result = study.Run();
+
+        Assert.Equal(["A"], result.Ordered.Select(c => catalog.Motors[c.MotorIndex].Id));
+        var rejected = Assert.Single(result.SimulationRejections);
+        Assert.Equal("lean", rejected.MotorId);
+        Assert.Equal(RankRejectionKind.SpinupSimulation, rejected.Rejections[^1].Kind);
+        Assert.False(rejected.Simulation!.PassesSpinup);
+        Assert.Null(rejected.Simulation.LiftoffTimeS);
+        Assert.Contains("never lifts off", rejected.Rejections[^1].Message);
+        Assert.Equal(1, result.RejectionCounts.Single(c => c.Kind == RankRejectionKind.SpinupSimulation).Count);
+        var winner = result.Top.Single();
+        Assert.True(winner.Evaluation.Simulation!.PassesSpinup);
+        Assert.NotNull(winner.LiftoffTimeS);
+        Assert.True(winner.Evaluation.Simulation.EnduranceRuntimeS > 0);
+    }
+
+    [Fact]
     public void CellsOutsideTheControllerRange_AreRejected_AndOneWayControllersOnlyCautioned()
     {
         var catalog = Catalog([Motor("A", 100, 40)], [Controller("low", 60, 80, minCells: 2, maxCells: 6), Controller("oneway", 60, 80, reversible: false)], [Pack("flat-12s", "flat")]);
@@ -123,20 +156,7 @@ public class RankStudyTests
             Assert.Equal(direct.Accepted, byIndex.ContainsKey(index));
             if (direct.Accepted)
             {
-                var d = direct.Figures!;
-                var f = fast.Figures!;
-                RelAssert.Close(d.TotalMassKg, f.TotalMassKg, 1e-12, "mass");
-                RelAssert.Close(d.RuntimeS, f.RuntimeS, 1e-8, "runtime");
-                RelAssert.Close(d.CurrentMargin!.Value, f.CurrentMargin!.Value, 1e-7, "margin");
-                RelAssert.Close(d.PackCurrentA, f.PackCurrentA, 1e-8, "pack current");
-                RelAssert.Close(d.BusVoltageV, f.BusVoltageV, 1e-10, "bus voltage");
-                for (int i = 0; i < d.StationSpeedsRadPerS.Count; i++)
-                {
-                    RelAssert.Close(d.StationSpeedsRadPerS[i], f.StationSpeedsRadPerS[i], 1e-9, "speed");
-                    RelAssert.Close(d.StationMotorCurrentsA[i], f.StationMotorCurrentsA[i], 1e-8, "current");
-                    RelAssert.Close(d.StationDuties[i], f.StationDuties[i], 1e-8, "duty");
-                }
-                Assert.Equal(d.RuntimeLimit, f.RuntimeLimit);
+                AssertSameFigures(direct.Figures!, fast.Figures!);
             }
         }
         Assert.True(result.AcceptedCount > 3 && result.RejectedCount > 3, "the catalog should hold both accepted and rejected combinations");
@@ -146,6 +166,76 @@ public class RankStudyTests
             .OrderByDescending(e => e.Figures!.RuntimeS).ThenBy(e => e.MotorId, StringComparer.Ordinal).ThenBy(e => e.ControllerId, StringComparer.Ordinal)
             .ThenBy(e => e.PackId, StringComparer.Ordinal).ThenBy(e => e.Candidate.PackCount).Select(e => e.Candidate).ToList();
         Assert.Equal(expected, result.Ordered);
+    }
+
+    // Every figure a ranking reports, straightforward against fast: the trim agrees to the square of HoverTrim's step
+    // tolerance (1e-7, so ~1e-14), the closed-form bus to DriveBus's voltage tolerance; the runtime adds up 32 steps.
+    private static void AssertSameFigures(RankFigures d, RankFigures f)
+    {
+        RelAssert.Close(d.TotalMassKg, f.TotalMassKg, 1e-12, "mass");
+        RelAssert.Close(d.RuntimeS, f.RuntimeS, 1e-8, "runtime");
+        RelAssert.Close(d.CurrentMargin!.Value, f.CurrentMargin!.Value, 1e-7, "margin");
+        RelAssert.Close(d.PackCurrentA, f.PackCurrentA, 1e-9, "pack current");
+        RelAssert.Close(d.PeakPackCurrentA, f.PeakPackCurrentA, 1e-9, "peak pack current");
+        RelAssert.Close(d.BusVoltageV, f.BusVoltageV, 1e-10, "bus voltage");
+        RelAssert.Close(d.ElectricalPowerW, f.ElectricalPowerW, 1e-9, "electrical power");
+        RelAssert.Close(d.EddyPowerW, f.EddyPowerW, 1e-9, "eddy power");
+        RelAssert.Close(d.LiftSpecificPowerWPerN, f.LiftSpecificPowerWPerN, 1e-9, "W/N");
+        RelAssert.Close(d.DragPeakTorqueMargin!.Value, f.DragPeakTorqueMargin!.Value, 1e-9, "drag-peak margin");
+        Assert.Equal(d.StationSpeedsRadPerS.Count, f.StationSpeedsRadPerS.Count);
+        for (int i = 0; i < d.StationSpeedsRadPerS.Count; i++)
+        {
+            RelAssert.Close(d.StationSpeedsRadPerS[i], f.StationSpeedsRadPerS[i], 1e-9, "speed");
+            RelAssert.Close(d.StationMotorCurrentsA[i], f.StationMotorCurrentsA[i], 1e-9, "current");
+            RelAssert.Close(d.StationDuties[i], f.StationDuties[i], 1e-9, "duty");
+        }
+        Assert.Equal(d.RuntimeLimit, f.RuntimeLimit);
+    }
+
+    // The issue's own check: the ranking's winner hovers exactly as `rotordrive hover` trims that drivetrain. Six stations
+    // and an off-centre centre of gravity, so the trim's least-spread choice is exercised. Agreement within 1e-9: HoverTrim
+    // stops when its step is below StepTolerance (1e-7 of the scale speed) and applies that step, so both paths land
+    // within ~1e-14 of the same fixed point; the ranking's closed-form bus equals DriveBus to its voltage tolerance.
+    [Fact]
+    public void WinnersFigures_EqualTheTrimmedHover_OfTheSameDrivetrain()
+    {
+        const double Agreement = 1e-9;
+        var load = new SyntheticLoad(70, 1.5, 200, 30, DesignGapM);
+        var rig = HexRig(18, 4, cgXM: 0.05, cgYM: -0.04);
+        var study = RankStudy.Create(rig, MixedCatalog(), new RankOptions(MaxPackCount: 2), SixOf(load));
+        var result = study.Run();
+        Assert.True(result.AcceptedCount > 3, "the catalog should fly this rig");
+        var winner = result.Top[0].Evaluation;
+        var figures = winner.Figures!;
+        var catalog = study.Catalog;
+        var motor = catalog.Motors[winner.Candidate.MotorIndex];
+        var controller = catalog.Controllers[winner.Candidate.ControllerIndex];
+        var pack = catalog.Packs[winner.Candidate.PackIndex];
+        var bank = new PackBank(pack, winner.Candidate.PackCount, catalog.CurveFor(pack.Chemistry)!);
+        // The hover command's path: a rig model from the rig (here with analytic loads), parts and packs assigned.
+        var assigned = rig with { Stations = rig.Stations.Select(s => s with { Motor = motor, Controller = controller }).ToArray(), Packs = bank };
+        var model = RigModel.Build(assigned, SixOf(load)).WithParts(motor, controller).WithPacks(bank);
+        var hover = HoverTrim.Solve(model);
+
+        Assert.True(hover.Balanced);
+        RelAssert.Close(hover.MassKg, figures.TotalMassKg, 1e-15, "mass");
+        for (int i = 0; i < 6; i++)
+        {
+            RelAssert.Close(hover.Stations[i].SpeedRadPerS, figures.StationSpeedsRadPerS[i], Agreement, "speed");
+            RelAssert.Close(hover.Stations[i].MotorCurrentA, figures.StationMotorCurrentsA[i], Agreement, "motor current");
+            RelAssert.Close(hover.Stations[i].Duty, figures.StationDuties[i], Agreement, "duty");
+        }
+        // The trim spreads the speeds to hold the off-centre weight level (not a common speed).
+        Assert.True(figures.StationSpeedsRadPerS.Max() / figures.StationSpeedsRadPerS.Min() > 1.01);
+        RelAssert.Close(hover.PackCurrentA, figures.PackCurrentA, Agreement, "pack current");
+        RelAssert.Close(hover.BusVoltageV, figures.BusVoltageV, Agreement, "bus voltage");
+        RelAssert.Close(hover.LiftSpecificPowerWPerN, figures.LiftSpecificPowerWPerN, Agreement, "W/N");
+        RelAssert.Close(hover.PlatePowerW, figures.EddyPowerW, Agreement, "plate power");
+        // The study's own model variant is that model.
+        var variant = study.ModelFor(winner.Candidate);
+        Assert.Equal(model.MassKg, variant.MassKg);
+        Assert.Equal(model.CgXM, variant.CgXM);
+        Assert.Equal(model.CgYM, variant.CgYM);
     }
 
     [Fact]
@@ -215,7 +305,7 @@ public class RankStudyTests
     {
         var load = new SyntheticLoad(100, 2, 200, 30, DesignGapM);
         var rig = SquareRig(18, 4, cgXM: 0.04, cgYM: -0.03);
-        var study = RankStudy.Create(rig, MixedCatalog(), new RankOptions(Objective: objective, MaxPackCount: 2, MaxDegreeOfParallelism: threads), FourOf(load));
+        var study = RankStudy.Create(rig, MixedCatalog(), new RankOptions(Objective: objective, Top: 3, MaxPackCount: 2, MaxDegreeOfParallelism: threads), FourOf(load));
         return (study, study.Run());
     }
 

@@ -46,7 +46,25 @@ internal static class RankingFixtures
             stations, packs, new RigLimits(2, 60, 3.3, 0.8, 0.95, 6), 5, 12);
     }
 
+    /// <summary>Six stations on a 0.35 m hexagon, spins alternating, at 20 C: more stations than the four balance equations,
+    /// so the trim's least-spread choice matters.</summary>
+    public static Rig HexRig(double bodyKg, double payloadKg, double cgXM, double cgYM, Motor? motor = null, SpeedController? controller = null, PackBank? packs = null)
+    {
+        var stations = new Station[6];
+        for (int i = 0; i < 6; i++)
+        {
+            double angle = i * Math.PI / 3;
+            stations[i] = new Station(0.35 * Math.Cos(angle), 0.35 * Math.Sin(angle), i % 2 == 0 ? SpinDirection.Clockwise : SpinDirection.CounterClockwise,
+                Rotor, motor, controller);
+        }
+        return new Rig(
+            "hexagon test rig (invented)", Plate, 20, 20, new CraftBody(bodyKg, payloadKg, cgXM, cgYM, 6, 0.2), DesignGapM, LandedGapM,
+            stations, packs, new RigLimits(2, 60, 3.3, 0.8, 0.95, 6), 5, 12);
+    }
+
     public static IReadOnlyList<SyntheticLoad> FourOf(SyntheticLoad load) => [load, load, load, load];
+
+    public static IReadOnlyList<SyntheticLoad> SixOf(SyntheticLoad load) => [load, load, load, load, load, load];
 
     public static PartsCatalog Catalog(IReadOnlyList<Motor> motors, IReadOnlyList<SpeedController> controllers, IReadOnlyList<BatteryPack> packs)
         => new(motors, controllers, packs, [FlatCurve, SlopedCurve], [Rotor], [Plate.Material]);
