@@ -13,6 +13,7 @@ public sealed class ChartView : View
     private readonly GraphView _graph;
     private readonly Label _legend;
     private ChartData? _data;
+    private string _caption = "";
 
     /// <summary>Creates an empty chart.</summary>
     public ChartView()
@@ -30,9 +31,13 @@ public sealed class ChartView : View
     public ChartData? Chart => _data;
 
     /// <summary>Shows new data.</summary>
-    public void Show(ChartData? data)
+    public void Show(ChartData? data) => Show(data, "");
+
+    /// <summary>Shows new data with a caption at the start of the legend line (e.g. the page number).</summary>
+    public void Show(ChartData? data, string caption)
     {
         _data = data;
+        _caption = caption ?? "";
         Layout(data);
     }
 
@@ -63,7 +68,7 @@ public sealed class ChartView : View
             SetNeedsDraw();
             return;
         }
-        _legend.Text = Legend(data);
+        _legend.Text = _caption.Length > 0 ? _caption + " " + Legend(data) : Legend(data);
         var finite = data.Lines.SelectMany(l => l.Points).Where(p => double.IsFinite(p.X) && double.IsFinite(p.Y)).ToList();
         if (finite.Count == 0)
         {
