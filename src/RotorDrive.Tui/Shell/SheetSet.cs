@@ -12,6 +12,7 @@ public static class SheetSet
         new StationsSheet(context),
         new LiftDragSheet(context),
         new RunningPointsSheet(context),
+        new HoverYawSheet(context),
         new PartsSheet(context),
         new HelpSheet(context),
     ];
