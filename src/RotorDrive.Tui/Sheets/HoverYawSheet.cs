@@ -152,7 +152,7 @@ public sealed class HoverYawSheet : Sheet
             : review.Hover.Balanced
                 ? $"{Over} over: {review.Findings.Count} limit(s) fail at {F(review.Hover.GapM * 1000, 2)} mm (marked {Over} below)."
                 : $"{Over} No hover: {review.Findings.FirstOrDefault()?.Limit.Replace('_', ' ') ?? "no balance"} (see below).";
-        string yawText = yaw.Pass ? "Yaw: balanced within tolerance, authority covers it both ways." : $"{Over} Yaw: fails (see YAW below).";
+        string yawText = yaw.Pass ? "Yaw balanced; the trim covers the tolerance both ways." : $"{Over} Yaw fails (see YAW below).";
         return hover + "\n" + yawText;
     }
 
@@ -164,14 +164,14 @@ public sealed class HoverYawSheet : Sheet
         var yaw = f.Yaw!;
         var h = review.Hover;
         var sb = new StringBuilder();
-        sb.AppendLine($"CRAFT  {F(h.MassKg, 1)} kg with {F(model.PayloadKg, 1)} kg payload, weight {F(h.WeightN, 1)} N, gap {F(h.GapM * 1000, 2)} mm");
+        sb.AppendLine($"CRAFT  {F(h.MassKg, 1)} kg (payload {F(model.PayloadKg, 1)} kg), {F(h.WeightN, 1)} N, gap {F(h.GapM * 1000, 2)} mm");
         if (h.Balanced)
         {
             sb.AppendLine($"  pack {F(h.PackCurrentA, 1)} A at {F(h.BusVoltageV, 2)} V: {F(h.ElectricalPowerW, 0)} W electrical, {F(h.LiftSpecificPowerWPerN, 2)} W/N");
             sb.AppendLine($"  into the plate {F(h.PlatePowerW, 0)} W; heave stiffness {F(h.HeaveStiffnessNPerM / 1000, 1)} N/mm, natural frequency {F(h.HeaveFrequencyHz, 2)} Hz");
         }
         sb.AppendLine(f.PayloadCapacityKg is { } cap
-            ? $"  {(cap + 1e-9 >= model.PayloadKg ? "" : Over + " ")}max payload within every limit: {F(cap, 1)} kg (the rig carries {F(model.PayloadKg, 1)} kg)"
+            ? $"  {(cap + 1e-9 >= model.PayloadKg ? "" : Over + " ")}max payload within every limit {F(cap, 1)} kg (carries {F(model.PayloadKg, 1)})"
             : $"  {Over} max payload: even the empty craft does not hover within every limit");
         if (h.Balanced)
         {
@@ -187,7 +187,8 @@ public sealed class HoverYawSheet : Sheet
                     F(s.Duty, 3), F(s.MotorCurrentA, 1), F(s.BusCurrentA, 1), F(s.LiftSpecificPowerWPerN, 2), s.Stable ? "yes" : Over + " no"));
             }
             sb.AppendLine();
-            sb.AppendLine($"MARGINS TO LIMITS, %   ({OverLegend})");
+            sb.AppendLine("MARGINS TO LIMITS, %");
+            sb.AppendLine("  " + OverLegend);
             sb.Append("  limit          ");
             foreach (var s in h.Stations)
             {

@@ -11,7 +11,7 @@ public static class Figures
     public const string Over = "!!";
 
     /// <summary>The legend for <see cref="Over"/>.</summary>
-    public const string OverLegend = "!! over = a limit is exceeded (its margin is below 0)";
+    public const string OverLegend = "!! over = the limit is exceeded (margin below 0)";
 
     /// <summary>The number with fixed decimals, or "n/a" when it is NaN or infinite.</summary>
     public static string F(double value, int decimals)
