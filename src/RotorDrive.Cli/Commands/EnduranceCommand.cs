@@ -72,7 +72,7 @@ public static class EnduranceCommand
             result.FirstLimit,
             result.FirstLimitText,
             result.LimitStation,
-            Units.RadPerSToRpm(result.StartHoverSpeedRadPerS),
+            result.StartHover.Stations.Select(h => h.SpeedRpm).ToArray(),
             result.StartPackCurrentA,
             result.FinalSocFraction * 100,
             result.FinalBusVoltageV,
@@ -80,6 +80,8 @@ public static class EnduranceCommand
             result.PeakWindingTempC,
             result.PeakPlateTempC,
             rig.Limits.PlateTempC,
+            sim.PlateSpreadingFactor,
+            PlatePatch(sim.PlateSpreadingFactor),
             result.Steps,
             pass);
         if (json)
@@ -91,9 +93,10 @@ public static class EnduranceCommand
             output.WriteLine($"Endurance: {report.Rig}, trimmed hover at the {Numbers.Format(rig.DesignGapM * 1000, 1)} mm design gap from a full pack");
             output.WriteLine($"  runtime: {Numbers.Format(report.RuntimeS, 0)} s ({Numbers.Format(report.RuntimeMin, 1)} min)");
             output.WriteLine($"  ended by: {report.FirstLimit}");
-            output.WriteLine($"  at the start: {Numbers.Format(report.StartHoverSpeedRpm, 0)} rpm, pack current {Numbers.Format(report.StartPackCurrentA, 1)} A");
+            output.WriteLine($"  at the start: {string.Join(" / ", report.StartSpeedsRpm.Select(r => Numbers.Format(r, 0)))} rpm (stations 0..{report.StartSpeedsRpm.Count - 1}), pack current {Numbers.Format(report.StartPackCurrentA, 1)} A");
             output.WriteLine($"  at the end: state of charge {Numbers.Format(report.FinalSocPct, 1)} %, bus {Numbers.Format(report.FinalBusVoltageV, 1)} V, pack current {Numbers.Format(report.FinalPackCurrentA, 1)} A");
             output.WriteLine($"  hottest winding {Numbers.Format(report.PeakWindingTempC, 1)} C, hottest plate patch {Numbers.Format(report.PeakPlateTempC, 1)} C (limit {Numbers.Format(report.PlateLimitC, 0)} C)");
+            output.WriteLine($"  plate patch: {report.PlatePatch}");
             output.WriteLine();
             output.WriteLine(pass ? "Result: the pack ends the hover (no thermal or current limit first)." : "Result: FAILS: a limit other than the pack ends the hover.");
             output.WriteLine("Caution: plates and windings get hot enough to burn; lithium packs can burn when over-discharged. Estimates only: defer to manufacturers' ratings.");
@@ -108,7 +111,7 @@ public static class EnduranceCommand
         string FirstLimit,
         EnduranceLimit FirstLimitKind,
         int? LimitStation,
-        double StartHoverSpeedRpm,
+        IReadOnlyList<double> StartSpeedsRpm,
         double StartPackCurrentA,
         double FinalSocPct,
         double FinalBusVoltageV,
@@ -116,13 +119,20 @@ public static class EnduranceCommand
         double PeakWindingTempC,
         double PeakPlateTempC,
         double PlateLimitC,
+        double PlateSpreadingFactor,
+        string PlatePatch,
         int Steps,
         bool Pass)
     {
-        public EnduranceReport(string rig, double runtimeS, double runtimeMin, EnduranceLimit kind, string text, int? station, double rpm, double current,
-            double soc, double voltage, double finalCurrent, double winding, double plate, double plateLimit, int steps, bool pass)
-            : this(rig, runtimeS, runtimeMin, text, kind, station, rpm, current, soc, voltage, finalCurrent, winding, plate, plateLimit, steps, pass)
+        public EnduranceReport(string rig, double runtimeS, double runtimeMin, EnduranceLimit kind, string text, int? station, IReadOnlyList<double> rpm, double current,
+            double soc, double voltage, double finalCurrent, double winding, double plate, double plateLimit, double spreading, string patch, int steps, bool pass)
+            : this(rig, runtimeS, runtimeMin, text, kind, station, rpm, current, soc, voltage, finalCurrent, winding, plate, plateLimit, spreading, patch, steps, pass)
         {
         }
     }
+
+    // The plate-patch assumption in words (the lumped plate node of PlatePatchThermalNode.UnderRotor).
+    private static string PlatePatch(double spreading) => spreading <= 1
+        ? "eddy heat kept in the plate under each magnet annulus (spreading factor 1, the hottest assumption; set plate.spreading_factor in the rig file for a wider patch)"
+        : $"eddy heat spread over {Numbers.Format(spreading, 2)} x the magnet annulus area (plate.spreading_factor)";
 }

@@ -11,21 +11,12 @@ namespace RotorDrive.Cli.Commands;
 /// <summary><c>rotordrive spinup RIG.json [--ramp-s T] [--mode duty|hold] [--soc-pct S] [--csv FILE] [--force] [--json]</c>:
 /// the spin-up from rest on the landing gear through the drag peak to hover, then the landing (stop) profile with
 /// braking on and off.</summary>
-/// <remarks>The throttle ramps from 0 to the common-hover throttle (duty or speed) over the ramp time; the run lasts the
-/// ramp plus <see cref="SettleS"/>. Exit 1 when the rig does not lift off within the rig's lift-off time limit, a rotor
-/// stalls, a current exceeds its burst allowance, or the pack sags below its cutoff; a landing that pushes the bus above the
-/// controllers' rated voltage draws a caution.</remarks>
+/// <remarks>The simulation, findings and cautions are <see cref="SpinupStudy.Run"/> (shared with the terminal UI); this
+/// command parses, prints and writes the CSV. Exit 1 when the study finds a failed limit (no lift-off within the rig's
+/// lift-off time limit, a stalled rotor, a current above its burst allowance, the pack below its cutoff); a landing that
+/// pushes the bus above the controllers' rated voltage draws a caution.</remarks>
 public static class SpinupCommand
 {
-    /// <summary>Simulated time after the ramp, s.</summary>
-    public const double SettleS = 6.0;
-
-    /// <summary>Ramp time of the landing profile, s: 0, the throttle cut at once (the hardest case for regeneration).</summary>
-    public const double StopRampS = 0.0;
-
-    /// <summary>Full-charge voltage per lithium cell used for the controllers' rated bus voltage, V (common practice, no source).</summary>
-    public const double FullCellV = 4.2;
-
     /// <summary>Builds the subcommand.</summary>
     public static Command Create()
     {
@@ -108,19 +99,9 @@ public static class SpinupCommand
             return ExitCodes.BadInput;
         }
 
-        var targets = sim.HoverThrottle(mode, soc);
-        var spin = SpinupSimulator.Run(sim, new SpinupRequest(ThrottleProfile.SpinUp(mode, targets, rampS), rampS + SettleS, soc));
-        double socAfter = Math.Clamp(spin.FinalSocFraction, 0, 1);
-        var running = sim.HoverThrottle(mode, socAfter);
-        var landings = new[] { true, false }
-            .Select(braking => SpinupSimulator.Run(sim, new SpinupRequest(ThrottleProfile.Stop(mode, running, StopRampS, braking), StopRampS + 4.0, socAfter, StartHovering: true),
-                SpinupOptions.Default with { RecordTrace = false }))
-            .ToArray();
-
-        double controllerMaxV = rig.Stations.Min(s => s.Controller!.MaxCells) * FullCellV;
-        var findings = Findings(sim, spin, landings, controllerMaxV);
-        var cautions = Cautions(landings, controllerMaxV);
-        var report = ToReport(sim, spin, landings, mode, rampS, soc, controllerMaxV, findings, cautions);
+        var study = SpinupStudy.Run(sim, new SpinupStudyRequest(mode, rampS, soc));
+        var spin = study.Spinup;
+        var report = ToReport(sim, study);
 
         if (csvPath is not null && spin.Trace is { } trace)
         {
@@ -139,68 +120,14 @@ public static class SpinupCommand
         {
             WriteText(report, rig, output);
         }
-        return findings.Count == 0 ? ExitCodes.Ok : ExitCodes.LimitFindings;
+        return study.Passes ? ExitCodes.Ok : ExitCodes.LimitFindings;
     }
 
-    private static List<string> Findings(SimulationRig sim, SpinupResult spin, SpinupResult[] landings, double controllerMaxV)
+    private static SpinupReport ToReport(SimulationRig sim, SpinupStudyResult study)
     {
         var rig = sim.Rig;
-        var list = new List<string>();
-        if (!sim.Hover.Exists)
-        {
-            list.Add($"the rotors cannot carry the craft's {Numbers.Format(sim.WeightN, 0)} N at the design gap below their rated speed");
-        }
-        if (spin.LiftoffTimeS is not { } liftoff)
-        {
-            list.Add("the craft never lifts off");
-        }
-        else if (liftoff > rig.Limits.LiftoffTimeS)
-        {
-            list.Add($"lift-off at {Numbers.Format(liftoff, 2)} s is later than the limit of {Numbers.Format(rig.Limits.LiftoffTimeS, 1)} s");
-        }
-        foreach (var s in spin.Stations)
-        {
-            if (s.Stalled)
-            {
-                list.Add($"station {s.Index} stalls below its drag peak ({Numbers.Format(Units.RadPerSToRpm(s.DragPeakSpeedRadPerS), 0)} rpm, "
-                    + $"{Numbers.Format(s.DragPeakTorqueNm, 2)} N m at the landed gap): its controller limits the current to {Numbers.Format(s.CurrentLimitA, 0)} A; "
-                    + $"{Numbers.Format(s.PassingCurrentA, 0)} A just balances the peak, a limit of {Numbers.Format(s.SuggestedCurrentLimitA, 0)} A would pass it");
-            }
-            if (s.Controller.Exceeded)
-            {
-                list.Add($"station {s.Index}: controller above its continuous {Numbers.Format(s.Controller.ContinuousA, 0)} A for {Numbers.Format(s.Controller.TimeAboveContinuousS, 2)} s (burst allowance {Numbers.Format(s.Controller.BurstAllowanceS, 1)} s)");
-            }
-        }
-        if (spin.Pack.Exceeded)
-        {
-            list.Add($"pack current {Numbers.Format(spin.Pack.PeakA, 0)} A exceeds its burst rating of {Numbers.Format(spin.Pack.BurstA, 0)} A");
-        }
-        if (spin.BelowCutoff)
-        {
-            list.Add($"pack voltage sags to {Numbers.Format(spin.MinBusVoltageV, 1)} V, below the cutoff of {Numbers.Format(spin.CutoffVoltageV, 1)} V");
-        }
-        if (spin.BusCollapsed)
-        {
-            list.Add("the pack cannot feed the controllers at some instant (bus collapse)");
-        }
-        return list;
-    }
-
-    // Landing results worth a caution (not a failed limit: the catalogs give no regeneration or over-voltage ratings).
-    private static List<string> Cautions(SpinupResult[] landings, double controllerMaxV)
-    {
-        var list = new List<string>();
-        foreach (var l in landings.Where(l => l.MaxBusVoltageV > controllerMaxV))
-        {
-            list.Add($"landing with braking: regeneration of {Numbers.Format(l.PeakRegenCurrentA, 0)} A lifts the bus to {Numbers.Format(l.MaxBusVoltageV, 1)} V, "
-                + $"above the controllers' {Numbers.Format(controllerMaxV, 1)} V (max cells x {Numbers.Format(FullCellV, 1)} V); cut the throttle more gently or land from a part-charged pack");
-        }
-        return list;
-    }
-
-    private static SpinupReport ToReport(SimulationRig sim, SpinupResult spin, SpinupResult[] landings, ControllerMode mode, double rampS, double soc, double controllerMaxV, List<string> findings, List<string> cautions)
-    {
-        var rig = sim.Rig;
+        var spin = study.Spinup;
+        double controllerMaxV = study.ControllerMaxVoltageV;
         var stations = spin.Stations.Select(s => new StationEntry(
             s.Index,
             rig.Stations[s.Index].Spin == SpinDirection.Clockwise ? "cw" : "ccw",
@@ -220,7 +147,7 @@ public static class SpinupCommand
             s.SuggestedCurrentLimitA,
             s.PeakWindingTempC,
             s.PeakPlateTempC)).ToList();
-        var landingEntries = landings.Select((l, i) => new LandingEntry(
+        var landingEntries = study.Landings.Select((l, i) => new LandingEntry(
             i == 0,
             l.PeakRegenCurrentA,
             l.MaxBusVoltageV,
@@ -230,12 +157,12 @@ public static class SpinupCommand
             l.Stations.Max(s => s.FinalSpeedRpm))).ToList();
         return new SpinupReport(
             rig.Name,
-            mode == ControllerMode.Duty ? "duty" : "hold",
-            rampS,
-            soc * 100,
+            study.Request.Mode == ControllerMode.Duty ? "duty" : "hold",
+            study.Request.RampS,
+            study.SocFraction * 100,
             spin.EndTimeS,
-            sim.Hover.Exists,
-            sim.Hover.SpeedRpm,
+            sim.HoverExists,
+            sim.HoverSpeedsRadPerS.Select(Units.RadPerSToRpm).ToArray(),
             sim.MassKg,
             spin.LiftoffTimeS,
             rig.Limits.LiftoffTimeS,
@@ -254,15 +181,15 @@ public static class SpinupCommand
             spin.FinalYawAngleRad * 180 / Math.PI,
             stations,
             landingEntries,
-            findings.Count == 0,
-            findings,
-            cautions);
+            study.Passes,
+            study.Findings.Select(f => f.Message).ToArray(),
+            study.Cautions);
     }
 
     private static void WriteText(SpinupReport r, Rig rig, TextWriter o)
     {
         o.WriteLine($"Spin-up: {r.Rig}, {r.Mode} mode, ramp {Numbers.Format(r.RampS, 1)} s, pack at {Numbers.Format(r.SocPct, 0)} %, {Numbers.Format(r.MassKg, 1)} kg");
-        o.WriteLine($"  hover target: {Numbers.Format(r.HoverSpeedRpm, 0)} rpm common speed at the {Numbers.Format(rig.DesignGapM * 1000, 1)} mm design gap{(r.HoverExists ? "" : " (not reachable)")}");
+        o.WriteLine($"  hover target: trimmed speeds {string.Join(" / ", r.HoverSpeedsRpm.Select(v => Numbers.Format(v, 0)))} rpm (stations 0..{r.HoverSpeedsRpm.Count - 1}) at the {Numbers.Format(rig.DesignGapM * 1000, 1)} mm design gap{(r.HoverExists ? "" : " (no trim: rated speeds)")}");
         o.WriteLine($"  lift-off: {(r.TimeToLiftoffS is { } lo ? Numbers.Format(lo, 2) + " s" : "never")} (limit {Numbers.Format(r.LiftoffLimitS, 1)} s); steady hover: {(r.TimeToHoverS is { } h ? Numbers.Format(h, 2) + " s" : "not reached")}");
         o.WriteLine($"  pack: peak {Numbers.Format(r.PeakPackCurrentA, 0)} A (continuous {Numbers.Format(r.PackContinuousA, 0)} A for "
             + $"{Numbers.Format(r.PackTimeAboveContinuousS, 2)} s above, burst {Numbers.Format(r.PackBurstA, 0)} A); lowest voltage {Numbers.Format(r.MinPackVoltageV, 1)} V (cutoff {Numbers.Format(r.CutoffVoltageV, 1)} V)");
@@ -314,7 +241,7 @@ public static class SpinupCommand
         double SocPct,
         double DurationS,
         bool HoverExists,
-        double HoverSpeedRpm,
+        IReadOnlyList<double> HoverSpeedsRpm,
         double MassKg,
         double? TimeToLiftoffS,
         double LiftoffLimitS,

@@ -29,6 +29,11 @@ public sealed record Rig(
     double GearYawFrictionNm,
     double PlateConvectionWPerM2K)
 {
+    /// <summary>Area of the plate patch that takes a rotor's eddy heat / the magnet annulus area under it, at least 1
+    /// (rig file <c>plate.spreading_factor</c>; default 1: the heat stays in the annulus, the hottest assumption). Used
+    /// by the lumped plate node of the time simulations.</summary>
+    public double PlateSpreadingFactor { get; init; } = 1.0;
+
     /// <summary>Total mass: structure, payload, rotors, assigned motors and controllers, and packs, kg.</summary>
     public double TotalMassKg =>
         Body.EmptyMassKg + Body.PayloadKg

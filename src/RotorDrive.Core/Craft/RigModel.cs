@@ -228,6 +228,25 @@ public sealed class RigModel
     public RigModel WithConditions(int index, StationConditions conditions)
         => WithStation(CheckIndex(index), Stations[index] with { Conditions = Preconditions.NotNull(conditions, nameof(conditions)) });
 
+    /// <summary>The same model with every station's local conditions replaced at once (one copy of the station list: a
+    /// time simulation's present temperatures).</summary>
+    /// <param name="conditions">One set of conditions per station, in station order.</param>
+    /// <exception cref="ArgumentException">The count differs from the station count.</exception>
+    public RigModel WithStationConditions(IReadOnlyList<StationConditions> conditions)
+    {
+        Preconditions.NotNull(conditions, nameof(conditions));
+        if (conditions.Count != Stations.Count)
+        {
+            throw new ArgumentException($"Expected {Stations.Count} station conditions (one per station); got {conditions.Count}.", nameof(conditions));
+        }
+        var copy = new CraftStation[Stations.Count];
+        for (int i = 0; i < copy.Length; i++)
+        {
+            copy[i] = Stations[i] with { Conditions = Preconditions.NotNull(conditions[i], "conditions[" + i + "]") };
+        }
+        return new RigModel(Rig, copy, Packs, PayloadKg, SocFraction, Options);
+    }
+
     private int CheckIndex(int index)
     {
         if (index < 0 || index >= Stations.Count)

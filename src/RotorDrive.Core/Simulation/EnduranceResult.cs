@@ -5,7 +5,8 @@ namespace RotorDrive.Core.Simulation;
 /// <param name="FirstLimit">The limit reached first.</param>
 /// <param name="FirstLimitText">That limit in words, with the station and the value where it applies.</param>
 /// <param name="LimitStation">The station the limit belongs to, or null for rig-wide limits.</param>
-/// <param name="StartHoverSpeedRadPerS">Trimmed hover speed at the start, rad/s.</param>
+/// <param name="StartHover">The trimmed hover at the start (<see cref="Craft.HoverTrim"/> of the rig model at the start
+/// state of charge): per-station speeds, duties and currents.</param>
 /// <param name="StartPackCurrentA">Pack current at the start, A.</param>
 /// <param name="FinalSocFraction">State of charge at the end, 0..1.</param>
 /// <param name="FinalBusVoltageV">Bus voltage at the end, V (0 when no trim existed there).</param>
@@ -19,7 +20,7 @@ public sealed record EnduranceResult(
     EnduranceLimit FirstLimit,
     string FirstLimitText,
     int? LimitStation,
-    double StartHoverSpeedRadPerS,
+    Craft.HoverResult StartHover,
     double StartPackCurrentA,
     double FinalSocFraction,
     double FinalBusVoltageV,

@@ -8,49 +8,50 @@ namespace RotorDrive.Core.Simulation;
 /// <remarks>
 /// <para>Quasi-static march: the electrical and rotor dynamics settle in well under a second, the state of charge and the
 /// temperatures change over minutes, so at every instant the rig sits in its trimmed hover for the present charge and
-/// temperatures. Each step re-trims (common hover speed at the design gap from the load tables at each patch's plate
-/// temperature, so the falling conductivity of a hot plate raises the hover speed; each motor carries its rotor's load
-/// torque: I = Kv Q / phi + I0, M. Drela, "First-Order DC Electric Motor Model", MIT, 2007; the bus of
-/// <see cref="DriveBus"/> gives the duties, bus voltage and pack current) and advances charge drawn and temperatures by
+/// temperatures. Every evaluation re-trims with <see cref="HoverTrim"/> (force, pitch, roll and yaw balance at the design
+/// gap) on the rig model at the present state of charge with each station's present plate patch and winding temperature
+/// (<see cref="RigModel.WithSoc"/>, <see cref="RigModel.WithStationConditions"/>): the falling
+/// conductivity of a hot plate raises a station's speed, a hot winding its loss, a sagging pack the duties. The march
+/// advances charge drawn and temperatures by
 /// Heun's method (explicit trapezoidal rule) over the lumped nodes (<see cref="WindingThermalNode"/>,
 /// <see cref="PlatePatchThermalNode"/>; F. P. Incropera et al., "Fundamentals of Heat and Mass Transfer", 5.2).</para>
 /// <para>The first limit inside a step is located by bisection on the state interpolated linearly across the step, so a
 /// draw at constant current ends at exactly capacity x usable fraction / current.</para>
 /// <para>Thread safety: <see cref="Run"/> allocates its own buffers; runs may share one <see cref="SimulationRig"/>.
-/// Cost: about 30 us per step on the six-station demo rig (a trim is a Brent root of the total lift plus one bus solve).</para>
+/// Cost: two trims per step (about 0.1 ms each on the six-station demo rig) and one per bisection where a limit is
+/// reached.</para>
 /// </remarks>
 public static class EnduranceSimulator
 {
-    /// <summary>Runs an endurance simulation from a state of charge, with windings at ambient and the plate at the rig's
-    /// plate temperature.</summary>
+    /// <summary>Runs an endurance simulation from a state of charge, with each station's winding and plate patch at its
+    /// conditions' temperatures.</summary>
     /// <param name="rig">The prepared rig.</param>
-    /// <param name="socFraction">State of charge at the start, 0..1.</param>
+    /// <param name="socFraction">State of charge at the start, 0..1, or null for the rig model's.</param>
     /// <param name="options">Settings, or null for <see cref="EnduranceOptions.Default"/>.</param>
     /// <returns>Runtime, first limit and traces.</returns>
     /// <exception cref="ArgumentNullException">The rig is null.</exception>
     /// <exception cref="ArgumentOutOfRangeException">A value is out of range.</exception>
-    public static EnduranceResult Run(SimulationRig rig, double socFraction = 1.0, EnduranceOptions? options = null)
+    public static EnduranceResult Run(SimulationRig rig, double? socFraction = null, EnduranceOptions? options = null)
     {
         Preconditions.NotNull(rig, nameof(rig));
-        Preconditions.InRange(socFraction, 0, 1, nameof(socFraction));
+        double soc = Preconditions.InRange(socFraction ?? rig.SocFraction, 0, 1, nameof(socFraction));
         options ??= EnduranceOptions.Default;
         Preconditions.Positive(options.StepS, nameof(options.StepS));
         Preconditions.Positive(options.MaxDurationS, nameof(options.MaxDurationS));
         Preconditions.InRange(options.LimitBisections, 1, 200, nameof(options.LimitBisections));
 
-        var march = new March(rig, socFraction);
+        var march = new March(rig, soc);
         int n = rig.StationCount;
         int dim = 1 + 2 * n;
         var s0 = new double[dim];
         s0[0] = 0;
         for (int j = 0; j < n; j++)
         {
-            s0[1 + j] = rig.Rig.AmbientC;
-            s0[1 + n + j] = rig.Rig.PlateTemperatureC;
+            s0[1 + j] = rig.Stations[j].Conditions.WindingTempC;
+            s0[1 + n + j] = rig.Stations[j].Conditions.PlateTempC;
         }
         var trace = new TraceBuilder(n);
         var start = march.Evaluate(s0);
-        double startSpeed = start.Speed, startCurrent = start.PackCurrent;
         double peakWinding = s0.Skip(1).Take(n).Max(), peakPlate = s0.Skip(1 + n).Max();
         var (limit, station) = march.Violation(s0, start);
         double t = 0;
@@ -141,8 +142,8 @@ public static class EnduranceSimulator
             limit.Value,
             march.Describe(limit.Value, station, options.MaxDurationS),
             station,
-            startSpeed,
-            startCurrent,
+            start.Hover!,
+            start.PackCurrent,
             march.Soc(s0),
             point.Trimmed ? point.BusVoltage : 0.0,
             point.Trimmed ? point.PackCurrent : 0.0,
@@ -155,11 +156,12 @@ public static class EnduranceSimulator
     // The trimmed hover at one state: [charge drawn C, winding temperatures, plate temperatures].
     private sealed class HoverPoint(int n)
     {
+        public HoverResult? Hover;
         public bool Trimmed;
-        public double Speed;
         public double BusVoltage;
         public double PackCurrent;
         public double YawTorque;
+        public readonly double[] Speed = new double[n];
         public readonly double[] Current = new double[n];
         public readonly double[] WindingHeat = new double[n];
         public readonly double[] PlateHeat = new double[n];
@@ -172,9 +174,7 @@ public static class EnduranceSimulator
         private readonly int _n;
         private readonly double _soc0;
         private readonly double _capacityC;
-        private readonly double[] _plateTemps;
-        private readonly DriveInput[] _inputs;
-        private readonly DrivePoint[] _points;
+        private readonly StationConditions[] _conditions;
 
         public March(SimulationRig rig, double soc0)
         {
@@ -183,9 +183,7 @@ public static class EnduranceSimulator
             _n = rig.StationCount;
             _soc0 = soc0;
             _capacityC = rig.Packs.CapacityAh * 3600.0;
-            _plateTemps = new double[_n];
-            _inputs = new DriveInput[_n];
-            _points = new DrivePoint[_n];
+            _conditions = new StationConditions[_n];
         }
 
         public double Soc(double[] s) => _soc0 - s[0] / _capacityC;
@@ -194,47 +192,44 @@ public static class EnduranceSimulator
 
         public double WeightN => _rig.WeightN;
 
+        // Re-trims the model at this state: its state of charge, and per station the present plate patch and winding
+        // temperatures (the motor magnets rise with the winding).
         public HoverPoint Evaluate(double[] s)
         {
             var p = new HoverPoint(_n);
             for (int j = 0; j < _n; j++)
             {
-                _plateTemps[j] = s[1 + _n + j];
-            }
-            double? speed = _rig.CommonHoverSpeed(_plateTemps, out _);
-            if (speed is not { } w)
-            {
-                return p;
-            }
-            p.Speed = w;
-            for (int j = 0; j < _n; j++)
-            {
-                var drive = _rig.Drivetrains[j];
+                var c = _rig.Stations[j].Conditions;
                 double tw = s[1 + j];
-                var load = _rig.Loads[j].Evaluate(w, _r.DesignGapM, _plateTemps[j], _r.AmbientC);
-                double current = drive.Motor.CurrentForTorqueA(load.TotalTorqueNm, drive.FluxFactorAt(tw));
-                _inputs[j] = new DriveInput(drive, DriveCommand.MotorCurrent(current), w, tw, tw, false);
-                p.PlateHeat[j] = load.EddyTorqueNm * w;
+                _conditions[j] = c with { PlateTempC = s[1 + _n + j], WindingTempC = tw, MotorMagnetTempC = c.MotorMagnetTempC + (tw - c.WindingTempC) };
             }
-            var bus = DriveBus.Solve(BusSource.FromPack(_rig.Packs, Math.Clamp(Soc(s), 0, 1)), _inputs, _points);
-            if (bus.Status != BusStatus.Solved)
+            var model = _rig.Model.WithSoc(Math.Clamp(Soc(s), 0, 1)).WithStationConditions(_conditions);
+            var hover = HoverTrim.Solve(model, _r.DesignGapM, 0.0, _rig.Options.Hover);
+            p.Hover = hover;
+            if (!hover.Balanced)
             {
                 return p;
             }
-            p.Trimmed = true;
+            p.Trimmed = hover.BusVoltageV > 0;
             for (int j = 0; j < _n; j++)
             {
-                var dp = _points[j];
-                if (dp.Regime is not (DriveRegime.Regulating))
+                var h = hover.Stations[j];
+                var station = model.Stations[j];
+                var motor = station.Drivetrain.Motor;
+                if (h.Regime is not DriveRegime.Regulating)
                 {
                     p.Trimmed = false;
                 }
-                p.Current[j] = dp.MotorCurrentA;
-                p.WindingHeat[j] = dp.CopperLossW + dp.NoLoadLossW;
-                p.YawTorque -= _r.Stations[j].Spin.Sign() * dp.TorqueNm;
+                p.Speed[j] = h.SpeedRadPerS;
+                p.Current[j] = h.MotorCurrentA;
+                // Winding heat: copper loss I^2 R(T) and the no-load loss I0 E (Drela 2007), as the drive model books them.
+                p.WindingHeat[j] = h.MotorCurrentA * h.MotorCurrentA * motor.ResistanceAt(station.Conditions.WindingTempC)
+                    + motor.NoLoadCurrentA * station.FluxFactor * h.SpeedRadPerS / motor.KvRadPerSPerV;
+                p.PlateHeat[j] = h.EddyPowerW;
             }
-            p.BusVoltage = bus.BusVoltageV;
-            p.PackCurrent = bus.PackCurrentA;
+            p.BusVoltage = hover.BusVoltageV;
+            p.PackCurrent = hover.PackCurrentA;
+            p.YawTorque = hover.YawTorqueNm;
             return p;
         }
 
@@ -330,7 +325,7 @@ public static class EnduranceSimulator
             _t.Add(t);
             for (int j = 0; j < n; j++)
             {
-                _speed[j].Add(p.Speed);
+                _speed[j].Add(p.Speed[j]);
                 _current[j].Add(p.Current[j]);
                 _winding[j].Add(s[1 + j]);
                 _plate[j].Add(s[1 + n + j]);

@@ -1,121 +1,180 @@
-using MathNet.Numerics.RootFinding;
 using RotorDrive.Core.Craft;
 using RotorDrive.Core.Drive;
 using RotorDrive.Core.Loads;
 
 namespace RotorDrive.Core.Simulation;
 
-/// <summary>Everything a transient or endurance run needs from a rig, prepared once: one load per station (a shared
-/// precomputed table per distinct rotor design), drivetrains, pack bank, thermal nodes, mass, heave damping, drag peaks
-/// at the landed gap and the common-speed hover.</summary>
+/// <summary>What a transient or endurance run needs from a rig, prepared once from a <see cref="RigModel"/>: the model's
+/// stations (shared load tables, drivetrains, local conditions), mass, pack bank and state of charge, plus the thermal
+/// nodes, the drag peaks at each station's landed gap, the trimmed hover (<see cref="HoverTrim"/>) and the heave
+/// damping.</summary>
 /// <remarks>
-/// <para>Immutable after construction and safe to share between threads; every run allocates its own work buffers.
-/// Building the tables dominates the cost (milliseconds per distinct rotor design); build once per rig and reuse it for
-/// every run (ranking, Monte Carlo).</para>
-/// <para>Heave damping: c = 2 zeta sqrt(k m) with zeta the rig's heave damping ratio and k = -dL/dg the heave stiffness
-/// at the design gap and hover speed (viscous damping written through its ratio to critical: W. T. Thomson,
-/// "Theory of Vibration with Applications", ch. 2). A physical damper coefficient can be given instead.</para>
+/// <para>Build with <see cref="FromModel"/> from any model variant (<see cref="RigModel.WithParts(int, Motor, SpeedController)"/>,
+/// <see cref="RigModel.WithConditions"/>, <see cref="RigModel.WithPayload"/>, <see cref="RigModel.WithPacks"/>,
+/// <see cref="RigModel.WithSoc"/>, <see cref="RigModel.WithStation"/>), or with <see cref="Build"/> from a rig in one line.
+/// Station j sits at the rig gap plus its <see cref="StationConditions.GapOffsetM"/> (on the gear: landed gap + offset),
+/// its plate patch and winding start at the station's plate and winding temperatures, its rotor magnets stay at the
+/// station's rotor-magnet temperature, and its motor magnets start at the station's motor-magnet temperature and rise
+/// with the winding (conservative: hot magnets give less torque per amp).</para>
+/// <para>Cost once the model exists: one trimmed hover (about 0.1 ms on the six-station demo rig) and one drag-peak
+/// search per distinct (load, landed gap, temperatures); <see cref="With"/> reuses this rig's peaks as starting
+/// brackets, so a perturbed variant's peaks cost a few dozen load evaluations each. Immutable and thread-safe; every
+/// run allocates its own work buffers.</para>
+/// <para>Heave damping: c = 2 zeta sqrt(k m) with zeta the rig's heave damping ratio and k = -dL/dg the trimmed hover's
+/// heave stiffness (viscous damping written through its ratio to critical: W. T. Thomson, "Theory of Vibration with
+/// Applications", ch. 2). Without a trim, k is taken at every rotor's rated speed.</para>
 /// <para>Rotor inertia is the rotor row's moment of inertia; the motor's own rotor inertia is not in the catalogs and is
 /// neglected.</para>
 /// </remarks>
 public sealed class SimulationRig
 {
+    // The drag-peak scan around a known peak of the same load: a factor of 3 either way in speed, 12 points.
+    private const double HintSpan = 3.0;
+    private static readonly DragPeakOptions HintedScan = DragPeakOptions.Default with { ScanPoints = 12 };
+
+    private readonly CraftStation[] _stations;
     private readonly IRotorLoad[] _loads;
     private readonly Drivetrain[] _drives;
     private readonly WindingThermalNode?[] _windings;
     private readonly PlatePatchThermalNode[] _plates;
     private readonly DragPeak[] _peaks;
+    private readonly double[] _hoverSpeeds;
+    private readonly Dictionary<IRotorLoad, double> _peakHints;
 
-    /// <summary>Prepares a rig with the given loads (one per station; stations that share a rotor design may share a
-    /// load object), e.g. the shared tables of a craft analysis.</summary>
-    /// <param name="rig">The rig; every station needs a motor and a controller, and the rig a pack bank.</param>
-    /// <param name="loads">One load per station.</param>
-    /// <param name="heaveDampingNsPerM">A physical heave damper coefficient, N s/m, or null to derive it from the rig's
-    /// heave damping ratio.</param>
-    /// <param name="plateSpreadingFactor">Plate patch area / magnet annulus area, at least 1 (see
-    /// <see cref="PlatePatchThermalNode.UnderRotor"/>); default 1, the hottest (annulus-only) assumption.</param>
-    /// <exception cref="ArgumentNullException">A reference is null.</exception>
-    /// <exception cref="ArgumentException">A station lacks a motor or controller, the rig has no pack, or the load count
-    /// differs from the station count.</exception>
-    /// <exception cref="ArgumentOutOfRangeException">A value is out of its physical range.</exception>
-    public SimulationRig(Rig rig, IReadOnlyList<IRotorLoad> loads, double? heaveDampingNsPerM = null, double plateSpreadingFactor = 1.0)
+    private SimulationRig(RigModel model, SimulationRigOptions options, IReadOnlyDictionary<IRotorLoad, double>? hints)
     {
-        Rig = Preconditions.NotNull(rig, nameof(rig));
-        Preconditions.NotNull(loads, nameof(loads));
-        int n = rig.Stations.Count;
-        if (n == 0 || loads.Count != n)
+        Model = model;
+        Options = options;
+        var rig = model.Rig;
+        int n = model.Stations.Count;
+        if (n == 0)
         {
-            throw new ArgumentException($"one load per station is needed ({n} stations, {loads.Count} loads).", nameof(loads));
+            throw new ArgumentException("the rig has no stations: a transient run needs at least one.", nameof(model));
         }
-        Packs = rig.Packs ?? throw new ArgumentException("the rig has no pack: a transient run needs one.", nameof(rig));
         Preconditions.Positive(rig.LandedGapM, "landed gap");
         Preconditions.Positive(rig.DesignGapM, "design gap");
-        Preconditions.Positive(rig.Body.YawInertiaKgM2, "yaw inertia");
+        Preconditions.Positive(model.YawInertiaKgM2, "yaw inertia");
         Preconditions.NonNegative(rig.GearYawFrictionNm, "gear yaw friction");
+        double spreading = options.PlateSpreadingFactor ?? rig.PlateSpreadingFactor;
+        _stations = model.Stations.ToArray();
         _loads = new IRotorLoad[n];
         _drives = new Drivetrain[n];
         _windings = new WindingThermalNode?[n];
         _plates = new PlatePatchThermalNode[n];
         _peaks = new DragPeak[n];
-        var options = new DriveOptions(MaxDuty: rig.Limits.MaxDuty);
-        var peakCache = new Dictionary<IRotorLoad, DragPeak>(ReferenceEqualityComparer.Instance);
+        _peakHints = new Dictionary<IRotorLoad, double>(ReferenceEqualityComparer.Instance);
+        var found = new List<(IRotorLoad Load, double Gap, double PlateC, double MagnetC, double Top, DragPeak Peak)>();
         for (int j = 0; j < n; j++)
         {
-            Station s = rig.Stations[j];
-            if (s.Motor is null || s.Controller is null)
-            {
-                throw new ArgumentException($"station {j} has no {(s.Motor is null ? "motor" : "controller")} assigned.", nameof(rig));
-            }
+            var s = _stations[j];
             Preconditions.Positive(s.Rotor.InertiaKgM2, $"rotor inertia of station {j}");
-            _loads[j] = Preconditions.NotNull(loads[j], $"load of station {j}");
-            _drives[j] = new Drivetrain(s.Motor, s.Controller, options);
-            _windings[j] = WindingThermalNode.FromMotor(s.Motor);
-            _plates[j] = PlatePatchThermalNode.UnderRotor(s.Rotor, rig.Plate, rig.PlateConvectionWPerM2K, plateSpreadingFactor);
-            if (!peakCache.TryGetValue(_loads[j], out DragPeak? peak))
+            double landed = rig.LandedGapM + s.Conditions.GapOffsetM;
+            double design = rig.DesignGapM + s.Conditions.GapOffsetM;
+            if (!(landed > 0) || !(design > 0))
             {
-                peak = TotalTorquePeak(_loads[j], rig.LandedGapM, rig.PlateTemperatureC, rig.AmbientC, s.Rotor.MaxSpeedRadPerS);
-                peakCache[_loads[j]] = peak;
+                throw new ArgumentOutOfRangeException(nameof(model), s.Conditions.GapOffsetM,
+                    $"station {j}: the gap offset {s.Conditions.GapOffsetM * 1000:0.###} mm leaves no air gap on the gear or at the design gap.");
+            }
+            _loads[j] = s.Load;
+            _drives[j] = s.Drivetrain;
+            _windings[j] = WindingThermalNode.FromMotor(s.Drivetrain.Motor);
+            _plates[j] = PlatePatchThermalNode.UnderRotor(s.Rotor, rig.Plate, rig.PlateConvectionWPerM2K, spreading);
+            DragPeak? peak = null;
+            foreach (var f in found)
+            {
+                if (ReferenceEquals(f.Load, s.Load) && f.Gap == landed && f.PlateC == s.Conditions.PlateTempC
+                    && f.MagnetC == s.Conditions.RotorMagnetTempC && f.Top == s.Rotor.MaxSpeedRadPerS)
+                {
+                    peak = f.Peak;
+                    break;
+                }
+            }
+            if (peak is null)
+            {
+                double? hint = _peakHints.TryGetValue(s.Load, out double h) ? h : hints is not null && hints.TryGetValue(s.Load, out double g) ? g : null;
+                peak = TotalTorquePeak(s.Load, landed, s.Conditions.PlateTempC, s.Conditions.RotorMagnetTempC, s.Rotor.MaxSpeedRadPerS, hint);
+                found.Add((s.Load, landed, s.Conditions.PlateTempC, s.Conditions.RotorMagnetTempC, s.Rotor.MaxSpeedRadPerS, peak));
+                if (peak.Status is DragPeakStatus.Converged)
+                {
+                    _peakHints.TryAdd(s.Load, peak.SpeedRadPerS);
+                }
             }
             _peaks[j] = peak;
         }
-        MassKg = rig.TotalMassKg;
-        WeightN = MassKg * Units.StandardGravity;
-        Hover = SolveHover();
-        double damping = heaveDampingNsPerM ?? 2 * rig.Body.HeaveDampingRatio * Math.Sqrt(Math.Max(Hover.StiffnessNPerM, 0) * MassKg);
-        HeaveDampingNsPerM = Preconditions.NonNegative(damping, nameof(heaveDampingNsPerM));
+        Hover = HoverTrim.Solve(model, options.Hover);
+        _hoverSpeeds = new double[n];
+        double stiffness;
+        if (Hover.Balanced)
+        {
+            for (int j = 0; j < n; j++)
+            {
+                _hoverSpeeds[j] = Hover.Stations[j].SpeedRadPerS;
+            }
+            stiffness = Hover.HeaveStiffnessNPerM;
+        }
+        else
+        {
+            // No trim: every rotor at its rated speed; the stiffness there by a central difference in the rig gap.
+            double g = rig.DesignGapM, dg = 1e-4 * g, up = 0, down = 0;
+            for (int j = 0; j < n; j++)
+            {
+                _hoverSpeeds[j] = _stations[j].Rotor.MaxSpeedRadPerS;
+                up += _stations[j].LoadAt(_hoverSpeeds[j], g + dg).LiftN;
+                down += _stations[j].LoadAt(_hoverSpeeds[j], g - dg).LiftN;
+            }
+            stiffness = -(up - down) / (2 * dg);
+        }
+        double damping = options.HeaveDampingNsPerM ?? 2 * rig.Body.HeaveDampingRatio * Math.Sqrt(Math.Max(stiffness, 0) * model.MassKg);
+        HeaveDampingNsPerM = Preconditions.NonNegative(damping, nameof(options.HeaveDampingNsPerM));
     }
 
-    /// <summary>Prepares a rig, building one precomputed load table per distinct rotor design over the rig's range
-    /// (<see cref="LoadTableRange.ForRig"/>).</summary>
-    /// <param name="rig">The rig.</param>
-    /// <param name="loadOptions">Load model settings, or null for the defaults.</param>
-    /// <param name="heaveDampingNsPerM">A physical heave damper coefficient, N s/m, or null for the rig's damping ratio.</param>
-    /// <param name="plateSpreadingFactor">Plate patch area / magnet annulus area, at least 1; default 1.</param>
-    /// <exception cref="ArgumentNullException">The rig is null.</exception>
-    /// <exception cref="ArgumentException">See the constructor.</exception>
-    public static SimulationRig Build(Rig rig, LoadModelOptions? loadOptions = null, double? heaveDampingNsPerM = null, double plateSpreadingFactor = 1.0)
+    /// <summary>Prepares a model for time simulations.</summary>
+    /// <param name="model">The rig model (any variant); its stations, mass, pack bank and state of charge are used as they
+    /// are.</param>
+    /// <param name="options">Settings; <see cref="SimulationRigOptions.Default"/> when null.</param>
+    /// <exception cref="ArgumentNullException">The model is null.</exception>
+    /// <exception cref="ArgumentException">The model has no stations.</exception>
+    /// <exception cref="ArgumentOutOfRangeException">A gap, inertia or friction is out of its physical range, or a gap
+    /// offset closes a station's gap.</exception>
+    public static SimulationRig FromModel(RigModel model, SimulationRigOptions? options = null)
     {
-        Preconditions.NotNull(rig, nameof(rig));
-        var tables = new Dictionary<string, IRotorLoad>(StringComparer.Ordinal);
-        var loads = new IRotorLoad[rig.Stations.Count];
-        for (int j = 0; j < loads.Length; j++)
+        Preconditions.NotNull(model, nameof(model));
+        options ??= SimulationRigOptions.Default;
+        if (options.PlateSpreadingFactor is { } f)
         {
-            var rotor = rig.Stations[j].Rotor;
-            if (!tables.TryGetValue(rotor.Id, out IRotorLoad? load))
-            {
-                load = RotorLoadTable.Build(rotor, rig.Plate, LoadTableRange.ForRig(rig, rotor), loadOptions);
-                tables[rotor.Id] = load;
-            }
-            loads[j] = load;
+            Preconditions.InRange(f, 1.0, 100.0, nameof(options.PlateSpreadingFactor));
         }
-        return new SimulationRig(rig, loads, heaveDampingNsPerM, plateSpreadingFactor);
+        return new SimulationRig(model, options, null);
     }
+
+    /// <summary>Builds the rig model (<see cref="RigModel.Build(Rig, RigModelOptions?)"/>: one load table per distinct
+    /// rotor design) and prepares it: the one-line convenience for callers that hold a <see cref="Craft.Rig"/>.</summary>
+    /// <param name="rig">A rig whose every station has a motor and a controller, and which has a pack.</param>
+    /// <param name="modelOptions">Model settings (state of charge, load model), or null for the defaults.</param>
+    /// <param name="options">Simulation settings, or null for the defaults.</param>
+    /// <exception cref="ArgumentException">A part is missing (see <see cref="RigModel.MissingParts"/>).</exception>
+    public static SimulationRig Build(Rig rig, RigModelOptions? modelOptions = null, SimulationRigOptions? options = null)
+        => FromModel(RigModel.Build(Preconditions.NotNull(rig, nameof(rig)), modelOptions), options);
+
+    /// <summary>Prepares a variant of the model with this rig's options, starting each drag-peak search next to the peak
+    /// this rig found for the same load (a tolerance sample, a candidate drivetrain).</summary>
+    /// <param name="model">The variant; normally derived from <see cref="Model"/>.</param>
+    public SimulationRig With(RigModel model) => new(Preconditions.NotNull(model, nameof(model)), Options, _peakHints);
+
+    /// <summary>The rig model this was prepared from.</summary>
+    public RigModel Model { get; }
+
+    /// <summary>The settings used.</summary>
+    public SimulationRigOptions Options { get; }
 
     /// <summary>The rig.</summary>
-    public Rig Rig { get; }
+    public Rig Rig => Model.Rig;
 
     /// <summary>Number of rotor stations.</summary>
-    public int StationCount => _loads.Length;
+    public int StationCount => _stations.Length;
+
+    /// <summary>The model's stations (load, drivetrain, conditions).</summary>
+    public IReadOnlyList<CraftStation> Stations => _stations;
 
     /// <summary>Load per station.</summary>
     public IReadOnlyList<IRotorLoad> Loads => _loads;
@@ -129,128 +188,94 @@ public sealed class SimulationRig
     /// <summary>Plate patch thermal node per station.</summary>
     public IReadOnlyList<PlatePatchThermalNode> PlatePatches => _plates;
 
-    /// <summary>Peak of the total load torque (eddy + windage + bearing) at the landed gap per station, at the rig's plate
-    /// temperature with the magnets at ambient: the torque the motor must pass during spin-up.</summary>
+    /// <summary>Plate patch area / magnet annulus area used for the plate nodes (&gt;= 1).</summary>
+    public double PlateSpreadingFactor => Options.PlateSpreadingFactor ?? Rig.PlateSpreadingFactor;
+
+    /// <summary>Peak of the total load torque (eddy + windage + bearing) per station at its landed gap (rig landed gap +
+    /// offset), plate temperature and rotor-magnet temperature: the torque its motor must pass during spin-up.</summary>
     public IReadOnlyList<DragPeak> LandedDragPeaks => _peaks;
 
     /// <summary>The pack bank.</summary>
-    public PackBank Packs { get; }
+    public PackBank Packs => Model.Packs;
+
+    /// <summary>The model's pack state of charge, 0..1 (the default start of every run).</summary>
+    public double SocFraction => Model.SocFraction;
 
     /// <summary>Total craft mass, kg (body, payload, rotors, drivetrains, packs).</summary>
-    public double MassKg { get; }
+    public double MassKg => Model.MassKg;
 
     /// <summary>Craft weight, N.</summary>
-    public double WeightN { get; }
+    public double WeightN => Model.WeightN;
 
     /// <summary>Heave damping coefficient, N s/m.</summary>
     public double HeaveDampingNsPerM { get; }
 
-    /// <summary>Common-speed hover at the design gap, rig plate temperature, magnets at ambient.</summary>
-    public HoverEstimate Hover { get; }
+    /// <summary>The trimmed hover at the design gap (<see cref="HoverTrim.Solve(RigModel, HoverOptions?)"/> of the
+    /// model).</summary>
+    public HoverResult Hover { get; }
 
-    /// <summary>Total lift of all rotors at one common speed, N.</summary>
-    /// <param name="speedRadPerS">Common speed, rad/s.</param>
-    /// <param name="gapM">Air gap, m.</param>
-    /// <param name="plateTempsC">Plate patch temperature per station, C, or null for the rig's plate temperature.</param>
-    public double TotalLiftN(double speedRadPerS, double gapM, IReadOnlyList<double>? plateTempsC = null)
-    {
-        double lift = 0;
-        for (int j = 0; j < _loads.Length; j++)
-        {
-            double tp = plateTempsC?[j] ?? Rig.PlateTemperatureC;
-            lift += _loads[j].Evaluate(speedRadPerS, gapM, tp, Rig.AmbientC).LiftN;
-        }
-        return lift;
-    }
+    /// <summary>True when the trimmed hover balances the craft.</summary>
+    public bool HoverExists => Hover.Balanced;
 
-    /// <summary>The common speed at which the rotors carry the weight at the design gap, rad/s, or null when the rated
-    /// speed of the slowest-rated rotor is not enough.</summary>
-    /// <param name="plateTempsC">Plate patch temperature per station, C, or null for the rig's plate temperature.</param>
-    /// <param name="iterations">Lift evaluations made.</param>
-    public double? CommonHoverSpeed(IReadOnlyList<double>? plateTempsC, out int iterations)
-    {
-        int count = 0;
-        double top = MaxCommonSpeed();
-        double F(double w)
-        {
-            count++;
-            return TotalLiftN(w, Rig.DesignGapM, plateTempsC) - WeightN;
-        }
-        double? result = null;
-        if (F(top) >= 0 && Brent.TryFindRoot(F, 1e-3 * top, top, 1e-10 * top, 200, out double root))
-        {
-            result = root;
-        }
-        iterations = count;
-        return result;
-    }
+    /// <summary>Per station: the trimmed hover speed, rad/s, or the rotor's rated speed when no trim exists (a stop run
+    /// starts here).</summary>
+    public IReadOnlyList<double> HoverSpeedsRadPerS => _hoverSpeeds;
 
-    /// <summary>The throttle per station that holds the common hover: the hover speed (speed hold) or the duty the
-    /// controllers settle at (duty), from a bus solve with each motor carrying its rotor's load torque at that speed.</summary>
-    /// <remarks>Duties depend on the pack's state of charge (its voltage) and are clamped to the rig's max duty; the load is
-    /// evaluated at the rig's plate temperature with everything at ambient.</remarks>
+    /// <summary>The throttle per station that holds the trimmed hover: the trimmed speeds (speed hold) or the duties the
+    /// controllers need for them on the shared bus at a state of charge (duty), clamped to the rig's max duty.</summary>
+    /// <remarks>Duties come from <see cref="HoverTrim.Solve(RigModel, HoverOptions?)"/> on the model at that state of
+    /// charge (speeds do not depend on it). Without a trim: every rotor's rated speed, or the max duty.</remarks>
     /// <param name="mode">Controller mode.</param>
-    /// <param name="socFraction">Pack state of charge, 0..1.</param>
+    /// <param name="socFraction">Pack state of charge, 0..1, or null for the model's.</param>
     /// <exception cref="ArgumentOutOfRangeException">The state of charge is outside [0, 1].</exception>
-    public IReadOnlyList<double> HoverThrottle(ControllerMode mode, double socFraction)
+    public IReadOnlyList<double> HoverThrottle(ControllerMode mode, double? socFraction = null)
     {
-        Preconditions.InRange(socFraction, 0, 1, nameof(socFraction));
-        int n = _loads.Length;
-        var targets = new double[n];
-        double w = Hover.SpeedRadPerS;
+        double soc = Preconditions.InRange(socFraction ?? SocFraction, 0, 1, nameof(socFraction));
+        int n = _stations.Length;
         if (mode == ControllerMode.SpeedHold)
         {
-            Array.Fill(targets, w);
-            return targets;
+            return _hoverSpeeds.ToArray();
         }
-        var inputs = new DriveInput[n];
-        var points = new DrivePoint[n];
-        double t = Rig.AmbientC;
+        var hover = soc == SocFraction ? Hover : HoverTrim.Solve(Model.WithSoc(soc), Options.Hover);
+        var targets = new double[n];
+        double max = Rig.Limits.MaxDuty;
         for (int j = 0; j < n; j++)
         {
-            double torque = _loads[j].Evaluate(w, Rig.DesignGapM, Rig.PlateTemperatureC, t).TotalTorqueNm;
-            double current = _drives[j].Motor.CurrentForTorqueA(torque, _drives[j].FluxFactorAt(t));
-            inputs[j] = new DriveInput(_drives[j], DriveCommand.MotorCurrent(current), w, t, t, false);
-        }
-        DriveBus.Solve(BusSource.FromPack(Packs, socFraction), inputs, points);
-        for (int j = 0; j < n; j++)
-        {
-            targets[j] = Math.Clamp(points[j].Duty, 0.0, Rig.Limits.MaxDuty);
+            targets[j] = hover.Balanced ? Math.Clamp(hover.Stations[j].Duty, 0.0, max) : max;
         }
         return targets;
     }
 
-    private double MaxCommonSpeed()
+    /// <summary>Station j's air gap on the landing gear: rig landed gap + its offset, m.</summary>
+    /// <param name="station">Station index, 0-based.</param>
+    public double LandedGapM(int station) => Rig.LandedGapM + _stations[station].Conditions.GapOffsetM;
+
+    // The peak of the total shaft torque at a gap. With a hint (a peak of the same load elsewhere), a short scan of a
+    // factor of 3 either side of it; otherwise (or when that scan does not bracket an interior peak) the full search:
+    // the eddy peak first, then the total below 3x the eddy peak so that windage rising at top speed is not taken for it.
+    private static DragPeak TotalTorquePeak(IRotorLoad load, double gapM, double plateTempC, double magnetTempC, double maxSpeedRadPerS, double? hint)
     {
-        double top = double.MaxValue;
-        foreach (var s in Rig.Stations)
+        var total = new TotalTorqueView(load);
+        if (hint is { } h && h > 0)
         {
-            top = Math.Min(top, s.Rotor.MaxSpeedRadPerS);
+            double top = Math.Min(maxSpeedRadPerS, HintSpan * h);
+            double fraction = h / HintSpan / top;
+            if (fraction <= 0.5)
+            {
+                var near = DragPeakFinder.Find(total, gapM, plateTempC, magnetTempC, top, HintedScan with { LowestSpeedFraction = fraction });
+                if (near.Status is DragPeakStatus.Converged && near.SpeedRadPerS > 1.2 * h / HintSpan && near.SpeedRadPerS < top / 1.2)
+                {
+                    return near;
+                }
+            }
         }
-        return top;
-    }
-
-    private HoverEstimate SolveHover()
-    {
-        double? speed = CommonHoverSpeed(null, out int iterations);
-        double w = speed ?? MaxCommonSpeed();
-        double g = Rig.DesignGapM, dg = 1e-3 * g;
-        // Central difference of the total lift in the gap (the load tables are smooth cubic Hermite surfaces).
-        double stiffness = -(TotalLiftN(w, g + dg) - TotalLiftN(w, g - dg)) / (2 * dg);
-        return new HoverEstimate(speed is not null, w, TotalLiftN(w, g), WeightN, stiffness, iterations);
-    }
-
-    // The peak of the total shaft torque at the landed gap, searched below 3x the eddy peak so that windage rising at
-    // top speed is not taken for the drag peak.
-    private static DragPeak TotalTorquePeak(IRotorLoad load, double gapM, double plateTempC, double magnetTempC, double maxSpeedRadPerS)
-    {
         DragPeak eddy = DragPeakFinder.Find(load, gapM, plateTempC, magnetTempC, maxSpeedRadPerS);
         if (eddy.Status is DragPeakStatus.NoDrag)
         {
             return eddy;
         }
-        double top = Math.Min(maxSpeedRadPerS, 3 * eddy.SpeedRadPerS);
-        return DragPeakFinder.Find(new TotalTorqueView(load), gapM, plateTempC, magnetTempC, top);
+        double limit = Math.Min(maxSpeedRadPerS, 3 * eddy.SpeedRadPerS);
+        return DragPeakFinder.Find(total, gapM, plateTempC, magnetTempC, limit);
     }
 
     // Presents a load's total torque as its eddy torque, so the drag-peak finder locates the peak of the total.

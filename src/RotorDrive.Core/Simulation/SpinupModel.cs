@@ -24,6 +24,11 @@ internal sealed class SpinupModel : IOdeEvents, IOdeObserver
     private readonly DrivePoint[] _points;
     private readonly LoadPoint[] _loadPoints;
     private readonly double[] _scratch;
+    private readonly double[] _gapOffsetM;
+    private readonly double[] _rotorMagnetC;
+    private readonly double[] _windingStartC;
+    private readonly double[] _motorMagnetStartC;
+    private readonly double[] _plateStartC;
     private readonly double _landedMm;
     private readonly double _socStart;
     private readonly double _chargeCapacityC;
@@ -45,10 +50,21 @@ internal sealed class SpinupModel : IOdeEvents, IOdeObserver
         _sign = new int[_n];
         _loads = rig.Loads.ToArray();
         _drives = rig.Drivetrains.ToArray();
+        _gapOffsetM = new double[_n];
+        _rotorMagnetC = new double[_n];
+        _windingStartC = new double[_n];
+        _motorMagnetStartC = new double[_n];
+        _plateStartC = new double[_n];
         for (int j = 0; j < _n; j++)
         {
-            _inertia[j] = rig.Rig.Stations[j].Rotor.InertiaKgM2;
-            _sign[j] = rig.Rig.Stations[j].Spin.Sign();
+            var s = rig.Stations[j];
+            _inertia[j] = s.Rotor.InertiaKgM2;
+            _sign[j] = s.Spin.Sign();
+            _gapOffsetM[j] = s.Conditions.GapOffsetM;
+            _rotorMagnetC[j] = s.Conditions.RotorMagnetTempC;
+            _windingStartC[j] = s.Conditions.WindingTempC;
+            _motorMagnetStartC[j] = s.Conditions.MotorMagnetTempC;
+            _plateStartC[j] = s.Conditions.PlateTempC;
         }
         _inputs = new DriveInput[_n];
         _points = new DrivePoint[_n];
@@ -96,6 +112,10 @@ internal sealed class SpinupModel : IOdeEvents, IOdeObserver
 
     public double SocAt(ReadOnlySpan<double> y) => _socStart - y[Charge] / _chargeCapacityC;
 
+    /// <summary>Motor magnet temperature of station j at winding temperature tw: its start value plus the winding's rise
+    /// (conservative: hot magnets give less torque per amp).</summary>
+    public double MotorMagnetC(int j, double windingC) => _motorMagnetStartC[j] + (windingC - _windingStartC[j]);
+
     public double KineticEnergyJ(ReadOnlySpan<double> y)
     {
         double e = 0;
@@ -112,9 +132,9 @@ internal sealed class SpinupModel : IOdeEvents, IOdeObserver
         var rig = _rig.Rig;
         for (int j = 0; j < _n; j++)
         {
-            y[j] = hovering ? _rig.Hover.SpeedRadPerS : 0.0;
-            y[Winding + j] = rig.AmbientC;
-            y[PlateTemp + j] = rig.PlateTemperatureC;
+            y[j] = hovering ? _rig.HoverSpeedsRadPerS[j] : 0.0;
+            y[Winding + j] = _windingStartC[j];
+            y[PlateTemp + j] = _plateStartC[j];
         }
         y[Gap] = hovering ? rig.DesignGapM * 1000.0 : _landedMm;
         Grounded = !hovering;
@@ -134,7 +154,8 @@ internal sealed class SpinupModel : IOdeEvents, IOdeObserver
         {
             double w = Math.Max(y[j], 0.0);
             double tw = y[Winding + j];
-            var load = _loads[j].Evaluate(w, gapM, y[PlateTemp + j], rig.AmbientC);
+            double tm = MotorMagnetC(j, tw);
+            var load = _loads[j].Evaluate(w, Math.Max(gapM + _gapOffsetM[j], 1e-6), y[PlateTemp + j], _rotorMagnetC[j]);
             _loadPoints[j] = load;
             lift += load.LiftN;
             DriveCommand command;
@@ -146,13 +167,12 @@ internal sealed class SpinupModel : IOdeEvents, IOdeObserver
             else
             {
                 var drive = _drives[j];
-                double flux = drive.FluxFactorAt(tw);
+                double flux = drive.FluxFactorAt(tm);
                 double torque = load.TotalTorqueNm + _inertia[j] * (_profile.RateAt(j, t) + _options.HoldBandwidthRadPerS * (target - w));
                 double current = drive.Motor.CurrentForTorqueA(torque, flux);
                 command = new DriveCommand(DriveCommandKind.MotorCurrent, current);
             }
-            // The motor's magnets are taken at the winding temperature (conservative: hot magnets give less torque per amp).
-            _inputs[j] = new DriveInput(_drives[j], command, w, tw, tw, _profile.Braking);
+            _inputs[j] = new DriveInput(_drives[j], command, w, tw, tm, _profile.Braking);
         }
         _lift = lift;
         _bus = DriveBus.Solve(source, _inputs, _points, _voltageHint, DriveBusOptions.Default);
@@ -196,7 +216,7 @@ internal sealed class SpinupModel : IOdeEvents, IOdeObserver
         double packCurrent = _bus.PackCurrentA;
         dy[Charge] = packCurrent;
 
-        double yawInertia = rig.Body.YawInertiaKgM2;
+        double yawInertia = _rig.Model.YawInertiaKgM2;
         double rate = y[YawRate];
         if (Grounded)
         {

@@ -18,6 +18,8 @@ namespace RotorDrive.Core.Simulation;
 /// <param name="StallCurrentMargin">Margin on the current that just balances the drag peak, for the suggested current
 /// limit; default 0.1 (10 %, so the excess torque accelerates the rotor through the peak; common practice, no source).</param>
 /// <param name="RecordTrace">True (default) returns the time traces; false keeps only the findings (Monte Carlo).</param>
+/// <param name="StopAtLiftoff">True ends the run at lift-off (status <see cref="OdeStatus.EventHit"/>, end time = lift-off
+/// time): the spin-up a stress study needs before the trim takes over; default false.</param>
 public sealed record SpinupOptions(
     double RelativeTolerance = 1e-6,
     double AbsoluteTolerance = 1e-6,
@@ -28,7 +30,8 @@ public sealed record SpinupOptions(
     double GapSettleM = 0.25e-3,
     double SettleWindowS = 0.5,
     double StallCurrentMargin = 0.1,
-    bool RecordTrace = true)
+    bool RecordTrace = true,
+    bool StopAtLiftoff = false)
 {
     /// <summary>The defaults.</summary>
     public static SpinupOptions Default { get; } = new();

@@ -42,10 +42,10 @@ public static class SpinupSimulator
         options ??= SpinupOptions.Default;
         request.Profile.Validate(rig.StationCount);
         Preconditions.Positive(request.DurationS, nameof(request.DurationS));
-        Preconditions.InRange(request.SocFraction, 0, 1, nameof(request.SocFraction));
+        double soc = Preconditions.InRange(request.SocFraction ?? rig.SocFraction, 0, 1, nameof(request.SocFraction));
         Preconditions.Positive(options.OutputIntervalS, nameof(options.OutputIntervalS));
 
-        var model = new SpinupModel(rig, request.Profile, options, request.SocFraction);
+        var model = new SpinupModel(rig, request.Profile, options, soc);
         var baseOptions = new DormandPrince45Options
         {
             RelativeTolerance = options.RelativeTolerance,
@@ -82,6 +82,11 @@ public static class SpinupSimulator
             {
                 model.Grounded = false;
                 liftoff ??= t;
+                if (options.StopAtLiftoff)
+                {
+                    status = OdeStatus.EventHit;
+                    break;
+                }
             }
             else
             {
@@ -112,7 +117,7 @@ public static class SpinupSimulator
             var drive = rig.Drivetrains[j];
             var peak = rig.LandedDragPeaks[j];
             double tw = y[model.Winding + j];
-            double passing = drive.Motor.CurrentForTorqueA(peak.TorqueNm, drive.FluxFactorAt(tw));
+            double passing = drive.Motor.CurrentForTorqueA(peak.TorqueNm, drive.FluxFactorAt(model.MotorMagnetC(j, tw)));
             bool stalled = y[j] < peak.SpeedRadPerS && points[j].Regime == DriveRegime.CurrentLimit;
             stations[j] = new StationSpinup(
                 j,

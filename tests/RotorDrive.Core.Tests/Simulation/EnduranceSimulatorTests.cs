@@ -1,3 +1,4 @@
+using RotorDrive.Core.Craft;
 using RotorDrive.Core.Magnetics;
 using RotorDrive.Core.Simulation;
 using Xunit;
@@ -56,5 +57,26 @@ public sealed class EnduranceSimulatorTests
         var a = EnduranceSimulator.Run(sim, 1.0, EnduranceOptions.Default with { StepS = 5, RecordTrace = false });
         var b = EnduranceSimulator.Run(sim, 1.0, EnduranceOptions.Default with { StepS = 2.5, RecordTrace = false });
         RelativeAssert.Equal(b.RuntimeS, a.RuntimeS, 1e-3, what: "runtime, s");
+    }
+
+    // The endurance holds the trimmed hover: at t = 0 its operating point is HoverTrim's on the same model (speeds, motor
+    // currents and pack current; the same solve, so to round-off), here with an off-centre payload so the speeds differ.
+    [Fact]
+    public void StartOperatingPoint_EqualsHoverTrimOfTheModel()
+    {
+        var rig = SimulationRigs.Hovering();
+        rig = rig with { Body = rig.Body with { CgXM = 0.02 } };
+        var model = SimulationRigs.Model(rig).WithSoc(0.9);
+        var trim = HoverTrim.Solve(model);
+        var result = EnduranceSimulator.Run(SimulationRig.FromModel(model), null, EnduranceOptions.Default with { MaxDurationS = 10 });
+        Assert.True(trim.Stations[0].SpeedRadPerS > trim.Stations[2].SpeedRadPerS, "the station near the centre of gravity spins faster");
+        for (int j = 0; j < 4; j++)
+        {
+            RelativeAssert.Equal(trim.Stations[j].SpeedRadPerS, result.StartHover.Stations[j].SpeedRadPerS, 1e-9, what: $"speed {j}");
+            RelativeAssert.Equal(trim.Stations[j].MotorCurrentA, result.StartHover.Stations[j].MotorCurrentA, 1e-9, what: $"current {j}");
+            RelativeAssert.Equal(trim.Stations[j].SpeedRadPerS, result.Trace!.SpeedRadPerS[j][0], 1e-9, what: $"traced speed {j}");
+        }
+        RelativeAssert.Equal(trim.PackCurrentA, result.StartPackCurrentA, 1e-9, what: "pack current");
+        RelativeAssert.Equal(0.9, result.Trace!.SocFraction[0], 1e-12, what: "start state of charge from the model");
     }
 }

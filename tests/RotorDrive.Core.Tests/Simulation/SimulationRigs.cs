@@ -69,7 +69,11 @@ internal static class SimulationRigs
 
     /// <summary>A prepared rig on the shared copper table (or on the given load).</summary>
     public static SimulationRig Prepared(Rig rig, IRotorLoad? load = null)
-        => new(rig, Enumerable.Repeat(load ?? CopperTable.Value, rig.Stations.Count).ToArray());
+        => SimulationRig.FromModel(Model(rig, load));
+
+    /// <summary>The rig model on the shared copper table (or on the given load).</summary>
+    public static RigModel Model(Rig rig, IRotorLoad? load = null)
+        => RigModel.Build(rig, Enumerable.Repeat(load ?? CopperTable.Value, rig.Stations.Count).ToArray());
 
     /// <summary>The hover rig of the tests: 100 kg body on four rotors, Kv 60 motors, 400 A controllers.</summary>
     public static Rig Hovering(double burstCurrentA = 400) => Rig(

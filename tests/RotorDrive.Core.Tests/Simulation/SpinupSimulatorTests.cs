@@ -120,7 +120,7 @@ public sealed class SpinupSimulatorTests
     public void PlatePatch_HeatsAtPOverMc_AtTheStartOfAHover()
     {
         var rig = SimulationRigs.Prepared(SimulationRigs.Hovering());
-        double w = rig.Hover.SpeedRadPerS;
+        double w = rig.HoverSpeedsRadPerS[0];
         var profile = new ThrottleProfile(ControllerMode.SpeedHold, [w, w, w, w], [w, w, w, w], 0);
         var result = SpinupSimulator.Run(rig, new SpinupRequest(profile, 0.02, StartHovering: true), SpinupOptions.Default with { OutputIntervalS = 0.001 });
         var trace = result.Trace!;
