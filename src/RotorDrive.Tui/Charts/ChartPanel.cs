@@ -1,13 +1,15 @@
+using System.Collections.ObjectModel;
 using System.Globalization;
 using Terminal.Gui.ViewBase;
 using Terminal.Gui.Views;
 using RotorDrive.Tui.Session;
+using RotorDrive.Tui.Text;
 
 namespace RotorDrive.Tui.Charts;
 
 /// <summary>The layout every chart sheet shares: a row of labelled what-if inputs with their problems in words beside
-/// them, a readout of a few lines, and a chart below that fills the rest; a chart may have several pages, cycled with
-/// <see cref="NextPage"/>.</summary>
+/// them, a readout of a few lines, and a chart below that fills the rest; a chart may have several pages, and after
+/// them a page of figures in text (scrollable), cycled with <see cref="NextPage"/>.</summary>
 /// <remarks>Sheets add their inputs with <see cref="AddInput"/>, listen to <see cref="InputsChanged"/> (not raised while
 /// a sheet sets a field itself with <see cref="SetQuietly"/>), read the inputs with <see cref="ReadNumber"/> and
 /// <see cref="ReadStation"/>, and show results with <see cref="Readout"/> and <see cref="ShowPages"/>.</remarks>
@@ -17,7 +19,11 @@ public sealed class ChartPanel : View
     private readonly Label _problems;
     private readonly Label _readout;
     private readonly ChartView _chart;
+    private readonly ListView _details;
+    private readonly ObservableCollection<string> _detailLines = [];
     private IReadOnlyList<ChartData> _pages = [];
+    private string? _detailText;
+    private int _wrappedAt = -1;
     private int _page;
     private int _nextX;
     private bool _quiet;
@@ -32,7 +38,10 @@ public sealed class ChartPanel : View
         _problems = new Label { X = 0, Y = 0, Width = Dim.Fill(), Height = 1, Text = "" };
         _readout = new Label { X = 0, Y = 1, Width = Dim.Fill(), Height = readoutLines, Text = "" };
         _chart = new ChartView { X = 0, Y = 1 + readoutLines, Width = Dim.Fill(), Height = Dim.Fill() };
-        Add(_problems, _readout, _chart);
+        _details = new ListView { X = 0, Y = 1 + readoutLines, Width = Dim.Fill(), Height = Dim.Fill(), Visible = false };
+        _details.SetSource(_detailLines);
+        _details.FrameChanged += (_, _) => WrapDetails();
+        Add(_problems, _readout, _chart, _details);
     }
 
     /// <summary>Raised when the user changes an input.</summary>
@@ -54,8 +63,16 @@ public sealed class ChartPanel : View
     /// <summary>The chart pages on show.</summary>
     public IReadOnlyList<ChartData> Pages => _pages;
 
-    /// <summary>The page on show, 0-based.</summary>
+    /// <summary>The page on show, 0-based (the figures page comes after the charts).</summary>
     public int PageIndex => _page;
+
+    /// <summary>Whether the figures page is on show.</summary>
+    public bool ShowingDetails => _detailText is not null && _page == _pages.Count;
+
+    /// <summary>The figures page's text ("" when there is none).</summary>
+    public string Details => _detailText ?? "";
+
+    private int PageCount => _pages.Count + (_detailText is null ? 0 : 1);
 
     /// <summary>Adds a labelled input to the row, after the ones already there.</summary>
     /// <param name="label">The label, with unit ("gap mm").</param>
@@ -103,10 +120,14 @@ public sealed class ChartPanel : View
     }
 
     /// <summary>Shows chart pages, keeping the page on show when it still exists; null or empty clears the chart.</summary>
-    public void ShowPages(IReadOnlyList<ChartData>? pages)
+    /// <param name="pages">The charts.</param>
+    /// <param name="details">Text for a figures page after the charts, or null for none.</param>
+    public void ShowPages(IReadOnlyList<ChartData>? pages, string? details = null)
     {
         _pages = pages ?? [];
-        if (_page >= _pages.Count)
+        _detailText = details;
+        _wrappedAt = -1;
+        if (_page >= PageCount)
         {
             _page = 0;
         }
@@ -119,9 +140,9 @@ public sealed class ChartPanel : View
     /// <summary>Turns to the next page (after the last, the first).</summary>
     public void NextPage()
     {
-        if (_pages.Count > 0)
+        if (PageCount > 0)
         {
-            _page = (_page + 1) % _pages.Count;
+            _page = (_page + 1) % PageCount;
         }
         ShowPage();
     }
@@ -165,13 +186,37 @@ public sealed class ChartPanel : View
 
     private void ShowPage()
     {
+        bool details = ShowingDetails;
+        _details.Visible = details;
+        _chart.Visible = !details;
+        if (details)
+        {
+            WrapDetails();
+            return;
+        }
         if (_pages.Count == 0)
         {
             _chart.Show(null);
             return;
         }
-        string caption = _pages.Count > 1 ? $"[{_page + 1}/{_pages.Count}]" : "";
+        string caption = PageCount > 1 ? $"[{_page + 1}/{PageCount}]" : "";
         _chart.Show(_pages[_page], caption);
+    }
+
+    private void WrapDetails()
+    {
+        int width = _details.Viewport.Width > 0 ? _details.Viewport.Width : 60;
+        if (width == _wrappedAt || _detailText is null)
+        {
+            return;
+        }
+        _wrappedAt = width;
+        _detailLines.Clear();
+        _detailLines.Add($"[{PageCount}/{PageCount}] FIGURES (cursor keys scroll)");
+        foreach (string line in Wrap.Lines(_detailText, width - 1))
+        {
+            _detailLines.Add(line);
+        }
     }
 
     private static string F(double v) => v.ToString("0.###", CultureInfo.InvariantCulture);

@@ -110,7 +110,7 @@ public sealed class HoverYawSheet : Sheet
         else if (figures.Missing.Count > 0)
         {
             _verdict.Text = "! The hover needs a motor and controller on every station and a pack:";
-            SheetText = string.Join("\n", figures.Missing.Select(m => "  " + m)) + "\n\n" + CautionText(Cautions.All);
+            SheetText = string.Join("\n", figures.Missing.Select(m => "  " + m)) + "\n\n" + CautionText.Compose(Cautions.All);
         }
         else
         {
@@ -214,7 +214,7 @@ public sealed class HoverYawSheet : Sheet
             sb.AppendLine("LIMITS THAT FAIL");
             foreach (var finding in review.Findings)
             {
-                sb.AppendLine($"  {Over} {Renumber(finding)}");
+                sb.AppendLine($"  {Over} {StationNumbers.Renumber(finding.Message, finding.Station)}");
             }
         }
         sb.AppendLine();
@@ -256,31 +256,8 @@ public sealed class HoverYawSheet : Sheet
         }
         sb.AppendLine("  " + safety.MagnetNote);
         sb.AppendLine();
-        sb.Append(CautionText(safety.Cautions));
+        sb.Append(CautionText.Compose(safety.Cautions));
         return sb.ToString();
-    }
-
-    /// <summary>The cautions, warnings first, each with its level in words.</summary>
-    internal static string CautionText(IReadOnlyList<Caution> cautions)
-    {
-        var sb = new StringBuilder();
-        sb.AppendLine("CAUTIONS");
-        foreach (var c in cautions)
-        {
-            string level = c.Level == CautionLevel.Warning ? "WARNING" : "caution";
-            sb.AppendLine($"  {level} {c.Title}: {c.Text}{(c.Reason is null ? "" : " (" + c.Reason + ")")}");
-        }
-        return sb.ToString();
-    }
-
-    // Core numbers stations from 0; the workbench from 1 (as the sketch and the station fields do).
-    private static string Renumber(HoverFinding finding)
-    {
-        if (finding.Station is { } i && finding.Message.StartsWith($"station {i}: ", StringComparison.Ordinal))
-        {
-            return $"station {i + 1}: " + finding.Message[$"station {i}: ".Length..];
-        }
-        return finding.Message;
     }
 
     private static string ShortName(DriveLimit limit) => limit switch

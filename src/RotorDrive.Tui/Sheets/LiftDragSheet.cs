@@ -160,7 +160,7 @@ public sealed class LiftDragSheet : Sheet
             new ChartData("speed, rpm", "lift, N",
             [
                 new ChartLine("lift", '*', r.Rows.Select(x => (x.SpeedRpm, x.LiftN)).ToList()),
-                new ChartLine("weight share per station", '-', [(rpm[0], share), (rpm[^1], share)]),
+                ChartLine.Level("weight share per station", '-', rpm[0], rpm[^1], share),
             ]),
         ]);
     }

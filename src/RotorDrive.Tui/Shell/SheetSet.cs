@@ -13,6 +13,8 @@ public static class SheetSet
         new LiftDragSheet(context),
         new RunningPointsSheet(context),
         new HoverYawSheet(context),
+        new SpinupSheet(context),
+        new EnduranceSheet(context),
         new PartsSheet(context),
         new HelpSheet(context),
     ];
