@@ -5,7 +5,9 @@ namespace RotorDrive.Tui.Charts;
 /// <param name="Glyph">The character the curve or marks are drawn with.</param>
 /// <param name="Points">The points (x, y) in the chart's units; non-finite points are left out.</param>
 /// <param name="Joined">True to join the points with a line; false for marks only.</param>
-public sealed record ChartLine(string Name, char Glyph, IReadOnlyList<(double X, double Y)> Points, bool Joined = true)
+/// <param name="Group">Lines of one family (every station's curve) that the legend names once, with the range of their
+/// characters ("1..6 stations"); null for a line named on its own.</param>
+public sealed record ChartLine(string Name, char Glyph, IReadOnlyList<(double X, double Y)> Points, bool Joined = true, string? Group = null)
 {
     /// <summary>Most points a time trace keeps: a terminal chart has far fewer columns, and fewer points draw faster.</summary>
     public const int MaxTracePoints = 240;
@@ -33,6 +35,21 @@ public sealed record ChartLine(string Name, char Glyph, IReadOnlyList<(double X,
             points.Add((x[n - 1], scale is null ? y[n - 1] : scale(y[n - 1])));
         }
         return new ChartLine(name, glyph, points);
+    }
+
+    /// <summary>One trace per station, each drawn with the station's number (<see cref="StationGlyph"/>) and named once in
+    /// the legend as a group.</summary>
+    /// <param name="group">The legend's name for the family ("stations").</param>
+    /// <param name="x">The abscissae (times).</param>
+    /// <param name="perStation">The values, [station][sample].</param>
+    /// <param name="scale">Applied to each value, or null.</param>
+    public static IEnumerable<ChartLine> PerStation(string group, IReadOnlyList<double> x, IReadOnlyList<IReadOnlyList<double>> perStation, Func<double, double>? scale = null)
+    {
+        ArgumentNullException.ThrowIfNull(perStation);
+        for (int i = 0; i < perStation.Count; i++)
+        {
+            yield return Trace("station " + (i + 1), StationGlyph(i), x, perStation[i], scale) with { Group = group };
+        }
     }
 
     /// <summary>A horizontal line at one value (a limit or a target) from <paramref name="x0"/> to <paramref name="x1"/>.</summary>

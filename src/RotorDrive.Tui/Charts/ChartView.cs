@@ -46,13 +46,28 @@ public sealed class ChartView : View
     {
         ArgumentNullException.ThrowIfNull(data);
         var sb = new StringBuilder();
-        foreach (var line in data.Lines)
+        var lines = data.Lines;
+        for (int i = 0; i < lines.Count; i++)
         {
             if (sb.Length > 0)
             {
                 sb.Append("  ");
             }
-            sb.Append(line.Glyph).Append(' ').Append(line.Name);
+            var line = lines[i];
+            int last = i;
+            while (line.Group is not null && last + 1 < lines.Count && lines[last + 1].Group == line.Group)
+            {
+                last++;
+            }
+            if (last > i)
+            {
+                sb.Append(line.Glyph).Append("..").Append(lines[last].Glyph).Append(' ').Append(line.Group);
+                i = last;
+            }
+            else
+            {
+                sb.Append(line.Glyph).Append(' ').Append(line.Name);
+            }
         }
         return sb.ToString();
     }
@@ -76,10 +91,21 @@ public sealed class ChartView : View
             return;
         }
         double xMin = finite.Min(p => p.X), xMax = finite.Max(p => p.X);
-        double yMin = Math.Min(0, finite.Min(p => p.Y)), yMax = finite.Max(p => p.Y);
+        double yMin = finite.Min(p => p.Y), yMax = finite.Max(p => p.Y);
         if (xMax <= xMin)
         {
             xMax = xMin + 1;
+        }
+        if (data.YFromZero)
+        {
+            yMin = Math.Min(0, yMin);
+        }
+        else
+        {
+            // Fitted to the data with a margin, so a sag of a few per cent fills the chart instead of a flat line at its top.
+            double pad = Math.Max((yMax - yMin) * 0.15, Math.Max(Math.Abs(yMax), 1e-9) * 1e-3);
+            yMin -= pad;
+            yMax += pad;
         }
         if (yMax <= yMin)
         {

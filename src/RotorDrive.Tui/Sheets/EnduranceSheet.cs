@@ -132,8 +132,8 @@ public sealed class EnduranceSheet : Sheet
     /// <summary>The lines above the chart: runtime and verdict, the limit that ended the run, the hottest parts.</summary>
     internal static string DescribeReadout(SimulationRig sim, EnduranceResult r)
     {
-        string verdict = r.Passes() ? "the pack ends it" : $"{Over} a limit other than the pack ends it";
-        return $"runtime {Runtime(r.RuntimeS)}: {verdict}\n"
+        string verdict = r.Passes() ? "the pack ends it" : $"{Over} not the pack";
+        return $"runtime {Runtime(r.RuntimeS)}; {verdict}\n"
             + $"ended by {StationNumbers.Renumber(r.FirstLimitText, r.LimitStation)}\n"
             + $"hottest winding {F(r.PeakWindingTempC, 1)} C, plate {F(r.PeakPlateTempC, 1)} C (limit {F(sim.Rig.Limits.PlateTempC, 0)} C)";
     }
@@ -149,25 +149,24 @@ public sealed class EnduranceSheet : Sheet
         string axis = minutes ? "time, min" : "time, s";
         var time = minutes ? t.TimeS.Select(x => x / 60).ToList() : t.TimeS.ToList();
         double t0 = time[0], t1 = time[^1];
-        int n = t.WindingTempC.Count;
         var limits = sim.Rig.Limits;
-        var windings = Enumerable.Range(0, n).Select(i => ChartLine.Trace("st" + StationNumbers.Of(i), ChartLine.StationGlyph(i), time, t.WindingTempC[i])).ToList();
+        var windings = ChartLine.PerStation("stations", time, t.WindingTempC).ToList();
         if (sim.Drivetrains.Select(d => d.Motor.MaxWindingTempC).Where(m => m is not null).Min() is { } maxWinding)
         {
             windings.Add(ChartLine.Level("winding limit", '=', t0, t1, maxWinding));
         }
-        var plates = Enumerable.Range(0, n).Select(i => ChartLine.Trace("st" + StationNumbers.Of(i), ChartLine.StationGlyph(i), time, t.PlateTempC[i])).ToList();
+        var plates = ChartLine.PerStation("stations", time, t.PlateTempC).ToList();
         plates.Add(ChartLine.Level("plate limit", '=', t0, t1, limits.PlateTempC));
         return
         [
-            new ChartData(axis, "state of charge, %", [ChartLine.Trace("charge", '*', time, t.SocFraction, s => s * 100)]),
+            new ChartData(axis, "state of charge, %", [ChartLine.Trace("charge", '*', time, t.SocFraction, s => s * 100)], YFromZero: false),
             new ChartData(axis, "pack voltage, V",
             [
                 ChartLine.Trace("pack", '*', time, t.BusVoltageV),
                 ChartLine.Level("cutoff", '-', t0, t1, limits.CellCutoffV * sim.Packs.CellsSeries),
-            ]),
-            new ChartData(axis, "winding temperature, C", windings),
-            new ChartData(axis, "plate temperature, C", plates),
+            ], YFromZero: false),
+            new ChartData(axis, "winding temperature, C", windings, YFromZero: false),
+            new ChartData(axis, "plate temperature, C", plates, YFromZero: false),
         ];
     }
 

@@ -178,9 +178,8 @@ public sealed class SpinupSheet : Sheet
             return [];
         }
         double t0 = t.TimeS[0], t1 = t.TimeS[^1];
-        int n = t.SpeedRadPerS.Count;
-        var speeds = Enumerable.Range(0, n).Select(i => ChartLine.Trace("st" + StationNumbers.Of(i), ChartLine.StationGlyph(i), t.TimeS, t.SpeedRadPerS[i], Units.RadPerSToRpm)).ToList();
-        var currents = Enumerable.Range(0, n).Select(i => ChartLine.Trace("st" + StationNumbers.Of(i), ChartLine.StationGlyph(i), t.TimeS, t.MotorCurrentA[i])).ToList();
+        var speeds = ChartLine.PerStation("stations", t.TimeS, t.SpeedRadPerS, Units.RadPerSToRpm).ToList();
+        var currents = ChartLine.PerStation("stations", t.TimeS, t.MotorCurrentA).ToList();
         currents.Add(ChartLine.Level("current limit", '=', t0, t1, spin.Stations.Min(s => s.CurrentLimitA)));
         return
         [
@@ -190,12 +189,12 @@ public sealed class SpinupSheet : Sheet
             [
                 ChartLine.Trace("pack", '*', t.TimeS, t.BusVoltageV),
                 ChartLine.Level("cutoff", '-', t0, t1, spin.CutoffVoltageV),
-            ]),
+            ], YFromZero: false),
             new ChartData("time, s", "gap, mm",
             [
                 ChartLine.Trace("gap", '*', t.TimeS, t.GapM, g => g * 1000),
                 ChartLine.Level("design gap", '-', t0, t1, sim.Rig.DesignGapM * 1000),
-            ]),
+            ], YFromZero: false),
         ];
     }
 
@@ -216,20 +215,25 @@ public sealed class SpinupSheet : Sheet
         sb.AppendLine($"  lowest pack voltage {(spin.BelowCutoff ? Over : "")}{F(spin.MinBusVoltageV, 1)} V (cutoff {F(spin.CutoffVoltageV, 1)} V)");
         sb.AppendLine($"  yaw: peak reaction {F(spin.PeakYawTorqueNm, 2)} N m (gear holds {F(rig.GearYawFrictionNm, 1)} N m), peak rate {F(spin.PeakYawRateRadPerS * 180 / Math.PI, 2)} deg/s");
         sb.AppendLine();
-        static string Row(string n, string end, string peak, string limit, string above, string allowance, string peakRpm, string peakNm, string passing, string state)
-            => $"{n,3} {end,6} {peak,6} {limit,6} {above,6} {allowance,6} {peakRpm,6} {peakNm,6} {passing,6}  {state}";
-        sb.AppendLine("STATIONS      motor  ctrl   above  burst  drag peak at     passing");
-        sb.AppendLine(Row("", "end", "peak", "limit", "cont.", "allow", "landed", "gap", "current", ""));
-        sb.AppendLine(Row("#", "rpm", "A", "A", "s", "s", "rpm", "N m", "A", ""));
+        static string Row(string n, string end, string peak, string limit, string above, string allowance, string passing, string state)
+            => $"{n,3} {end,6} {peak,7} {limit,6} {above,6} {allowance,6} {passing,8}  {state}";
+        sb.AppendLine("STATIONS  motor current against the controller's limit");
+        sb.AppendLine(Row("", "end", "peak", "limit", "above", "burst", "passing", ""));
+        sb.AppendLine(Row("#", "rpm", "A", "A", "cont s", "allow", "peak A", ""));
         foreach (var s in spin.Stations)
         {
-            string state = s.Stalled
-                ? $"{Over} STALLED: a limit of {F(s.SuggestedCurrentLimitA, 0)} A would pass"
-                : s.Controller.Exceeded ? $"{Over} controller over its allowance" : "ok";
+            string state = s.Stalled ? $"{Over} STALLED" : s.Controller.Exceeded ? $"{Over} over allowance" : "ok";
             sb.AppendLine(Row(StationNumbers.Of(s.Index), F(s.FinalSpeedRpm, 0), F(s.Motor.PeakA, 1), F(s.CurrentLimitA, 0),
-                F(s.Controller.TimeAboveContinuousS, 2), F(s.Controller.BurstAllowanceS, 1), F(Units.RadPerSToRpm(s.DragPeakSpeedRadPerS), 0),
-                F(s.DragPeakTorqueNm, 2), F(s.PassingCurrentA, 0), state));
+                F(s.Controller.TimeAboveContinuousS, 2), F(s.Controller.BurstAllowanceS, 1), F(s.PassingCurrentA, 0), state));
         }
+        foreach (var s in spin.Stations.Where(s => s.Stalled))
+        {
+            sb.AppendLine($"  {Over} station {StationNumbers.Of(s.Index)} stalls below its drag peak: its controller limits the current to {F(s.CurrentLimitA, 0)} A, "
+                + $"{F(s.PassingCurrentA, 0)} A just balances the peak; a current limit of {F(s.SuggestedCurrentLimitA, 0)} A would pass it");
+        }
+        var peaks = spin.Stations.GroupBy(s => (Rpm: F(Units.RadPerSToRpm(s.DragPeakSpeedRadPerS), 0), Nm: F(s.DragPeakTorqueNm, 2)));
+        sb.AppendLine("  drag peak at the landed gap: " + string.Join("; ", peaks.Select(g =>
+            $"{g.Key.Rpm} rpm, {g.Key.Nm} N m (station{(g.Count() > 1 ? "s" : "")} {string.Join(", ", g.Select(s => StationNumbers.Of(s.Index)))})")));
         sb.AppendLine();
         sb.AppendLine($"LANDING  throttle cut over {F(request.StopRampS, 1)} s from the hover; controllers rated {F(study.ControllerMaxVoltageV, 1)} V");
         foreach (var (l, name) in new[] { (study.LandingBraking, "braking on "), (study.LandingCoasting, "braking off") })
