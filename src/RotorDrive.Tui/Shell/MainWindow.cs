@@ -263,8 +263,8 @@ public sealed class MainWindow : Window
         base.Dispose(disposing);
     }
 
-    // Plain sheet keys (digits, '?') reach the window before the focused view, but only when the user is not typing in
-    // a field: there they are text.
+    // Plain sheet keys (digits, '?') are caught before the focused view sees them, but only when the user is not typing
+    // in a field: there they are text.
     private void OnApplicationKeyDown(object? sender, Key key)
     {
         if (key.Handled || key.IsAlt || key.IsCtrl || SheetForKey(key) is not { } index)
@@ -276,7 +276,10 @@ public sealed class MainWindow : Window
         {
             return;
         }
-        ShowSheet(index);
+        // The sheet list keeps the focus, so the next key jumps again rather than landing in the new sheet's first field;
+        // Enter or Tab moves into the sheet.
+        ShowSheet(index, focusSheet: false);
+        _list.SetFocus();
         key.Handled = true;
     }
 

@@ -157,6 +157,10 @@ public class MainWindowTests
         Assert.Contains("? Help", screen);
 
         Assert.IsNotType<Terminal.Gui.Views.TextField>(bench.Window.MostFocused);
+        bench.Press(new Key('6'));
+        Assert.Equal("Spin-up", bench.Window.CurrentSheet.SheetName);
+        // The sheet list keeps the focus (the Spin-up sheet's first field does not swallow the next key).
+        Assert.IsNotType<Terminal.Gui.Views.TextField>(bench.Window.MostFocused);
         bench.Press(new Key('5'));
         Assert.Equal("Hover & yaw", bench.Window.CurrentSheet.SheetName);
         bench.Press(new Key('?'));
