@@ -115,20 +115,23 @@ public sealed class ChartView : View
 
         const int marginLeft = 8;
         const int marginBottom = 2;
-        int width = Math.Max(10, (_graph.Viewport.Width > 0 ? _graph.Viewport.Width : 60) - marginLeft - 1);
+        // Three columns stay free on the right so the last tick's label is not cut off.
+        int width = Math.Max(10, (_graph.Viewport.Width > 0 ? _graph.Viewport.Width : 60) - marginLeft - 4);
         int height = Math.Max(4, (_graph.Viewport.Height > 0 ? _graph.Viewport.Height : 14) - marginBottom - 1);
         _graph.MarginLeft = marginLeft;
         _graph.MarginBottom = marginBottom;
         _graph.CellSize = new PointF((float)((xMax - xMin) / width), (float)((yMax - yMin) / height));
         _graph.ScrollOffset = new PointF((float)xMin, (float)yMin);
-        _graph.AxisX.Increment = (float)((xMax - xMin) / width * 10);
+        double xStep = NiceStep((xMax - xMin) / width * 10);
+        double yStep = NiceStep((yMax - yMin) / height * 2);
+        _graph.AxisX.Increment = (float)xStep;
         _graph.AxisX.ShowLabelsEvery = 1;
-        _graph.AxisX.Minimum = (float)xMin;
+        _graph.AxisX.Minimum = (float)(Math.Ceiling(xMin / xStep - 1e-9) * xStep);
         _graph.AxisX.Text = data.XLabel;
         _graph.AxisX.LabelGetter = v => Short(v.Value);
-        _graph.AxisY.Increment = (float)((yMax - yMin) / height * 3);
+        _graph.AxisY.Increment = (float)yStep;
         _graph.AxisY.ShowLabelsEvery = 1;
-        _graph.AxisY.Minimum = (float)yMin;
+        _graph.AxisY.Minimum = (float)(Math.Ceiling(yMin / yStep - 1e-9) * yStep);
         _graph.AxisY.Text = data.YLabel;
         _graph.AxisY.LabelGetter = v => Short(v.Value);
 
@@ -151,6 +154,21 @@ public sealed class ChartView : View
             }
         }
         SetNeedsDraw();
+    }
+
+    /// <summary>The round tick step (1, 2 or 5 times a power of ten) nearest above a wanted step, so axis labels read 0, 2,
+    /// 4 rather than 0, 1.7, 3.4.</summary>
+    /// <param name="wanted">The step the chart's size asks for, &gt; 0.</param>
+    public static double NiceStep(double wanted)
+    {
+        if (!(wanted > 0) || !double.IsFinite(wanted))
+        {
+            return 1;
+        }
+        double decade = Math.Pow(10, Math.Floor(Math.Log10(wanted)));
+        double mantissa = wanted / decade;
+        double nice = mantissa <= 1 + 1e-9 ? 1 : mantissa <= 2 + 1e-9 ? 2 : mantissa <= 5 + 1e-9 ? 5 : 10;
+        return nice * decade;
     }
 
     /// <summary>A number in at most 6 characters for an axis label.</summary>
