@@ -109,7 +109,14 @@ public sealed class EnduranceSheet : Sheet
         }
         double fraction = soc!.Value / 100.0;
         _panel.Readout = "Running the hover until its first limit ... (F8 stops)";
-        Context.Work.Request("endurance", (token, progress) => Compute(rig, fraction, token, progress), Show, immediately);
+        Context.Work.Request("endurance", (token, progress) => Compute(rig, fraction, token, progress), Show, immediately, Stopped);
+    }
+
+    private void Stopped()
+    {
+        Shown = null;
+        _panel.Readout = "Stopped before it finished: the figures are not current. F5 runs the endurance run again.";
+        _panel.ShowPages(null);
     }
 
     private void Show(EnduranceFigures figures)

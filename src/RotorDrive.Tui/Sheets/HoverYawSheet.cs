@@ -97,7 +97,8 @@ public sealed class HoverYawSheet : Sheet
     }
 
     private void Recompute(Rig rig, bool immediately = false)
-        => Context.Work.Request("hover & yaw", (token, progress) => Compute(rig, token, progress), figures => Show(figures, null), immediately);
+        => Context.Work.Request("hover & yaw", (token, progress) => Compute(rig, token, progress), figures => Show(figures, null), immediately,
+            () => Show(null, "Stopped before it finished: the figures are not current. F5 computes the hover again."));
 
     private void Show(HoverYawFigures? figures, string? problem)
     {

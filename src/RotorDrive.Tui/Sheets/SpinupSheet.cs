@@ -133,7 +133,14 @@ public sealed class SpinupSheet : Sheet
         }
         var request = new SpinupStudyRequest(mode!.Value, ramp!.Value, soc!.Value / 100.0);
         _panel.Readout = "Running the spin-up and the landings ... (F8 stops)";
-        Context.Work.Request("spin-up", (token, progress) => Compute(rig, request, token, progress), Show, immediately);
+        Context.Work.Request("spin-up", (token, progress) => Compute(rig, request, token, progress), Show, immediately, Stopped);
+    }
+
+    private void Stopped()
+    {
+        Shown = null;
+        _panel.Readout = "Stopped before it finished: the figures are not current. F5 runs the spin-up again.";
+        _panel.ShowPages(null);
     }
 
     private void Show(SpinupFigures figures)

@@ -120,6 +120,7 @@ public class SpinupSheetTests
         await bench.SettleAsync();
         Assert.Null(sheet.Shown);
         Assert.Contains("Stopped.", bench.Window.StatusText);
+        Assert.StartsWith("Stopped before it finished", sheet.Panel.Readout);
         bench.Press(Key.F5);
         await bench.SettleAsync();
         Assert.NotNull(sheet.Shown);
