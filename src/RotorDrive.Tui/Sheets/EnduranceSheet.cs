@@ -5,6 +5,7 @@ using RotorDrive.Core.Craft;
 using RotorDrive.Core.Safety;
 using RotorDrive.Core.Simulation;
 using RotorDrive.Tui.Charts;
+using RotorDrive.Tui.Session;
 using RotorDrive.Tui.Shell;
 using RotorDrive.Tui.Text;
 using static RotorDrive.Tui.Text.Figures;
@@ -79,14 +80,14 @@ public sealed class EnduranceSheet : Sheet
     }
 
     /// <summary>The run the sheet shows, as the <c>endurance</c> command runs it.</summary>
-    internal static EnduranceFigures Compute(Rig rig, double socFraction, CancellationToken token, IProgress<double>? progress)
+    internal static EnduranceFigures Compute(Rig rig, RigModelCache models, double socFraction, CancellationToken token, IProgress<double>? progress)
     {
         var missing = RigModel.MissingParts(rig);
         if (missing.Count > 0)
         {
             return new EnduranceFigures(null, null, missing);
         }
-        var sim = SimulationRig.Build(rig);
+        var sim = SimulationRig.FromModel(models.For(rig));
         progress?.Report(0.2);
         token.ThrowIfCancellationRequested();
         var result = EnduranceSimulator.Run(sim, socFraction);
@@ -109,7 +110,7 @@ public sealed class EnduranceSheet : Sheet
         }
         double fraction = soc!.Value / 100.0;
         _panel.Readout = "Running the hover until its first limit ... (F8 stops)";
-        Context.Work.Request("endurance", (token, progress) => Compute(rig, fraction, token, progress), Show, immediately, Stopped);
+        Context.Work.Request("endurance", (token, progress) => Compute(rig, Context.Models, fraction, token, progress), Show, immediately, Stopped);
     }
 
     private void Stopped()

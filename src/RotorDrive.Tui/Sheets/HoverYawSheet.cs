@@ -8,6 +8,7 @@ using RotorDrive.Core;
 using RotorDrive.Core.Craft;
 using RotorDrive.Core.Drive;
 using RotorDrive.Core.Safety;
+using RotorDrive.Tui.Session;
 using RotorDrive.Tui.Shell;
 using RotorDrive.Tui.Text;
 using static RotorDrive.Tui.Text.Figures;
@@ -75,14 +76,14 @@ public sealed class HoverYawSheet : Sheet
     }
 
     /// <summary>The figures the sheet shows, as Core computes them for the <c>hover</c> and <c>yaw</c> commands.</summary>
-    internal static HoverYawFigures Compute(Rig rig, CancellationToken token, IProgress<double>? progress)
+    internal static HoverYawFigures Compute(Rig rig, RigModelCache models, CancellationToken token, IProgress<double>? progress)
     {
         var missing = RigModel.MissingParts(rig);
         if (missing.Count > 0)
         {
             return new HoverYawFigures(null, null, null, null, missing);
         }
-        var model = RigModel.Build(rig);
+        var model = models.For(rig);
         progress?.Report(0.15);
         token.ThrowIfCancellationRequested();
         var review = HoverReview.Trimmed(model, model.DesignGapM);
@@ -97,7 +98,7 @@ public sealed class HoverYawSheet : Sheet
     }
 
     private void Recompute(Rig rig, bool immediately = false)
-        => Context.Work.Request("hover & yaw", (token, progress) => Compute(rig, token, progress), figures => Show(figures, null), immediately,
+        => Context.Work.Request("hover & yaw", (token, progress) => Compute(rig, Context.Models, token, progress), figures => Show(figures, null), immediately,
             () => Show(null, "Stopped before it finished: the figures are not current. F5 computes the hover again."));
 
     private void Show(HoverYawFigures? figures, string? problem)

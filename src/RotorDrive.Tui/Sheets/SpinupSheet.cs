@@ -6,6 +6,7 @@ using RotorDrive.Core.Craft;
 using RotorDrive.Core.Safety;
 using RotorDrive.Core.Simulation;
 using RotorDrive.Tui.Charts;
+using RotorDrive.Tui.Session;
 using RotorDrive.Tui.Shell;
 using RotorDrive.Tui.Text;
 using static RotorDrive.Tui.Text.Figures;
@@ -101,14 +102,14 @@ public sealed class SpinupSheet : Sheet
     }
 
     /// <summary>The study the sheet shows, run as the <c>spinup</c> command runs it.</summary>
-    internal static SpinupFigures Compute(Rig rig, SpinupStudyRequest request, CancellationToken token, IProgress<double>? progress)
+    internal static SpinupFigures Compute(Rig rig, RigModelCache models, SpinupStudyRequest request, CancellationToken token, IProgress<double>? progress)
     {
         var missing = RigModel.MissingParts(rig);
         if (missing.Count > 0)
         {
             return new SpinupFigures(null, null, missing);
         }
-        var sim = SimulationRig.Build(rig);
+        var sim = SimulationRig.FromModel(models.For(rig));
         progress?.Report(0.25);
         token.ThrowIfCancellationRequested();
         var study = SpinupStudy.Run(sim, request);
@@ -133,7 +134,7 @@ public sealed class SpinupSheet : Sheet
         }
         var request = new SpinupStudyRequest(mode!.Value, ramp!.Value, soc!.Value / 100.0);
         _panel.Readout = "Running the spin-up and the landings ... (F8 stops)";
-        Context.Work.Request("spin-up", (token, progress) => Compute(rig, request, token, progress), Show, immediately, Stopped);
+        Context.Work.Request("spin-up", (token, progress) => Compute(rig, Context.Models, request, token, progress), Show, immediately, Stopped);
     }
 
     private void Stopped()
