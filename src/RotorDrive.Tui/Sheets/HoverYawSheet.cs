@@ -152,7 +152,7 @@ public sealed class HoverYawSheet : Sheet
         string hover = review.Pass
             ? $"Hovers within every limit at {F(review.Hover.GapM * 1000, 2)} mm."
             : review.Hover.Balanced
-                ? $"{Over} over: {review.Findings.Count} limit(s) fail at {F(review.Hover.GapM * 1000, 2)} mm (marked {Over} below)."
+                ? $"{Over} over: {review.Findings.Count} {(review.Findings.Count == 1 ? "limit fails" : "limits fail")} at {F(review.Hover.GapM * 1000, 2)} mm (marked {Over} below)."
                 : $"{Over} No hover: {review.Findings.FirstOrDefault()?.Limit.Replace('_', ' ') ?? "no balance"} (see below).";
         string yawText = yaw.Pass ? "Yaw balanced; the trim covers the tolerance both ways." : $"{Over} Yaw fails (see YAW below).";
         return hover + "\n" + yawText;
@@ -178,15 +178,15 @@ public sealed class HoverYawSheet : Sheet
         if (h.Balanced)
         {
             sb.AppendLine();
-            static string Row(string n, string spin, string rpm, string duty, string motor, string controller, string wpn, string stable)
-                => $"{n,3}  {spin,-4}{rpm,6}  {duty,6}  {motor,5}  {controller,7}  {wpn,5}  {stable}";
+            static string Row(string n, string spin, string rpm, string duty, string motor, string controller, string wpn, string state)
+                => $"{n,3}  {spin,-4}{rpm,6}  {duty,6}  {motor,5}  {controller,7}  {wpn,5}  {state}";
             sb.AppendLine("STATIONS");
-            sb.AppendLine(Row("", "", "speed", "duty", "motor", "ctrl in", "W/N", "stable"));
+            sb.AppendLine(Row("", "", "speed", "duty", "motor", "ctrl in", "W/N", "state"));
             sb.AppendLine(Row("#", "spin", "rpm", "", "A", "A", "", ""));
             foreach (var s in h.Stations)
             {
                 sb.AppendLine(Row((s.Index + 1).ToString(CultureInfo.InvariantCulture), s.Spin == SpinDirection.Clockwise ? "cw" : "ccw", F(s.SpeedRpm, 0),
-                    F(s.Duty, 3), F(s.MotorCurrentA, 1), F(s.BusCurrentA, 1), F(s.LiftSpecificPowerWPerN, 2), s.Stable ? "yes" : Over + " no"));
+                    F(s.Duty, 3), F(s.MotorCurrentA, 1), F(s.BusCurrentA, 1), F(s.LiftSpecificPowerWPerN, 2), StationState(s)));
             }
             sb.AppendLine();
             sb.AppendLine("MARGINS TO LIMITS, %");
@@ -260,6 +260,22 @@ public sealed class HoverYawSheet : Sheet
         sb.AppendLine();
         sb.Append(CautionText.Compose(safety.Cautions));
         return sb.ToString();
+    }
+
+    /// <summary>A station's state in the table: "ok", or marked with what is wrong ("!! unstable, 2 over").</summary>
+    internal static string StationState(HoverStation s)
+    {
+        int over = s.Margins.Count(m => m.Exceeded);
+        var wrong = new List<string>();
+        if (!s.Stable)
+        {
+            wrong.Add("unstable");
+        }
+        if (over > 0)
+        {
+            wrong.Add($"{over} over");
+        }
+        return wrong.Count == 0 ? "ok" : Over + " " + string.Join(", ", wrong);
     }
 
     private static string ShortName(DriveLimit limit) => limit switch

@@ -46,7 +46,7 @@ public class HoverYawSheetTests
         {
             string row = Assert.Single(lines, l => l.StartsWith($"{s.Index + 1,3}  {(s.Spin == SpinDirection.Clockwise ? "cw " : "ccw")}", StringComparison.Ordinal));
             string[] cells = row.Split(' ', StringSplitOptions.RemoveEmptyEntries);
-            Assert.Equal([F(s.SpeedRpm, 0), F(s.Duty, 3), F(s.MotorCurrentA, 1), F(s.BusCurrentA, 1), F(s.LiftSpecificPowerWPerN, 2), "yes"], cells[2..]);
+            Assert.Equal([F(s.SpeedRpm, 0), F(s.Duty, 3), F(s.MotorCurrentA, 1), F(s.BusCurrentA, 1), F(s.LiftSpecificPowerWPerN, 2), "ok"], cells[2..]);
         }
         Assert.Contains($"pack {F(h.PackCurrentA, 1)} A at {F(h.BusVoltageV, 2)} V: {F(h.ElectricalPowerW, 0)} W electrical, {F(h.LiftSpecificPowerWPerN, 2)} W/N", sheet.SheetText);
         Assert.Contains($"heave stiffness {F(h.HeaveStiffnessNPerM / 1000, 1)} N/mm, natural frequency {F(h.HeaveFrequencyHz, 2)} Hz", sheet.SheetText);
@@ -106,11 +106,37 @@ public class HoverYawSheetTests
             {
                 Assert.Contains("!!" + F(m.Margin * 100, 0), sheet.SheetText);
             }
+            // The station table, on the first screen, marks every station with an exceeded limit too.
+            int over = s.Margins.Count(m => m.Exceeded);
+            string row = sheet.SheetText.Split('\n').Single(l => l.StartsWith($"{s.Index + 1,3}  ", StringComparison.Ordinal));
+            Assert.Equal(over > 0, row.Contains($"!! {over} over", StringComparison.Ordinal));
         }
         Assert.NotEmpty(review.Findings);
         Assert.Contains("LIMITS THAT FAIL", sheet.SheetText);
         Assert.Equal(review.Findings.Count, sheet.SheetText.Split('\n').Count(l => l.StartsWith("  !! station ", StringComparison.Ordinal) || l.StartsWith("  !! pack", StringComparison.Ordinal)));
         Assert.Contains($"max payload within every limit {F(HoverReview.PayloadCapacityKg(RigModel.Build(bench.Context.Session.Rig!), 0.010)!.Value, 1)} kg (carries 40.0)", sheet.SheetText);
         Assert.Contains("!!", bench.Screen);
+    }
+
+    // A design gap below the landed gap is a rig problem (as `rotordrive check` says): no result sheet computes, each says why.
+    [Fact]
+    public async Task WithARigThatHasProblems_TheResultSheetsSaySo_AndShowNoFigures()
+    {
+        using var bench = new Bench();
+        EditRigField(bench, "$.gap.design_mm", "5");
+        Assert.Null(bench.Context.Session.Rig);
+        var hover = await OpenAsync(bench);
+        Assert.Null(hover.Shown);
+        Assert.StartsWith("! The rig has problems", hover.Verdict);
+        bench.Window.ShowSheet("Spin-up");
+        await bench.SettleAsync();
+        var spinup = Assert.IsType<SpinupSheet>(bench.Window.CurrentSheet);
+        Assert.Null(spinup.Shown);
+        Assert.StartsWith("! The rig has problems", spinup.Panel.Readout);
+        bench.Window.ShowSheet("Endurance");
+        await bench.SettleAsync();
+        var endurance = Assert.IsType<EnduranceSheet>(bench.Window.CurrentSheet);
+        Assert.Null(endurance.Shown);
+        Assert.StartsWith("! The rig has problems", endurance.Panel.Readout);
     }
 }
