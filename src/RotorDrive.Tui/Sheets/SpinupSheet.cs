@@ -243,10 +243,10 @@ public sealed class SpinupSheet : Sheet
         sb.AppendLine("  drag peak at the landed gap: " + string.Join("; ", peaks.Select(g =>
             $"{g.Key.Rpm} rpm, {g.Key.Nm} N m (station{(g.Count() > 1 ? "s" : "")} {string.Join(", ", g.Select(s => StationNumbers.Of(s.Index)))})")));
         sb.AppendLine();
-        sb.AppendLine($"LANDING  throttle cut over {F(request.StopRampS, 1)} s from the hover; controllers rated {F(study.ControllerMaxVoltageV, 1)} V");
+        sb.AppendLine($"LANDING from the hover, throttle cut {(request.StopRampS > 0 ? $"over {F(request.StopRampS, 1)} s" : "at once")}; controllers rated {F(study.ControllerMaxVoltageV, 1)} V");
         foreach (var (l, name) in new[] { (study.LandingBraking, "braking on "), (study.LandingCoasting, "braking off") })
         {
-            sb.AppendLine($"  {name}: regenerated {F(l.PeakRegenCurrentA, 1)} A, bus up to {(l.MaxBusVoltageV > study.ControllerMaxVoltageV ? Over : "")}{F(l.MaxBusVoltageV, 1)} V, "
+            sb.AppendLine($"  {name}: regenerated {F(l.PeakRegenCurrentA, 1)} A, bus up to {F(l.MaxBusVoltageV, 1)} V{(l.MaxBusVoltageV > study.ControllerMaxVoltageV ? $" {Over} above the rating" : "")}, "
                 + (l.TouchdownTimeS is { } td ? $"touch-down at {F(td, 2)} s" : "no touch-down in the run"));
         }
         sb.AppendLine();
