@@ -60,7 +60,7 @@ public static class EnduranceCommand
                 return ExitCodes.BadInput;
             }
         }
-        bool pass = result.RuntimeS > 0 && result.FirstLimit is EnduranceLimit.UsableCapacity or EnduranceLimit.PackCutoff or EnduranceLimit.TimeLimit;
+        bool pass = result.Passes();
         var report = new EnduranceReport(
             rig.Name,
             result.RuntimeS,

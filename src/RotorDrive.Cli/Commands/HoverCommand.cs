@@ -86,14 +86,8 @@ public static class HoverCommand
             model = model.WithPayload(p);
         }
         double gapM = (gapMm ?? model.DesignGapM * 1000) / 1000;
-        HoverResult hover = commonDuty is { } d ? CommonDutyHover.Solve(model, d) : HoverTrim.Solve(model, gapM, 0.0);
-        double? maxPayload = null;
-        if (commonDuty is null && hover.Status is HoverStatus.LimitExceeded or HoverStatus.NoBalance)
-        {
-            maxPayload = HoverTrim.MaxPayloadKg(model, gapM);
-        }
-        var safety = HoverSafety.Assess(model, hover);
-        var report = ToReport(model, hover, safety, maxPayload);
+        var review = commonDuty is { } d ? HoverReview.Of(model, CommonDutyHover.Solve(model, d)) : HoverReview.Trimmed(model, gapM);
+        var report = ToReport(model, review);
         if (json)
         {
             JsonOutput.Write(output, report);
@@ -102,11 +96,13 @@ public static class HoverCommand
         {
             WriteText(report, output);
         }
-        return report.Pass ? ExitCodes.Ok : ExitCodes.LimitFindings;
+        return review.Pass ? ExitCodes.Ok : ExitCodes.LimitFindings;
     }
 
-    private static HoverReport ToReport(RigModel model, HoverResult h, HoverSafetyReport safety, double? maxPayload)
+    private static HoverReport ToReport(RigModel model, HoverReview review)
     {
+        var h = review.Hover;
+        var safety = review.Safety;
         var stations = h.Stations.Select(s => new StationEntry(
             s.Index, s.Spin == SpinDirection.Clockwise ? "cw" : "ccw", s.Duty, s.SpeedRpm, s.LiftN, s.ShaftTorqueNm, s.ReactionTorqueNm,
             s.MotorCurrentA, s.BusCurrentA, s.EddyPowerW, s.ElectricalPowerW, s.LiftSpecificPowerWPerN, s.Regime.ToString(), s.Stable,
@@ -123,18 +119,14 @@ public static class HoverCommand
                 worstMax?.HoopStressPa / 1e6, worstMax?.RingOwnStressPa / 1e6, safety.MinMaxRpmMargin),
             hoverRotors.Select(r => r.Assessment.ToString()).Distinct().ToList(),
             safety.MagnetNote);
-        var limits = h.Findings.Select(f => new LimitEntry(f.Limit, f.Station, f.Message)).ToList();
-        foreach (var r in hoverRotors.Where(r => r.Margin is < 0 || r.AboveRatedSpeed))
-        {
-            limits.Add(new LimitEntry("retainer_stress", null, $"rotor {r.RotorId}: retainer hoop stress {r.HoopStressPa / 1e6:0.0} MPa at {Units.RadPerSToRpm(r.SpeedRadPerS):0} rpm exceeds its allowable {r.AllowablePa / 1e6:0.0} MPa, or the rotor runs above its rated speed"));
-        }
-        bool pass = h.Status == HoverStatus.Hovering && !safety.Fails;
+        var limits = review.Findings.Select(f => new LimitEntry(f.Limit, f.Station, f.Message)).ToList();
+        bool pass = review.Pass;
         return new HoverReport(
             model.Rig.Name, h.Mode == HoverMode.Trimmed ? "trimmed" : "common_duty", h.Status.ToString(), pass,
             h.GapM * 1000, h.MassKg, model.PayloadKg, h.WeightN, h.BusVoltageV, h.PackCurrentA, h.ElectricalPowerW, h.PlatePowerW,
             h.Balanced ? h.LiftSpecificPowerWPerN : double.NaN, h.HeaveStiffnessNPerM / 1000, h.Balanced ? h.HeaveFrequencyHz : double.NaN,
             new ResidualEntry(h.ForceResidual, h.PitchResidual, h.RollResidual), h.YawTorqueNm,
-            stations, h.PackMargins.Select(Margin).ToList(), limits, maxPayload, safetyEntry,
+            stations, h.PackMargins.Select(Margin).ToList(), limits, review.MaxPayloadKg, safetyEntry,
             safety.Cautions.Select(c => new CautionEntry(c.Topic.ToString(), c.Level.ToString(), c.Title, c.Text, c.Reason)).ToList(),
             h.Iterations);
     }

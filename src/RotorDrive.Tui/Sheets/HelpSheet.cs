@@ -14,6 +14,7 @@ public sealed class HelpSheet : Sheet
     private readonly ListView _lines;
     private readonly ObservableCollection<string> _items = [];
     private int _wrappedAt = -1;
+    private IReadOnlyList<(string Key, string Name)> _sheetList = [];
 
     /// <summary>Creates the sheet.</summary>
     public HelpSheet(WorkbenchContext context)
@@ -28,10 +29,31 @@ public sealed class HelpSheet : Sheet
     /// <inheritdoc/>
     public override void Refresh() => Fill(Viewport.Width > 0 ? Viewport.Width : 60);
 
-    /// <summary>The whole help text: keys, marks and cautions.</summary>
-    public static string Compose()
+    /// <summary>Sets the sheets listed with their keys (the window calls this once it has assigned the keys).</summary>
+    public void ListSheets(IReadOnlyList<(string Key, string Name)> sheets)
     {
+        _sheetList = sheets ?? [];
+        _wrappedAt = -1;
+        Fill(Viewport.Width > 0 ? Viewport.Width : 60);
+    }
+
+    /// <summary>The whole help text: keys, marks and cautions, without the list of sheets.</summary>
+    public static string Compose() => Compose([]);
+
+    /// <summary>The whole help text: the sheets with their keys, every other key, the marks and the cautions.</summary>
+    public static string Compose(IReadOnlyList<(string Key, string Name)> sheets)
+    {
+        ArgumentNullException.ThrowIfNull(sheets);
         var sb = new StringBuilder();
+        if (sheets.Count > 0)
+        {
+            sb.AppendLine("SHEETS (press the key when not typing in a field, or Alt+key anywhere)");
+            foreach (var (key, name) in sheets)
+            {
+                sb.AppendLine($"  {(key.Length == 0 ? "-" : key),-17} {name}{(key == "?" ? " (also F1)" : key.Length == 0 ? " (Ctrl+PageDown/Up or the list)" : "")}");
+            }
+            sb.AppendLine();
+        }
         sb.AppendLine("KEYS (mouse optional)");
         foreach (var (keys, does) in KeyMap.All)
         {
@@ -40,6 +62,7 @@ public sealed class HelpSheet : Sheet
         sb.AppendLine();
         sb.AppendLine("MARKS (never colour alone)");
         sb.AppendLine("  !      a value that is not valid, or a limit that fails (also FAIL)");
+        sb.AppendLine("  !!     on the result sheets: a limit that is exceeded (its margin is below 0)");
         sb.AppendLine("  *      on the status line: unsaved edits");
         sb.AppendLine("  1↻ 2↺  station 1 clockwise, station 2 counter-clockwise seen from above (F7 on the Stations sheet: 1cw 2ccw)");
         sb.AppendLine("  +      centre of gravity in the station sketch");
@@ -60,7 +83,7 @@ public sealed class HelpSheet : Sheet
         }
         _wrappedAt = width;
         _items.Clear();
-        foreach (string line in Wrap.Lines(Compose(), width - 1))
+        foreach (string line in Wrap.Lines(Compose(_sheetList), width - 1))
         {
             _items.Add(line);
         }

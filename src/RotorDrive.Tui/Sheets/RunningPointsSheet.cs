@@ -1,4 +1,3 @@
-using System.Globalization;
 using Terminal.Gui.Input;
 using Terminal.Gui.ViewBase;
 using Terminal.Gui.Views;
@@ -21,43 +20,32 @@ public sealed class RunningPointsSheet : Sheet
 
     private static readonly char[] CurveGlyphs = ['1', '2', '3', '4'];
 
+    private readonly ChartPanel _panel;
     private readonly TextField _station;
     private readonly TextField _gap;
     private readonly TextField _soc;
-    private readonly Label _inputs;
-    private readonly Label _readout;
-    private readonly ChartView _chart;
     private int _seenRevision = -1;
-    private bool _quiet;
 
     /// <summary>Creates the sheet.</summary>
     public RunningPointsSheet(WorkbenchContext context)
         : base(context, "Running points")
     {
-        Add(new Label { X = 0, Y = 0, Text = "station" });
-        _station = new TextField { X = 8, Y = 0, Width = 4, Text = "1" };
-        Add(new Label { X = 13, Y = 0, Text = "gap mm" });
-        _gap = new TextField { X = 20, Y = 0, Width = 7, Text = "" };
-        Add(new Label { X = 28, Y = 0, Text = "charge %" });
-        _soc = new TextField { X = 37, Y = 0, Width = 5, Text = "100" };
-        _inputs = new Label { X = 43, Y = 0, Width = Dim.Fill(), Height = 1, Text = "" };
-        _readout = new Label { X = 0, Y = 1, Width = Dim.Fill(), Height = 4, Text = "" };
-        _chart = new ChartView { X = 0, Y = 5, Width = Dim.Fill(), Height = Dim.Fill() };
-        foreach (var f in new[] { _station, _gap, _soc })
-        {
-            f.TextChanged += (_, _) => Recompute();
-        }
-        Add(_station, _gap, _soc, _inputs, _readout, _chart);
+        _panel = new ChartPanel(readoutLines: 4);
+        _station = _panel.AddInput("station", 4, "1");
+        _gap = _panel.AddInput("gap mm", 7);
+        _soc = _panel.AddInput("charge %", 5, "100");
+        _panel.InputsChanged += (_, _) => Recompute();
+        Add(_panel);
     }
 
     /// <summary>The last map shown, for tests.</summary>
     internal TorqueSpeedMap? Map { get; private set; }
 
     /// <summary>The chart.</summary>
-    internal ChartView Chart => _chart;
+    internal ChartView Chart => _panel.Chart;
 
     /// <summary>The readout text.</summary>
-    internal string Readout => _readout.Text;
+    internal string Readout => _panel.Readout;
 
     /// <summary>The what-if gap field.</summary>
     internal TextField GapField => _gap;
@@ -68,17 +56,15 @@ public sealed class RunningPointsSheet : Sheet
         var rig = Context.Session.Rig;
         if (rig is null)
         {
-            _readout.Text = "! The rig has problems (see Stations); running points need a valid rig.";
-            _chart.Show(null);
+            _panel.Readout = "! The rig has problems (see Stations); running points need a valid rig.";
+            _panel.Show(null);
             Map = null;
             return;
         }
         if (_seenRevision != Context.Session.Revision)
         {
             _seenRevision = Context.Session.Revision;
-            _quiet = true;
-            _gap.Text = FieldSpec.Format(Math.Round(rig.DesignGapM * 1000, 6));
-            _quiet = false;
+            _panel.SetQuietly(_gap, FieldSpec.Format(Math.Round(rig.DesignGapM * 1000, 6)));
             Recompute();
         }
     }
@@ -110,34 +96,20 @@ public sealed class RunningPointsSheet : Sheet
 
     private void Recompute(bool immediately = false)
     {
-        if (_quiet || Context.Session.Rig is not { } rig)
+        if (Context.Session.Rig is not { } rig)
         {
             return;
         }
         var problems = new List<string>();
-        int station = 0;
-        if (!int.TryParse(_station.Text.Trim(), NumberStyles.Integer, CultureInfo.InvariantCulture, out int n) || n < 1 || n > rig.Stations.Count)
-        {
-            problems.Add($"station must be 1..{rig.Stations.Count}");
-        }
-        else
-        {
-            station = n - 1;
-        }
-        if (!FieldSpec.TryParseNumber(_gap.Text, out double? gapMm, out string? whyGap) || gapMm is not { } g || g <= 0 || g > 200)
-        {
-            problems.Add(whyGap ?? "gap must lie in (0, 200] mm");
-        }
-        if (!FieldSpec.TryParseNumber(_soc.Text, out double? socPct, out string? whySoc) || socPct is not { } c || c < 0 || c > 100)
-        {
-            problems.Add(whySoc ?? "charge must lie in 0..100 %");
-        }
+        int? index = ChartPanel.ReadStation(_station, rig.Stations.Count, problems);
+        double? gapMm = ChartPanel.ReadNumber(_gap, "gap", "mm", 0, 200, minExclusive: true, problems);
+        double? socPct = ChartPanel.ReadNumber(_soc, "charge", "%", 0, 100, minExclusive: false, problems);
+        _panel.ShowProblems(problems);
         if (problems.Count > 0)
         {
-            _inputs.Text = "! " + string.Join("; ", problems);
             return;
         }
-        _inputs.Text = "";
+        int station = index!.Value;
         double gapM = gapMm!.Value / 1000.0;
         double soc = socPct!.Value / 100.0;
         Context.Work.Request("running points", (token, progress) =>
@@ -164,8 +136,8 @@ public sealed class RunningPointsSheet : Sheet
     {
         if (Map is not { } map)
         {
-            _readout.Text = "! " + (why ?? "nothing to show");
-            _chart.Show(null);
+            _panel.Readout = "! " + (why ?? "nothing to show");
+            _panel.Show(null);
             return;
         }
         var rpm = map.SpeedsRadPerS.Select(Units.RadPerSToRpm).ToList();
@@ -182,8 +154,8 @@ public sealed class RunningPointsSheet : Sheet
         var all = map.Curves.SelectMany(c => c.Equilibria).Where(e => e.Kind == EquilibriumKind.Crossing).ToList();
         lines.Add(new ChartLine("stable", 'O', all.Where(e => e.Stable).Select(e => (e.SpeedRpm, e.Load.TotalTorqueNm)).ToList(), Joined: false));
         lines.Add(new ChartLine("unstable", 'x', all.Where(e => !e.Stable).Select(e => (e.SpeedRpm, e.Load.TotalTorqueNm)).ToList(), Joined: false));
-        _chart.Show(new ChartData("speed, rpm", "torque, N m", lines));
-        _readout.Text = string.Join("\n", map.Curves.Select(Describe));
+        _panel.Show(new ChartData("speed, rpm", "torque, N m", lines));
+        _panel.Readout = string.Join("\n", map.Curves.Select(Describe));
     }
 
     /// <summary>One duty's equilibria in words: speed, stable/unstable, and FAIL with the limits broken.</summary>

@@ -14,6 +14,7 @@ public sealed class MainWindow : Window
     private const int ListWidth = 18;
     private readonly WorkbenchContext _context;
     private readonly List<Sheet> _sheets;
+    private readonly List<string> _sheetKeys;
     private readonly ListView _list;
     private readonly FrameView _frame;
     private readonly Label _status;
@@ -28,11 +29,13 @@ public sealed class MainWindow : Window
     {
         _context = context;
         _sheets = sheets.ToList();
+        int position = 0;
+        _sheetKeys = _sheets.Select(s => KeyMap.SheetKey(s is HelpSheet ? -1 : position++, s is HelpSheet)).ToList();
         Title = "RotorDrive";
         BorderStyle = LineStyle.None;
         var listFrame = new FrameView { Title = "Sheets", X = 0, Y = 0, Width = ListWidth, Height = Dim.Fill(2) };
         _list = new ListView { X = 0, Y = 0, Width = Dim.Fill(), Height = Dim.Fill() };
-        _list.SetSource(new ObservableCollection<string>(_sheets.Select((s, i) => $"{i + 1} {s.SheetName}")));
+        _list.SetSource(new ObservableCollection<string>(_sheets.Select((s, i) => $"{_sheetKeys[i],1} {s.SheetName}")));
         _list.ValueChanged += (_, _) =>
         {
             if (_list.Value is { } i && i >= 0 && i != _current)
@@ -59,8 +62,16 @@ public sealed class MainWindow : Window
             _notice = message;
             UpdateStatus();
         };
+        foreach (var help in _sheets.OfType<HelpSheet>())
+        {
+            help.ListSheets(_sheets.Select((s, i) => (_sheetKeys[i], s.SheetName)).ToList());
+        }
+        _context.App.Keyboard.KeyDown += OnApplicationKeyDown;
         ShowSheet(0, focusSheet: false);
     }
+
+    /// <summary>The key of each sheet in list order (see <see cref="KeyMap.SheetKey"/>).</summary>
+    public IReadOnlyList<string> SheetKeys => _sheetKeys;
 
     /// <summary>The sheets in list order.</summary>
     public IReadOnlyList<Sheet> Sheets => _sheets;
@@ -226,9 +237,9 @@ public sealed class MainWindow : Window
         {
             ShowSheet((_current + _sheets.Count - 1) % _sheets.Count);
         }
-        else if (key.IsAlt && key.NoAlt.AsRune.Value is >= '1' and <= '9')
+        else if (key.IsAlt && SheetForKey(key.NoAlt) is { } index)
         {
-            ShowSheet(key.NoAlt.AsRune.Value - '1');
+            ShowSheet(index);
         }
         else
         {
@@ -242,6 +253,7 @@ public sealed class MainWindow : Window
     {
         if (disposing)
         {
+            _context.App.Keyboard.KeyDown -= OnApplicationKeyDown;
             // Sheets not on show are not sub-views; dispose them here so none is left behind.
             foreach (var sheet in _sheets.Where((_, i) => i != _current))
             {
@@ -249,6 +261,35 @@ public sealed class MainWindow : Window
             }
         }
         base.Dispose(disposing);
+    }
+
+    // Plain sheet keys (digits, '?') are caught before the focused view sees them, but only when the user is not typing
+    // in a field: there they are text.
+    private void OnApplicationKeyDown(object? sender, Key key)
+    {
+        if (key.Handled || key.IsAlt || key.IsCtrl || SheetForKey(key) is not { } index)
+        {
+            return;
+        }
+        var focused = MostFocused;
+        if (focused is null || focused is TextField || !IsRunningTop())
+        {
+            return;
+        }
+        // The sheet list keeps the focus, so the next key jumps again rather than landing in the new sheet's first field;
+        // Enter or Tab moves into the sheet.
+        ShowSheet(index, focusSheet: false);
+        _list.SetFocus();
+        key.Handled = true;
+    }
+
+    private bool IsRunningTop() => _context.App.TopRunnableView is null || ReferenceEquals(_context.App.TopRunnableView, this);
+
+    private int? SheetForKey(Key key)
+    {
+        string text = key.AsRune.Value is > 32 and < 127 ? ((char)key.AsRune.Value).ToString() : "";
+        int index = text.Length == 0 ? -1 : _sheetKeys.IndexOf(text);
+        return index >= 0 ? index : null;
     }
 
     /// <summary>Before a step that would drop unsaved edits: save, discard or cancel. True to go ahead.</summary>

@@ -12,6 +12,9 @@ public static class SheetSet
         new StationsSheet(context),
         new LiftDragSheet(context),
         new RunningPointsSheet(context),
+        new HoverYawSheet(context),
+        new SpinupSheet(context),
+        new EnduranceSheet(context),
         new PartsSheet(context),
         new HelpSheet(context),
     ];

@@ -38,6 +38,9 @@ public sealed class WorkbenchContext
     /// <summary>Background computations.</summary>
     public BackgroundWork Work { get; }
 
+    /// <summary>The prepared rig model of the rig being edited, shared by the sheets.</summary>
+    public RigModelCache Models { get; } = new();
+
     /// <summary>Raised when a sheet has something to tell the user on the status line.</summary>
     public event EventHandler<string>? Notice;
 

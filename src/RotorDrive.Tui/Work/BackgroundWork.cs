@@ -48,7 +48,9 @@ public sealed class BackgroundWork : IDisposable
     /// <param name="work">The computation.</param>
     /// <param name="done">Receives the result on the UI thread.</param>
     /// <param name="immediately">True to start without the debounce delay.</param>
-    public void Request<T>(string name, Func<CancellationToken, IProgress<double>, T> work, Action<T> done, bool immediately = false)
+    /// <param name="stopped">Runs on the UI thread when <see cref="Cancel"/> stops this job before it delivered (not when a
+    /// newer request of the same name replaces it), so the sheet can say its figures are not current; null for nothing.</param>
+    public void Request<T>(string name, Func<CancellationToken, IProgress<double>, T> work, Action<T> done, bool immediately = false, Action? stopped = null)
     {
         ArgumentNullException.ThrowIfNull(work);
         ArgumentNullException.ThrowIfNull(done);
@@ -67,7 +69,7 @@ public sealed class BackgroundWork : IDisposable
                     _app.RemoveTimeout(old.Timeout);
                 }
             }
-            job = new Job(name);
+            job = new Job(name) { Stopped = stopped };
             _jobs[name] = job;
         }
         job.Pending = true;
@@ -95,6 +97,7 @@ public sealed class BackgroundWork : IDisposable
                     if (t.IsCompletedSuccessfully && !job.Token.IsCancellationRequested && current && !_disposed)
                     {
                         LastFailure = null;
+                        job.Delivered = true;
                         done(t.Result);
                     }
                     else if (t.IsFaulted && current)
@@ -123,10 +126,15 @@ public sealed class BackgroundWork : IDisposable
     /// <summary>Cancels every pending and running job; their results are dropped.</summary>
     public void Cancel()
     {
+        var stopped = new List<Action>();
         lock (_gate)
         {
             foreach (var job in _jobs.Values)
             {
+                if (!_disposed && !job.Delivered && !job.Token.IsCancellationRequested && (job.Pending || job.Running) && job.Stopped is { } tell)
+                {
+                    stopped.Add(tell);
+                }
                 job.Cancel();
                 if (job.Timeout is not null)
                 {
@@ -135,6 +143,10 @@ public sealed class BackgroundWork : IDisposable
                 }
                 job.Pending = false;
             }
+        }
+        foreach (var tell in stopped)
+        {
+            tell();
         }
         Raise();
     }
@@ -156,8 +168,9 @@ public sealed class BackgroundWork : IDisposable
         {
             return;
         }
-        Cancel();
+        // Disposed first: jobs cancelled by the disposal do not call back into views that are going away.
         _disposed = true;
+        Cancel();
         lock (_gate)
         {
             foreach (var job in _jobs.Values)
@@ -188,6 +201,10 @@ public sealed class BackgroundWork : IDisposable
         public bool Pending { get; set; }
 
         public bool Running { get; set; }
+
+        public bool Delivered { get; set; }
+
+        public Action? Stopped { get; init; }
 
         public double? Progress { get; set; }
 

@@ -141,4 +141,62 @@ public class MainWindowTests
         bench.Press(Key.F1);
         Assert.Equal("Help", bench.Window.CurrentSheet.SheetName);
     }
+
+    [Fact]
+    public void EverySheetHasAKey_ListedInTheSheetListAndOnHelp_AndPlainKeysWorkOutsideFields()
+    {
+        using var bench = new Bench(columns: 80, rows: 24);
+        var keys = bench.Window.SheetKeys;
+        Assert.Equal(bench.Window.Sheets.Count, keys.Count);
+        Assert.Equal("?", keys[^1]);
+        Assert.Equal("Help", bench.Window.Sheets[^1].SheetName);
+        Assert.Equal(keys.Count, keys.Distinct().Count());
+        Assert.All(keys, k => Assert.NotEqual("", k));
+        string screen = bench.Screen;
+        Assert.Contains("5 Hover & yaw", screen);
+        Assert.Contains("? Help", screen);
+
+        Assert.IsNotType<Terminal.Gui.Views.TextField>(bench.Window.MostFocused);
+        bench.Press(new Key('6'));
+        Assert.Equal("Spin-up", bench.Window.CurrentSheet.SheetName);
+        // The sheet list keeps the focus (the Spin-up sheet's first field does not swallow the next key).
+        Assert.IsNotType<Terminal.Gui.Views.TextField>(bench.Window.MostFocused);
+        bench.Press(new Key('5'));
+        Assert.Equal("Hover & yaw", bench.Window.CurrentSheet.SheetName);
+        bench.Press(new Key('?'));
+        Assert.Equal("Help", bench.Window.CurrentSheet.SheetName);
+        string help = HelpSheet.Compose(bench.Window.Sheets.Select((s, i) => (keys[i], s.SheetName)).ToList());
+        Assert.Contains("  5                 Hover & yaw", help);
+        Assert.Contains("  ?                 Help (also F1)", help);
+        bench.Press(Key.D1.WithAlt);
+        Assert.Equal("Rig", bench.Window.CurrentSheet.SheetName);
+    }
+
+    [Fact]
+    public void DigitsTypedInAField_StayText_AndDoNotSwitchSheets()
+    {
+        using var bench = new Bench();
+        EditDesignGap(bench, "9");
+        Assert.Equal("Rig", bench.Window.CurrentSheet.SheetName);
+        Assert.Equal(0.009, bench.Context.Session.Rig!.DesignGapM, 12);
+    }
+
+    // At 80 x 24 the key-hint line of every sheet fits on the screen (nothing cut off at the right edge).
+    [Fact]
+    public void KeyHints_FitOn80Columns_OnEverySheet()
+    {
+        using var bench = new Bench(columns: 80, rows: 24);
+        for (int i = 0; i < bench.Window.Sheets.Count; i++)
+        {
+            bench.Window.ShowSheet(i);
+            string[] rows = bench.Screen.Split('\n');
+            string hints = rows.Last(r => r.Contains("F10 Quit", StringComparison.Ordinal)).TrimEnd();
+            Assert.True(hints.Length <= 80, $"{bench.Window.Sheets[i].SheetName}: {hints}");
+            Assert.EndsWith("F10 Quit", hints);
+            if (bench.Window.Sheets[i].KeyHints.Length > 0)
+            {
+                Assert.Contains(bench.Window.Sheets[i].KeyHints, hints);
+            }
+        }
+    }
 }

@@ -124,4 +124,18 @@ public sealed class BackgroundWorkTests : IDisposable
         Assert.Contains(0.5, seen);
         Assert.Equal("sweep: the solver gave up", _work.LastFailure);
     }
+
+    [Fact]
+    public async Task Cancel_TellsAStoppedJob_ButNotOneThatDeliveredOrWasReplaced()
+    {
+        var told = new List<string>();
+        _work.Request("done", (_, _) => 1, _ => { }, immediately: true, stopped: () => told.Add("done"));
+        await SettleAsync();
+        _work.Request("replaced", (_, _) => 1, _ => { }, stopped: () => told.Add("replaced, old"));
+        _work.Request("replaced", (_, _) => 2, _ => { }, stopped: () => told.Add("replaced, new"));
+        _work.Cancel();
+        Assert.Equal(["replaced, new"], told);
+        await SettleAsync();
+        Assert.Equal(["replaced, new"], told);
+    }
 }

@@ -1,0 +1,206 @@
+using System.Text;
+using Terminal.Gui.Input;
+using Terminal.Gui.Views;
+using RotorDrive.Core.Craft;
+using RotorDrive.Core.Safety;
+using RotorDrive.Core.Simulation;
+using RotorDrive.Tui.Charts;
+using RotorDrive.Tui.Session;
+using RotorDrive.Tui.Shell;
+using RotorDrive.Tui.Text;
+using static RotorDrive.Tui.Text.Figures;
+
+namespace RotorDrive.Tui.Sheets;
+
+/// <summary>How long the rig hovers (Core's <see cref="EnduranceSimulator"/>, as the <c>endurance</c> command runs it):
+/// the runtime, the limit that ends it in words, and time traces of the state of charge, the pack voltage and every
+/// station's winding and plate temperature. The starting charge is the sheet's own what-if value.</summary>
+public sealed class EnduranceSheet : Sheet
+{
+    /// <summary>Runs at least this long are charted in minutes, shorter ones in seconds.</summary>
+    public const double MinutesFromS = 120;
+
+    private readonly ChartPanel _panel;
+    private readonly TextField _soc;
+    private int _seenRevision = -1;
+
+    /// <summary>Creates the sheet.</summary>
+    public EnduranceSheet(WorkbenchContext context)
+        : base(context, "Endurance")
+    {
+        _panel = new ChartPanel(readoutLines: 3);
+        _soc = _panel.AddInput("charge %", 5, "100");
+        _panel.InputsChanged += (_, _) => Recompute();
+        Add(_panel);
+    }
+
+    /// <inheritdoc/>
+    public override string KeyHints => "F7 next chart";
+
+    /// <summary>The last figures shown, for tests.</summary>
+    internal EnduranceFigures? Shown { get; private set; }
+
+    /// <summary>The chart panel.</summary>
+    internal ChartPanel Panel => _panel;
+
+    /// <summary>The starting-charge field.</summary>
+    internal TextField ChargeField => _soc;
+
+    /// <inheritdoc/>
+    public override void Refresh()
+    {
+        if (Context.Session.Rig is null)
+        {
+            _panel.Readout = "! The rig has problems (see Stations); the endurance run needs a valid rig.";
+            _panel.ShowPages(null);
+            Shown = null;
+            return;
+        }
+        if (_seenRevision != Context.Session.Revision)
+        {
+            _seenRevision = Context.Session.Revision;
+            Recompute();
+        }
+    }
+
+    /// <inheritdoc/>
+    public override bool HandleKey(Key key)
+    {
+        if (key == Key.F7)
+        {
+            _panel.NextPage();
+            return true;
+        }
+        if (key == Key.F5)
+        {
+            Recompute(immediately: true);
+            return true;
+        }
+        return false;
+    }
+
+    /// <summary>The run the sheet shows, as the <c>endurance</c> command runs it.</summary>
+    internal static EnduranceFigures Compute(Rig rig, RigModelCache models, double socFraction, CancellationToken token, IProgress<double>? progress)
+    {
+        var missing = RigModel.MissingParts(rig);
+        if (missing.Count > 0)
+        {
+            return new EnduranceFigures(null, null, missing);
+        }
+        var sim = SimulationRig.FromModel(models.For(rig));
+        progress?.Report(0.2);
+        token.ThrowIfCancellationRequested();
+        var result = EnduranceSimulator.Run(sim, socFraction);
+        progress?.Report(1.0);
+        return new EnduranceFigures(sim, result, []);
+    }
+
+    private void Recompute(bool immediately = false)
+    {
+        if (Context.Session.Rig is not { } rig)
+        {
+            return;
+        }
+        var problems = new List<string>();
+        double? soc = ChartPanel.ReadNumber(_soc, "charge", "%", 0, 100, minExclusive: true, problems);
+        _panel.ShowProblems(problems);
+        if (problems.Count > 0)
+        {
+            return;
+        }
+        double fraction = soc!.Value / 100.0;
+        _panel.Readout = "Running the hover until its first limit ... (F8 stops)";
+        Context.Work.Request("endurance", (token, progress) => Compute(rig, Context.Models, fraction, token, progress), Show, immediately, Stopped);
+    }
+
+    private void Stopped()
+    {
+        Shown = null;
+        _panel.Readout = "Stopped before it finished: the figures are not current. F5 runs the endurance run again.";
+        _panel.ShowPages(null);
+    }
+
+    private void Show(EnduranceFigures figures)
+    {
+        Shown = figures;
+        if (figures.Result is not { } result || figures.Rig is not { } sim)
+        {
+            _panel.Readout = "! The endurance run needs a motor and controller on every station and a pack:\n" + string.Join("\n", figures.Missing);
+            _panel.ShowPages(null);
+            return;
+        }
+        _panel.Readout = DescribeReadout(sim, result);
+        _panel.ShowPages(Charts(sim, result), Compose(sim, result));
+    }
+
+    /// <summary>The runtime in the unit the charts use: "37 s" or "12.4 min".</summary>
+    internal static string Runtime(double seconds)
+        => seconds >= MinutesFromS ? $"{F(seconds / 60, 1)} min" : $"{F(seconds, 0)} s ({F(seconds / 60, 1)} min)";
+
+    /// <summary>The lines above the chart: runtime and verdict, the limit that ended the run, the hottest parts.</summary>
+    internal static string DescribeReadout(SimulationRig sim, EnduranceResult r)
+    {
+        string verdict = r.Passes() ? "the pack ends it" : $"{Over} not the pack";
+        return $"runtime {Runtime(r.RuntimeS)}; {verdict}\n"
+            + $"ended by {StationNumbers.Renumber(r.FirstLimitText, r.LimitStation)}\n"
+            + $"hottest winding {F(r.PeakWindingTempC, 1)} C, plate {F(r.PeakPlateTempC, 1)} C (limit {F(sim.Rig.Limits.PlateTempC, 0)} C)";
+    }
+
+    /// <summary>The chart pages: state of charge, pack voltage, winding and plate temperatures against time.</summary>
+    internal static IReadOnlyList<ChartData> Charts(SimulationRig sim, EnduranceResult r)
+    {
+        if (r.Trace is not { } t || t.TimeS.Count == 0)
+        {
+            return [];
+        }
+        bool minutes = r.RuntimeS >= MinutesFromS;
+        string axis = minutes ? "time, min" : "time, s";
+        var time = minutes ? t.TimeS.Select(x => x / 60).ToList() : t.TimeS.ToList();
+        double t0 = time[0], t1 = time[^1];
+        var limits = sim.Rig.Limits;
+        var windings = ChartLine.PerStation("stations", time, t.WindingTempC).ToList();
+        if (sim.Drivetrains.Select(d => d.Motor.MaxWindingTempC).Where(m => m is not null).Min() is { } maxWinding)
+        {
+            windings.Add(ChartLine.Level("winding limit", '=', t0, t1, maxWinding));
+        }
+        var plates = ChartLine.PerStation("stations", time, t.PlateTempC).ToList();
+        plates.Add(ChartLine.Level("plate limit", '=', t0, t1, limits.PlateTempC));
+        return
+        [
+            new ChartData(axis, "state of charge, %", [ChartLine.Trace("charge", '*', time, t.SocFraction, s => s * 100)], YFromZero: false),
+            new ChartData(axis, "pack voltage, V",
+            [
+                ChartLine.Trace("pack", '*', time, t.BusVoltageV),
+                ChartLine.Level("cutoff", '-', t0, t1, limits.CellCutoffV * sim.Packs.CellsSeries),
+            ], YFromZero: false),
+            new ChartData(axis, "winding temperature, C", windings, YFromZero: false),
+            new ChartData(axis, "plate temperature, C", plates, YFromZero: false),
+        ];
+    }
+
+    /// <summary>The figures page: start and end of the hover, the limit, the hottest parts and the cautions.</summary>
+    internal static string Compose(SimulationRig sim, EnduranceResult r)
+    {
+        var sb = new StringBuilder();
+        sb.AppendLine($"ENDURANCE  trimmed hover at the {F(sim.Rig.DesignGapM * 1000, 1)} mm design gap, {F(sim.MassKg, 1)} kg");
+        sb.AppendLine($"  runtime {Runtime(r.RuntimeS)}, {r.Steps} steps");
+        sb.AppendLine($"  {(r.Passes() ? "" : Over + " ")}ended by {StationNumbers.Renumber(r.FirstLimitText, r.LimitStation)}");
+        sb.AppendLine(r.Passes()
+            ? "  RESULT passes: the pack ends the hover (no thermal, current or trim limit first)"
+            : $"  RESULT {Over} fails: a limit other than the pack ends the hover");
+        sb.AppendLine();
+        sb.AppendLine($"AT THE START  pack current {F(r.StartPackCurrentA, 1)} A");
+        foreach (var s in r.StartHover.Stations)
+        {
+            sb.AppendLine($"  station {StationNumbers.Of(s.Index)}: {F(s.SpeedRpm, 0)} rpm, duty {F(s.Duty, 3)}, motor {F(s.MotorCurrentA, 1)} A");
+        }
+        sb.AppendLine($"AT THE END  charge {F(r.FinalSocFraction * 100, 1)} %, bus {F(r.FinalBusVoltageV, 1)} V, pack current {F(r.FinalPackCurrentA, 1)} A");
+        sb.AppendLine($"  hottest winding {F(r.PeakWindingTempC, 1)} C, hottest plate patch {F(r.PeakPlateTempC, 1)} C (limit {F(sim.Rig.Limits.PlateTempC, 0)} C)");
+        sb.AppendLine();
+        sb.Append(CautionText.Compose(Cautions.For(new CautionFindings(true, [], r.PeakPlateTempC, r.PeakWindingTempC))));
+        return sb.ToString();
+    }
+
+    /// <summary>What the sheet computed: the prepared rig and the run, or the parts missing before either can be.</summary>
+    internal sealed record EnduranceFigures(SimulationRig? Rig, EnduranceResult? Result, IReadOnlyList<string> Missing);
+}
