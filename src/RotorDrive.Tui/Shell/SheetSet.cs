@@ -12,6 +12,8 @@ public static class SheetSet
         new StationsSheet(context),
         new LiftDragSheet(context),
         new RunningPointsSheet(context),
+        new ShortlistSheet(context),
+        new StressSheet(context),
         new PartsSheet(context),
         new HelpSheet(context),
     ];
