@@ -9,7 +9,7 @@ namespace RotorDrive.Tui.Session;
 public static class ToleranceText
 {
     /// <summary>The forms, for hints.</summary>
-    public const string Forms = "normal S | normal S% | uniform L H | uniform L% H% | blank: none";
+    public const string Forms = "normal S[%] or uniform L[%] H[%]; blank: no spread";
 
     /// <summary>The entry as text ("" when absent). An entry with several spreads (a broken file) shows its first.</summary>
     public static string Format(RigToleranceEntry? entry)
@@ -54,7 +54,7 @@ public static class ToleranceText
         string kind = words[0].ToLowerInvariant();
         if (kind is not ("normal" or "uniform"))
         {
-            why = $"'{t}' is not a spread; write {Forms}";
+            why = $"'{t}' is not a spread; write {Forms} (e.g. normal 2%, uniform -0.3 0.3)";
             return false;
         }
         var numbers = new List<double>();

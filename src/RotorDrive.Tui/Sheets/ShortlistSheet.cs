@@ -27,6 +27,9 @@ public sealed class ShortlistSheet : Sheet
     /// <summary>Largest pack count the sheet accepts.</summary>
     public const int MaxPacks = 16;
 
+    /// <summary>The table's columns.</summary>
+    public static IReadOnlyList<string> Columns { get; } = ["rank", "P", "run min", "mass kg", "margin %", "motor", "controller", "packs", "lift-off s", "score"];
+
     private const string RankJob = "ranking";
     private const string WhyNotJob = "why not";
 
@@ -68,7 +71,7 @@ public sealed class ShortlistSheet : Sheet
             ApplySelected();
             e.Handled = true;
         };
-        _hint = new Label { X = 0, Y = Pos.Bottom(_table), Width = Dim.Fill(), Height = 1, Text = "Enter: apply the selected row to the rig (every station, the pack and count)" };
+        _hint = new Label { X = 0, Y = Pos.Bottom(_table), Width = Dim.Fill(), Height = 1, Text = "Enter applies the selected row to the rig (all stations and the pack)" };
         Add(new Label { X = 0, Y = Pos.Bottom(_hint), Text = "why not motor" });
         _whyNot = new TextField { X = 14, Y = Pos.Bottom(_hint), Width = 18, Text = "" };
         _whyNotMessage = new Label { X = 33, Y = Pos.Bottom(_hint), Width = Dim.Fill(), Height = 1, Text = "F4 picks" };
@@ -313,6 +316,7 @@ public sealed class ShortlistSheet : Sheet
     {
         bool running = Context.Work.IsActive(RankJob);
         _progress.Visible = running;
+        _state.Width = running ? Dim.Fill(21) : Dim.Fill();
         if (running)
         {
             double fraction = Context.Work.Current is { Name: RankJob, Progress: { } f } ? f : 0;
@@ -327,7 +331,7 @@ public sealed class ShortlistSheet : Sheet
         }
         var r = shown.Result;
         string stale = shown.Key != _requested ? " (earlier settings; stopped: F5 ranks again)" : "";
-        _state.Text = $"{N(r.TotalCombinations)} combinations: {N(r.AcceptedCount)} accepted, {N(r.RejectedCount)} rejected, {r.ParetoRanks.Count} in the Pareto set P{stale}";
+        _state.Text = $"{N(r.TotalCombinations)} tried, {N(r.AcceptedCount)} accepted, {r.ParetoRanks.Count} in the Pareto set (P){stale}";
     }
 
     private void ShowTable()
@@ -343,12 +347,12 @@ public sealed class ShortlistSheet : Sheet
             var f = e.Figures!;
             return (IReadOnlyList<string>)
             [
-                t.Rank.ToString(CultureInfo.InvariantCulture), t.InParetoSet ? "P" : "", e.MotorId, e.ControllerId, $"{e.Candidate.PackCount} x {e.PackId}",
-                F(f.RuntimeS / 60, 1), F(f.TotalMassKg, 1), f.CurrentMargin is { } m ? F(m * 100, 0) : "-", t.LiftoffTimeS is { } s ? F(s, 2) : "none",
-                F(t.Score, 3),
+                t.Rank.ToString(CultureInfo.InvariantCulture), t.InParetoSet ? "P" : "", F(f.RuntimeS / 60, 1), F(f.TotalMassKg, 1),
+                f.CurrentMargin is { } m ? F(m * 100, 0) : "-", e.MotorId, e.ControllerId, $"{e.Candidate.PackCount} x {e.PackId}",
+                t.LiftoffTimeS is { } s ? F(s, 2) : "none", F(t.Score, 3),
             ];
         }).ToList();
-        _table.Table = new TextTableSource(["rank", "P", "motor", "controller", "packs", "run min", "mass kg", "margin %", "lift-off s", "score"], rows);
+        _table.Table = new TextTableSource(Columns, rows);
         if (rows.Count > 0)
         {
             _table.Value = new TableSelection(new Point(0, 0));
@@ -375,7 +379,7 @@ public sealed class ShortlistSheet : Sheet
         if (shown.Result.RankOf(candidate) is { } rank)
         {
             bool pareto = shown.Result.ParetoRanks.Contains(rank);
-            _assigned.Text = $"This rig: {evaluation.Label}: rank {rank} of {N(shown.Result.AcceptedCount)}{(pareto ? ", in the Pareto set P" : "")}";
+            _assigned.Text = $"This rig: {evaluation.Label}: rank {rank}{(pareto ? " P" : "")} of {N(shown.Result.AcceptedCount)}";
         }
         else
         {

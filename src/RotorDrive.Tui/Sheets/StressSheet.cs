@@ -213,7 +213,7 @@ public sealed class StressSheet : Sheet
         }
         else
         {
-            _hint.Text = "spread: " + ToleranceText.Forms;
+            _hint.Text = "write: " + ToleranceText.Forms;
             _hint.SchemeName = null;
         }
     }
@@ -222,6 +222,7 @@ public sealed class StressSheet : Sheet
     {
         bool running = Context.Work.IsActive(StressJob);
         _progress.Visible = running;
+        _state.Width = running ? Dim.Fill(21) : Dim.Fill();
         if (running)
         {
             int done = SamplesDone;

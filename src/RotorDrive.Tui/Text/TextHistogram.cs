@@ -8,6 +8,9 @@ public static class TextHistogram
     /// <summary>Largest number of bins.</summary>
     public const int MaxBins = 20;
 
+    /// <summary>Longest bar, in characters (wider screens do not stretch the bars beyond easy reading).</summary>
+    public const int MaxBar = 50;
+
     /// <summary>The number of bins for n values by Sturges' rule, ceil(log2 n) + 1 (H. A. Sturges, "The choice of a
     /// class interval", J. Am. Stat. Assoc. 21, 1926), at most <see cref="MaxBins"/>.</summary>
     public static int SturgesBins(int count)
@@ -55,7 +58,7 @@ public static class TextHistogram
         var edges = bins.Select(b => (Low: b.Low.ToString(format, CultureInfo.InvariantCulture), High: b.High.ToString(format, CultureInfo.InvariantCulture))).ToList();
         int lowWidth = edges.Max(e => e.Low.Length), highWidth = edges.Max(e => e.High.Length);
         int countWidth = bins.Max(b => b.Count).ToString(CultureInfo.InvariantCulture).Length;
-        int barWidth = Math.Max(5, Math.Max(30, width) - (2 + lowWidth + 3 + highWidth + 2 + 1 + countWidth));
+        int barWidth = Math.Clamp(Math.Max(30, width) - (2 + lowWidth + 3 + highWidth + 2 + 1 + countWidth), 5, MaxBar);
         int most = Math.Max(1, bins.Max(b => b.Count));
         var lines = new List<string>(bins.Count);
         for (int i = 0; i < bins.Count; i++)
