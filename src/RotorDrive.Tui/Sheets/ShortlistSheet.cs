@@ -443,6 +443,8 @@ public sealed class ShortlistSheet : Sheet
             if (_explained is { Count: > 0 } explained)
             {
                 var accepted = explained.Where(e => e.Accepted).Select(e => shown.Result.RankOf(e.Candidate)).Where(r => r is not null).Select(r => r!.Value).ToList();
+                string summary = $"{accepted.Count} of {explained.Count} accepted" + (accepted.Count > 0 ? $", best rank {accepted.Min()}" : "");
+                _whyNotMessage.Text = $"{summary} (list below)";
                 lines.Add("");
                 lines.Add($"Why not {explained[0].MotorId}: {explained.Count} combinations with it, {accepted.Count} accepted"
                     + (accepted.Count > 0 ? $" (best rank {accepted.Min()})" : ""));

@@ -74,7 +74,8 @@ public sealed class StressSheet : Sheet
         _tolerances.FocusChanged += (_, _) => ShowHint();
         _results = new ListView { X = 0, Y = Pos.Bottom(_tolerances), Width = Dim.Fill(), Height = Dim.Fill() };
         _results.SetSource(_resultItems);
-        Add(_samples, _seed, _runMessage, _state, _progress, _hint, _tolerances, _results);
+        // The results come before the tolerances in the tab order: one Tab from the seed reaches them.
+        Add(_samples, _seed, _results, _runMessage, _state, _progress, _hint, _tolerances);
         _samples.TextChanged += (_, _) => ReadSettings();
         _seed.TextChanged += (_, _) => ReadSettings();
         context.Work.StateChanged += OnWorkChanged;
@@ -131,6 +132,13 @@ public sealed class StressSheet : Sheet
         {
             _figure = (_figure + 1) % StressStudy.FigureKeys.Count;
             ShowResults();
+            // Bring the new histogram into view.
+            int at = _resultItems.IndexOf(_resultItems.FirstOrDefault(l => l.StartsWith("Histogram of", StringComparison.Ordinal)) ?? "");
+            if (at >= 0)
+            {
+                _results.SetSelection(at, false);
+                _results.Viewport = _results.Viewport with { Y = Math.Max(0, Math.Min(at, _resultItems.Count - _results.Viewport.Height)) };
+            }
             return true;
         }
         return false;
@@ -190,11 +198,11 @@ public sealed class StressSheet : Sheet
         string s = _samples.Text.Trim(), r = _seed.Text.Trim();
         if (!int.TryParse(s, NumberStyles.Integer, CultureInfo.InvariantCulture, out int samples) || samples < 1 || samples > MaxSamples)
         {
-            problems.Add($"samples: '{s}' is not a whole number 1..{MaxSamples.ToString("N0", CultureInfo.InvariantCulture)}");
+            problems.Add($"samples: a whole number 1..{MaxSamples.ToString("N0", CultureInfo.InvariantCulture)}");
         }
         if (!int.TryParse(r, NumberStyles.Integer, CultureInfo.InvariantCulture, out int seed))
         {
-            problems.Add($"seed: '{r}' is not a whole number");
+            problems.Add("seed: a whole number");
         }
         _runMessage.Text = problems.Count > 0 ? "! " + string.Join("; ", problems) : "F5 runs";
         _runMessage.SchemeName = problems.Count > 0 ? "Error" : null;
@@ -227,7 +235,7 @@ public sealed class StressSheet : Sheet
         {
             int done = SamplesDone;
             _progress.Fraction = _requestedSamples > 0 ? (float)done / _requestedSamples : 0;
-            _state.Text = $"Running: {done} of {_requestedSamples} samples... F8 stops";
+            _state.Text = done == 0 ? "Preparing the load tables... F8 stops" : $"Running: {done} of {_requestedSamples} samples... F8 stops";
             return;
         }
         if (_shown is not { } shown)
@@ -265,7 +273,7 @@ public sealed class StressSheet : Sheet
             lines.Add("No sample finished.");
             return lines;
         }
-        lines.Add($"Fails any criterion: {Pct(overall.Estimate)} ({overall.Count} of {overall.Trials}), 95 % interval {Pct(overall.Lower)} to {Pct(overall.Upper)}");
+        lines.Add($"Overall failure rate {Pct(overall.Estimate)}, 95 % interval {Pct(overall.Lower)} - {Pct(overall.Upper)}");
         lines.Add($"  {"criterion",-13} {"fails",7} {"rate",8}  95 % interval (Wilson)");
         foreach (var c in r.Criteria)
         {
@@ -285,7 +293,7 @@ public sealed class StressSheet : Sheet
         string key = StressStudy.FigureKeys[_figure];
         var (figureWords, figureDecimals) = FigureWords[key];
         var values = r.SampleResults.Select(s => StressStudy.FigureValue(s.Outcome, key)).Where(v => v is not null).Select(v => v!.Value).ToList();
-        lines.Add($"Histogram of {figureWords} over {values.Count} samples (F7: next figure):");
+        lines.Add($"Histogram of {figureWords}, {values.Count} samples (F7: next)");
         var bins = TextHistogram.Bins(values);
         lines.AddRange(bins.Count == 0 ? ["  no sample has this figure"] : TextHistogram.Render(bins, width - 1, figureDecimals));
         if (r.Percentiles.First(p => p.Key == key).Summary is { } summary)

@@ -148,7 +148,7 @@ public class StressSheetTests
         using var bench = new Bench(120, 40);
         var sheet = Open(bench);
         Retype(bench, sheet.SamplesField, "12k");
-        Assert.Equal("! samples: '12k' is not a whole number 1..1,000,000", sheet.RunMessage);
+        Assert.Equal("! samples: a whole number 1..1,000,000", sheet.RunMessage);
         bench.Press(Key.F5);
         Assert.False(bench.Context.Work.IsActive("stress test"));
         Assert.Equal("12k", sheet.SamplesField.Text);
