@@ -368,7 +368,7 @@ public sealed class ShortlistSheet : Sheet
         }
         if (shown.Study.CandidateOf(rig) is not { } candidate)
         {
-            _assigned.Text = "This rig: no single drivetrain (the same motor and controller everywhere, a pack within the pack count) to place.";
+            _assigned.Text = "Rig: no single drivetrain to place (the same motor and controller everywhere, a pack within the pack count).";
             return;
         }
         if (!_evaluated.TryGetValue(candidate, out var evaluation))
@@ -379,12 +379,12 @@ public sealed class ShortlistSheet : Sheet
         if (shown.Result.RankOf(candidate) is { } rank)
         {
             bool pareto = shown.Result.ParetoRanks.Contains(rank);
-            _assigned.Text = $"This rig: {evaluation.Label}: rank {rank}{(pareto ? " P" : "")} of {N(shown.Result.AcceptedCount)}";
+            _assigned.Text = $"Rig: {evaluation.Label}: rank {rank}{(pareto ? " P" : "")} of {N(shown.Result.AcceptedCount)}";
         }
         else
         {
             string why = evaluation.Rejections.Count > 0 ? evaluation.Rejections[0].Kind.Describe() : "not ranked";
-            _assigned.Text = $"This rig: {evaluation.Label}: ! rejected: {why}" + (evaluation.Rejections.Count > 1 ? $" (+{evaluation.Rejections.Count - 1} more)" : "");
+            _assigned.Text = $"Rig: {evaluation.Label}: ! rejected: {why}" + (evaluation.Rejections.Count > 1 ? $" (+{evaluation.Rejections.Count - 1} more)" : "");
         }
     }
 

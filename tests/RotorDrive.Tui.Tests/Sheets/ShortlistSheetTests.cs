@@ -55,7 +55,7 @@ public class ShortlistSheetTests
             var own = study.AssignedCandidate!.Value;
             Assert.Equal(expected.AssignedRank, expected.RankOf(own));
             string where = expected.AssignedRank is { } rank ? $"rank {rank}" : "! rejected";
-            Assert.Contains($"This rig: {expected.Assigned!.Label}: {where}", sheet.AssignedText);
+            Assert.Contains($"Rig: {expected.Assigned!.Label}: {where}", sheet.AssignedText);
             foreach (var count in expected.RejectionCounts.Where(c => c.Count > 0))
             {
                 Assert.Contains(sheet.DetailLines, l => l.EndsWith(count.Kind.Describe(), StringComparison.Ordinal) && l.Contains(count.Count.ToString("N0", CultureInfo.InvariantCulture)));
@@ -114,7 +114,7 @@ public class ShortlistSheetTests
             // The ranking does not depend on the parts assigned: the rig is placed again without another run.
             await bench.SettleAsync();
             Assert.Same(result, sheet.Result);
-            Assert.Contains($"This rig: {pick.Label}: rank {result.Top[row].Rank}", sheet.AssignedText);
+            Assert.Contains($"Rig: {pick.Label}: rank {result.Top[row].Rank}", sheet.AssignedText);
             // Other sheets see the new parts.
             bench.Window.ShowSheet("Stations");
             Assert.Contains(pick.MotorId, bench.Screen);
