@@ -45,6 +45,8 @@ public sealed class ShortlistSheet : Sheet
     private readonly Label _whyNotMessage;
     private readonly ListView _details;
     private readonly ObservableCollection<string> _detailItems = [];
+    private List<string> _detailLines = [];
+    private int _wrappedAt = -1;
     private readonly Dictionary<RankCandidate, RankEvaluation> _evaluated = [];
     private RankObjective _objective = RankObjective.Runtime;
     private RankKey? _requested;
@@ -77,6 +79,13 @@ public sealed class ShortlistSheet : Sheet
         _whyNotMessage = new Label { X = 33, Y = Pos.Bottom(_hint), Width = Dim.Fill(), Height = 1, Text = "F4 picks" };
         _details = new ListView { X = 0, Y = Pos.Bottom(_whyNot), Width = Dim.Fill(), Height = Dim.Fill() };
         _details.SetSource(_detailItems);
+        _details.FrameChanged += (_, _) =>
+        {
+            if (_details.Viewport.Width > 0 && _details.Viewport.Width - 1 != _wrappedAt && _detailLines.Count > 0)
+            {
+                WrapDetails();
+            }
+        };
         Add(_objectiveLabel, _packs, _packsMessage, _state, _progress, _assigned, _table, _hint, _whyNot, _whyNotMessage, _details);
 
         _packs.TextChanged += (_, _) =>
@@ -124,8 +133,8 @@ public sealed class ShortlistSheet : Sheet
     /// <summary>The run state line.</summary>
     internal string StateText => _state.Text;
 
-    /// <summary>The rejection counts and the "why not" lines.</summary>
-    internal IReadOnlyList<string> DetailLines => _detailItems;
+    /// <summary>The rejection counts and the "why not" lines (before wrapping).</summary>
+    internal IReadOnlyList<string> DetailLines => _detailLines;
 
     /// <summary>The "why not" evaluations on show, or null.</summary>
     internal IReadOnlyList<RankEvaluation>? Explained => _explained;
@@ -443,8 +452,7 @@ public sealed class ShortlistSheet : Sheet
             if (_explained is { Count: > 0 } explained)
             {
                 var accepted = explained.Where(e => e.Accepted).Select(e => shown.Result.RankOf(e.Candidate)).Where(r => r is not null).Select(r => r!.Value).ToList();
-                string summary = $"{accepted.Count} of {explained.Count} accepted" + (accepted.Count > 0 ? $", best rank {accepted.Min()}" : "");
-                _whyNotMessage.Text = $"{summary} (list below)";
+                _whyNotMessage.Text = $"{accepted.Count}/{explained.Count} accepted" + (accepted.Count > 0 ? $", best {accepted.Min()}" : "");
                 lines.Add("");
                 lines.Add($"Why not {explained[0].MotorId}: {explained.Count} combinations with it, {accepted.Count} accepted"
                     + (accepted.Count > 0 ? $" (best rank {accepted.Min()})" : ""));
@@ -465,10 +473,31 @@ public sealed class ShortlistSheet : Sheet
                 }
             }
         }
-        _detailItems.Clear();
-        foreach (string line in lines)
+        if (_shown is { } listed)
         {
-            _detailItems.Add(line);
+            lines.Add("");
+            foreach (string caution in listed.Result.Top.SelectMany(t => t.Evaluation.Cautions).Select(c => c.Message).Distinct())
+            {
+                lines.Add("Caution: " + caution);
+            }
+            lines.Add("Estimates only: follow the parts' ratings; lithium packs, strong magnets and spinning rotors are dangerous (Help).");
+        }
+        _detailLines = lines;
+        WrapDetails();
+    }
+
+    // Long reasons are wrapped to the list's width so every word can be read without scrolling sideways.
+    private void WrapDetails()
+    {
+        int width = Math.Max(30, (_details.Viewport.Width > 0 ? _details.Viewport.Width : 60) - 1);
+        _wrappedAt = width;
+        _detailItems.Clear();
+        foreach (string line in _detailLines)
+        {
+            foreach (string part in line.Length == 0 ? [""] : Wrap.Lines(line, width))
+            {
+                _detailItems.Add(part);
+            }
         }
     }
 
