@@ -118,17 +118,6 @@ public static class RankCommand
         var explained = whyNotIndex is { } motorIndex
             ? study.ExplainMotor(motorIndex).Select(e => simulationRejected.GetValueOrDefault(e.Candidate) ?? e).ToList()
             : null;
-        var rankByIndex = new Dictionary<long, int>();
-        if (explained is not null)
-        {
-            for (int i = 0; i < result.Ordered.Count; i++)
-            {
-                if (result.Ordered[i].MotorIndex == whyNotIndex)
-                {
-                    rankByIndex[study.IndexOf(result.Ordered[i])] = i + 1;
-                }
-            }
-        }
         var pareto = new HashSet<int>(result.ParetoRanks);
 
         if (request.CsvPath is { } path)
@@ -143,17 +132,17 @@ public static class RankCommand
 
         if (request.Json)
         {
-            JsonOutput.Write(output, ToReport(rig, study, result, explained, rankByIndex));
+            JsonOutput.Write(output, ToReport(rig, study, result, explained));
         }
         else
         {
-            WriteText(output, rig, study, result, pareto, explained, rankByIndex, request);
+            WriteText(output, rig, study, result, pareto, explained, request);
         }
         return result.AcceptedCount > 0 ? ExitCodes.Ok : ExitCodes.LimitFindings;
     }
 
     private static void WriteText(TextWriter o, Rig rig, RankStudy study, RankResult result, HashSet<int> pareto,
-        IReadOnlyList<RankEvaluation>? explained, Dictionary<long, int> rankByIndex, RankRequest request)
+        IReadOnlyList<RankEvaluation>? explained, RankRequest request)
     {
         var catalog = study.Catalog;
         o.WriteLine($"Ranking for {rig.Name}: {catalog.Motors.Count} motors x {catalog.Controllers.Count} controllers x {catalog.Packs.Count} packs"
@@ -249,7 +238,7 @@ public static class RankCommand
             foreach (var e in explained)
             {
                 string verdict = e.Accepted
-                    ? $"accepted, rank {rankByIndex.GetValueOrDefault(study.IndexOf(e.Candidate))}"
+                    ? $"accepted, rank {result.RankOf(e.Candidate)}"
                     : string.Join("; ", e.Rejections.Select(r => r.Message));
                 table.AddRow(e.ControllerId, $"{e.Candidate.PackCount} x {e.PackId}", verdict);
             }
@@ -294,7 +283,7 @@ public static class RankCommand
 
     private static string CsvText(string text) => text.Contains(',') || text.Contains('"') ? "\"" + text.Replace("\"", "\"\"") + "\"" : text;
 
-    private static RankReport ToReport(Rig rig, RankStudy study, RankResult result, IReadOnlyList<RankEvaluation>? explained, Dictionary<long, int> rankByIndex)
+    private static RankReport ToReport(Rig rig, RankStudy study, RankResult result, IReadOnlyList<RankEvaluation>? explained)
     {
         var pareto = new HashSet<int>(result.ParetoRanks);
         var top = result.Top.Select(t => Entry(t.Evaluation, t.Rank, t.InParetoSet, t.Score, t.LiftoffTimeS)).ToList();
@@ -304,7 +293,7 @@ public static class RankCommand
         WhyNotReport? whyNot = explained is null ? null : new WhyNotReport(
             explained[0].MotorId,
             explained.Select(e => new WhyNotEntry(e.ControllerId, e.PackId, e.Candidate.PackCount, e.Accepted,
-                e.Accepted ? rankByIndex.GetValueOrDefault(study.IndexOf(e.Candidate)) : null,
+                e.Accepted ? result.RankOf(e.Candidate) : null,
                 e.Rejections.Select(x => new ReasonReport(x.Kind.Key(), x.Message)).ToList())).ToList());
         return new RankReport(
             rig.Name,

@@ -1,5 +1,6 @@
 using RotorDrive.Core;
 using RotorDrive.Core.Craft;
+using RotorDrive.Core.Studies.Stress;
 using RotorDrive.Files;
 using RotorDrive.Files.Catalogs;
 using RotorDrive.Files.Rigs;
@@ -39,6 +40,10 @@ public sealed class RigSession
 
     /// <summary>The resolved rig (SI units); null while any problem remains.</summary>
     public Rig? Rig { get; private set; }
+
+    /// <summary>The part spreads of the rig's "tolerances" section in SI units, as the stress test reads them;
+    /// <see cref="StressTolerances.None"/> while the rig has problems or has no such section.</summary>
+    public StressTolerances Tolerances { get; private set; } = StressTolerances.None;
 
     /// <summary>Every problem of the rig document and its catalogs.</summary>
     public IReadOnlyList<InputProblem> Problems { get; private set; } = [];
@@ -114,6 +119,29 @@ public sealed class RigSession
         Resolve();
     }
 
+    /// <summary>Applies one edit that sets several fields at once (a shortlist pick: every station's motor and controller,
+    /// the pack and its count), marks the session unsaved and re-resolves the rig once. Text those fields held that was
+    /// not a valid value is replaced by the edit.</summary>
+    /// <param name="fieldPaths">The JSON paths of every field the edit sets.</param>
+    /// <param name="edit">The change.</param>
+    public void EditFields(IReadOnlyCollection<string> fieldPaths, Action<RigDocument> edit)
+    {
+        ArgumentNullException.ThrowIfNull(fieldPaths);
+        ArgumentNullException.ThrowIfNull(edit);
+        if (Document is null)
+        {
+            return;
+        }
+        edit(Document);
+        foreach (string path in fieldPaths)
+        {
+            _untyped.Remove(path);
+            _edited.Add(path);
+        }
+        IsDirty = true;
+        Resolve();
+    }
+
     /// <summary>Records that a field holds text that is not a valid value; the document keeps its last valid value.</summary>
     public void MarkUntyped(string fieldPath, string message)
     {
@@ -122,14 +150,16 @@ public sealed class RigSession
         Changed?.Invoke(this, EventArgs.Empty);
     }
 
-    /// <summary>The message for a field: typed text that is not a value, or the rig's problem at that JSON path.</summary>
+    /// <summary>The message for a field: typed text that is not a value, or the rig's problem at that JSON path, or else
+    /// the first problem inside it (a tolerance entry's "$.tolerances.KEY.normal_sd_pct" for the field "$.tolerances.KEY").</summary>
     public string? MessageFor(string fieldPath)
     {
         if (_untyped.TryGetValue(fieldPath, out string? typed))
         {
             return typed;
         }
-        return Problems.FirstOrDefault(p => string.Equals(p.Field, fieldPath, StringComparison.Ordinal))?.Message;
+        return (Problems.FirstOrDefault(p => string.Equals(p.Field, fieldPath, StringComparison.Ordinal))
+            ?? Problems.FirstOrDefault(p => p.Field.StartsWith(fieldPath + ".", StringComparison.Ordinal)))?.Message;
     }
 
     /// <summary>Saves to the current path: the previous file is kept as PATH.bak, the new one is written atomically.</summary>
@@ -245,6 +275,7 @@ public sealed class RigSession
             .Distinct()
             .ToList();
         Rig = Problems.Count == 0 ? resolved.Rig : null;
+        Tolerances = Rig is null ? StressTolerances.None : resolved.Tolerances;
         Revision++;
         Changed?.Invoke(this, EventArgs.Empty);
     }

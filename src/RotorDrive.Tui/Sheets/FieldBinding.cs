@@ -15,14 +15,15 @@ internal sealed class FieldBinding
     private readonly WorkbenchContext _context;
     private bool _updating;
 
-    public FieldBinding(View parent, Pos y, FieldSpec spec, WorkbenchContext context, int x = 0, int labelWidth = 16, int unitWidth = 6)
+    public FieldBinding(View parent, Pos y, FieldSpec spec, WorkbenchContext context, int x = 0, int labelWidth = 16, int unitWidth = 6,
+        int fieldWidth = FieldWidth)
     {
         Spec = spec;
         _context = context;
         Label = new Label { X = x, Y = y, Width = labelWidth, Text = spec.Label };
-        Field = new TextField { X = x + labelWidth + 1, Y = y, Width = FieldWidth, Text = "" };
-        Unit = new Label { X = x + labelWidth + 1 + FieldWidth + 1, Y = y, Width = unitWidth, Text = spec.Unit };
-        Message = new Label { X = x + labelWidth + 1 + FieldWidth + 1 + unitWidth + 1, Y = y, Width = Dim.Fill(), Height = 1, Text = "" };
+        Field = new TextField { X = x + labelWidth + 1, Y = y, Width = fieldWidth, Text = "" };
+        Unit = new Label { X = x + labelWidth + 1 + fieldWidth + 1, Y = y, Width = unitWidth, Text = spec.Unit };
+        Message = new Label { X = x + labelWidth + 1 + fieldWidth + 1 + unitWidth + 1, Y = y, Width = Dim.Fill(), Height = 1, Text = "" };
         Field.TextChanged += (_, _) => Typed();
         parent.Add(Label, Field, Unit, Message);
     }

@@ -66,6 +66,8 @@ public sealed class HelpSheet : Sheet
         sb.AppendLine("  *      on the status line: unsaved edits");
         sb.AppendLine("  1↻ 2↺  station 1 clockwise, station 2 counter-clockwise seen from above (F7 on the Stations sheet: 1cw 2ccw)");
         sb.AppendLine("  +      centre of gravity in the station sketch");
+        sb.AppendLine("  P      on the Shortlist: in the Pareto set over runtime, mass and current margin");
+        sb.AppendLine("  PARTIAL  on the Stress sheet: a run stopped early; its figures cover the samples finished");
         sb.AppendLine();
         sb.AppendLine("CAUTIONS");
         foreach (var caution in Cautions.All)

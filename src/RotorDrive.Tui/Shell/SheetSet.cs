@@ -15,6 +15,8 @@ public static class SheetSet
         new HoverYawSheet(context),
         new SpinupSheet(context),
         new EnduranceSheet(context),
+        new ShortlistSheet(context),
+        new StressSheet(context),
         new PartsSheet(context),
         new HelpSheet(context),
     ];

@@ -38,6 +38,16 @@ public sealed class BackgroundWork : IDisposable
         }
     }
 
+    /// <summary>True while a job of this name is waiting for its debounce delay or running.</summary>
+    /// <param name="name">The job's name.</param>
+    public bool IsActive(string name)
+    {
+        lock (_gate)
+        {
+            return _jobs.TryGetValue(name, out var job) && (job.Running || job.Pending);
+        }
+    }
+
     /// <summary>The last failure message, if the last job of any name threw; cleared when a job completes.</summary>
     public string? LastFailure { get; private set; }
 
@@ -50,7 +60,11 @@ public sealed class BackgroundWork : IDisposable
     /// <param name="immediately">True to start without the debounce delay.</param>
     /// <param name="stopped">Runs on the UI thread when <see cref="Cancel"/> stops this job before it delivered (not when a
     /// newer request of the same name replaces it), so the sheet can say its figures are not current; null for nothing.</param>
-    public void Request<T>(string name, Func<CancellationToken, IProgress<double>, T> work, Action<T> done, bool immediately = false, Action? stopped = null)
+    /// <param name="keepWhenCancelled">True for work that, when cancelled, returns what it finished so far (a stress
+    /// run): its result still reaches <paramref name="done"/> after <see cref="Cancel"/>, unless a newer request of the
+    /// same name replaced it. False (default) drops the result of a cancelled job.</param>
+    public void Request<T>(string name, Func<CancellationToken, IProgress<double>, T> work, Action<T> done, bool immediately = false,
+        Action? stopped = null, bool keepWhenCancelled = false)
     {
         ArgumentNullException.ThrowIfNull(work);
         ArgumentNullException.ThrowIfNull(done);
@@ -94,7 +108,7 @@ public sealed class BackgroundWork : IDisposable
                     {
                         current = _jobs.TryGetValue(name, out var latest) && ReferenceEquals(latest, job);
                     }
-                    if (t.IsCompletedSuccessfully && !job.Token.IsCancellationRequested && current && !_disposed)
+                    if (t.IsCompletedSuccessfully && (keepWhenCancelled || !job.Token.IsCancellationRequested) && current && !_disposed)
                     {
                         LastFailure = null;
                         job.Delivered = true;

@@ -138,4 +138,30 @@ public sealed class BackgroundWorkTests : IDisposable
         await SettleAsync();
         Assert.Equal(["replaced, new"], told);
     }
+
+    [Fact]
+    public async Task Cancel_OfWorkThatKeepsWhatItFinished_HandsThatOver_AndIsActiveFollowsTheJob()
+    {
+        using var started = new ManualResetEventSlim();
+        int? delivered = null;
+        _work.Request("stress", (token, _) =>
+        {
+            // One piece of work is finished before the test cancels; more may follow until it does.
+            int done = 1;
+            started.Set();
+            while (!token.IsCancellationRequested)
+            {
+                done++;
+                Thread.Sleep(1);
+            }
+            return done;
+        }, r => delivered = r, immediately: true, keepWhenCancelled: true);
+        Assert.True(_work.IsActive("stress"));
+        Assert.False(_work.IsActive("other"));
+        Assert.True(started.Wait(TimeSpan.FromSeconds(10)));
+        _work.Cancel();
+        await SettleAsync();
+        Assert.True(delivered >= 1, "the work's own result reached the UI thread");
+        Assert.False(_work.IsActive("stress"));
+    }
 }

@@ -38,4 +38,19 @@ public sealed record RankResult(
 
     /// <summary>Rejected combinations.</summary>
     public long RejectedCount => TotalCombinations - Ordered.Count;
+
+    /// <summary>The 1-based rank of a combination among the accepted ones, or null when it was rejected or is not in
+    /// the sweep.</summary>
+    /// <param name="candidate">The combination.</param>
+    public int? RankOf(RankCandidate candidate)
+    {
+        for (int i = 0; i < Ordered.Count; i++)
+        {
+            if (Ordered[i] == candidate)
+            {
+                return i + 1;
+            }
+        }
+        return null;
+    }
 }

@@ -200,24 +200,33 @@ public sealed partial class RankStudy
 
     /// <summary>The rig's own drivetrain as a candidate: every station with the same motor and controller, and a pack
     /// named; null otherwise (or when its pack count is above <see cref="MaxPackCount"/>).</summary>
-    public RankCandidate? AssignedCandidate
+    public RankCandidate? AssignedCandidate => CandidateOf(_rig);
+
+    /// <summary>The drivetrain a rig carries as a candidate of this study's sweep: every station with the same motor and
+    /// controller from this catalog, and a pack from it; null otherwise (or when its pack count is above
+    /// <see cref="MaxPackCount"/>). Lets a caller place a rig edited after the run (a pick applied) in the ranking.</summary>
+    /// <param name="rig">A rig, typically this study's rig with other parts assigned.</param>
+    /// <exception cref="ArgumentNullException">The rig is null.</exception>
+    public RankCandidate? CandidateOf(Rig rig)
     {
-        get
+        Preconditions.NotNull(rig, nameof(rig));
+        if (rig.Stations.Count == 0)
         {
-            var first = _rig.Stations[0];
-            if (first.Motor is null || first.Controller is null || _rig.Packs is null || _rig.Packs.Count > _maxPackCount)
-            {
-                return null;
-            }
-            if (_rig.Stations.Any(s => !Equals(s.Motor, first.Motor) || !Equals(s.Controller, first.Controller)))
-            {
-                return null;
-            }
-            int m = IndexOf(_catalog.Motors, first.Motor);
-            int c = IndexOf(_catalog.Controllers, first.Controller);
-            int p = IndexOf(_catalog.Packs, _rig.Packs.Pack);
-            return m < 0 || c < 0 || p < 0 ? null : new RankCandidate(m, c, p, _rig.Packs.Count);
+            return null;
         }
+        var first = rig.Stations[0];
+        if (first.Motor is null || first.Controller is null || rig.Packs is null || rig.Packs.Count > _maxPackCount)
+        {
+            return null;
+        }
+        if (rig.Stations.Any(s => !Equals(s.Motor, first.Motor) || !Equals(s.Controller, first.Controller)))
+        {
+            return null;
+        }
+        int m = IndexOf(_catalog.Motors, first.Motor);
+        int c = IndexOf(_catalog.Controllers, first.Controller);
+        int p = IndexOf(_catalog.Packs, rig.Packs.Pack);
+        return m < 0 || c < 0 || p < 0 ? null : new RankCandidate(m, c, p, rig.Packs.Count);
     }
 
     private static int IndexOf<T>(IReadOnlyList<T> list, T item)

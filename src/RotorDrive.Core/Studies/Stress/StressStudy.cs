@@ -21,6 +21,26 @@ public static class StressStudy
     public static IReadOnlyList<string> FigureKeys { get; } =
         ["hover_speed_rpm", "hover_current_a", "hover_pack_voltage_v", "liftoff_time_s", "yaw_residual_nm"];
 
+    /// <summary>One sample's value of a reported figure (what <see cref="StressResult.Percentiles"/> summarises), in the
+    /// unit its key names; null when the sample has none (no trim found, no lift-off).</summary>
+    /// <param name="outcome">The sample's outcome.</param>
+    /// <param name="key">One of <see cref="FigureKeys"/>.</param>
+    /// <exception cref="ArgumentNullException">The outcome is null.</exception>
+    /// <exception cref="ArgumentException">The key is not one of <see cref="FigureKeys"/>.</exception>
+    public static double? FigureValue(StressOutcome outcome, string key)
+    {
+        Preconditions.NotNull(outcome, nameof(outcome));
+        return key switch
+        {
+            "hover_speed_rpm" => outcome.HoverSpeedRpm,
+            "hover_current_a" => outcome.HoverCurrentA,
+            "hover_pack_voltage_v" => outcome.HoverPackVoltageV,
+            "liftoff_time_s" => outcome.LiftoffTimeS,
+            "yaw_residual_nm" => outcome.YawResidualNm,
+            _ => throw new ArgumentException($"'{key}' is not a stress figure; use one of {string.Join(", ", FigureKeys)}.", nameof(key)),
+        };
+    }
+
     /// <summary>Runs a study.</summary>
     /// <param name="model">The rig model and its evaluators.</param>
     /// <param name="tolerances">The spreads.</param>
@@ -110,14 +130,7 @@ public static class StressStudy
             .Select(c => new StressCriterionRate(c, WilsonInterval.Compute(samples.Count(s => !s.Outcome.Passed(c)), n)))
             .ToArray();
 
-        var figures = new[]
-        {
-            Figure(FigureKeys[0], samples.Select(s => s.Outcome.HoverSpeedRpm)),
-            Figure(FigureKeys[1], samples.Select(s => s.Outcome.HoverCurrentA)),
-            Figure(FigureKeys[2], samples.Select(s => s.Outcome.HoverPackVoltageV)),
-            Figure(FigureKeys[3], samples.Select(s => s.Outcome.LiftoffTimeS)),
-            Figure(FigureKeys[4], samples.Select(s => s.Outcome.YawResidualNm)),
-        };
+        var figures = FigureKeys.Select(k => Figure(k, samples.Select(s => FigureValue(s.Outcome, k)))).ToArray();
 
         var drivers = new List<StressDriver>();
         foreach (var criterion in StressCriteria.All)
