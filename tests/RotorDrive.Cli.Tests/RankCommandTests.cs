@@ -99,6 +99,26 @@ public sealed class RankCommandTests : IDisposable
         Assert.Contains("The rig's own drivetrain, or1050-kv90 + sc120-12s + 2 x lp12s-20ah", output);
     }
 
+    // When one limit other than the pack ends every shortlisted endurance run (on the demo rig the plate patch, whose heat
+    // depends on the trimmed speeds and so on the craft's mass, hardly on the drivetrain), the text says that this limit,
+    // not the drivetrain, sets the hover time; the note is derived from the same simulations the JSON reports.
+    [Fact]
+    public async Task Rank_Text_SaysWhenOneNonPackLimitEndsEveryShortlistedEndurance()
+    {
+        var (_, json, _) = await CliRunner.RunAsync("rank", RepoPaths.DemoRig, "--top", "3", "--json");
+        using var doc = JsonDocument.Parse(json);
+        var limits = doc.RootElement.GetProperty("top").EnumerateArray()
+            .Select(t => t.GetProperty("simulation").GetProperty("endurance_limit").GetString()).Distinct().ToArray();
+        var (code, text, _) = await CliRunner.RunAsync("rank", RepoPaths.DemoRig, "--top", "3");
+        Assert.Equal(ExitCodes.Ok, code);
+        bool oneNonPack = limits.Length == 1 && limits[0] is not ("usable_capacity" or "pack_cutoff" or "time_limit");
+        Assert.Equal(oneNonPack, text.Contains("Note: every shortlisted combination's endurance ends on", StringComparison.Ordinal));
+        if (oneNonPack)
+        {
+            Assert.Contains($"ends on {limits[0]!.Replace('_', ' ')} after", text);
+        }
+    }
+
     [Fact]
     public async Task Rank_Csv_IsWritten_AndNotOverwrittenWithoutForce()
     {

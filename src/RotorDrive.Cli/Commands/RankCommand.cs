@@ -183,6 +183,12 @@ public static class RankCommand
             {
                 o.WriteLine($"  rank {entry.Rank} spin-up: {string.Join("; ", entry.Evaluation.Simulation!.SpinupFindings)}");
             }
+            if (NotThePack(result.Top) is { } notPack)
+            {
+                o.WriteLine($"  Note: every shortlisted combination's endurance ends on {notPack.Text} after {Numbers.Format(notPack.MinS / 60, 1)}-"
+                    + $"{Numbers.Format(notPack.MaxS / 60, 1)} min, well before its pack runs down: that limit, not the drivetrain, sets the hover time;");
+                o.WriteLine("  runtime_min ranks the drivetrains by their pack runtime once it is lifted.");
+            }
             o.WriteLine();
         }
         else
@@ -253,6 +259,24 @@ public static class RankCommand
     }
 
     private static string Key(RankObjective objective) => objective.ToString().ToLowerInvariant();
+
+    // The limit that ends every shortlisted endurance run when it is one and the same and not the pack's capacity or
+    // cutoff (e.g. the plate temperature, which depends on the trimmed speeds and so on the craft's mass, hardly on the
+    // drivetrain), with the shortest and longest runtime; null otherwise.
+    private static (string Text, double MinS, double MaxS)? NotThePack(IReadOnlyList<RankedEntry> top)
+    {
+        var sims = top.Select(t => t.Evaluation.Simulation).ToList();
+        if (sims.Count == 0 || sims.Any(s => s is null))
+        {
+            return null;
+        }
+        var limit = sims[0]!.EnduranceLimit;
+        if (limit is EnduranceLimit.UsableCapacity or EnduranceLimit.PackCutoff or EnduranceLimit.TimeLimit || sims.Any(s => s!.EnduranceLimit != limit))
+        {
+            return null;
+        }
+        return (LimitKey(limit).Replace('_', ' '), sims.Min(s => s!.EnduranceRuntimeS), sims.Max(s => s!.EnduranceRuntimeS));
+    }
 
     private static string LimitKey(EnduranceLimit limit) => JsonNamingPolicy.SnakeCaseLower.ConvertName(limit.ToString());
 
