@@ -12,7 +12,8 @@ namespace RotorDrive.Core.Drive;
 /// <para>Method: the torque balance f(omega) = Q_motor - Q_load (Q_motor from <see cref="DriveBus"/> with this rotor's
 /// own pack sag, Drela's first-order motor) is sampled from rest to the search top, the speed above which the motor
 /// cannot drive (back-EMF above d x open-circuit voltage, plus 5 %), so every crossing lies inside. The samples are: one
-/// just above rest (10^-9 of the top); a geometric ladder (ratio <see cref="OperatingPointOptions.LowSpeedRatio"/>) up to
+/// just above rest (10^-9 of the top); a geometric ladder (ratio <see cref="OperatingPointOptions.LowSpeedRatio"/>, from
+/// 10^-7 of the top) up to
 /// the first sample of a quadratic grid top (i/(n-1))^2, because the thin-sheet drag s/(1+s^2) = 1/(2 cosh ln s) is a
 /// bump of fixed width in ln(speed) wherever its peak lies (a rotor over a thin, poor conductor peaks far below the motor's
 /// free speed); and the motor curve's current-limit corner. Where the load torque peaks between samples, one more sample
@@ -33,6 +34,10 @@ public static class OperatingPointFinder
 {
     private const double SearchMargin = 1.05;
     private const double RestFraction = 1e-9;
+    // The ladder's lowest sample lies above this fraction of the search top: a drag peak lower still (a thousandth of a
+    // rad/s for a 10 000 rad/s top) is beyond any plate, and a single crossing there still shows as a sign change
+    // between the rest sample and the ladder.
+    private const double LadderFloorFraction = 1e-7;
     private const double GoldenSection = 0.3819660112501051;
     private const int StackSamples = 256;
 
@@ -230,12 +235,12 @@ public static class OperatingPointFinder
     private static int SampleCapacity(OperatingPointOptions o)
     {
         double first = 1.0 / ((o.ScanPoints - 1.0) * (o.ScanPoints - 1.0));
-        int ladder = (int)Math.Ceiling(Math.Log(first / RestFraction) / Math.Log(o.LowSpeedRatio));
+        int ladder = Math.Max(0, (int)Math.Ceiling(Math.Log(first / LadderFloorFraction) / Math.Log(o.LowSpeedRatio)));
         return 1 + ladder + (o.ScanPoints - 1) + 1;
     }
 
-    // The scan's speeds, increasing: just above rest (RestFraction x top); a geometric ladder (ratio LowSpeedRatio) below
-    // the first quadratic sample, which resolves a drag peak far below the search top (the thin-sheet drag
+    // The scan's speeds, increasing: just above rest (RestFraction x top); a geometric ladder (ratio LowSpeedRatio, down to
+    // LadderFloorFraction x top) below the first quadratic sample, which resolves a drag peak far below the search top (the thin-sheet drag
     // s / (1 + s^2) = 1 / (2 cosh ln s) is a bump of fixed width in ln s whatever its peak speed, Reitz 1970); the
     // quadratic grid top (i / (n - 1))^2; and the motor's current-limit corner, so that no interval straddles that kink.
     private static int FillSamples(Span<double> xs, double top, double corner, OperatingPointOptions o)
@@ -243,8 +248,9 @@ public static class OperatingPointFinder
         int n = o.ScanPoints;
         double first = top / ((n - 1.0) * (n - 1.0));
         double rest = RestFraction * top;
+        double floor = LadderFloorFraction * top;
         int ladder = 0;
-        for (double x = first / o.LowSpeedRatio; x > rest; x /= o.LowSpeedRatio)
+        for (double x = first / o.LowSpeedRatio; x >= floor; x /= o.LowSpeedRatio)
         {
             ladder++;
         }
