@@ -38,6 +38,8 @@ public static class OperatingPointFinder
     // rad/s for a 10 000 rad/s top) is beyond any plate, and a single crossing there still shows as a sign change
     // between the rest sample and the ladder.
     private const double LadderFloorFraction = 1e-7;
+    // The ladder stops descending once the load is proportional to speed to this relative tolerance over one step.
+    private const double ProportionalTolerance = 0.01;
     private const double GoldenSection = 0.3819660112501051;
     private const int StackSamples = 256;
 
@@ -152,19 +154,60 @@ public static class OperatingPointFinder
             points.Add(balance.Detail(0, EquilibriumKind.AtRest, stable: true));
             return;
         }
-        // Room for the scan and one extra sample per load peak (at most one per two samples).
-        int scan = SampleCapacity(options);
-        int capacity = scan + scan / 2;
+        // Buffer layout: [rest, ladder (filled downward) | grid (quadratic + corner) | load-peak samples].
+        int ladderRoom = LadderCapacity(options);
+        int gridRoom = options.ScanPoints;
+        int capacity = 2 + ladderRoom + gridRoom + (2 + ladderRoom + gridRoom) / 2;
         Span<double> xs = capacity <= StackSamples ? stackalloc double[capacity] : new double[capacity];
         Span<double> fs = capacity <= StackSamples ? stackalloc double[capacity] : new double[capacity];
         Span<double> qs = capacity <= StackSamples ? stackalloc double[capacity] : new double[capacity];
-        int m = FillSamples(xs, top, balance.CornerSpeed(), options);
+        int gridAt = 1 + ladderRoom;
+        double corner = balance.CornerSpeed();
+        int gridCount = FillGrid(xs[gridAt..], top, corner, options);
         double scale = 0;
-        for (int i = 0; i < m; i++)
+        for (int i = gridAt; i < gridAt + gridCount; i++)
         {
             fs[i] = balance.F(xs[i]);
             qs[i] = balance.LastLoadTorqueNm;
             scale = Math.Max(scale, Math.Abs(fs[i]));
+        }
+        double rest = RestFraction * top;
+        double fRest = balance.F(rest), qRest = balance.LastLoadTorqueNm;
+        scale = Math.Max(scale, Math.Abs(fRest));
+        // The geometric ladder below the grid's first sample, descending only while the load is not yet proportional to
+        // speed (after its value at rest) over the last step: thin-sheet drag s / (1 + s^2) departs from s by s^2, so a
+        // proportional step means its peak lies well above, and below it f is linear (one sign change at most).
+        int at = gridAt - 1;
+        double floor = LadderFloorFraction * top;
+        for (double x = xs[gridAt] / options.LowSpeedRatio; x >= floor && at >= 1; x /= options.LowSpeedRatio)
+        {
+            xs[at] = x;
+            fs[at] = balance.F(x);
+            qs[at] = balance.LastLoadTorqueNm;
+            scale = Math.Max(scale, Math.Abs(fs[at]));
+            bool proportional = Math.Abs((qs[at] - qRest) * (xs[at + 1] / x) - (qs[at + 1] - qRest)) <= ProportionalTolerance * Math.Abs(qs[at + 1] - qRest);
+            at--;
+            if (proportional)
+            {
+                break;
+            }
+        }
+        xs[at] = rest;
+        fs[at] = fRest;
+        qs[at] = qRest;
+        xs = xs[at..];
+        fs = fs[at..];
+        qs = qs[at..];
+        int m = gridAt + gridCount - at;
+        if (corner > rest && corner < xs[gridAt - at] && xs[..m].BinarySearch(corner) < 0)
+        {
+            // The current-limit corner below the grid (the grid placed it when above its first sample).
+            xs[m] = corner;
+            fs[m] = balance.F(corner);
+            qs[m] = balance.LastLoadTorqueNm;
+            scale = Math.Max(scale, Math.Abs(fs[m]));
+            SortIn(xs, fs, qs, m, m + 1);
+            m++;
         }
         m = SamplePeaks(balance, xs, fs, qs, m);
         xs = xs[..m];
@@ -231,41 +274,27 @@ public static class OperatingPointFinder
         }
     }
 
-    // Rest sample, low-speed ladder, quadratic grid, current-limit corner.
-    private static int SampleCapacity(OperatingPointOptions o)
+    // Most ladder samples the scan can take: from the grid's first sample down to LadderFloorFraction x top.
+    private static int LadderCapacity(OperatingPointOptions o)
     {
         double first = 1.0 / ((o.ScanPoints - 1.0) * (o.ScanPoints - 1.0));
-        int ladder = Math.Max(0, (int)Math.Ceiling(Math.Log(first / LadderFloorFraction) / Math.Log(o.LowSpeedRatio)));
-        return 1 + ladder + (o.ScanPoints - 1) + 1;
+        return Math.Max(0, (int)Math.Ceiling(Math.Log(first / LadderFloorFraction) / Math.Log(o.LowSpeedRatio)));
     }
 
-    // The scan's speeds, increasing: just above rest (RestFraction x top); a geometric ladder (ratio LowSpeedRatio, down to
-    // LadderFloorFraction x top) below the first quadratic sample, which resolves a drag peak far below the search top (the thin-sheet drag
-    // s / (1 + s^2) = 1 / (2 cosh ln s) is a bump of fixed width in ln s whatever its peak speed, Reitz 1970); the
-    // quadratic grid top (i / (n - 1))^2; and the motor's current-limit corner, so that no interval straddles that kink.
-    private static int FillSamples(Span<double> xs, double top, double corner, OperatingPointOptions o)
+    // The grid's speeds, increasing: the quadratic grid top (i / (n - 1))^2 for i = 1 .. n - 1 and the motor's current-limit
+    // corner, so that no interval straddles that kink. (Below the grid, the rest sample and the geometric ladder resolve a
+    // drag peak far below the search top: the thin-sheet drag s / (1 + s^2) = 1 / (2 cosh ln s) is a bump of fixed width
+    // in ln s whatever its peak speed, Reitz 1970.)
+    private static int FillGrid(Span<double> xs, double top, double corner, OperatingPointOptions o)
     {
         int n = o.ScanPoints;
-        double first = top / ((n - 1.0) * (n - 1.0));
-        double rest = RestFraction * top;
-        double floor = LadderFloorFraction * top;
-        int ladder = 0;
-        for (double x = first / o.LowSpeedRatio; x >= floor; x /= o.LowSpeedRatio)
-        {
-            ladder++;
-        }
         int m = 0;
-        xs[m++] = rest;
-        for (int k = ladder; k >= 1; k--)
-        {
-            xs[m++] = first / Math.Pow(o.LowSpeedRatio, k);
-        }
         for (int i = 1; i < n; i++)
         {
             double u = i / (n - 1.0);
             xs[m++] = i == n - 1 ? top : top * u * u;
         }
-        if (corner > rest && corner < top)
+        if (corner > xs[0] && corner < top)
         {
             int at = xs[..m].BinarySearch(corner);
             if (at < 0)
@@ -306,26 +335,28 @@ public static class OperatingPointFinder
             qs[m] = balance.LastLoadTorqueNm;
             m++;
         }
-        if (m > scanned)
-        {
-            // Insertion sort of the few new samples into place.
-            for (int k = scanned; k < m; k++)
-            {
-                double x = xs[k], f = fs[k], q = qs[k];
-                int j = k - 1;
-                while (j >= 0 && xs[j] > x)
-                {
-                    xs[j + 1] = xs[j];
-                    fs[j + 1] = fs[j];
-                    qs[j + 1] = qs[j];
-                    j--;
-                }
-                xs[j + 1] = x;
-                fs[j + 1] = f;
-                qs[j + 1] = q;
-            }
-        }
+        SortIn(xs, fs, qs, scanned, m);
         return m;
+    }
+
+    // Insertion sort of the samples from index 'sorted' on into the sorted ones before them.
+    private static void SortIn(Span<double> xs, Span<double> fs, Span<double> qs, int sorted, int m)
+    {
+        for (int k = sorted; k < m; k++)
+        {
+            double x = xs[k], f = fs[k], q = qs[k];
+            int j = k - 1;
+            while (j >= 0 && xs[j] > x)
+            {
+                xs[j + 1] = xs[j];
+                fs[j + 1] = fs[j];
+                qs[j + 1] = qs[j];
+                j--;
+            }
+            xs[j + 1] = x;
+            fs[j + 1] = f;
+            qs[j + 1] = q;
+        }
     }
 
     // A dip of |f| at sample b between a and c (same sign at all three): minimises sign(f) f over (a, c) by Brent's
