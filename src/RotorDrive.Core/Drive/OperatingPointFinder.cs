@@ -12,11 +12,12 @@ namespace RotorDrive.Core.Drive;
 /// <para>Method: the torque balance f(omega) = Q_motor - Q_load (Q_motor from <see cref="DriveBus"/> with this rotor's
 /// own pack sag, Drela's first-order motor) is sampled from rest to the search top, the speed above which the motor
 /// cannot drive (back-EMF above d x open-circuit voltage, plus 5 %), so every crossing lies inside. The samples are: one
-/// just above rest (10^-9 of the top); a geometric ladder (ratio <see cref="OperatingPointOptions.LowSpeedRatio"/>, from
-/// 10^-7 of the top) up to
-/// the first sample of a quadratic grid top (i/(n-1))^2, because the thin-sheet drag s/(1+s^2) = 1/(2 cosh ln s) is a
-/// bump of fixed width in ln(speed) wherever its peak lies (a rotor over a thin, poor conductor peaks far below the motor's
-/// free speed); and the motor curve's current-limit corner. Where the load torque peaks between samples, one more sample
+/// just above rest (10^-9 of the top); a quadratic grid top (i/(n-1))^2; below its first sample a geometric ladder (ratio
+/// <see cref="OperatingPointOptions.LowSpeedRatio"/>, down to 10^-7 of the top at most), because the thin-sheet drag
+/// s/(1+s^2) = 1/(2 cosh ln s) is a bump of fixed width in ln(speed) wherever its peak lies (a rotor over a thin, poor
+/// conductor peaks far below the motor's free speed) — the ladder stops once the load is proportional to speed over a
+/// step (to 1 %), since the drag departs from linear by s^2 and below that point nothing but one sign change can hide;
+/// and the motor curve's current-limit corner. Where the load torque peaks between samples, one more sample
 /// goes to the vertex of the parabola through the three loads in ln(speed): with the motor's torque flat there, that is
 /// where the net torque dips lowest. Each sign change between neighbouring samples is refined with MathNet's Brent
 /// solver (R. P. Brent, "Algorithms for Minimization without Derivatives", 1973). A local minimum of |f| between

@@ -13,9 +13,9 @@ namespace RotorDrive.Core.Drive;
 /// ln(speed)). Default 4.</param>
 /// <param name="SlopeStepRelative">Speed step of the stability slope's forward difference, relative to the search top.
 /// Default 1e-6.</param>
-/// <param name="LowSpeedRatio">Ratio between successive samples of the geometric ladder that extends the scan from its
-/// first quadratic sample down to rest, in [1.5, 1000]; a drag peak far below the search top lies on this ladder.
-/// Default 10.</param>
+/// <param name="LowSpeedRatio">Ratio between successive samples of the geometric ladder that extends the scan below its
+/// first quadratic sample (while the load is not yet proportional to speed, down to 10^-7 of the search top at most), in
+/// [1.5, 1000]; a drag peak far below the search top lies on this ladder. Default 10.</param>
 public sealed record OperatingPointOptions(
     int ScanPoints = 12,
     double RelativeAccuracy = 1e-10,
