@@ -48,4 +48,32 @@ if (args.Length > 0 && args[0] == "rank-parts")
     RankParts.Run();
     return;
 }
+// CPU time per operating-point solve (the drive benchmark's table case), a cross-check of the BenchmarkDotNet figure
+// that a busy machine disturbs less (the process's own CPU time, not wall time; seven runs after one warm-up):
+//   dotnet run -c Release --project tests/RotorDrive.Benchmarks -- operate-cpu
+if (args.Length > 0 && args[0] == "operate-cpu")
+{
+    var bench = new RotorDrive.Benchmarks.Drive.DriveBenchmarks();
+    bench.Setup();
+    const int Solves = 20_000;
+    var perSolve = new List<double>();
+    for (int run = 0; run < 8; run++)
+    {
+        var cpu = Process.GetCurrentProcess().TotalProcessorTime;
+        int equilibria = 0;
+        for (int i = 0; i < Solves; i++)
+        {
+            equilibria += bench.OperatingPointAllEquilibriaTable();
+        }
+        double us = (Process.GetCurrentProcess().TotalProcessorTime - cpu).TotalMilliseconds * 1000.0 / Solves;
+        if (run > 0)
+        {
+            perSolve.Add(us);
+        }
+        Console.WriteLine($"run {run}{(run == 0 ? " (warm-up)" : "")}: {us:0.00} us CPU per solve ({equilibria / Solves} equilibria)");
+    }
+    perSolve.Sort();
+    Console.WriteLine($"median {perSolve[perSolve.Count / 2]:0.00} us CPU per solve over {perSolve.Count} runs of {Solves:N0}");
+    return;
+}
 BenchmarkSwitcher.FromAssembly(typeof(Program).Assembly).Run(args);

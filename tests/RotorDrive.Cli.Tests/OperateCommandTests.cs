@@ -98,6 +98,25 @@ public sealed class OperateCommandTests : IDisposable
         Assert.Equal(1.0, rows[^1].GetProperty("duty").GetDouble(), 12);
     }
 
+    // At duty 0.0005 the stalled motor draws d V / R_t = 0.0005 x ~46 V / 0.022 ohm = ~1 A, below its 2 A no-load
+    // current, so its torque (I - I0) / Kv is negative (Drela 2007) and the rotor never starts: a failed finding (exit 1),
+    // said in words. At duty 0 staying at rest is what was asked (exit 0).
+    [Fact]
+    public async Task Operate_RotorThatNeverStarts_IsAFinding_UnlessTheDutyIsZero()
+    {
+        var (code, output, _) = await CliRunner.RunAsync("operate", _rig, "--duty", "0.0005");
+        Assert.Equal(ExitCodes.LimitFindings, code);
+        Assert.Contains("yes (at rest)", output);
+        Assert.Contains("the rotor does not turn (#1)", output);
+        var (zeroCode, zeroOutput, _) = await CliRunner.RunAsync("operate", _rig, "--duty", "0", "--json");
+        Assert.Equal(ExitCodes.Ok, zeroCode);
+        using var doc = JsonDocument.Parse(zeroOutput);
+        var rest = Assert.Single(doc.RootElement.GetProperty("equilibria").EnumerateArray().ToArray());
+        Assert.Equal("at_rest", rest.GetProperty("kind").GetString());
+        Assert.Equal(0.0, rest.GetProperty("shaft_power_w").GetDouble());
+        Assert.False(double.IsNegative(rest.GetProperty("shaft_power_w").GetDouble()), "no -0 in the output");
+    }
+
     // A pack whose cell count the controller does not accept is a finding (exit 1), not a crash.
     [Fact]
     public async Task Operate_WithAnIncompatiblePack_ReportsTheFinding()

@@ -229,9 +229,12 @@ public static class OperateCommand
     {
         var equilibria = result.Equilibria.Select((e, i) => Entry(i + 1, e)).ToList();
         var reached = result.ReachedFromRest;
+        // A rotor that stays at rest under a throttle that asks it to turn is a failed finding, like an exceeded limit.
+        bool asksToTurn = result.Throttle.Kind == ThrottleKind.HoldSpeed || result.Throttle.Value > 0;
         bool limitsHold = result.Compatible
             && result.HoldMet != false
             && reached is not null
+            && !(reached.Kind == EquilibriumKind.AtRest && asksToTurn)
             && !reached.ExceededLimits.Any();
         var motor = setup.Drivetrain.Motor;
         var controller = setup.Drivetrain.Controller;
@@ -365,6 +368,11 @@ public static class OperateCommand
         {
             o.WriteLine();
             var stable = report.Equilibria.Where(e => e.Stable).ToList();
+            if (report.Equilibria[reached - 1].Kind == "at_rest")
+            {
+                o.WriteLine($"Started from rest the rotor does not turn (#{reached}): at this throttle the motor's torque does not exceed the load's just above rest.");
+                return;
+            }
             o.WriteLine(stable.Count > 1 && stable[0].Index == reached
                 ? $"Started from rest the rotor settles at #{reached} ({Numbers.Format(report.Equilibria[reached - 1].SpeedRpm, 0)} rpm); the faster stable point(s) are reached only from above the unstable one (more current limit or a push through the drag peak)."
                 : $"Started from rest the rotor settles at #{reached} ({Numbers.Format(report.Equilibria[reached - 1].SpeedRpm, 0)} rpm).");

@@ -31,7 +31,8 @@ public readonly record struct DrivePoint(
     double ControllerLossW)
 {
     /// <summary>Shaft power, W (torque x speed).</summary>
-    public double ShaftPowerW => TorqueNm * SpeedRadPerS;
+    // Adding +0 turns the -0 of a negative (no-load) torque at rest into 0, so no "-0 W" reaches a report.
+    public double ShaftPowerW => TorqueNm * SpeedRadPerS + 0.0;
 
     /// <summary>Electrical power drawn from the bus, W (bus voltage x bus current).</summary>
     public double BusPowerW => BusVoltageV * BusCurrentA;

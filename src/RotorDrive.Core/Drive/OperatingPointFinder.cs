@@ -11,13 +11,21 @@ namespace RotorDrive.Core.Drive;
 /// a stable one at high speed. The search never reports only one when there are more.</para>
 /// <para>Method: the torque balance f(omega) = Q_motor - Q_load (Q_motor from <see cref="DriveBus"/> with this rotor's
 /// own pack sag, Drela's first-order motor) is sampled from rest to the search top, the speed above which the motor
-/// cannot drive (back-EMF above d x open-circuit voltage, plus 5 %), so every crossing lies inside. Samples crowd toward
-/// rest (quadratic spacing), and one sits on the motor curve's current-limit corner. Each sign change is
-/// refined with MathNet's Brent solver (R. P. Brent, "Algorithms for Minimization without Derivatives", 1973). A local
-/// minimum of |f| between samples that keep their sign is probed by successive parabolic steps to find two close
+/// cannot drive (back-EMF above d x open-circuit voltage, plus 5 %), so every crossing lies inside. The samples are: one
+/// just above rest (10^-9 of the top); a quadratic grid top (i/(n-1))^2; below its first sample a geometric ladder (ratio
+/// <see cref="OperatingPointOptions.LowSpeedRatio"/>, down to 10^-7 of the top at most), because the thin-sheet drag
+/// s/(1+s^2) = 1/(2 cosh ln s) is a bump of fixed width in ln(speed) wherever its peak lies (a rotor over a thin, poor
+/// conductor peaks far below the motor's free speed) — the ladder stops once the load is proportional to speed over a
+/// step (to 1 %), since the drag departs from linear by s^2 and below that point nothing but one sign change can hide;
+/// and the motor curve's current-limit corner. Where the load torque peaks between samples, one more sample
+/// goes to the vertex of the parabola through the three loads in ln(speed): with the motor's torque flat there, that is
+/// where the net torque dips lowest. Each sign change between neighbouring samples is refined with MathNet's Brent
+/// solver (R. P. Brent, "Algorithms for Minimization without Derivatives", 1973). A local minimum of |f| between
+/// samples that keep their sign is probed by Brent's safeguarded parabolic minimisation in ln(speed) for two close
 /// crossings (a drag peak grazing the current limit). Stability is the sign of df/d omega at the crossing: negative
-/// (motor torque falls below the load as speed rises) is stable. When the motor cannot start the rotor
-/// (f &lt;= 0 just above rest) the rotor stays at rest: a stable at-rest point.</para>
+/// (motor torque falls below the load as speed rises) is stable. When the motor cannot start the rotor (f &lt;= 0 just
+/// above rest: its starting torque does not exceed the bearing's breakaway and the drag there) the rotor stays at rest:
+/// a stable at-rest point, reported first.</para>
 /// <para>Speed hold: at the commanded speed the controller needs the current Kv Q_load / phi + I0; if the current limit
 /// and the duty allow it the speed is held (a stable held point). Below the commanded speed the controller saturates
 /// (max duty, current limited), so the saturated drive's crossings below that speed are equilibria too: a rotor started
@@ -27,6 +35,14 @@ public static class OperatingPointFinder
 {
     private const double SearchMargin = 1.05;
     private const double RestFraction = 1e-9;
+    // The ladder's lowest sample lies above this fraction of the search top: a drag peak lower still (a thousandth of a
+    // rad/s for a 10 000 rad/s top) is beyond any plate, and a single crossing there still shows as a sign change
+    // between the rest sample and the ladder.
+    private const double LadderFloorFraction = 1e-7;
+    // The ladder stops descending once the load is proportional to speed to this relative tolerance over one step.
+    private const double ProportionalTolerance = 0.01;
+    private const double GoldenSection = 0.3819660112501051;
+    private const int StackSamples = 256;
 
     /// <summary>Finds every equilibrium of a rotor at a throttle.</summary>
     /// <param name="drive">The station's drive (drivetrain, packs, rotor, load, limits).</param>
@@ -129,6 +145,7 @@ public static class OperatingPointFinder
         Preconditions.AtLeast(o.MaxIterations, 1, nameof(o.MaxIterations));
         Preconditions.AtLeast(o.TangencyProbes, 0, nameof(o.TangencyProbes));
         Preconditions.InRange(o.SlopeStepRelative, 1e-12, 1e-2, nameof(o.SlopeStepRelative));
+        Preconditions.InRange(o.LowSpeedRatio, 1.5, 1000, nameof(o.LowSpeedRatio));
     }
 
     private static void SearchCrossings(TorqueBalance balance, double top, List<OperatingPoint> points, OperatingPointOptions options)
@@ -138,40 +155,67 @@ public static class OperatingPointFinder
             points.Add(balance.Detail(0, EquilibriumKind.AtRest, stable: true));
             return;
         }
-        // Samples crowd toward rest (x = top (i/(n-1))^2) where the drag peak and the stall below it usually lie, plus
-        // one at the motor's current-limit corner so that no sample interval straddles the kink of its torque curve.
-        int n = options.ScanPoints;
+        // Buffer layout: [rest, ladder (filled downward) | grid (quadratic + corner) | load-peak samples].
+        int ladderRoom = LadderCapacity(options);
+        int gridRoom = options.ScanPoints;
+        int capacity = 2 + ladderRoom + gridRoom + (2 + ladderRoom + gridRoom) / 2;
+        Span<double> xs = capacity <= StackSamples ? stackalloc double[capacity] : new double[capacity];
+        Span<double> fs = capacity <= StackSamples ? stackalloc double[capacity] : new double[capacity];
+        Span<double> qs = capacity <= StackSamples ? stackalloc double[capacity] : new double[capacity];
+        int gridAt = 1 + ladderRoom;
         double corner = balance.CornerSpeed();
-        bool withCorner = corner > 0 && corner < top;
-        int m = withCorner ? n + 1 : n;
-        Span<double> xs = stackalloc double[m];
-        Span<double> fs = stackalloc double[m];
-        int filled = 0;
-        for (int i = 0; i < n; i++)
-        {
-            double u = i / (double)(n - 1);
-            double x = i == 0 ? RestFraction * top : top * u * u;
-            if (withCorner && corner < x && (filled == 0 || corner > xs[filled - 1]))
-            {
-                xs[filled++] = corner;
-            }
-            xs[filled++] = x;
-        }
-        if (filled < m)
-        {
-            // The corner coincided with a sample.
-            m = filled;
-            xs = xs[..m];
-            fs = fs[..m];
-        }
+        int gridCount = FillGrid(xs[gridAt..], top, corner, options);
         double scale = 0;
-        for (int i = 0; i < m; i++)
+        for (int i = gridAt; i < gridAt + gridCount; i++)
         {
             fs[i] = balance.F(xs[i]);
+            qs[i] = balance.LastLoadTorqueNm;
             scale = Math.Max(scale, Math.Abs(fs[i]));
         }
+        double rest = RestFraction * top;
+        double fRest = balance.F(rest), qRest = balance.LastLoadTorqueNm;
+        scale = Math.Max(scale, Math.Abs(fRest));
+        // The geometric ladder below the grid's first sample, descending only while the load is not yet proportional to
+        // speed (after its value at rest) over the last step: thin-sheet drag s / (1 + s^2) departs from s by s^2, so a
+        // proportional step means its peak lies well above, and below it f is linear (one sign change at most).
+        int at = gridAt - 1;
+        double floor = LadderFloorFraction * top;
+        for (double x = xs[gridAt] / options.LowSpeedRatio; x >= floor && at >= 1; x /= options.LowSpeedRatio)
+        {
+            xs[at] = x;
+            fs[at] = balance.F(x);
+            qs[at] = balance.LastLoadTorqueNm;
+            scale = Math.Max(scale, Math.Abs(fs[at]));
+            bool proportional = Math.Abs((qs[at] - qRest) * (xs[at + 1] / x) - (qs[at + 1] - qRest)) <= ProportionalTolerance * Math.Abs(qs[at + 1] - qRest);
+            at--;
+            if (proportional)
+            {
+                break;
+            }
+        }
+        xs[at] = rest;
+        fs[at] = fRest;
+        qs[at] = qRest;
+        xs = xs[at..];
+        fs = fs[at..];
+        qs = qs[at..];
+        int m = gridAt + gridCount - at;
+        if (corner > rest && corner < xs[gridAt - at] && xs[..m].BinarySearch(corner) < 0)
+        {
+            // The current-limit corner below the grid (the grid placed it when above its first sample).
+            xs[m] = corner;
+            fs[m] = balance.F(corner);
+            qs[m] = balance.LastLoadTorqueNm;
+            scale = Math.Max(scale, Math.Abs(fs[m]));
+            SortIn(xs, fs, qs, m, m + 1);
+            m++;
+        }
+        m = SamplePeaks(balance, xs, fs, qs, m);
+        xs = xs[..m];
+        fs = fs[..m];
         if (fs[0] <= 0)
         {
+            // The motor's starting torque does not exceed the load's just above rest: the rotor never starts.
             points.Add(balance.Detail(0, EquilibriumKind.AtRest, stable: true));
         }
         if (scale == 0)
@@ -181,7 +225,7 @@ public static class OperatingPointFinder
         balance.Top = top;
         balance.Scale = scale;
         // At most one sign-change bracket per sample interval, and two per probed interior sample.
-        Span<Bracket> brackets = stackalloc Bracket[3 * m];
+        Span<Bracket> brackets = 3 * m <= StackSamples ? stackalloc Bracket[3 * m] : new Bracket[3 * m];
         int count = 0;
         for (int i = 0; i + 1 < m; i++)
         {
@@ -195,7 +239,7 @@ public static class OperatingPointFinder
             bool sameSign = Positive(fs[i - 1]) == Positive(fs[i]) && Positive(fs[i]) == Positive(fs[i + 1]);
             if (sameSign && Math.Abs(fs[i]) < Math.Abs(fs[i - 1]) && Math.Abs(fs[i]) <= Math.Abs(fs[i + 1]))
             {
-                count += ProbeTangency(balance, xs[i - 1], fs[i - 1], xs[i], fs[i], xs[i + 1], fs[i + 1], options.TangencyProbes, brackets[count..]);
+                count += ProbeDip(balance, xs[i - 1], fs[i - 1], xs[i], fs[i], xs[i + 1], fs[i + 1], options.TangencyProbes, brackets[count..]);
             }
         }
         if (count == 0)
@@ -231,54 +275,143 @@ public static class OperatingPointFinder
         }
     }
 
-    // Successive parabolic steps toward a local minimum of |f|; when f changes sign there, two crossings are bracketed.
-    private static int ProbeTangency(TorqueBalance balance, double a, double fa, double b, double fb, double c, double fc, int probes, Span<Bracket> brackets)
+    // Most ladder samples the scan can take: from the grid's first sample down to LadderFloorFraction x top.
+    private static int LadderCapacity(OperatingPointOptions o)
     {
-        double left = a, fLeft = fa, right = c, fRight = fc;
+        double first = 1.0 / ((o.ScanPoints - 1.0) * (o.ScanPoints - 1.0));
+        return Math.Max(0, (int)Math.Ceiling(Math.Log(first / LadderFloorFraction) / Math.Log(o.LowSpeedRatio)));
+    }
+
+    // The grid's speeds, increasing: the quadratic grid top (i / (n - 1))^2 for i = 1 .. n - 1 and the motor's current-limit
+    // corner, so that no interval straddles that kink. (Below the grid, the rest sample and the geometric ladder resolve a
+    // drag peak far below the search top: the thin-sheet drag s / (1 + s^2) = 1 / (2 cosh ln s) is a bump of fixed width
+    // in ln s whatever its peak speed, Reitz 1970.)
+    private static int FillGrid(Span<double> xs, double top, double corner, OperatingPointOptions o)
+    {
+        int n = o.ScanPoints;
+        int m = 0;
+        for (int i = 1; i < n; i++)
+        {
+            double u = i / (n - 1.0);
+            xs[m++] = i == n - 1 ? top : top * u * u;
+        }
+        if (corner > xs[0] && corner < top)
+        {
+            int at = xs[..m].BinarySearch(corner);
+            if (at < 0)
+            {
+                at = ~at;
+                xs[at..m].CopyTo(xs[(at + 1)..]);
+                xs[at] = corner;
+                m++;
+            }
+        }
+        return m;
+    }
+
+    // The load's own peaks between samples (a drag peak, Reitz 1970): where the load torque has a local maximum among the
+    // samples, one more sample goes to the vertex of the parabola through its three loads in ln(speed). With the motor's
+    // torque flat there (current limit), that is where the net torque dips lowest, so a pair of crossings hidden beside
+    // a third in one scan interval becomes two sign changes. Returns the new sample count; samples stay sorted.
+    private static int SamplePeaks(TorqueBalance balance, Span<double> xs, Span<double> fs, Span<double> qs, int m)
+    {
+        int scanned = m;
+        for (int i = 1; i + 1 < scanned; i++)
+        {
+            if (!(qs[i] > qs[i - 1] && qs[i] >= qs[i + 1]))
+            {
+                continue;
+            }
+            double a = Math.Log(xs[i - 1]), b = Math.Log(xs[i]), c = Math.Log(xs[i + 1]);
+            double num = (b - a) * (b - a) * (qs[i] - qs[i + 1]) - (b - c) * (b - c) * (qs[i] - qs[i - 1]);
+            double den = (b - a) * (qs[i] - qs[i + 1]) - (b - c) * (qs[i] - qs[i - 1]);
+            double u = den != 0 ? b - 0.5 * num / den : double.NaN;
+            double margin = 1e-3 * (c - a);
+            if (!(u > a + margin && u < c - margin) || Math.Abs(u - b) < margin)
+            {
+                continue;
+            }
+            xs[m] = Math.Exp(u);
+            fs[m] = balance.F(xs[m]);
+            qs[m] = balance.LastLoadTorqueNm;
+            m++;
+        }
+        SortIn(xs, fs, qs, scanned, m);
+        return m;
+    }
+
+    // Insertion sort of the samples from index 'sorted' on into the sorted ones before them.
+    private static void SortIn(Span<double> xs, Span<double> fs, Span<double> qs, int sorted, int m)
+    {
+        for (int k = sorted; k < m; k++)
+        {
+            double x = xs[k], f = fs[k], q = qs[k];
+            int j = k - 1;
+            while (j >= 0 && xs[j] > x)
+            {
+                xs[j + 1] = xs[j];
+                fs[j + 1] = fs[j];
+                qs[j + 1] = qs[j];
+                j--;
+            }
+            xs[j + 1] = x;
+            fs[j + 1] = f;
+            qs[j + 1] = q;
+        }
+    }
+
+    // A dip of |f| at sample b between a and c (same sign at all three): minimises sign(f) f over (a, c) by Brent's
+    // method for a minimum (parabolic steps safeguarded by golden sections; Brent 1973, ch. 5) in ln(speed), where a drag
+    // peak is a symmetric bump. Stops at the first sample of the other sign (two crossings bracketed) or when the probes
+    // are spent or the dip is located to rounding.
+    private static int ProbeDip(TorqueBalance balance, double xa, double fa, double xb, double fb, double xc, double fc, int probes, Span<Bracket> brackets)
+    {
+        bool sign = Positive(fb);
+        double s = sign ? 1 : -1;
+        double a = Math.Log(xa), b = Math.Log(xb), c = Math.Log(xc);
+        double ga = s * fa, gb = s * fb, gc = s * fc;
         for (int k = 0; k < probes; k++)
         {
-            double num = (b - a) * (b - a) * (fb - fc) - (b - c) * (b - c) * (fb - fa);
-            double den = (b - a) * (fb - fc) - (b - c) * (fb - fa);
-            if (den == 0)
+            double tolerance = 1e-10 * Math.Max(1, Math.Abs(b));
+            if (c - a <= 4 * tolerance)
             {
                 return 0;
             }
-            double u = b - 0.5 * num / den;
-            if (!(u > left && u < right) || u == b)
+            double num = (b - a) * (b - a) * (gb - gc) - (b - c) * (b - c) * (gb - ga);
+            double den = (b - a) * (gb - gc) - (b - c) * (gb - ga);
+            double u = den != 0 ? b - 0.5 * num / den : double.NaN;
+            if (!(u > a + tolerance && u < c - tolerance) || Math.Abs(u - b) < tolerance)
             {
-                return 0;
+                u = c - b > b - a ? b + GoldenSection * (c - b) : b - GoldenSection * (b - a);
             }
-            double fu = balance.F(u);
-            if (Positive(fu) != Positive(fb))
+            double xu = Math.Exp(u);
+            double fu = balance.F(xu);
+            if (Positive(fu) != sign)
             {
-                brackets[0] = new Bracket(left, fLeft, u, fu);
-                brackets[1] = new Bracket(u, fu, right, fRight);
+                brackets[0] = new Bracket(xa, fa, xu, fu);
+                brackets[1] = new Bracket(xu, fu, xc, fc);
                 return 2;
             }
-            if (Math.Abs(fu) < Math.Abs(fb))
+            double gu = s * fu;
+            if (gu < gb)
             {
                 if (u < b)
                 {
-                    c = b;
-                    fc = fb;
+                    (c, gc) = (b, gb);
                 }
                 else
                 {
-                    a = b;
-                    fa = fb;
+                    (a, ga) = (b, gb);
                 }
-                b = u;
-                fb = fu;
+                (b, gb) = (u, gu);
             }
             else if (u < b)
             {
-                a = u;
-                fa = fu;
+                (a, ga) = (u, gu);
             }
             else
             {
-                c = u;
-                fc = fu;
+                (c, gc) = (u, gu);
             }
         }
         return 0;
@@ -338,6 +471,8 @@ public static class OperatingPointFinder
         public double Scale { get; set; }
 
         public int Evaluations { get; private set; }
+
+        public double LastLoadTorqueNm => _lastLoad.TotalTorqueNm;
 
         public LoadPoint LoadAt(double speed)
             => _load.Evaluate(speed, conditions.GapM, conditions.PlateTempC, conditions.RotorMagnetTempC);

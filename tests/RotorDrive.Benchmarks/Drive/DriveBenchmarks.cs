@@ -14,6 +14,7 @@ namespace RotorDrive.Benchmarks.Drive;
 /// over 6 mm of 25 MS/m aluminium at a 10 mm gap: drag peak 17.1 N m at 1778 rpm. The drive (invented) limits at
 /// 152 A, about 13 N m, below the peak, so there are three equilibria (about 800, 4140 and 4760 rpm).</remarks>
 [MemoryDiagnoser]
+[MedianColumn]
 public class DriveBenchmarks
 {
     private StationDrive _drive = null!;

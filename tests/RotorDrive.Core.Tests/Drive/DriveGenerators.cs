@@ -93,7 +93,11 @@ public sealed record OperatingCase(StationDrive Drive, ThrottleCommand Throttle,
     public override string ToString()
     {
         var d = Drive.Drivetrain;
-        return $"Kv={d.Motor.KvRpmPerV:G4} R={d.Motor.ResistanceOhm:G3} I0={d.Motor.NoLoadCurrentA:G3} lim={d.CurrentLimitA:G4} " +
-               $"S={Drive.Packs.CellsSeries} Rcell={Drive.Packs.Pack.CellResistanceOhm:G3} {Throttle} soc={Conditions.SocFraction:G3} brake={Conditions.Braking} T={Conditions.PlateTempC:G3}";
+        // Every drawn number, in full, so that a failing case can be rebuilt as a regression test.
+        var ci = System.Globalization.CultureInfo.InvariantCulture;
+        return string.Create(ci, $"Kv={d.Motor.KvRpmPerV:R} R={d.Motor.ResistanceOhm:R} I0={d.Motor.NoLoadCurrentA:R} poles={d.Motor.Poles} ")
+            + string.Create(ci, $"Ron={d.Controller.OnResistanceOhm:R} idle={d.Controller.IdleCurrentA:R} lim={d.CurrentLimitA:R} dmax={d.MaxDuty:R} ")
+            + string.Create(ci, $"S={Drive.Packs.CellsSeries} P={Drive.Packs.Pack.CellsParallel} Rcell={Drive.Packs.Pack.CellResistanceOhm:R} {Drive.Load} ")
+            + string.Create(ci, $"{Throttle} soc={Conditions.SocFraction:R} brake={Conditions.Braking} T={Conditions.PlateTempC:R}");
     }
 }

@@ -25,4 +25,7 @@ internal sealed class ThinSheetStripLoad(double forceScaleN, double radiusM, dou
         double bearing = speedRadPerS > 0 ? bearingTorqueNm : 0;
         return new LoadPoint(lift, eddy, 0, bearing, eddy * speedRadPerS);
     }
+
+    public override string ToString()
+        => FormattableString.Invariant($"strip F0={forceScaleN:R} r={radiusM:R} wc={characteristicSpeedRadPerS:R} bearing={bearingTorqueNm:R}");
 }
