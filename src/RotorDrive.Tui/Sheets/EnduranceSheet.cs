@@ -15,23 +15,18 @@ namespace RotorDrive.Tui.Sheets;
 /// <summary>How long the rig hovers (Core's <see cref="EnduranceSimulator"/>, as the <c>endurance</c> command runs it):
 /// the runtime, the limit that ends it in words, and time traces of the state of charge, the pack voltage and every
 /// station's winding and plate temperature. The starting charge is the sheet's own what-if value.</summary>
-public sealed class EnduranceSheet : Sheet
+public sealed class EnduranceSheet : ChartSheet
 {
     /// <summary>Runs at least this long are charted in minutes, shorter ones in seconds.</summary>
     public const double MinutesFromS = 120;
 
-    private readonly ChartPanel _panel;
     private readonly TextField _soc;
-    private int _seenRevision = -1;
 
     /// <summary>Creates the sheet.</summary>
     public EnduranceSheet(WorkbenchContext context)
-        : base(context, "Endurance")
+        : base(context, "Endurance", readoutLines: 3, "the endurance run needs")
     {
-        _panel = new ChartPanel(readoutLines: 3);
-        _soc = _panel.AddInput("charge %", 5, "100");
-        _panel.InputsChanged += (_, _) => Recompute();
-        Add(_panel);
+        _soc = Panel.AddInput("charge %", 5, "100");
     }
 
     /// <inheritdoc/>
@@ -40,44 +35,8 @@ public sealed class EnduranceSheet : Sheet
     /// <summary>The last figures shown, for tests.</summary>
     internal EnduranceFigures? Shown { get; private set; }
 
-    /// <summary>The chart panel.</summary>
-    internal ChartPanel Panel => _panel;
-
     /// <summary>The starting-charge field.</summary>
     internal TextField ChargeField => _soc;
-
-    /// <inheritdoc/>
-    public override void Refresh()
-    {
-        if (Context.Session.Rig is null)
-        {
-            _panel.Readout = "! The rig has problems (see Stations); the endurance run needs a valid rig.";
-            _panel.ShowPages(null);
-            Shown = null;
-            return;
-        }
-        if (_seenRevision != Context.Session.Revision)
-        {
-            _seenRevision = Context.Session.Revision;
-            Recompute();
-        }
-    }
-
-    /// <inheritdoc/>
-    public override bool HandleKey(Key key)
-    {
-        if (key == Key.F7)
-        {
-            _panel.NextPage();
-            return true;
-        }
-        if (key == Key.F5)
-        {
-            Recompute(immediately: true);
-            return true;
-        }
-        return false;
-    }
 
     /// <summary>The run the sheet shows, as the <c>endurance</c> command runs it.</summary>
     internal static EnduranceFigures Compute(Rig rig, RigModelCache models, double socFraction, CancellationToken token, IProgress<double>? progress)
@@ -95,7 +54,11 @@ public sealed class EnduranceSheet : Sheet
         return new EnduranceFigures(sim, result, []);
     }
 
-    private void Recompute(bool immediately = false)
+    /// <inheritdoc/>
+    protected override void ClearShown() => Shown = null;
+
+    /// <inheritdoc/>
+    protected override void Recompute(bool immediately)
     {
         if (Context.Session.Rig is not { } rig)
         {
@@ -103,21 +66,21 @@ public sealed class EnduranceSheet : Sheet
         }
         var problems = new List<string>();
         double? soc = ChartPanel.ReadNumber(_soc, "charge", "%", 0, 100, minExclusive: true, problems);
-        _panel.ShowProblems(problems);
+        Panel.ShowProblems(problems);
         if (problems.Count > 0)
         {
             return;
         }
         double fraction = soc!.Value / 100.0;
-        _panel.Readout = "Running the hover until its first limit ... (F8 stops)";
+        Panel.Readout = "Running the hover until its first limit ... (F8 stops)";
         Context.Work.Request("endurance", (token, progress) => Compute(rig, Context.Models, fraction, token, progress), Show, immediately, Stopped);
     }
 
     private void Stopped()
     {
         Shown = null;
-        _panel.Readout = "Stopped before it finished: the figures are not current. F5 runs the endurance run again.";
-        _panel.ShowPages(null);
+        Panel.Readout = "Stopped before it finished: the figures are not current. F5 runs the endurance run again.";
+        Panel.ShowPages(null);
     }
 
     private void Show(EnduranceFigures figures)
@@ -125,12 +88,12 @@ public sealed class EnduranceSheet : Sheet
         Shown = figures;
         if (figures.Result is not { } result || figures.Rig is not { } sim)
         {
-            _panel.Readout = "! The endurance run needs a motor and controller on every station and a pack:\n" + string.Join("\n", figures.Missing);
-            _panel.ShowPages(null);
+            Panel.Readout = "! The endurance run needs a motor and controller on every station and a pack:\n" + string.Join("\n", figures.Missing);
+            Panel.ShowPages(null);
             return;
         }
-        _panel.Readout = DescribeReadout(sim, result);
-        _panel.ShowPages(Charts(sim, result), Compose(sim, result));
+        Panel.Readout = DescribeReadout(sim, result);
+        Panel.ShowPages(Charts(sim, result), Compose(sim, result));
     }
 
     /// <summary>The runtime in the unit the charts use: "37 s" or "12.4 min".</summary>

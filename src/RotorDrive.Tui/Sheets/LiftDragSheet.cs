@@ -13,27 +13,22 @@ namespace RotorDrive.Tui.Sheets;
 /// <summary>One rotor's load versus speed from Core's load table: shaft torque (eddy, windage, bearing) with the drag
 /// peak marked, or lift with each station's share of the weight; gap and plate temperature are the sheet's own
 /// what-if values (the rig is not changed).</summary>
-public sealed class LiftDragSheet : Sheet
+public sealed class LiftDragSheet : ChartSheet
 {
     /// <summary>Speeds per curve.</summary>
     public const int Points = 61;
 
-    private readonly ChartPanel _panel;
     private readonly TextField _station;
     private readonly TextField _gap;
     private readonly TextField _plateTemp;
-    private int _seenRevision = -1;
 
     /// <summary>Creates the sheet.</summary>
     public LiftDragSheet(WorkbenchContext context)
-        : base(context, "Lift & drag")
+        : base(context, "Lift & drag", readoutLines: 2, "the load needs")
     {
-        _panel = new ChartPanel(readoutLines: 2);
-        _station = _panel.AddInput("station", 4, "1");
-        _gap = _panel.AddInput("gap mm", 7);
-        _plateTemp = _panel.AddInput("plate C", 7);
-        _panel.InputsChanged += (_, _) => Recompute();
-        Add(_panel);
+        _station = Panel.AddInput("station", 4, "1");
+        _gap = Panel.AddInput("gap mm", 7);
+        _plateTemp = Panel.AddInput("plate C", 7);
     }
 
     /// <inheritdoc/>
@@ -43,52 +38,26 @@ public sealed class LiftDragSheet : Sheet
     internal LoadSweepResult? Result { get; private set; }
 
     /// <summary>The chart.</summary>
-    internal ChartView Chart => _panel.Chart;
+    internal ChartView Chart => Panel.Chart;
 
     /// <summary>The readout line.</summary>
-    internal string Readout => _panel.Readout;
+    internal string Readout => Panel.Readout;
 
     /// <summary>The what-if gap field.</summary>
     internal TextField GapField => _gap;
 
     /// <inheritdoc/>
-    public override void Refresh()
+    protected override void ClearShown() => Result = null;
+
+    /// <inheritdoc/>
+    protected override void OnRigChanged(Rig rig)
     {
-        var rig = Context.Session.Rig;
-        if (rig is null)
-        {
-            _panel.Readout = "! The rig has problems (see Stations); the load needs a valid rig.";
-            _panel.Show(null);
-            Result = null;
-            return;
-        }
-        if (_seenRevision != Context.Session.Revision)
-        {
-            // A changed rig resets the what-if values to the rig's own.
-            _seenRevision = Context.Session.Revision;
-            _panel.SetQuietly(_gap, FieldSpec.Format(Math.Round(rig.DesignGapM * 1000, 6)));
-            _panel.SetQuietly(_plateTemp, FieldSpec.Format(rig.PlateTemperatureC));
-            Recompute();
-        }
+        Panel.SetQuietly(_gap, FieldSpec.Format(Math.Round(rig.DesignGapM * 1000, 6)));
+        Panel.SetQuietly(_plateTemp, FieldSpec.Format(rig.PlateTemperatureC));
     }
 
     /// <inheritdoc/>
-    public override bool HandleKey(Key key)
-    {
-        if (key == Key.F7)
-        {
-            _panel.NextPage();
-            return true;
-        }
-        if (key == Key.F5)
-        {
-            Recompute(immediately: true);
-            return true;
-        }
-        return false;
-    }
-
-    private void Recompute(bool immediately = false)
+    protected override void Recompute(bool immediately)
     {
         if (Context.Session.Rig is not { } rig)
         {
@@ -98,7 +67,7 @@ public sealed class LiftDragSheet : Sheet
         int? station = ChartPanel.ReadStation(_station, rig.Stations.Count, problems);
         double? gapMm = ChartPanel.ReadNumber(_gap, "gap", "mm", 0, 200, minExclusive: true, problems);
         double? plateC = ChartPanel.ReadNumber(_plateTemp, "plate temperature", "C", -40, 400, minExclusive: false, problems);
-        _panel.ShowProblems(problems);
+        Panel.ShowProblems(problems);
         if (problems.Count > 0)
         {
             return;
@@ -145,11 +114,11 @@ public sealed class LiftDragSheet : Sheet
         var peak = r.DragPeak;
         var top = r.Rows[^1];
         var lifting = r.Rows.FirstOrDefault(row => row.LiftN >= share);
-        _panel.Readout = $"{r.RotorId} at {r.GapM * 1000:0.##} mm, plate {r.PlateTempC:0.#} C: drag peak X {peak.SpeedRpm:F0} rpm, {peak.TorqueNm:F2} N m\n"
+        Panel.Readout = $"{r.RotorId} at {r.GapM * 1000:0.##} mm, plate {r.PlateTempC:0.#} C: drag peak X {peak.SpeedRpm:F0} rpm, {peak.TorqueNm:F2} N m\n"
             + $"lift {top.LiftN:F0} N at {top.SpeedRpm:F0} rpm; share of weight {share:F0} N "
             + (lifting is null ? "! not reached by rated speed" : $"from {lifting.SpeedRpm:F0} rpm");
         var rpm = r.Rows.Select(x => x.SpeedRpm).ToList();
-        _panel.ShowPages(
+        Panel.ShowPages(
         [
             new ChartData("speed, rpm", "torque, N m",
             [

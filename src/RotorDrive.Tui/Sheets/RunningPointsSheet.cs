@@ -13,72 +13,37 @@ namespace RotorDrive.Tui.Sheets;
 
 /// <summary>One station's torque-speed picture from Core: the motor's available torque at several duties over the rotor's
 /// load curve, every equilibrium marked stable (O) or unstable (x), and the limits each equilibrium breaks.</summary>
-public sealed class RunningPointsSheet : Sheet
+public sealed class RunningPointsSheet : ChartSheet
 {
     /// <summary>The duties drawn, as fractions.</summary>
     public static IReadOnlyList<double> Duties { get; } = [0.25, 0.5, 0.75, 0.95];
 
     private static readonly char[] CurveGlyphs = ['1', '2', '3', '4'];
 
-    private readonly ChartPanel _panel;
     private readonly TextField _station;
     private readonly TextField _gap;
     private readonly TextField _soc;
-    private int _seenRevision = -1;
 
     /// <summary>Creates the sheet.</summary>
     public RunningPointsSheet(WorkbenchContext context)
-        : base(context, "Running points")
+        : base(context, "Running points", readoutLines: 4, "running points need")
     {
-        _panel = new ChartPanel(readoutLines: 4);
-        _station = _panel.AddInput("station", 4, "1");
-        _gap = _panel.AddInput("gap mm", 7);
-        _soc = _panel.AddInput("charge %", 5, "100");
-        _panel.InputsChanged += (_, _) => Recompute();
-        Add(_panel);
+        _station = Panel.AddInput("station", 4, "1");
+        _gap = Panel.AddInput("gap mm", 7);
+        _soc = Panel.AddInput("charge %", 5, "100");
     }
 
     /// <summary>The last map shown, for tests.</summary>
     internal TorqueSpeedMap? Map { get; private set; }
 
     /// <summary>The chart.</summary>
-    internal ChartView Chart => _panel.Chart;
+    internal ChartView Chart => Panel.Chart;
 
     /// <summary>The readout text.</summary>
-    internal string Readout => _panel.Readout;
+    internal string Readout => Panel.Readout;
 
     /// <summary>The what-if gap field.</summary>
     internal TextField GapField => _gap;
-
-    /// <inheritdoc/>
-    public override void Refresh()
-    {
-        var rig = Context.Session.Rig;
-        if (rig is null)
-        {
-            _panel.Readout = "! The rig has problems (see Stations); running points need a valid rig.";
-            _panel.Show(null);
-            Map = null;
-            return;
-        }
-        if (_seenRevision != Context.Session.Revision)
-        {
-            _seenRevision = Context.Session.Revision;
-            _panel.SetQuietly(_gap, FieldSpec.Format(Math.Round(rig.DesignGapM * 1000, 6)));
-            Recompute();
-        }
-    }
-
-    /// <inheritdoc/>
-    public override bool HandleKey(Key key)
-    {
-        if (key == Key.F5)
-        {
-            Recompute(immediately: true);
-            return true;
-        }
-        return false;
-    }
 
     /// <summary>The station's drive as Core models it (load table over the rig's range), or why there is none.</summary>
     internal static StationDrive? DriveFor(Rig rig, int station, out string? why)
@@ -94,7 +59,17 @@ public sealed class RunningPointsSheet : Sheet
         return new StationDrive(new Drivetrain(s.Motor!, s.Controller!), rig.Packs!, s.Rotor, table, rig.Limits);
     }
 
-    private void Recompute(bool immediately = false)
+    /// <inheritdoc/>
+    protected override void ClearShown() => Map = null;
+
+    /// <inheritdoc/>
+    protected override void OnRigChanged(Rig rig)
+    {
+        Panel.SetQuietly(_gap, FieldSpec.Format(Math.Round(rig.DesignGapM * 1000, 6)));
+    }
+
+    /// <inheritdoc/>
+    protected override void Recompute(bool immediately)
     {
         if (Context.Session.Rig is not { } rig)
         {
@@ -104,7 +79,7 @@ public sealed class RunningPointsSheet : Sheet
         int? index = ChartPanel.ReadStation(_station, rig.Stations.Count, problems);
         double? gapMm = ChartPanel.ReadNumber(_gap, "gap", "mm", 0, 200, minExclusive: true, problems);
         double? socPct = ChartPanel.ReadNumber(_soc, "charge", "%", 0, 100, minExclusive: false, problems);
-        _panel.ShowProblems(problems);
+        Panel.ShowProblems(problems);
         if (problems.Count > 0)
         {
             return;
@@ -136,8 +111,8 @@ public sealed class RunningPointsSheet : Sheet
     {
         if (Map is not { } map)
         {
-            _panel.Readout = "! " + (why ?? "nothing to show");
-            _panel.Show(null);
+            Panel.Readout = "! " + (why ?? "nothing to show");
+            Panel.Show(null);
             return;
         }
         var rpm = map.SpeedsRadPerS.Select(Units.RadPerSToRpm).ToList();
@@ -154,8 +129,8 @@ public sealed class RunningPointsSheet : Sheet
         var all = map.Curves.SelectMany(c => c.Equilibria).Where(e => e.Kind == EquilibriumKind.Crossing).ToList();
         lines.Add(new ChartLine("stable", 'O', all.Where(e => e.Stable).Select(e => (e.SpeedRpm, e.Load.TotalTorqueNm)).ToList(), Joined: false));
         lines.Add(new ChartLine("unstable", 'x', all.Where(e => !e.Stable).Select(e => (e.SpeedRpm, e.Load.TotalTorqueNm)).ToList(), Joined: false));
-        _panel.Show(new ChartData("speed, rpm", "torque, N m", lines));
-        _panel.Readout = string.Join("\n", map.Curves.Select(Describe));
+        Panel.Show(new ChartData("speed, rpm", "torque, N m", lines));
+        Panel.Readout = string.Join("\n", map.Curves.Select(Describe));
     }
 
     /// <summary>One duty's equilibria in words: speed, stable/unstable, and FAIL with the limits broken.</summary>

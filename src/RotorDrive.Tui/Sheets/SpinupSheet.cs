@@ -18,24 +18,19 @@ namespace RotorDrive.Tui.Sheets;
 /// traces of every station's speed and current, the pack voltage and the gap; lift-off and hover times, peak currents
 /// against their ratings, stalled stations with the current limit that would pass their drag peak, and the landing
 /// regeneration caution. Ramp time, controller mode and starting charge are the sheet's own what-if values.</summary>
-public sealed class SpinupSheet : Sheet
+public sealed class SpinupSheet : ChartSheet
 {
-    private readonly ChartPanel _panel;
     private readonly TextField _ramp;
     private readonly TextField _mode;
     private readonly TextField _soc;
-    private int _seenRevision = -1;
 
     /// <summary>Creates the sheet.</summary>
     public SpinupSheet(WorkbenchContext context)
-        : base(context, "Spin-up")
+        : base(context, "Spin-up", readoutLines: 4, "the spin-up needs")
     {
-        _panel = new ChartPanel(readoutLines: 4);
-        _ramp = _panel.AddInput("ramp s", 5, "2");
-        _mode = _panel.AddInput("mode", 5, "duty");
-        _soc = _panel.AddInput("charge %", 5, "100");
-        _panel.InputsChanged += (_, _) => Recompute();
-        Add(_panel);
+        _ramp = Panel.AddInput("ramp s", 5, "2");
+        _mode = Panel.AddInput("mode", 5, "duty");
+        _soc = Panel.AddInput("charge %", 5, "100");
     }
 
     /// <inheritdoc/>
@@ -44,47 +39,11 @@ public sealed class SpinupSheet : Sheet
     /// <summary>The last figures shown, for tests.</summary>
     internal SpinupFigures? Shown { get; private set; }
 
-    /// <summary>The chart panel.</summary>
-    internal ChartPanel Panel => _panel;
-
     /// <summary>The ramp-time field.</summary>
     internal TextField RampField => _ramp;
 
     /// <summary>The controller-mode field.</summary>
     internal TextField ModeField => _mode;
-
-    /// <inheritdoc/>
-    public override void Refresh()
-    {
-        if (Context.Session.Rig is null)
-        {
-            _panel.Readout = "! The rig has problems (see Stations); the spin-up needs a valid rig.";
-            _panel.ShowPages(null);
-            Shown = null;
-            return;
-        }
-        if (_seenRevision != Context.Session.Revision)
-        {
-            _seenRevision = Context.Session.Revision;
-            Recompute();
-        }
-    }
-
-    /// <inheritdoc/>
-    public override bool HandleKey(Key key)
-    {
-        if (key == Key.F7)
-        {
-            _panel.NextPage();
-            return true;
-        }
-        if (key == Key.F5)
-        {
-            Recompute(immediately: true);
-            return true;
-        }
-        return false;
-    }
 
     /// <summary>Reads the controller mode typed in the mode field: "duty" (or "d") or "hold" (or "h").</summary>
     internal static ControllerMode? ReadMode(string text, List<string> problems)
@@ -117,7 +76,11 @@ public sealed class SpinupSheet : Sheet
         return new SpinupFigures(sim, study, []);
     }
 
-    private void Recompute(bool immediately = false)
+    /// <inheritdoc/>
+    protected override void ClearShown() => Shown = null;
+
+    /// <inheritdoc/>
+    protected override void Recompute(bool immediately)
     {
         if (Context.Session.Rig is not { } rig)
         {
@@ -127,21 +90,21 @@ public sealed class SpinupSheet : Sheet
         double? ramp = ChartPanel.ReadNumber(_ramp, "ramp", "s", 0, 120, minExclusive: false, problems);
         var mode = ReadMode(_mode.Text, problems);
         double? soc = ChartPanel.ReadNumber(_soc, "charge", "%", 0, 100, minExclusive: false, problems);
-        _panel.ShowProblems(problems);
+        Panel.ShowProblems(problems);
         if (problems.Count > 0)
         {
             return;
         }
         var request = new SpinupStudyRequest(mode!.Value, ramp!.Value, soc!.Value / 100.0);
-        _panel.Readout = "Running the spin-up and the landings ... (F8 stops)";
+        Panel.Readout = "Running the spin-up and the landings ... (F8 stops)";
         Context.Work.Request("spin-up", (token, progress) => Compute(rig, Context.Models, request, token, progress), Show, immediately, Stopped);
     }
 
     private void Stopped()
     {
         Shown = null;
-        _panel.Readout = "Stopped before it finished: the figures are not current. F5 runs the spin-up again.";
-        _panel.ShowPages(null);
+        Panel.Readout = "Stopped before it finished: the figures are not current. F5 runs the spin-up again.";
+        Panel.ShowPages(null);
     }
 
     private void Show(SpinupFigures figures)
@@ -149,12 +112,12 @@ public sealed class SpinupSheet : Sheet
         Shown = figures;
         if (figures.Study is not { } study || figures.Rig is not { } sim)
         {
-            _panel.Readout = "! The spin-up needs a motor and controller on every station and a pack:\n" + string.Join("\n", figures.Missing);
-            _panel.ShowPages(null);
+            Panel.Readout = "! The spin-up needs a motor and controller on every station and a pack:\n" + string.Join("\n", figures.Missing);
+            Panel.ShowPages(null);
             return;
         }
-        _panel.Readout = DescribeReadout(sim, study);
-        _panel.ShowPages(Charts(sim, study), Compose(sim, study));
+        Panel.Readout = DescribeReadout(sim, study);
+        Panel.ShowPages(Charts(sim, study), Compose(sim, study));
     }
 
     /// <summary>The four lines above the chart: lift-off and hover times, peak currents, the verdict, the landing.</summary>
