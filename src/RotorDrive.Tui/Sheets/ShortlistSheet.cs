@@ -44,7 +44,7 @@ public sealed class ShortlistSheet : Sheet
     private readonly TextField _whyNot;
     private readonly Label _whyNotMessage;
     private readonly ListView _details;
-    private readonly ObservableCollection<string> _detailItems = [];
+    private ObservableCollection<string> _detailItems = [];
     private List<string> _detailLines = [];
     private int _wrappedAt = -1;
     private readonly Dictionary<RankCandidate, RankEvaluation> _evaluated = [];
@@ -491,14 +491,15 @@ public sealed class ShortlistSheet : Sheet
     {
         int width = Math.Max(30, (_details.Viewport.Width > 0 ? _details.Viewport.Width : 60) - 1);
         _wrappedAt = width;
-        _detailItems.Clear();
+        // One new source per change: adding hundreds of "why not" lines one by one to the bound collection makes the list
+        // re-measure itself on every line (quadratic, seconds on the UI thread).
+        var items = new List<string>();
         foreach (string line in _detailLines)
         {
-            foreach (string part in line.Length == 0 ? [""] : Wrap.Lines(line, width))
-            {
-                _detailItems.Add(part);
-            }
+            items.AddRange(line.Length == 0 ? [""] : Wrap.Lines(line, width));
         }
+        _detailItems = new ObservableCollection<string>(items);
+        _details.SetSource(_detailItems);
     }
 
     private void PickMotor()
