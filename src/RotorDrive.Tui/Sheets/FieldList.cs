@@ -59,25 +59,5 @@ internal sealed class FieldList : View
         }
     }
 
-    private void ScrollIntoView(int row)
-    {
-        int height = Viewport.Height;
-        if (height <= 0)
-        {
-            return;
-        }
-        int top = Viewport.Y;
-        if (row < top + 1)
-        {
-            top = Math.Max(0, row - 1);
-        }
-        else if (row >= top + height - 1)
-        {
-            top = Math.Min(Math.Max(0, _rows - height), row - height + 2);
-        }
-        if (top != Viewport.Y)
-        {
-            Viewport = Viewport with { Y = top };
-        }
-    }
+    private void ScrollIntoView(int row) => RowScroll.IntoView(this, row, _rows);
 }

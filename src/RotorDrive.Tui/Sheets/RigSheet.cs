@@ -122,27 +122,7 @@ public sealed class RigSheet : Sheet
         return false;
     }
 
-    private void ScrollIntoView(int row)
-    {
-        int height = Viewport.Height;
-        if (height <= 0)
-        {
-            return;
-        }
-        int top = Viewport.Y;
-        if (row < top + 1)
-        {
-            top = Math.Max(0, row - 1);
-        }
-        else if (row >= top + height - 1)
-        {
-            top = Math.Min(Math.Max(0, _contentRows - height), row - height + 2);
-        }
-        if (top != Viewport.Y)
-        {
-            Viewport = Viewport with { Y = top };
-        }
-    }
+    private void ScrollIntoView(int row) => RowScroll.IntoView(this, row, _contentRows);
 
     private static string F(double v, int decimals) => v.ToString("F" + decimals.ToString(CultureInfo.InvariantCulture), CultureInfo.InvariantCulture);
 }
