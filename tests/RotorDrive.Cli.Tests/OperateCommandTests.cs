@@ -22,6 +22,18 @@ public sealed class OperateCommandTests : IDisposable
 
     public void Dispose() => Directory.Delete(_folder, recursive: true);
 
+    // Without a throttle the command runs at the rig's own highest allowed duty (limits.max_duty), so a plain `operate`
+    // shows full throttle within the rig's limits rather than a duty the rig itself forbids (a choice of ours).
+    [Fact]
+    public async Task Operate_WithoutThrottle_RunsAtTheRigsMaxDuty()
+    {
+        double maxDuty = RotorDrive.Files.RigLoader.Load(RepoPaths.DemoRig).Rig!.Limits.MaxDuty;
+        var (_, output, _) = await CliRunner.RunAsync("operate", RepoPaths.DemoRig, "--json");
+        using var doc = JsonDocument.Parse(output);
+        Assert.Equal(maxDuty, doc.RootElement.GetProperty("throttle").GetProperty("duty").GetDouble(), 12);
+        Assert.True(maxDuty < 1, "the demo rig caps the duty below 1, so the default differs from full duty");
+    }
+
     // The command reports the Core finder's equilibria (its physics is tested against its sources in RotorDrive.Core.Tests):
     // the station's 152 A limit (about 13 N m) sits below this rotor's 17 N m drag peak, so there are three equilibria,
     // low stable, middle unstable and high stable, and the JSON carries the keys the issue lists.

@@ -32,7 +32,7 @@ public static class OperateCommand
         var motor = new Option<string?>("--motor") { Description = "Motor id from the motors catalog, instead of the station's.", HelpName = "ID" };
         var controller = new Option<string?>("--controller") { Description = "Controller id from the controllers catalog, instead of the station's.", HelpName = "ID" };
         var pack = new Option<string?>("--pack") { Description = "Pack id from the packs catalog, instead of the rig's (same pack count).", HelpName = "ID" };
-        var duty = new Option<double?>("--duty") { Description = "Open-loop duty, 0 to 1. Default 1 unless --hold-rpm is given.", HelpName = "D" };
+        var duty = new Option<double?>("--duty") { Description = "Open-loop duty, 0 to 1. Default: the rig's limits.max_duty (the highest duty it allows), unless --hold-rpm is given.", HelpName = "D" };
         var hold = new Option<double?>("--hold-rpm") { Description = "Speed to hold, rpm (> 0): the controller sets the duty within its limits.", HelpName = "R" };
         var gap = new Option<double?>("--gap-mm") { Description = "Air gap, mm, in (0, 200]. Default: the rig's design gap.", HelpName = "G" };
         var soc = new Option<double>("--soc-pct")
@@ -128,7 +128,7 @@ public static class OperateCommand
             return rows[0].Compatible ? ExitCodes.Ok : ExitCodes.LimitFindings;
         }
 
-        var throttle = request.HoldRpm is { } rpm ? ThrottleCommand.HoldRpm(rpm) : ThrottleCommand.Duty(request.Duty ?? 1.0);
+        var throttle = request.HoldRpm is { } rpm ? ThrottleCommand.HoldRpm(rpm) : ThrottleCommand.Duty(request.Duty ?? rig.Limits.MaxDuty);
         var result = OperatingPointFinder.Find(drive, throttle, conditions);
         var report = Report(request, setup, gapM, result, sweep: null);
         Write(request, report, output);
