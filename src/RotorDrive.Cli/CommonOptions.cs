@@ -31,4 +31,21 @@ public static class CommonOptions
         Description = $"Write {what} to this CSV file (atomically; refuses to replace an existing file without --force).",
         HelpName = "FILE",
     };
+
+    /// <summary>Checks before any work that a <c>--csv</c> export would not replace an existing file without
+    /// <c>--force</c>; prints the error line when it would.</summary>
+    /// <param name="command">The command's name, for the message.</param>
+    /// <param name="csvPath">The export path, or null when there is none.</param>
+    /// <param name="force">True when the user allowed replacing the file.</param>
+    /// <param name="error">Where the message goes.</param>
+    /// <returns>True when the command must stop (exit code 2).</returns>
+    public static bool RefusesExistingCsv(string command, string? csvPath, bool force, TextWriter error)
+    {
+        if (csvPath is null || force || !File.Exists(csvPath))
+        {
+            return false;
+        }
+        error.WriteLine($"rotordrive {command}: error: {csvPath}: {Files.Messages.FileExists()}");
+        return true;
+    }
 }

@@ -38,9 +38,8 @@ public static class EnduranceCommand
 
     private static int Run(string rigPath, string? csvPath, bool force, bool json, TextWriter output, TextWriter error)
     {
-        if (csvPath is not null && !force && File.Exists(csvPath))
+        if (CommonOptions.RefusesExistingCsv("endurance", csvPath, force, error))
         {
-            error.WriteLine($"rotordrive endurance: error: {csvPath}: {Messages.FileExists()}");
             return ExitCodes.BadInput;
         }
         var model = CraftInput.ModelOrReport("endurance", rigPath, error);

@@ -93,9 +93,8 @@ public static class RankCommand
             }
             whyNotIndex = index;
         }
-        if (request.CsvPath is { } csvPath && !request.Force && File.Exists(csvPath))
+        if (CommonOptions.RefusesExistingCsv("rank", request.CsvPath, request.Force, error))
         {
-            error.WriteLine($"rotordrive rank: error: {csvPath}: {Messages.FileExists()}");
             return ExitCodes.BadInput;
         }
         if (catalog.Motors.Count == 0 || catalog.Controllers.Count == 0 || catalog.Packs.Count == 0)

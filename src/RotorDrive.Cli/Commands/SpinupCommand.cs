@@ -82,9 +82,8 @@ public static class SpinupCommand
 
     private static int Run(string rigPath, double rampS, ControllerMode mode, double soc, string? csvPath, bool force, bool json, TextWriter output, TextWriter error)
     {
-        if (csvPath is not null && !force && File.Exists(csvPath))
+        if (CommonOptions.RefusesExistingCsv("spinup", csvPath, force, error))
         {
-            error.WriteLine($"rotordrive spinup: error: {csvPath}: {Messages.FileExists()}");
             return ExitCodes.BadInput;
         }
         var model = CraftInput.ModelOrReport("spinup", rigPath, error);

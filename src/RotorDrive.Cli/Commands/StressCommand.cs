@@ -105,9 +105,8 @@ public static class StressCommand
                 + "assign them in the rig file (stations[].motor, stations[].controller, pack).");
             return ExitCodes.BadInput;
         }
-        if (request.Csv is { } csvPath && File.Exists(csvPath) && !request.Force)
+        if (CommonOptions.RefusesExistingCsv("stress", request.Csv, request.Force, error))
         {
-            error.WriteLine($"rotordrive stress: error: {csvPath}: {Files.Messages.FileExists()}");
             return ExitCodes.BadInput;
         }
         var tolerances = loaded.Tolerances;
