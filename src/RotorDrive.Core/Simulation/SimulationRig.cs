@@ -39,9 +39,10 @@ public sealed class SimulationRig
     private readonly PlatePatchThermalNode[] _plates;
     private readonly DragPeak[] _peaks;
     private readonly double[] _hoverSpeeds;
-    private readonly Dictionary<IRotorLoad, double> _peakHints;
 
-    private SimulationRig(RigModel model, SimulationRigOptions options, IReadOnlyDictionary<IRotorLoad, double>? hints)
+    // parentPeaks: the landed drag peaks of the rig this one is a variant of (same stations, same order), the starting
+    // points of the drag-peak searches; null for a fresh rig.
+    private SimulationRig(RigModel model, SimulationRigOptions options, IReadOnlyList<DragPeak>? parentPeaks)
     {
         Model = model;
         Options = options;
@@ -62,7 +63,11 @@ public sealed class SimulationRig
         _windings = new WindingThermalNode?[n];
         _plates = new PlatePatchThermalNode[n];
         _peaks = new DragPeak[n];
-        _peakHints = new Dictionary<IRotorLoad, double>(ReferenceEqualityComparer.Instance);
+        var loadHints = new Dictionary<IRotorLoad, double>(ReferenceEqualityComparer.Instance);
+        if (parentPeaks is not null && parentPeaks.Count != n)
+        {
+            parentPeaks = null;
+        }
         var found = new List<(IRotorLoad Load, double Gap, double PlateC, double MagnetC, double Top, DragPeak Peak)>();
         for (int j = 0; j < n; j++)
         {
@@ -91,12 +96,15 @@ public sealed class SimulationRig
             }
             if (peak is null)
             {
-                double? hint = _peakHints.TryGetValue(s.Load, out double h) ? h : hints is not null && hints.TryGetValue(s.Load, out double g) ? g : null;
+                // Start next to the same station's peak in the parent rig (a tolerance sample wraps its loads, so only the
+                // station tells which peak it varies), else next to a peak of the same load found here.
+                double? hint = parentPeaks?[j] is { Status: DragPeakStatus.Converged } parent ? parent.SpeedRadPerS
+                    : loadHints.TryGetValue(s.Load, out double h) ? h : null;
                 peak = TotalTorquePeak(s.Load, landed, s.Conditions.PlateTempC, s.Conditions.RotorMagnetTempC, s.Rotor.MaxSpeedRadPerS, hint);
                 found.Add((s.Load, landed, s.Conditions.PlateTempC, s.Conditions.RotorMagnetTempC, s.Rotor.MaxSpeedRadPerS, peak));
                 if (peak.Status is DragPeakStatus.Converged)
                 {
-                    _peakHints.TryAdd(s.Load, peak.SpeedRadPerS);
+                    loadHints.TryAdd(s.Load, peak.SpeedRadPerS);
                 }
             }
             _peaks[j] = peak;
@@ -159,10 +167,11 @@ public sealed class SimulationRig
     public static SimulationRig Build(Rig rig, RigModelOptions? modelOptions = null, SimulationRigOptions? options = null)
         => FromModel(RigModel.Build(Preconditions.NotNull(rig, nameof(rig)), modelOptions), options);
 
-    /// <summary>Prepares a variant of the model with this rig's options, starting each drag-peak search next to the peak
-    /// this rig found for the same load (a tolerance sample, a candidate drivetrain).</summary>
+    /// <summary>Prepares a variant of the model with this rig's options, starting each station's drag-peak search next to
+    /// the peak this rig found at the same station (a tolerance sample, a candidate drivetrain); the search falls back to
+    /// the full one when the peak has moved outside a factor of 3.</summary>
     /// <param name="model">The variant; normally derived from <see cref="Model"/>.</param>
-    public SimulationRig With(RigModel model) => new(Preconditions.NotNull(model, nameof(model)), Options, _peakHints);
+    public SimulationRig With(RigModel model) => new(Preconditions.NotNull(model, nameof(model)), Options, _peaks);
 
     /// <summary>The rig model this was prepared from.</summary>
     public RigModel Model { get; }
