@@ -182,9 +182,9 @@ public sealed class OperateCommandTests : IDisposable
                 new RigLimits(0.5, 90, 3.3, 0.8, 0.95, 6), 5, 12);
             var drivetrain = new Drivetrain(motor, controller);
             double free = drivetrain.FreeSpeedRadPerS(packs.OpenCircuitVoltageAt(1.0), 1.0, AmbientC);
-            var range = LoadTableRange.ForRig(rig, Rotor);
+            var range = rig.LoadTableRangeFor(Rotor);
             range = range with { MaxSpeedRadPerS = Math.Max(range.MaxSpeedRadPerS, 1.1 * free), MinGapM = Math.Min(range.MinGapM, 0.005), MaxGapM = Math.Max(range.MaxGapM, 0.015) };
-            var drive = new StationDrive(drivetrain, packs, Rotor, RotorLoadTable.Build(Rotor, Plate, range), rig.Limits);
+            var drive = new StationDrive(drivetrain, packs, Rotor, RotorLoadTable.Build(Rotor, Plate, range), rig.Limits.Station);
             var conditions = new OperatingConditions(0.010, AmbientC, AmbientC, AmbientC, AmbientC, socFraction);
             return OperatingPointFinder.Find(drive, ThrottleCommand.Duty(1), conditions);
         }

@@ -195,7 +195,7 @@ public sealed class RankCommandTests : IDisposable
                 direct.Add(d);
                 Close(d.Figures!.RuntimeS, f.Figures!.RuntimeS, 1e-7);
                 Close(d.Figures.TotalMassKg, f.Figures.TotalMassKg, 1e-12);
-                Close(d.Figures.CurrentMargin!.Value, f.Figures.CurrentMargin!.Value, 1e-6);
+                Close(d.Figures.CurrentMarginFraction!.Value, f.Figures.CurrentMarginFraction!.Value, 1e-6);
                 Close(d.Figures.MaxSpeedRpm, f.Figures.MaxSpeedRpm, 1e-8);
                 Close(d.Figures.PackCurrentA, f.Figures.PackCurrentA, 1e-7);
             }

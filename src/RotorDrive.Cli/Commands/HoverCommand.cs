@@ -125,14 +125,14 @@ public static class HoverCommand
             model.Rig.Name, h.Mode == HoverMode.Trimmed ? "trimmed" : "common_duty", h.Status.ToString(), pass,
             h.GapM * 1000, h.MassKg, model.PayloadKg, h.WeightN, h.BusVoltageV, h.PackCurrentA, h.ElectricalPowerW, h.PlatePowerW,
             h.Balanced ? h.LiftSpecificPowerWPerN : double.NaN, h.HeaveStiffnessNPerM / 1000, h.Balanced ? h.HeaveFrequencyHz : double.NaN,
-            new ResidualEntry(h.ForceResidual, h.PitchResidual, h.RollResidual), h.YawTorqueNm,
+            new ResidualEntry(h.ForceResidualRatio, h.PitchResidualRatio, h.RollResidualRatio), h.YawTorqueNm,
             stations, h.PackMargins.Select(Margin).ToList(), limits, review.MaxPayloadKg, safetyEntry,
             safety.Cautions.Select(c => new CautionEntry(c.Topic.ToString(), c.Level.ToString(), c.Title, c.Text, c.Reason)).ToList(),
             h.Iterations);
     }
 
     private static MarginEntry Margin(LimitMargin m)
-        => new(m.Limit.Key(), m.Value, m.Allowed, m.Limit.Unit(), m.Margin, m.Exceeded);
+        => new(m.Limit.Key(), m.ValueSi, m.AllowedSi, m.Limit.Unit(), m.MarginFraction, m.Exceeded);
 
     private static void WriteText(HoverReport r, TextWriter o)
     {

@@ -157,7 +157,7 @@ public static class LoadCommand
 
         // The table analyses use, over the rig's range widened to what was asked.
         double topSpeed = Math.Max(design.MaxSpeedRadPerS, speeds[^1]);
-        LoadTableRange rigRange = LoadTableRange.ForRig(rig, design);
+        LoadTableRange rigRange = rig.LoadTableRangeFor(design);
         var tableRange = rigRange with
         {
             MaxSpeedRadPerS = topSpeed,

@@ -118,7 +118,7 @@ public static class OperateCommand
 
         double gapM = (request.GapMm ?? rig.DesignGapM * 1000.0) / 1000.0;
         var conditions = new OperatingConditions(gapM, rig.PlateTemperatureC, rig.AmbientC, rig.AmbientC, rig.AmbientC, request.SocPct / 100.0);
-        var drive = new StationDrive(setup.Drivetrain, setup.Packs, setup.Station.Rotor, BuildLoad(rig, setup, gapM), rig.Limits);
+        var drive = new StationDrive(setup.Drivetrain, setup.Packs, setup.Station.Rotor, BuildLoad(rig, setup, gapM), rig.Limits.Station);
 
         if (request.Sweep)
         {
@@ -215,7 +215,7 @@ public static class OperateCommand
     {
         var rotor = setup.Station.Rotor;
         double freeSpeed = setup.Drivetrain.FreeSpeedRadPerS(setup.Packs.OpenCircuitVoltageAt(1.0), 1.0, rig.AmbientC);
-        var range = LoadTableRange.ForRig(rig, rotor);
+        var range = rig.LoadTableRangeFor(rotor);
         range = range with
         {
             MaxSpeedRadPerS = Math.Max(range.MaxSpeedRadPerS, 1.1 * freeSpeed),
@@ -281,7 +281,7 @@ public static class OperateCommand
         e.Efficiency,
         e.LiftN,
         e.EddyPowerW,
-        e.Margins.Select(m => new LimitEntry(m.Limit.Key(), m.Value, m.Allowed, m.Limit.Unit(), m.Margin, m.Exceeded)).ToList());
+        e.Margins.Select(m => new LimitEntry(m.Limit.Key(), m.ValueSi, m.AllowedSi, m.Limit.Unit(), m.MarginFraction, m.Exceeded)).ToList());
 
     private static string LimitWords(DriveRegime regime) => regime switch
     {

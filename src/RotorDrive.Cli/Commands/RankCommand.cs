@@ -168,7 +168,7 @@ public static class RankCommand
                 table.AddRow(entry.Rank.ToString(CultureInfo.InvariantCulture), entry.InParetoSet ? "P" : "", e.MotorId, e.ControllerId,
                     $"{e.Candidate.PackCount} x {e.PackId}", Numbers.Format(f.MaxSpeedRpm, 0), Numbers.Format(f.MaxMotorCurrentA, 1),
                     Numbers.Format(f.MaxDuty, 3), Numbers.Format(f.PackCurrentA, 1), Numbers.Format(f.RuntimeS / 60, 1), Numbers.Format(f.TotalMassKg, 2),
-                    Numbers.Format(f.CurrentMargin * 100, 1), Numbers.Format(f.DragPeakTorqueMargin * 100, 0), Numbers.Format(entry.LiftoffTimeS, 2),
+                    Numbers.Format(f.CurrentMarginFraction * 100, 1), Numbers.Format(f.DragPeakTorqueMarginFraction * 100, 0), Numbers.Format(entry.LiftoffTimeS, 2),
                     Numbers.Format(e.Simulation?.EnduranceRuntimeS / 60, 1), e.Simulation is { } sim ? LimitKey(sim.EnduranceLimit) : "",
                     Numbers.Format(entry.Score, 3));
             }
@@ -224,7 +224,7 @@ public static class RankCommand
             }
             if (assigned.Figures is { } f && assigned.Accepted)
             {
-                o.WriteLine($"  runtime {Numbers.Format(f.RuntimeS / 60, 1)} min ({f.RuntimeLimit}), mass {Numbers.Format(f.TotalMassKg, 2)} kg, current margin {Numbers.Format(f.CurrentMargin * 100, 1)} %");
+                o.WriteLine($"  runtime {Numbers.Format(f.RuntimeS / 60, 1)} min ({f.RuntimeLimit}), mass {Numbers.Format(f.TotalMassKg, 2)} kg, current margin {Numbers.Format(f.CurrentMarginFraction * 100, 1)} %");
             }
         }
         else
@@ -294,8 +294,8 @@ public static class RankCommand
                 e.Candidate.PackCount.ToString(ci), result.Scores[i].ToString("R", ci), f.TotalMassKg.ToString("R", ci),
                 f.MaxSpeedRpm.ToString("0.###", ci), f.MaxMotorCurrentA.ToString("0.####", ci), f.MaxDuty.ToString("0.#####", ci),
                 f.PackCurrentA.ToString("0.####", ci), f.RuntimeS.ToString("0.###", ci), CsvText(f.RuntimeLimit),
-                f.CurrentMargin is { } m ? (m * 100).ToString("0.####", ci) : "",
-                f.DragPeakTorqueMargin is { } d ? (d * 100).ToString("0.###", ci) : "",
+                f.CurrentMarginFraction is { } m ? (m * 100).ToString("0.####", ci) : "",
+                f.DragPeakTorqueMarginFraction is { } d ? (d * 100).ToString("0.###", ci) : "",
                 shortlist.GetValueOrDefault(i + 1) is { LiftoffTimeS: { } lift } ? lift.ToString("0.###", ci) : "",
                 shortlist.GetValueOrDefault(i + 1) is { } sim ? sim.EnduranceRuntimeS.ToString("0.###", ci) : "",
                 shortlist.GetValueOrDefault(i + 1) is { } sim2 ? LimitKey(sim2.EnduranceLimit) : ""));
@@ -341,7 +341,7 @@ public static class RankCommand
             rank, e.MotorId, e.ControllerId, e.PackId, e.Candidate.PackCount, e.Accepted, pareto, score,
             f?.TotalMassKg, f?.MaxSpeedRpm, f?.MaxMotorCurrentA, f is { StationDuties.Count: > 0 } ? f.MaxDuty : null,
             f?.PackCurrentA, f?.BusVoltageV, f?.ElectricalPowerW, f?.LiftSpecificPowerWPerN, f?.EddyPowerW, f?.RuntimeS, f?.RuntimeLimit,
-            f?.CurrentMargin * 100, f?.DragPeakTorqueMargin * 100, liftoff,
+            f?.CurrentMarginFraction * 100, f?.DragPeakTorqueMarginFraction * 100, liftoff,
             e.Simulation is { } sim ? new SimulationReport(sim.LiftoffTimeS, sim.StalledStations, sim.SpinupFindings, sim.MinBusVoltageV, sim.PeakPackCurrentA,
                 sim.EnduranceRuntimeS, sim.EnduranceLimit, sim.EnduranceLimitText, sim.PeakWindingTempC, sim.PeakPlateTempC) : null,
             f is null ? [] : f.StationSpeedsRadPerS.Select((w, i) => new StationReport(i, Units.RadPerSToRpm(w), f.StationMotorCurrentsA[i],

@@ -269,7 +269,7 @@ public static class StressCommand
 
     private static StressReport Report(StressResult r, string rigName, double acceptPct)
     {
-        var rate = r.FailureRate is { } f ? new RateEntry(f.Count, f.Estimate, f.Lower, f.Upper) : null;
+        var rate = r.FailureRate is { } f ? new RateEntry(f.Count, f.EstimateFraction, f.LowerFraction, f.UpperFraction) : null;
         // Pass only when the study shows the failure rate below the accepted level at 95 % confidence.
         string verdict = rate is { } x && x.CiHigh < acceptPct / 100.0 ? "pass" : "fail";
         var sample = r.WorstSample is { } w ? r.SampleResults.First(s => s.Index == w) : null;
@@ -282,10 +282,10 @@ public static class StressCommand
             acceptPct,
             verdict,
             rate,
-            r.Criteria.Select(c => new CriterionEntry(c.Key, c.Description, c.Rate.Count, c.Rate.Estimate, c.Rate.Lower, c.Rate.Upper)).ToList(),
-            r.Percentiles.Select(p => new FigureEntry(p.Key, p.Summary?.Count ?? 0, p.Summary?.Min, p.Summary?.P5, p.Summary?.P50, p.Summary?.P95, p.Summary?.Max, p.Summary?.Mean)).ToList(),
+            r.Criteria.Select(c => new CriterionEntry(c.Key, c.Description, c.Rate.Count, c.Rate.EstimateFraction, c.Rate.LowerFraction, c.Rate.UpperFraction)).ToList(),
+            r.Percentiles.Select(p => new FigureEntry(p.Key, p.Summary?.Count ?? 0, p.Summary?.MinSi, p.Summary?.P5Si, p.Summary?.P50Si, p.Summary?.P95Si, p.Summary?.MaxSi, p.Summary?.MeanSi)).ToList(),
             r.Drivers.Select(d => new DriverEntry(d.Input, d.Margin, d.Rho)).ToList(),
-            sample is null ? null : new WorstEntry(sample.Index, sample.Outcome.MinimumMargin, Failed(sample.Outcome), Parts(sample.Parts)),
+            sample is null ? null : new WorstEntry(sample.Index, sample.Outcome.MinimumMarginFraction, Failed(sample.Outcome), Parts(sample.Parts)),
             Cautions);
     }
 

@@ -33,8 +33,8 @@ public static class YawCommand
         var report = new YawReport(
             model.Rig.Name,
             model.DesignGapM * 1000,
-            new YawEntry(y.EqualDuty, y.ResidualTorqueNm, y.YawAccelerationRadPerS2, y.TrimDutyDelta, y.ClockwiseDuty, y.CounterClockwiseDuty,
-                y.AuthorityNm, y.AuthorityPositiveNm, y.AuthorityNegativeNm, y.AuthorityMargin, y.AuthorityLimitedBy, y.LimitNm, y.Pass),
+            new YawEntry(y.EqualDuty, y.ResidualTorqueNm, y.YawAccelerationRadPerS2, y.TrimDeltaDuty, y.ClockwiseDuty, y.CounterClockwiseDuty,
+                y.AuthorityNm, y.AuthorityPositiveNm, y.AuthorityNegativeNm, y.AuthorityMarginFraction, y.AuthorityLimitedBy, y.LimitNm, y.Pass),
             y.Sensitivity is { } s ? new SensitivityEntry(s.StationA, s.StationB, s.KvMismatchNm, s.GapDifferenceNm, s.PlateTempDifferenceNm) : null,
             y.Findings);
         if (json)

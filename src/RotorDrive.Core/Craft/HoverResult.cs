@@ -13,9 +13,9 @@ namespace RotorDrive.Core.Craft;
 /// <param name="PackCurrentA">Pack current, A.</param>
 /// <param name="PlatePowerW">Eddy power into the plate, all rotors, W.</param>
 /// <param name="HeaveStiffnessNPerM">-d(total lift)/d gap at the stations' speeds, N/m.</param>
-/// <param name="ForceResidual">(total lift - weight) / weight.</param>
-/// <param name="PitchResidual">Moment about the y axis through the centre of gravity / (weight x largest arm).</param>
-/// <param name="RollResidual">Moment about the x axis through the centre of gravity / (weight x largest arm).</param>
+/// <param name="ForceResidualRatio">(total lift - weight) / weight.</param>
+/// <param name="PitchResidualRatio">Moment about the y axis through the centre of gravity / (weight x largest arm).</param>
+/// <param name="RollResidualRatio">Moment about the x axis through the centre of gravity / (weight x largest arm).</param>
 /// <param name="YawTorqueNm">Net yaw torque of the rotor reactions on the frame, N m.</param>
 /// <param name="PackMargins">Margins to the pack's current and cut-off limits.</param>
 /// <param name="Findings">Failing limits, unstable stations, or why there is no balance.</param>
@@ -31,9 +31,9 @@ public sealed record HoverResult(
     double PackCurrentA,
     double PlatePowerW,
     double HeaveStiffnessNPerM,
-    double ForceResidual,
-    double PitchResidual,
-    double RollResidual,
+    double ForceResidualRatio,
+    double PitchResidualRatio,
+    double RollResidualRatio,
     double YawTorqueNm,
     IReadOnlyList<LimitMargin> PackMargins,
     IReadOnlyList<HoverFinding> Findings,

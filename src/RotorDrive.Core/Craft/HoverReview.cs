@@ -71,7 +71,7 @@ public sealed record HoverReview(HoverResult Hover, HoverSafetyReport Safety, IR
         for (int k = 0; k < turning.Count && k < safety.AtHover.Count; k++)
         {
             var r = safety.AtHover[k];
-            if (r.Margin is < 0)
+            if (r.MarginFraction is < 0)
             {
                 findings.Add(new HoverFinding(RetainerStressKey, turning[k].Index, Invariant(
                     $"station {turning[k].Index}: the retaining ring of rotor {r.RotorId} carries {r.HoopStressPa!.Value / 1e6:0.0} MPa at {Units.RadPerSToRpm(r.SpeedRadPerS):0} rpm, above its allowable {r.AllowablePa!.Value / 1e6:0.0} MPa")));

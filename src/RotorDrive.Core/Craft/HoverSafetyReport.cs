@@ -17,11 +17,11 @@ public sealed record HoverSafetyReport(
     public double? MaxHoverStressPa => AtHover.Max(r => r.HoopStressPa);
 
     /// <summary>The smallest retainer margin (allowable / stress - 1) at hover, or null when none was assessed.</summary>
-    public double? MinHoverMargin => AtHover.Min(r => r.Margin);
+    public double? MinHoverMargin => AtHover.Min(r => r.MarginFraction);
 
     /// <summary>The smallest retainer margin at rated speed, or null when none was assessed.</summary>
-    public double? MinMaxRpmMargin => AtMaxRpm.Min(r => r.Margin);
+    public double? MinMaxRpmMargin => AtMaxRpm.Min(r => r.MarginFraction);
 
     /// <summary>Whether a retainer is over its allowable stress at hover speed or a rotor runs above its rated speed.</summary>
-    public bool Fails => AtHover.Any(r => r.AboveRatedSpeed || r.Margin is < 0);
+    public bool Fails => AtHover.Any(r => r.AboveRatedSpeed || r.MarginFraction is < 0);
 }

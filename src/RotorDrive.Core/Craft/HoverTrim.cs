@@ -543,7 +543,7 @@ public static class HoverTrim
                 if (m.Exceeded)
                 {
                     findings.Add(new HoverFinding(m.Limit.Key(), i,
-                        $"station {i}: {m.Limit.Describe()} {m.Value:0.###} {m.Limit.Unit()} exceeds the allowed {m.Allowed:0.###} {m.Limit.Unit()}"));
+                        $"station {i}: {m.Limit.Describe()} {m.ValueSi:0.###} {m.Limit.Unit()} exceeds the allowed {m.AllowedSi:0.###} {m.Limit.Unit()}"));
                 }
             }
             // Where the controller cannot deliver the torque at all, the failing limit says so; stability is moot.
@@ -564,7 +564,7 @@ public static class HoverTrim
             if (m.Exceeded)
             {
                 findings.Add(new HoverFinding(m.Limit.Key(), null,
-                    $"pack: {m.Limit.Describe()} {m.Value:0.###} {m.Limit.Unit()} is beyond the allowed {m.Allowed:0.###} {m.Limit.Unit()}"));
+                    $"pack: {m.Limit.Describe()} {m.ValueSi:0.###} {m.Limit.Unit()} is beyond the allowed {m.AllowedSi:0.###} {m.Limit.Unit()}"));
             }
         }
         double dg = 1e-4 * gapM, up = 0, down = 0;

@@ -1,3 +1,5 @@
+using RotorDrive.Core.Drive;
+using RotorDrive.Core.Loads;
 using RotorDrive.Core.Magnetics;
 
 namespace RotorDrive.Core.Craft;
@@ -33,6 +35,19 @@ public sealed record Rig(
     /// (rig file <c>plate.spreading_factor</c>; default 1: the heat stays in the annulus, the hottest assumption). Used
     /// by the lumped plate node of the time simulations.</summary>
     public double PlateSpreadingFactor { get; init; } = 1.0;
+
+    /// <summary>The load-table range analyses of this rig need for one rotor: 0 to its rated speed, gaps from half the
+    /// landed gap to three times the design gap, plate temperatures from -20 C (or colder if the rig starts colder) to
+    /// the rig's plate limit.</summary>
+    /// <param name="rotor">The rotor design (rated speed).</param>
+    /// <exception cref="ArgumentNullException">The rotor is null.</exception>
+    public LoadTableRange LoadTableRangeFor(RotorDesign rotor)
+    {
+        Preconditions.NotNull(rotor, nameof(rotor));
+        double cold = Math.Min(LoadTableRange.DefaultColdPlateC, Math.Min(PlateTemperatureC, AmbientC));
+        double hot = Math.Max(Limits.PlateTempC, Math.Max(PlateTemperatureC, AmbientC));
+        return new LoadTableRange(rotor.MaxSpeedRadPerS, 0.5 * LandedGapM, 3.0 * DesignGapM, cold, hot);
+    }
 
     /// <summary>Total mass: structure, payload, rotors, assigned motors and controllers, and packs, kg.</summary>
     public double TotalMassKg =>

@@ -1,3 +1,5 @@
+using RotorDrive.Core.Drive;
+
 namespace RotorDrive.Core.Craft;
 
 /// <summary>The limits a team sets for its rig; analyses report margins to each.</summary>
@@ -13,4 +15,8 @@ public sealed record RigLimits(
     double CellCutoffV,
     double UsableCapacityFraction,
     double MaxDuty,
-    double LiftoffTimeS);
+    double LiftoffTimeS)
+{
+    /// <summary>The limits one station's steady operation is checked against (cell cutoff and duty headroom).</summary>
+    public StationLimits Station => new(CellCutoffV, MaxDuty);
+}

@@ -5,7 +5,7 @@ namespace RotorDrive.Core.Craft;
 
 /// <summary>Settings for building a <see cref="RigModel"/>.</summary>
 /// <remarks>Defaults: full pack (state of charge 1), the load model's defaults (end correction on), the table range of
-/// <see cref="LoadTableRange.ForRig"/>, the default rotor-safety densities.</remarks>
+/// <see cref="Rig.LoadTableRangeFor"/>, the default rotor-safety densities.</remarks>
 public sealed record RigModelOptions
 {
     /// <summary>The defaults.</summary>

@@ -6,7 +6,7 @@ namespace RotorDrive.Core.Craft;
 /// <param name="ResidualTorqueNm">Net yaw torque with every station at <paramref name="EqualDuty"/>, N m (positive
 /// counter-clockwise seen from above).</param>
 /// <param name="YawAccelerationRadPerS2">Residual torque / yaw inertia, rad/s^2.</param>
-/// <param name="TrimDutyDelta">Duty of the clockwise group minus that of the counter-clockwise group that cancels the
+/// <param name="TrimDeltaDuty">Duty of the clockwise group minus that of the counter-clockwise group that cancels the
 /// residual while still carrying the weight, or null when it cannot be found.</param>
 /// <param name="ClockwiseDuty">The clockwise group's duty with that trim, or null.</param>
 /// <param name="CounterClockwiseDuty">The counter-clockwise group's duty with that trim, or null.</param>
@@ -22,7 +22,7 @@ public sealed record YawResult(
     double? EqualDuty,
     double? ResidualTorqueNm,
     double? YawAccelerationRadPerS2,
-    double? TrimDutyDelta,
+    double? TrimDeltaDuty,
     double? ClockwiseDuty,
     double? CounterClockwiseDuty,
     double AuthorityPositiveNm,
@@ -36,7 +36,7 @@ public sealed record YawResult(
     public double AuthorityNm => Math.Min(AuthorityPositiveNm, AuthorityNegativeNm);
 
     /// <summary>Authority / tolerance - 1 (negative when the trim cannot command the tolerated torque both ways).</summary>
-    public double AuthorityMargin => AuthorityNm / LimitNm - 1;
+    public double AuthorityMarginFraction => AuthorityNm / LimitNm - 1;
 
     /// <summary>Pass: an equal duty exists, its residual yaw torque is within the tolerance, and the trim can command
     /// at least the tolerance both ways.</summary>

@@ -24,7 +24,7 @@ public static class DriveLimits
     /// <param name="limit">The limit.</param>
     public static string Describe(this DriveLimit limit) => limit.Key().Replace('_', ' ');
 
-    /// <summary>The unit of <see cref="LimitMargin.Value"/> and <see cref="LimitMargin.Allowed"/> for this limit.</summary>
+    /// <summary>The unit of <see cref="LimitMargin.ValueSi"/> and <see cref="LimitMargin.AllowedSi"/> for this limit.</summary>
     /// <param name="limit">The limit.</param>
     public static string Unit(this DriveLimit limit) => limit switch
     {

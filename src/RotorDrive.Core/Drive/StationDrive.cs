@@ -1,4 +1,3 @@
-using RotorDrive.Core.Craft;
 using RotorDrive.Core.Loads;
 using RotorDrive.Core.Magnetics;
 
@@ -18,5 +17,5 @@ public sealed record StationDrive(
     PackBank Packs,
     RotorDesign Rotor,
     IRotorLoad Load,
-    RigLimits Limits,
+    StationLimits Limits,
     bool ReverseRequired = false);

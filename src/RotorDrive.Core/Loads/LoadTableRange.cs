@@ -1,4 +1,3 @@
-using RotorDrive.Core.Craft;
 using RotorDrive.Core.Magnetics;
 
 namespace RotorDrive.Core.Loads;
@@ -36,20 +35,6 @@ public sealed record LoadTableRange(
 {
     /// <summary>Lowest plate temperature the default range for a rig covers, C.</summary>
     public const double DefaultColdPlateC = -20.0;
-
-    /// <summary>The range analyses of a rig need for one rotor: 0 to its rated speed, gaps from half the landed gap to three
-    /// times the design gap, plate temperatures from -20 C (or colder if the rig starts colder) to the rig's plate limit.</summary>
-    /// <param name="rig">The rig (gaps, plate temperature and limit).</param>
-    /// <param name="rotor">The rotor design (rated speed).</param>
-    /// <exception cref="ArgumentNullException">An argument is null.</exception>
-    public static LoadTableRange ForRig(Rig rig, RotorDesign rotor)
-    {
-        Preconditions.NotNull(rig, nameof(rig));
-        Preconditions.NotNull(rotor, nameof(rotor));
-        double cold = Math.Min(DefaultColdPlateC, Math.Min(rig.PlateTemperatureC, rig.AmbientC));
-        double hot = Math.Max(rig.Limits.PlateTempC, Math.Max(rig.PlateTemperatureC, rig.AmbientC));
-        return new LoadTableRange(rotor.MaxSpeedRadPerS, 0.5 * rig.LandedGapM, 3.0 * rig.DesignGapM, cold, hot);
-    }
 
     /// <summary>Checks every member and throws on the first one out of range.</summary>
     /// <exception cref="ArgumentOutOfRangeException">A member is NaN, infinite or out of range.</exception>

@@ -84,7 +84,7 @@ public static class Cautions
                     reasons.Add($"rotor {r.RotorId}: retainer margin not assessed (no allowable stress in its catalog row)");
                     break;
                 default:
-                    if (r.Margin is { } margin && margin < limits.BurstMargin)
+                    if (r.MarginFraction is { } margin && margin < limits.BurstMargin)
                     {
                         reasons.Add($"rotor {r.RotorId}: retainer stress margin {margin.ToString("0.00", CultureInfo.InvariantCulture)} at {rpm} rpm "
                             + $"is below {limits.BurstMargin.ToString("0.00", CultureInfo.InvariantCulture)}");

@@ -12,7 +12,7 @@ namespace RotorDrive.Core.Safety;
 /// <param name="RingOwnStressPa">Part of the stress from the ring's own rotation, Pa, or null.</param>
 /// <param name="MagnetLoadStressPa">Part of the stress from carrying the magnets' centrifugal load, Pa, or null.</param>
 /// <param name="AllowablePa">The ring's allowable hoop stress from the rotor row, Pa, or null.</param>
-/// <param name="Margin">allowable / stress - 1 (0 at the allowable, negative beyond), or null when not assessed.</param>
+/// <param name="MarginFraction">allowable / stress - 1 (0 at the allowable, negative beyond), or null when not assessed.</param>
 /// <param name="SpeedAtAllowableRadPerS">Speed at which the stress reaches the allowable (stress grows as speed
 /// squared), rad/s, or null when not assessed.</param>
 public sealed record RotorSafetyResult(
@@ -26,7 +26,7 @@ public sealed record RotorSafetyResult(
     double? RingOwnStressPa,
     double? MagnetLoadStressPa,
     double? AllowablePa,
-    double? Margin,
+    double? MarginFraction,
     double? SpeedAtAllowableRadPerS)
 {
     /// <summary>Whether the assessed speed is above the rotor's maximum rated speed.</summary>

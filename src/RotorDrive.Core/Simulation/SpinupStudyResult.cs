@@ -3,7 +3,7 @@ namespace RotorDrive.Core.Simulation;
 /// <summary>The outcome of a spin-up study (<see cref="SpinupStudy.Run"/>).</summary>
 /// <param name="Request">What was run.</param>
 /// <param name="SocFraction">Pack state of charge at the start, 0..1.</param>
-/// <param name="Targets">The hover throttle per station the ramp aims for (duty, or rad/s in speed hold).</param>
+/// <param name="TargetsSi">The hover throttle per station the ramp aims for (duty, or rad/s in speed hold).</param>
 /// <param name="Spinup">The spin-up from rest on the landing gear.</param>
 /// <param name="LandingBraking">The landing from the trimmed hover with the controllers' braking on.</param>
 /// <param name="LandingCoasting">The same landing with braking off (the rotors freewheel).</param>
@@ -14,7 +14,7 @@ namespace RotorDrive.Core.Simulation;
 public sealed record SpinupStudyResult(
     SpinupStudyRequest Request,
     double SocFraction,
-    IReadOnlyList<double> Targets,
+    IReadOnlyList<double> TargetsSi,
     SpinupResult Spinup,
     SpinupResult LandingBraking,
     SpinupResult LandingCoasting,

@@ -1,4 +1,5 @@
 using RotorDrive.Core;
+using RotorDrive.Core.Craft;
 
 namespace RotorDrive.Files.Catalogs;
 

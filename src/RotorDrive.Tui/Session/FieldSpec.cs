@@ -1,5 +1,6 @@
 using System.Globalization;
 using RotorDrive.Core;
+using RotorDrive.Core.Craft;
 using RotorDrive.Files.Rigs;
 
 namespace RotorDrive.Tui.Session;

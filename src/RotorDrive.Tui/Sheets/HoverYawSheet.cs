@@ -208,7 +208,7 @@ public sealed class HoverYawSheet : Sheet
                 }
                 sb.AppendLine();
             }
-            sb.AppendLine("  pack: " + string.Join(", ", h.PackMargins.Select(m => $"{ShortName(m.Limit)} {(m.Exceeded ? Over : "")}{F(m.Margin * 100, 0)}")));
+            sb.AppendLine("  pack: " + string.Join(", ", h.PackMargins.Select(m => $"{ShortName(m.Limit)} {(m.Exceeded ? Over : "")}{F(m.MarginFraction * 100, 0)}")));
         }
         if (review.Findings.Count > 0)
         {
@@ -225,11 +225,11 @@ public sealed class HoverYawSheet : Sheet
             ? $"  equal duty {F(d, 4)} leaves {F(yaw.ResidualTorqueNm, 3)} N m ({F(yaw.YawAccelerationRadPerS2, 3)} rad/s^2); tolerance {F(yaw.LimitNm, 2)} N m"
                 + (yaw.ResidualTorqueNm is { } r && Math.Abs(r) > yaw.LimitNm ? $" {Over} over" : "")
             : $"  {Over} no equal duty carries the weight");
-        if (yaw.TrimDutyDelta is { } delta)
+        if (yaw.TrimDeltaDuty is { } delta)
         {
             sb.AppendLine($"  trim: cw minus ccw duty {F(delta, 4)} (cw {F(yaw.ClockwiseDuty, 4)}, ccw {F(yaw.CounterClockwiseDuty, 4)})");
         }
-        sb.AppendLine($"  authority {F(yaw.AuthorityNm, 2)} N m (ccw {F(yaw.AuthorityPositiveNm, 2)}, cw {F(yaw.AuthorityNegativeNm, 2)}), margin {Percent(yaw.AuthorityMargin)}"
+        sb.AppendLine($"  authority {F(yaw.AuthorityNm, 2)} N m (ccw {F(yaw.AuthorityPositiveNm, 2)}, cw {F(yaw.AuthorityNegativeNm, 2)}), margin {Percent(yaw.AuthorityMarginFraction)}"
             + (yaw.AuthorityLimitedBy is { } by ? $", bounded by {by.Replace('_', ' ')}" : "")
             + (yaw.AuthorityNm < yaw.LimitNm ? $" {Over} below the tolerance" : ""));
         if (yaw.Sensitivity is { } sens)
@@ -251,10 +251,10 @@ public sealed class HoverYawSheet : Sheet
         }
         sb.AppendLine(worst is null
             ? "  hoop stress not assessed (the rotor row gives no retainer thickness)"
-            : $"  hoop stress {F(worst.HoopStressPa!.Value / 1e6, 1)} MPa at hover, allowed {F(worst.AllowablePa / 1e6, 1)} MPa, margin {(worst.Margin is { } wm ? (wm < 0 ? Over : "") + Percent(wm) : "not assessed")}");
+            : $"  hoop stress {F(worst.HoopStressPa!.Value / 1e6, 1)} MPa at hover, allowed {F(worst.AllowablePa / 1e6, 1)} MPa, margin {(worst.MarginFraction is { } wm ? (wm < 0 ? Over : "") + Percent(wm) : "not assessed")}");
         if (worstMax is not null)
         {
-            sb.AppendLine($"  at rated {F(Units.RadPerSToRpm(worstMax.SpeedRadPerS), 0)} rpm: {F(worstMax.HoopStressPa!.Value / 1e6, 1)} MPa, margin {(worstMax.Margin is { } mm ? (mm < 0 ? Over : "") + Percent(mm) : "not assessed")}");
+            sb.AppendLine($"  at rated {F(Units.RadPerSToRpm(worstMax.SpeedRadPerS), 0)} rpm: {F(worstMax.HoopStressPa!.Value / 1e6, 1)} MPa, margin {(worstMax.MarginFraction is { } mm ? (mm < 0 ? Over : "") + Percent(mm) : "not assessed")}");
         }
         sb.AppendLine("  " + safety.MagnetNote);
         sb.AppendLine();

@@ -86,7 +86,7 @@ public sealed class LiftDragSheet : ChartSheet
     internal static LoadSweepResult Compute(Rig rig, Core.Magnetics.RotorDesign design, double gapM, double plateTempC,
         CancellationToken token, IProgress<double>? progress)
     {
-        var rigRange = LoadTableRange.ForRig(rig, design);
+        var rigRange = rig.LoadTableRangeFor(design);
         var range = rigRange with
         {
             MinGapM = Math.Min(rigRange.MinGapM, gapM),

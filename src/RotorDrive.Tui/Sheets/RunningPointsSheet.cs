@@ -55,8 +55,8 @@ public sealed class RunningPointsSheet : ChartSheet
         {
             return null;
         }
-        var table = RotorLoadTable.Build(s.Rotor, rig.Plate, LoadTableRange.ForRig(rig, s.Rotor));
-        return new StationDrive(new Drivetrain(s.Motor!, s.Controller!), rig.Packs!, s.Rotor, table, rig.Limits);
+        var table = RotorLoadTable.Build(s.Rotor, rig.Plate, rig.LoadTableRangeFor(s.Rotor));
+        return new StationDrive(new Drivetrain(s.Motor!, s.Controller!), rig.Packs!, s.Rotor, table, rig.Limits.Station);
     }
 
     /// <inheritdoc/>

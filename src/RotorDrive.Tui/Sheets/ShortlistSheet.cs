@@ -357,7 +357,7 @@ public sealed class ShortlistSheet : Sheet
             return (IReadOnlyList<string>)
             [
                 t.Rank.ToString(CultureInfo.InvariantCulture), t.InParetoSet ? "P" : "", F(f.RuntimeS / 60, 1), F(f.TotalMassKg, 1),
-                f.CurrentMargin is { } m ? F(m * 100, 0) : "-", e.MotorId, e.ControllerId, $"{e.Candidate.PackCount} x {e.PackId}",
+                f.CurrentMarginFraction is { } m ? F(m * 100, 0) : "-", e.MotorId, e.ControllerId, $"{e.Candidate.PackCount} x {e.PackId}",
                 t.LiftoffTimeS is { } s ? F(s, 2) : "none", F(t.Score, 3),
             ];
         }).ToList();

@@ -167,8 +167,8 @@ public sealed class StationsSheet : Sheet
         string rim = $"rim {r.RimSpeedMPerS:F0} m/s";
         return r.Assessment switch
         {
-            RetainerAssessment.Assessed => (r.Margin!.Value < 0 ? "FAIL " : "ok ") + $"{at}: ring {r.HoopStressPa!.Value / 1e6:F0}/{r.AllowablePa!.Value / 1e6:F0} MPa, "
-                + $"margin {r.Margin.Value:P0}, {rim}",
+            RetainerAssessment.Assessed => (r.MarginFraction!.Value < 0 ? "FAIL " : "ok ") + $"{at}: ring {r.HoopStressPa!.Value / 1e6:F0}/{r.AllowablePa!.Value / 1e6:F0} MPa, "
+                + $"margin {r.MarginFraction.Value:P0}, {rim}",
             RetainerAssessment.NoAllowableStress => $"! {at}: ring {r.HoopStressPa!.Value / 1e6:F0} MPa, no allowable in the rotor row, {rim}",
             _ => $"! {at}: ring not assessed (no retainer thickness in the rotor row), {rim}",
         };

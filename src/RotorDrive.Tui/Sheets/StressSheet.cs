@@ -273,7 +273,7 @@ public sealed class StressSheet : Sheet
             lines.Add("No sample finished.");
             return lines;
         }
-        lines.Add($"Overall failure rate {Pct(overall.Estimate)}, 95 % interval {Pct(overall.Lower)} - {Pct(overall.Upper)}");
+        lines.Add($"Overall failure rate {Pct(overall.EstimateFraction)}, 95 % interval {Pct(overall.LowerFraction)} - {Pct(overall.UpperFraction)}");
         lines.Add($"  {"criterion",-13} {"fails",7} {"rate",8}  95 % interval (Wilson)");
         foreach (var c in r.Criteria)
         {
@@ -286,7 +286,7 @@ public sealed class StressSheet : Sheet
         {
             var (words, decimals) = FigureWords[f.Key];
             lines.Add(f.Summary is { } s
-                ? $"  {words,-25} {F(s.P5, decimals),9} {F(s.P50, decimals),9} {F(s.P95, decimals),9}"
+                ? $"  {words,-25} {F(s.P5Si, decimals),9} {F(s.P50Si, decimals),9} {F(s.P95Si, decimals),9}"
                 : $"  {words,-25} {"none",9}");
         }
         lines.Add("");
@@ -298,7 +298,7 @@ public sealed class StressSheet : Sheet
         lines.AddRange(bins.Count == 0 ? ["  no sample has this figure"] : TextHistogram.Render(bins, width - 1, figureDecimals));
         if (r.Percentiles.First(p => p.Key == key).Summary is { } summary)
         {
-            lines.Add($"  P5 {F(summary.P5, figureDecimals)}  P50 {F(summary.P50, figureDecimals)}  P95 {F(summary.P95, figureDecimals)}");
+            lines.Add($"  P5 {F(summary.P5Si, figureDecimals)}  P50 {F(summary.P50Si, figureDecimals)}  P95 {F(summary.P95Si, figureDecimals)}");
         }
         lines.Add("");
         lines.Add("Top drivers (Spearman rho of a drawn value with a margin; + means larger is safer):");
@@ -314,7 +314,7 @@ public sealed class StressSheet : Sheet
         {
             var failed = StressCriteria.All.Where(c => !sample.Outcome.Passed(c)).Select(c => c.Key()).ToList();
             lines.Add("");
-            lines.Add($"Worst sample: {worst}, smallest margin {F(sample.Outcome.MinimumMargin, 3)}, {(failed.Count == 0 ? "fails nothing" : "! fails " + string.Join(", ", failed))}");
+            lines.Add($"Worst sample: {worst}, smallest margin {F(sample.Outcome.MinimumMarginFraction, 3)}, {(failed.Count == 0 ? "fails nothing" : "! fails " + string.Join(", ", failed))}");
             lines.Add($"  rotordrive stress {Context.Session.RigPath ?? "RIG.json"} --seed {r.Seed} --sample {worst} shows it in full");
         }
         lines.Add("");
@@ -323,7 +323,7 @@ public sealed class StressSheet : Sheet
     }
 
     private static string CriterionLine(string key, ProportionInterval rate)
-        => $"  {key,-13} {rate.Count,7} {Pct(rate.Estimate),8}  {Pct(rate.Lower)} - {Pct(rate.Upper)}";
+        => $"  {key,-13} {rate.Count,7} {Pct(rate.EstimateFraction),8}  {Pct(rate.LowerFraction)} - {Pct(rate.UpperFraction)}";
 
     private static string Pct(double fraction) => (fraction * 100).ToString("F2", CultureInfo.InvariantCulture) + " %";
 

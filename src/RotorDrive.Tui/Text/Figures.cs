@@ -25,5 +25,5 @@ public static class Figures
 
     /// <summary>A margin as a short cell: the percentage, marked <see cref="Over"/> when the limit is exceeded.</summary>
     public static string MarginCell(LimitMargin margin)
-        => (margin.Exceeded ? Over : "") + F(margin.Margin * 100, 0);
+        => (margin.Exceeded ? Over : "") + F(margin.MarginFraction * 100, 0);
 }

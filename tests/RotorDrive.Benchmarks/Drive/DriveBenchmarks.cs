@@ -41,7 +41,7 @@ public class DriveBenchmarks
             new CellCurve("lipo", [0.0, 0.1, 0.5, 0.9, 1.0], [3.3, 3.6, 3.8, 4.0, 4.2]));
         var limits = new RigLimits(1, 80, 3.3, 0.8, 0.95, 5);
         var drivetrain = new Drivetrain(motor, controller);
-        _drive = new StationDrive(drivetrain, packs, rotor, table, limits);
+        _drive = new StationDrive(drivetrain, packs, rotor, table, limits.Station);
         _analytic = _drive with { Load = new AnalyticStripLoad(340, 0.1, 80, 1e-6, 0.01) };
         _conditions = OperatingConditions.Uniform(0.01, 25, 0.8);
         _source = BusSource.FromPack(packs, 0.8);

@@ -1,5 +1,6 @@
 using RotorDrive.Core;
 using RotorDrive.Core.Drive;
+using RotorDrive.Core.Craft;
 
 namespace RotorDrive.Benchmarks.Studies;
 

@@ -19,13 +19,13 @@ public sealed class CommonDutyAndYawTests
         Assert.NotNull(yaw.EqualDuty);
         var hover = CommonDutyHover.Solve(model, yaw.EqualDuty!.Value);
         Approx.Equal(CraftRigs.Gap, hover.GapM, 1e-7, what: "gap");
-        Assert.True(Math.Abs(hover.ForceResidual) <= 1e-7);
+        Assert.True(Math.Abs(hover.ForceResidualRatio) <= 1e-7);
         foreach (var s in hover.Stations)
         {
             Approx.Equal(yaw.EqualDuty.Value, s.Duty, 1e-7, what: $"duty {s.Index}");
             Assert.True(s.Stable);
         }
-        Assert.True(Math.Abs(hover.PitchResidual) > 1e-4, "an untrimmed craft with an offset centre of gravity must show a pitch moment");
+        Assert.True(Math.Abs(hover.PitchResidualRatio) > 1e-4, "an untrimmed craft with an offset centre of gravity must show a pitch moment");
     }
 
     // A Kv mismatch leaves a residual yaw at equal duty; the differential duty found cancels it (residual check) while the
@@ -41,7 +41,7 @@ public sealed class CommonDutyAndYawTests
         var model = nominal.WithParts(0, CraftRigs.Motor(kvRpmPerV: 103), CraftRigs.Controller);
         var yaw = YawBalance.Analyse(model);
         Assert.True(Math.Abs(yaw.ResidualTorqueNm!.Value) > 1e-3);
-        Assert.NotNull(yaw.TrimDutyDelta);
+        Assert.NotNull(yaw.TrimDeltaDuty);
         var duties = model.Stations.Select(s => s.Spin == SpinDirection.Clockwise ? yaw.ClockwiseDuty!.Value : yaw.CounterClockwiseDuty!.Value).ToArray();
         var state = CommonDutyHover.SpeedsAt(model, duties, CraftRigs.Gap);
         Assert.True(Math.Abs(state.YawTorqueNm) <= 1e-7 * state.ReactionTorquesNm.Sum(Math.Abs));

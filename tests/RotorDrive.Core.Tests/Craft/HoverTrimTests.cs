@@ -52,7 +52,7 @@ public sealed class HoverTrimTests
         Assert.True(Math.Abs(pitch) <= 1e-6 * model.WeightN * arm, $"pitch residual {pitch}");
         Assert.True(Math.Abs(roll) <= 1e-6 * model.WeightN * arm, $"roll residual {roll}");
         Assert.True(Math.Abs(hover.YawTorqueNm) <= 1e-6 * torque, $"yaw residual {hover.YawTorqueNm}");
-        Assert.True(Math.Abs(hover.ForceResidual) <= 1e-6 && Math.Abs(hover.PitchResidual) <= 1e-6 && Math.Abs(hover.RollResidual) <= 1e-6);
+        Assert.True(Math.Abs(hover.ForceResidualRatio) <= 1e-6 && Math.Abs(hover.PitchResidualRatio) <= 1e-6 && Math.Abs(hover.RollResidualRatio) <= 1e-6);
     }
 
     // Lever rule (statics of a beam on two supports, J. L. Meriam & L. G. Kraige, Engineering Mechanics: Statics): with

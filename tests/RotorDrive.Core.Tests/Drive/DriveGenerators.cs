@@ -74,13 +74,13 @@ public static class DriveGenerators
         from soc in Uniform(0, 1)
         from braking in Gen.Elements(false, true)
         from temp in Uniform(-10, 100)
-        let packs = new global::RotorDrive.Core.Craft.PackBank(
+        let packs = new global::RotorDrive.Core.Drive.PackBank(
             new BatteryPack("p", "lipo", cells, parallel, 5, 20, 40, cellResistance, 1),
             1,
             new CellCurve("lipo", [0.0, 0.1, 0.5, 0.9, 1.0], [3.3, 3.6, 3.8, 4.0, 4.2]))
         let free = drivetrain.FreeSpeedRadPerS(packs.OpenCircuitVoltageAt(soc), 1.0, temp)
         select new OperatingCase(
-            new StationDrive(drivetrain, packs, DriveParts.Rotor(maxSpeedRadPerS: 0.8 * free + 1), new ThinSheetStripLoad(forceN, radius, speedC, bearing), DriveParts.Limits()),
+            new StationDrive(drivetrain, packs, DriveParts.Rotor(maxSpeedRadPerS: 0.8 * free + 1), new ThinSheetStripLoad(forceN, radius, speedC, bearing), DriveParts.Limits().Station),
             hold ? ThrottleCommand.HoldSpeed(Math.Max(1e-3, 1.2 * throttle * free)) : ThrottleCommand.Duty(throttle),
             OperatingConditions.Uniform(0.01, temp, soc) with { Braking = braking });
 

@@ -34,7 +34,7 @@ public class MotorModelTests
             DriveParts.FlatPack(cells: 12, cellV: volts / 12),
             DriveParts.Rotor(maxSpeedRadPerS: 5000),
             new ConstantTorqueLoad(torque),
-            DriveParts.Limits());
+            DriveParts.Limits().Station);
         var result = OperatingPointFinder.Find(drive, ThrottleCommand.Duty(1.0), DriveParts.At20C());
         var point = Assert.Single(result.Equilibria);
         Assert.True(point.Stable);

@@ -21,7 +21,7 @@ public class OperatingPointTests
             DriveParts.FlatPack(cells: cells, cellV: 3.7, cellResistanceOhm: 0.002),
             DriveParts.Rotor(maxSpeedRadPerS: 420),
             Strip,
-            DriveParts.Limits(),
+            DriveParts.Limits().Station,
             reverseRequired);
     }
 
@@ -98,7 +98,7 @@ public class OperatingPointTests
             new BatteryPack("p", "lipo", 14, 1, 5, 20, 40, 0.002, 1),
             1,
             new CellCurve("lipo", [0.0, 0.1, 0.5, 0.9, 1.0], [3.3, 3.6, 3.8, 4.0, 4.2]));
-        var drive = new StationDrive(drivetrain, packs, DriveParts.Rotor(), new ThinSheetStripLoad(forceN, radiusM, peakSpeed, bearingNm), DriveParts.Limits());
+        var drive = new StationDrive(drivetrain, packs, DriveParts.Rotor(), new ThinSheetStripLoad(forceN, radiusM, peakSpeed, bearingNm), DriveParts.Limits().Station);
         var conditions = OperatingConditions.Uniform(0.01, tempC, 0.485) with { Braking = true };
 
         var result = OperatingPointFinder.Find(drive, ThrottleCommand.Duty(0.79), conditions);
@@ -190,7 +190,7 @@ public class OperatingPointTests
         Assert.Contains(high.ExceededLimits, m => m.Limit == DriveLimit.DutyHeadroom);
         Assert.Equal(10, low.Margins.Count);
         var erpm = high.Margins.Single(m => m.Limit == DriveLimit.ControllerErpm);
-        Approx.Equal(Units.RadPerSToRpm(high.SpeedRadPerS) * 7, erpm.Value, 1e-12, what: "eRPM = rpm x pole pairs");
+        Approx.Equal(Units.RadPerSToRpm(high.SpeedRadPerS) * 7, erpm.ValueSi, 1e-12, what: "eRPM = rpm x pole pairs");
     }
 
     // Compatibility: a 16-cell pack on a 6-14 cell controller, a reversal need on a one-way controller, and an eRPM cap
@@ -269,7 +269,7 @@ public class OperatingPointPropertyTests
             [
                 e.SpeedRadPerS, e.Duty, e.MotorCurrentA, e.MotorVoltageV, e.BusCurrentA, e.BusVoltageV, e.ShaftPowerW,
                 e.ElectricalPowerW, e.Efficiency, e.LiftN, e.EddyPowerW, e.PackCurrentA, e.StabilitySlopeNmPerRadPerS ?? 0,
-                .. e.Margins.Select(m => m.Value), .. e.Margins.Select(m => m.Margin),
+                .. e.Margins.Select(m => m.ValueSi), .. e.Margins.Select(m => m.MarginFraction),
             ];
             Assert.All(numbers, x => Assert.True(double.IsFinite(x)));
             Assert.InRange(e.Efficiency, 0, 1);

@@ -55,7 +55,7 @@ public static class PhysicsCaseGenerators
         double top = 1.2 * kv * packs.OpenCircuitVoltageAt(1.0);
         var load = RotorLoadTable.Build(rotor, plate, new LoadTableRange(top, 0.002, 0.03, 0, 40, SpeedPoints: 64, GapPoints: 24));
         return new PhysicsCase(
-            new StationDrive(new Drivetrain(motor, controller), packs, rotor with { MaxSpeedRadPerS = top }, load, DriveParts.Limits()),
+            new StationDrive(new Drivetrain(motor, controller), packs, rotor with { MaxSpeedRadPerS = top }, load, DriveParts.Limits().Station),
             OperatingConditions.Uniform(gap, 20, soc));
     }
 }

@@ -33,7 +33,7 @@ public class RotorSafetyTests
         RelativeAssert.Equal(71.130e6, result.RingOwnStressPa!.Value, 1e-4, what: "ring own stress");
         RelativeAssert.Equal(781.344e6, result.MagnetLoadStressPa!.Value, 1e-5, what: "magnet load stress");
         RelativeAssert.Equal(852.474e6, result.HoopStressPa!.Value, 1e-5, what: "total hoop stress");
-        RelativeAssert.Equal(0.40767, result.Margin!.Value, 1e-4, what: "margin");
+        RelativeAssert.Equal(0.40767, result.MarginFraction!.Value, 1e-4, what: "margin");
         RelativeAssert.Equal(7118.71, Units.RadPerSToRpm(result.SpeedAtAllowableRadPerS!.Value), 1e-5, what: "speed at allowable");
         RelativeAssert.Equal(628.3185 * 0.153, result.RimSpeedMPerS, 1e-6, what: "rim speed at the ring's outer surface");
         RelativeAssert.Equal(7500 * Math.PI * (0.15 * 0.15 - 0.10 * 0.10) * 0.01, result.MagnetMassKg, 1e-12, what: "magnet mass");
@@ -57,13 +57,13 @@ public class RotorSafetyTests
         var noRing = RotorSafety.Assess(Rotor(retainerM: null), Speed6000Rpm);
         Assert.Equal(RetainerAssessment.NoRetainerThickness, noRing.Assessment);
         Assert.Null(noRing.HoopStressPa);
-        Assert.Null(noRing.Margin);
+        Assert.Null(noRing.MarginFraction);
         RelativeAssert.Equal(Speed6000Rpm * 0.15, noRing.RimSpeedMPerS, 1e-12, what: "rim speed at the magnets' outer radius");
 
         var noAllowable = RotorSafety.Assess(Rotor(allowablePa: null), Speed6000Rpm);
         Assert.Equal(RetainerAssessment.NoAllowableStress, noAllowable.Assessment);
         Assert.NotNull(noAllowable.HoopStressPa);
-        Assert.Null(noAllowable.Margin);
+        Assert.Null(noAllowable.MarginFraction);
         Assert.Null(noAllowable.SpeedAtAllowableRadPerS);
     }
 
@@ -96,7 +96,7 @@ public class RotorSafetyTests
         var a = RotorSafety.Assess(Rotor(), w1);
         var b = RotorSafety.Assess(Rotor(), w2);
         var atAllowable = RotorSafety.Assess(Rotor(), a.SpeedAtAllowableRadPerS!.Value);
-        return Math.Abs((1 + a.Margin!.Value) / (1 + b.Margin!.Value) - 1.7 * 1.7) < 1e-9
-            && Math.Abs(atAllowable.Margin!.Value) < 1e-9;
+        return Math.Abs((1 + a.MarginFraction!.Value) / (1 + b.MarginFraction!.Value) - 1.7 * 1.7) < 1e-9
+            && Math.Abs(atAllowable.MarginFraction!.Value) < 1e-9;
     }
 }

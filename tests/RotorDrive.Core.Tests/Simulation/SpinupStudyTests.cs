@@ -17,7 +17,7 @@ public sealed class SpinupStudyTests
         Assert.NotNull(study.Spinup.LiftoffTimeS);
         Assert.True(study.LandingBraking.PeakRegenCurrentA > 1);
         Assert.Equal(0, study.LandingCoasting.PeakRegenCurrentA);
-        Assert.Equal(4, study.Targets.Count);
+        Assert.Equal(4, study.TargetsSi.Count);
         Assert.Equal(14 * 4.2, study.ControllerMaxVoltageV, 12); // the test controller takes up to 14 cells
     }
 

@@ -196,12 +196,12 @@ public class SamplingTests
         int Failures(int seed, int samples) => Enumerable.Range(0, samples).Count(k => tolerance.Apply(40, SampleStreams.ForSample(seed, k)) < 37);
 
         var interval = WilsonInterval.Compute(Failures(1, 2000), 2000);
-        Assert.InRange(p, interval.Lower, interval.Upper);
+        Assert.InRange(p, interval.LowerFraction, interval.UpperFraction);
 
         int covered = Enumerable.Range(100, 200).Count(seed =>
         {
             var i = WilsonInterval.Compute(Failures(seed, 250), 250);
-            return i.Lower <= p && p <= i.Upper;
+            return i.LowerFraction <= p && p <= i.UpperFraction;
         });
         RelativeAssert.InRange(covered / 200.0, 0.90, 0.99, "coverage of the 95 % Wilson interval");
     }

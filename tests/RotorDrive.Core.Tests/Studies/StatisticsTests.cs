@@ -20,9 +20,9 @@ public class StatisticsTests
     public void Wilson_MatchesNewcombesWorkedValues(int count, int trials, double lower, double upper)
     {
         var interval = WilsonInterval.Compute(count, trials);
-        Assert.Equal(lower, interval.Lower, 4);
-        Assert.Equal(upper, interval.Upper, 4);
-        Assert.Equal((double)count / trials, interval.Estimate, 15);
+        Assert.Equal(lower, interval.LowerFraction, 4);
+        Assert.Equal(upper, interval.UpperFraction, 4);
+        Assert.Equal((double)count / trials, interval.EstimateFraction, 15);
     }
 
     [Theory]
@@ -42,11 +42,11 @@ public class StatisticsTests
         var interval = WilsonInterval.Compute(count, trials);
         if (count > 0)
         {
-            RelativeAssert.Equal(Brent.FindRoot(Score, 0, pHat - 1e-9, 1e-14, 200), interval.Lower, 1e-9, 1e-12, "lower");
+            RelativeAssert.Equal(Brent.FindRoot(Score, 0, pHat - 1e-9, 1e-14, 200), interval.LowerFraction, 1e-9, 1e-12, "lower");
         }
         if (count < trials)
         {
-            RelativeAssert.Equal(Brent.FindRoot(Score, pHat + 1e-9, 1, 1e-14, 200), interval.Upper, 1e-9, 1e-12, "upper");
+            RelativeAssert.Equal(Brent.FindRoot(Score, pHat + 1e-9, 1, 1e-14, 200), interval.UpperFraction, 1e-9, 1e-12, "upper");
         }
     }
 
@@ -59,8 +59,8 @@ public class StatisticsTests
         int count = countCode % (trials + 1);
         var a = WilsonInterval.Compute(count, trials);
         var b = WilsonInterval.Compute(trials - count, trials);
-        return a.Lower >= 0 && a.Upper <= 1 && a.Lower <= a.Estimate && a.Estimate <= a.Upper
-            && Math.Abs(a.Lower - (1 - b.Upper)) < 1e-12 && Math.Abs(a.Upper - (1 - b.Lower)) < 1e-12;
+        return a.LowerFraction >= 0 && a.UpperFraction <= 1 && a.LowerFraction <= a.EstimateFraction && a.EstimateFraction <= a.UpperFraction
+            && Math.Abs(a.LowerFraction - (1 - b.UpperFraction)) < 1e-12 && Math.Abs(a.UpperFraction - (1 - b.LowerFraction)) < 1e-12;
     }
 
     [Fact]

@@ -104,7 +104,7 @@ public class HoverYawSheetTests
         {
             foreach (var m in s.Margins.Where(m => m.Exceeded))
             {
-                Assert.Contains("!!" + F(m.Margin * 100, 0), sheet.SheetText);
+                Assert.Contains("!!" + F(m.MarginFraction * 100, 0), sheet.SheetText);
             }
             // The station table, on the first screen, marks every station with an exceeded limit too.
             int over = s.Margins.Count(m => m.Exceeded);

@@ -14,7 +14,7 @@ public class LiftDragSheetTests
     private static DragPeak CorePeak(RotorDrive.Core.Craft.Rig rig, double gapM)
     {
         var rotor = rig.Stations[0].Rotor;
-        var range = LoadTableRange.ForRig(rig, rotor);
+        var range = rig.LoadTableRangeFor(rotor);
         range = range with { MinGapM = Math.Min(range.MinGapM, gapM), MaxGapM = Math.Max(range.MaxGapM, gapM * 1.01) };
         var table = RotorLoadTable.Build(rotor, rig.Plate, range);
         return DragPeakFinder.Find(table, gapM, rig.PlateTemperatureC, rig.AmbientC, rotor.MaxSpeedRadPerS);

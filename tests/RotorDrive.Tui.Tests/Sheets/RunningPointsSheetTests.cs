@@ -18,8 +18,8 @@ public class RunningPointsSheetTests
         var rig = bench.Context.Session.Rig!;
         var s = rig.Stations[0];
         // The same picture straight from Core: the rig's load table, drivetrain and pack, duties as on the sheet.
-        var table = RotorLoadTable.Build(s.Rotor, rig.Plate, LoadTableRange.ForRig(rig, s.Rotor));
-        var drive = new StationDrive(new Drivetrain(s.Motor!, s.Controller!), rig.Packs!, s.Rotor, table, rig.Limits);
+        var table = RotorLoadTable.Build(s.Rotor, rig.Plate, rig.LoadTableRangeFor(s.Rotor));
+        var drive = new StationDrive(new Drivetrain(s.Motor!, s.Controller!), rig.Packs!, s.Rotor, table, rig.Limits.Station);
         var conditions = OperatingConditions.Uniform(rig.DesignGapM, rig.AmbientC, 1.0) with { PlateTempC = rig.PlateTemperatureC };
         var map = TorqueSpeedMap.Compute(drive, conditions, RunningPointsSheet.Duties);
         Assert.NotNull(sheet.Map);

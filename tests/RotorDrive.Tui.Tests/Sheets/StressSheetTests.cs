@@ -52,10 +52,10 @@ public class StressSheetTests
         foreach (var c in expected.Criteria)
         {
             Assert.Contains(lines, l => l.StartsWith($"  {c.Key,-13} {c.Rate.Count,7} ", StringComparison.Ordinal)
-                && l.Contains((c.Rate.Upper * 100).ToString("F2", System.Globalization.CultureInfo.InvariantCulture) + " %"));
+                && l.Contains((c.Rate.UpperFraction * 100).ToString("F2", System.Globalization.CultureInfo.InvariantCulture) + " %"));
         }
         var speed = expected.Percentiles.Single(p => p.Key == "hover_speed_rpm").Summary!;
-        Assert.Contains(lines, l => l.StartsWith("  hover speed, rpm", StringComparison.Ordinal) && l.Contains(speed.P50.ToString("F0", System.Globalization.CultureInfo.InvariantCulture)));
+        Assert.Contains(lines, l => l.StartsWith("  hover speed, rpm", StringComparison.Ordinal) && l.Contains(speed.P50Si.ToString("F0", System.Globalization.CultureInfo.InvariantCulture)));
         Assert.Contains(lines, l => l.StartsWith("Histogram of hover speed, rpm", StringComparison.Ordinal));
         Assert.Contains(lines, l => l.StartsWith($"Worst sample: {expected.WorstSample}", StringComparison.Ordinal));
         Assert.Contains("24 samples, seed 3", sheet.StateText);

@@ -13,9 +13,9 @@ namespace RotorDrive.Core.Studies.Ranking;
 /// <param name="RuntimeS">Hover time until the first limit (usable capacity, cutoff voltage, duty), s.</param>
 /// <param name="RuntimeLimit">The limit that ends the hover, in words.</param>
 /// <param name="PeakPackCurrentA">Largest pack current during the hover (at its end), A.</param>
-/// <param name="CurrentMargin">Worst relative margin of the motor, controller (continuous) and pack (continuous)
+/// <param name="CurrentMarginFraction">Worst relative margin of the motor, controller (continuous) and pack (continuous)
 /// currents over the hover: 1 - value / rating, smallest of the three; null when the hover is not reached.</param>
-/// <param name="DragPeakTorqueMargin">Smallest ratio over stations of the current-limited motor torque to the load torque
+/// <param name="DragPeakTorqueMarginFraction">Smallest ratio over stations of the current-limited motor torque to the load torque
 /// at the landed-gap drag peak, minus 1 (negative: stuck below the peak); null when no rotor has a drag peak.</param>
 public sealed record RankFigures(
     double TotalMassKg,
@@ -30,8 +30,8 @@ public sealed record RankFigures(
     double RuntimeS,
     string RuntimeLimit,
     double PeakPackCurrentA,
-    double? CurrentMargin,
-    double? DragPeakTorqueMargin)
+    double? CurrentMarginFraction,
+    double? DragPeakTorqueMarginFraction)
 {
     /// <summary>Fastest station's hover speed, rpm.</summary>
     public double MaxSpeedRpm => StationSpeedsRadPerS.Count == 0 ? 0 : Units.RadPerSToRpm(StationSpeedsRadPerS.Max());

@@ -29,7 +29,7 @@ public sealed partial class RankStudy
             Packs = bank,
         };
         o.MassKg = rig.TotalMassKg;
-        var compatibility = DriveCompatibility.Check(new StationDrive(new Drivetrain(motor, controller), bank, rig.Stations[0].Rotor, Loads[0], rig.Limits, ReverseRequired: _options.RequireReversible));
+        var compatibility = DriveCompatibility.Check(new StationDrive(new Drivetrain(motor, controller), bank, rig.Stations[0].Rotor, Loads[0], rig.Limits.Station, ReverseRequired: _options.RequireReversible));
         foreach (var finding in compatibility)
         {
             if (finding.Kind == DriveFindingKind.ControllerNotReversible)
@@ -124,8 +124,8 @@ public sealed partial class RankStudy
             }
             o.Currents[i] = needs[i].MotorCurrentA;
             o.Duties[i] = points[i].Duty;
-            o.MaxCurrentA = Math.Max(o.MaxCurrentA, margins[0].Value);
-            o.MaxMotorPowerW = Math.Max(o.MaxMotorPowerW, margins[1].Value);
+            o.MaxCurrentA = Math.Max(o.MaxCurrentA, margins[0].ValueSi);
+            o.MaxMotorPowerW = Math.Max(o.MaxMotorPowerW, margins[1].ValueSi);
         }
         var fastestMargins = DriveMargins.ForStation(hoverTrain, rig.Stations[o.FastestStation].Rotor, needs[o.FastestStation]);
         if (fastestMargins[4].Exceeded)
@@ -203,7 +203,7 @@ public sealed partial class RankStudy
         {
             o.Reject(RankRejectionKind.PackCurrent);
         }
-        o.CurrentMargin = Math.Min(Math.Min(1 - o.MaxCurrentA / motor.MaxCurrentA, 1 - o.MaxCurrentA / controller.ContinuousCurrentA), packMargins[0].Margin);
+        o.CurrentMargin = Math.Min(Math.Min(1 - o.MaxCurrentA / motor.MaxCurrentA, 1 - o.MaxCurrentA / controller.ContinuousCurrentA), packMargins[0].MarginFraction);
         return ToEvaluation(candidate, o);
     }
 }

@@ -105,7 +105,7 @@ public sealed partial class RankStudy
     /// <param name="catalog">The parts to combine.</param>
     /// <param name="options">Settings, or null for <see cref="RankOptions.Default"/>.</param>
     /// <param name="stationLoads">One rotor load per station, or null to build the load tables analyses use
-    /// (<see cref="RotorLoadTable"/> over <see cref="LoadTableRange.ForRig"/>, one per distinct rotor design).</param>
+    /// (<see cref="RotorLoadTable"/> over <see cref="Rig.LoadTableRangeFor"/>, one per distinct rotor design).</param>
     /// <returns>The prepared study.</returns>
     /// <exception cref="ArgumentNullException">The rig or the catalog is null.</exception>
     /// <exception cref="ArgumentException">The loads do not match the stations, or a pack's chemistry has no curve.</exception>

@@ -73,7 +73,7 @@ internal sealed class RigStressEvaluator(RigStressModel model) : IStressEvaluato
             margins[(int)StressCriterion.Yaw] = yawMargin;
             for (int i = 0; i < hover.Stations.Count; i++)
             {
-                if (RotorSafety.Assess(variant.Stations[i].Rotor, hover.Stations[i].SpeedRadPerS, variant.Options.Safety).Margin is { } m)
+                if (RotorSafety.Assess(variant.Stations[i].Rotor, hover.Stations[i].SpeedRadPerS, variant.Options.Safety).MarginFraction is { } m)
                 {
                     retainer = retainer is { } low ? Math.Min(low, m) : m;
                 }
@@ -174,12 +174,12 @@ internal sealed class RigStressEvaluator(RigStressModel model) : IStressEvaluato
         {
             foreach (var m in s.Margins)
             {
-                margin = Math.Min(margin, m.Margin);
+                margin = Math.Min(margin, m.MarginFraction);
             }
         }
         foreach (var m in hover.PackMargins)
         {
-            margin = Math.Min(margin, m.Margin);
+            margin = Math.Min(margin, m.MarginFraction);
         }
         if (hover.Status != HoverStatus.Hovering && margin >= 0)
         {

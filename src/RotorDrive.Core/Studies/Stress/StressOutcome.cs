@@ -44,5 +44,5 @@ public sealed record StressOutcome(
 
     /// <summary>The smallest assessed margin (the sample's distance to its nearest failure), or +infinity when none was
     /// assessed. The worst sample of a study is the one with the smallest value.</summary>
-    public double MinimumMargin => Margins.Where(m => m is not null).Select(m => m!.Value).DefaultIfEmpty(double.PositiveInfinity).Min();
+    public double MinimumMarginFraction => Margins.Where(m => m is not null).Select(m => m!.Value).DefaultIfEmpty(double.PositiveInfinity).Min();
 }

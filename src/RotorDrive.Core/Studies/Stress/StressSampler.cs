@@ -1,4 +1,5 @@
 using RotorDrive.Core.Craft;
+using RotorDrive.Core.Drive;
 
 namespace RotorDrive.Core.Studies.Stress;
 

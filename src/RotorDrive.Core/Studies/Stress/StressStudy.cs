@@ -156,7 +156,7 @@ public static class StressStudy
         double worstMargin = double.PositiveInfinity;
         foreach (var s in samples)
         {
-            double m = s.Outcome.MinimumMargin;
+            double m = s.Outcome.MinimumMarginFraction;
             if (m < worstMargin)
             {
                 worstMargin = m;

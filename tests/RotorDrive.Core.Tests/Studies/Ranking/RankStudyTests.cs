@@ -44,8 +44,8 @@ public class RankStudyTests
         RelAssert.Close(270.90808, a.StationSpeedsRadPerS[0], 1e-6, "hover speed");
         RelAssert.Close(21.015261, a.MaxMotorCurrentA, 1e-6, "current A");
         RelAssert.Close(17.012209, b.MaxMotorCurrentA, 1e-6, "current B");
-        RelAssert.Close(0.4746185, a.CurrentMargin!.Value, 1e-6, "margin A");
-        RelAssert.Close(0.3195116, b.CurrentMargin!.Value, 1e-6, "margin B");
+        RelAssert.Close(0.4746185, a.CurrentMarginFraction!.Value, 1e-6, "margin A");
+        RelAssert.Close(0.3195116, b.CurrentMarginFraction!.Value, 1e-6, "margin B");
         var rejected = study.Evaluate(new RankCandidate(2, 0, 0, 1));
         Assert.Equal([RankRejectionKind.MotorCurrent], rejected.Rejections.Select(r => r.Kind));
         Assert.Contains("25.0 A in motor C, above its rated 24.0 A", rejected.Rejections[0].Message);
@@ -86,9 +86,9 @@ public class RankStudyTests
 
         Assert.Equal([RankRejectionKind.DragPeak], stuck.Rejections.Select(r => r.Kind));
         Assert.Contains("drag peak", stuck.Rejections[0].Message);
-        RelAssert.Close(2.1963382 / 2.4673561 - 1, stuck.Figures!.DragPeakTorqueMargin!.Value, 1e-5, "stuck margin");
+        RelAssert.Close(2.1963382 / 2.4673561 - 1, stuck.Figures!.DragPeakTorqueMarginFraction!.Value, 1e-5, "stuck margin");
         Assert.True(passes.Accepted);
-        RelAssert.Close(2.7692960 / 2.4673561 - 1, passes.Figures!.DragPeakTorqueMargin!.Value, 1e-5, "passing margin");
+        RelAssert.Close(2.7692960 / 2.4673561 - 1, passes.Figures!.DragPeakTorqueMarginFraction!.Value, 1e-5, "passing margin");
     }
 
     [Fact]
@@ -174,14 +174,14 @@ public class RankStudyTests
     {
         RelAssert.Close(d.TotalMassKg, f.TotalMassKg, 1e-12, "mass");
         RelAssert.Close(d.RuntimeS, f.RuntimeS, 1e-8, "runtime");
-        RelAssert.Close(d.CurrentMargin!.Value, f.CurrentMargin!.Value, 1e-7, "margin");
+        RelAssert.Close(d.CurrentMarginFraction!.Value, f.CurrentMarginFraction!.Value, 1e-7, "margin");
         RelAssert.Close(d.PackCurrentA, f.PackCurrentA, 1e-9, "pack current");
         RelAssert.Close(d.PeakPackCurrentA, f.PeakPackCurrentA, 1e-9, "peak pack current");
         RelAssert.Close(d.BusVoltageV, f.BusVoltageV, 1e-10, "bus voltage");
         RelAssert.Close(d.ElectricalPowerW, f.ElectricalPowerW, 1e-9, "electrical power");
         RelAssert.Close(d.EddyPowerW, f.EddyPowerW, 1e-9, "eddy power");
         RelAssert.Close(d.LiftSpecificPowerWPerN, f.LiftSpecificPowerWPerN, 1e-9, "W/N");
-        RelAssert.Close(d.DragPeakTorqueMargin!.Value, f.DragPeakTorqueMargin!.Value, 1e-9, "drag-peak margin");
+        RelAssert.Close(d.DragPeakTorqueMarginFraction!.Value, f.DragPeakTorqueMarginFraction!.Value, 1e-9, "drag-peak margin");
         Assert.Equal(d.StationSpeedsRadPerS.Count, f.StationSpeedsRadPerS.Count);
         for (int i = 0; i < d.StationSpeedsRadPerS.Count; i++)
         {
@@ -268,8 +268,8 @@ public class RankStudyTests
             {
                 var a = figures[j];
                 var b = figures[i];
-                bool noWorse = a.RuntimeS >= b.RuntimeS && a.TotalMassKg <= b.TotalMassKg && a.CurrentMargin >= b.CurrentMargin;
-                bool better = a.RuntimeS > b.RuntimeS || a.TotalMassKg < b.TotalMassKg || a.CurrentMargin > b.CurrentMargin;
+                bool noWorse = a.RuntimeS >= b.RuntimeS && a.TotalMassKg <= b.TotalMassKg && a.CurrentMarginFraction >= b.CurrentMarginFraction;
+                bool better = a.RuntimeS > b.RuntimeS || a.TotalMassKg < b.TotalMassKg || a.CurrentMarginFraction > b.CurrentMarginFraction;
                 dominated = j != i && noWorse && better;
             }
             if (!dominated)
@@ -290,7 +290,7 @@ public class RankStudyTests
             {
                 RankObjective.Runtime => -study.Evaluate(c).Figures!.RuntimeS,
                 RankObjective.Mass => study.Evaluate(c).Figures!.TotalMassKg,
-                RankObjective.Margin => -study.Evaluate(c).Figures!.CurrentMargin!.Value,
+                RankObjective.Margin => -study.Evaluate(c).Figures!.CurrentMarginFraction!.Value,
                 _ => -result.Scores[i],
             }).ToList();
             for (int i = 1; i < key.Count; i++)

@@ -133,12 +133,12 @@ public class StressStudyTests
         double p = Normal.CDF(0, 1, (threshold - mu) / (sdPct / 100 * mu));
         double anyOfFour = 1 - Math.Pow(1 - p, 4);
         var stall = result.Criteria[(int)StressCriterion.Stall].Rate;
-        Assert.InRange(anyOfFour, stall.Lower, stall.Upper);
+        Assert.InRange(anyOfFour, stall.LowerFraction, stall.UpperFraction);
         Assert.Equal(stall, result.FailureRate);
         // Station 0 alone: its stalls are counted from the sample rows.
         int station0 = result.SampleResults.Count(s => s.Outcome.StalledStations.Contains(0));
         var own = WilsonInterval.Compute(station0, result.Samples);
-        Assert.InRange(p, own.Lower, own.Upper);
+        Assert.InRange(p, own.LowerFraction, own.UpperFraction);
     }
 
     [Fact]

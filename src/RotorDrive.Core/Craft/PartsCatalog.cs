@@ -1,7 +1,7 @@
 using RotorDrive.Core.Drive;
 using RotorDrive.Core.Magnetics;
 
-namespace RotorDrive.Core;
+namespace RotorDrive.Core.Craft;
 
 /// <summary>Every part a shop stocks, as read and validated from its catalog files.</summary>
 /// <param name="Motors">Brushless motors.</param>

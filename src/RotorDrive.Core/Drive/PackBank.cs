@@ -1,6 +1,4 @@
-using RotorDrive.Core.Drive;
-
-namespace RotorDrive.Core.Craft;
+namespace RotorDrive.Core.Drive;
 
 /// <summary>The packs that feed the rig's single bus: Count identical packs in parallel.</summary>
 /// <param name="Pack">The pack type.</param>
