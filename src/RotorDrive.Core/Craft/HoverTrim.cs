@@ -1,5 +1,6 @@
 using MathNet.Numerics.RootFinding;
 using RotorDrive.Core.Drive;
+using RotorDrive.Core.Numerics;
 
 namespace RotorDrive.Core.Craft;
 

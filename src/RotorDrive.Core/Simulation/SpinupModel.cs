@@ -1,6 +1,7 @@
 using RotorDrive.Core.Craft;
 using RotorDrive.Core.Drive;
 using RotorDrive.Core.Loads;
+using RotorDrive.Core.Numerics;
 
 namespace RotorDrive.Core.Simulation;
 

@@ -1,3 +1,5 @@
+using RotorDrive.Core.Numerics;
+
 namespace RotorDrive.Core.Simulation;
 
 /// <summary>Numerical and reporting settings of a spin-up or stop run; every default is documented.</summary>

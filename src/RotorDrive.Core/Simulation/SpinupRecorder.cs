@@ -1,3 +1,5 @@
+using RotorDrive.Core.Numerics;
+
 namespace RotorDrive.Core.Simulation;
 
 /// <summary>Collects the output-grid samples of a run: traces, peaks, minimum and maximum bus voltage and the time each

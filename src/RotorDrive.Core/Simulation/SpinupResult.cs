@@ -1,3 +1,5 @@
+using RotorDrive.Core.Numerics;
+
 namespace RotorDrive.Core.Simulation;
 
 /// <summary>The findings of a spin-up or stop run.</summary>

@@ -1,4 +1,5 @@
 using RotorDrive.Core.Drive;
+using RotorDrive.Core.Numerics;
 
 namespace RotorDrive.Core.Simulation;
 

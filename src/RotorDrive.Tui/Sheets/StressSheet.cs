@@ -4,6 +4,7 @@ using Terminal.Gui.Input;
 using Terminal.Gui.ViewBase;
 using Terminal.Gui.Views;
 using RotorDrive.Core.Craft;
+using RotorDrive.Core.Numerics;
 using RotorDrive.Core.Studies;
 using RotorDrive.Core.Studies.Stress;
 using RotorDrive.Tui.Session;

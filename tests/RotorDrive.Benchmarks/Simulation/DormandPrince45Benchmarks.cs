@@ -1,4 +1,5 @@
 using BenchmarkDotNet.Attributes;
+using RotorDrive.Core.Numerics;
 using RotorDrive.Core.Simulation;
 
 namespace RotorDrive.Benchmarks.Simulation;

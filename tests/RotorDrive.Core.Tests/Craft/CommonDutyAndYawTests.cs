@@ -2,6 +2,7 @@ using RotorDrive.Core.Craft;
 using RotorDrive.Core.Loads;
 using RotorDrive.Core.Magnetics;
 using RotorDrive.Core.Tests.Drive;
+using RotorDrive.Core.Tests.Support;
 using Xunit;
 
 namespace RotorDrive.Core.Tests.Craft;
@@ -18,11 +19,11 @@ public sealed class CommonDutyAndYawTests
         var yaw = YawBalance.Analyse(model);
         Assert.NotNull(yaw.EqualDuty);
         var hover = CommonDutyHover.Solve(model, yaw.EqualDuty!.Value);
-        Approx.Equal(CraftRigs.Gap, hover.GapM, 1e-7, what: "gap");
+        RelAssert.Close(CraftRigs.Gap, hover.GapM, 1e-7, what: "gap");
         Assert.True(Math.Abs(hover.ForceResidualRatio) <= 1e-7);
         foreach (var s in hover.Stations)
         {
-            Approx.Equal(yaw.EqualDuty.Value, s.Duty, 1e-7, what: $"duty {s.Index}");
+            RelAssert.Close(yaw.EqualDuty.Value, s.Duty, 1e-7, what: $"duty {s.Index}");
             Assert.True(s.Stable);
         }
         Assert.True(Math.Abs(hover.PitchResidualRatio) > 1e-4, "an untrimmed craft with an offset centre of gravity must show a pitch moment");
@@ -45,8 +46,8 @@ public sealed class CommonDutyAndYawTests
         var duties = model.Stations.Select(s => s.Spin == SpinDirection.Clockwise ? yaw.ClockwiseDuty!.Value : yaw.CounterClockwiseDuty!.Value).ToArray();
         var state = CommonDutyHover.SpeedsAt(model, duties, CraftRigs.Gap);
         Assert.True(Math.Abs(state.YawTorqueNm) <= 1e-7 * state.ReactionTorquesNm.Sum(Math.Abs));
-        Approx.Equal(model.WeightN, state.TotalLiftN, 1e-8, what: "lift");
-        Approx.Equal(yaw.ResidualTorqueNm.Value / model.YawInertiaKgM2, yaw.YawAccelerationRadPerS2!.Value, 1e-12);
+        RelAssert.Close(model.WeightN, state.TotalLiftN, 1e-8, what: "lift");
+        RelAssert.Close(yaw.ResidualTorqueNm.Value / model.YawInertiaKgM2, yaw.YawAccelerationRadPerS2!.Value, 1e-12);
         Assert.True(yaw.AuthorityNm > 0);
     }
 
@@ -88,7 +89,7 @@ public sealed class CommonDutyAndYawTests
         Assert.All(model.Stations, s => Assert.Same(model.Stations[0].Load, s.Load));
         var heavier = model.WithPayload(model.PayloadKg + 2);
         Assert.Same(model.Stations[0].Load, heavier.Stations[0].Load);
-        Approx.Equal(model.MassKg + 2, heavier.MassKg, 1e-12);
+        RelAssert.Close(model.MassKg + 2, heavier.MassKg, 1e-12);
         Assert.Equal(rig.TotalMassKg, model.MassKg, 9);
         Assert.Equal(rig.CentreOfGravity().XM, model.CgXM, 12);
     }

@@ -1,3 +1,4 @@
+using RotorDrive.Core.Tests.Support;
 using FsCheck;
 using FsCheck.Fluent;
 using FsCheck.Xunit;
@@ -24,8 +25,8 @@ public sealed class HoverTrimTests
         double duty = hover.Stations[0].Duty;
         foreach (var s in hover.Stations)
         {
-            Approx.Equal(duty, s.Duty, 1e-9, what: $"duty of station {s.Index}");
-            Approx.Equal(model.WeightN / stations, s.LiftN, 1e-9, what: $"lift of station {s.Index}");
+            RelAssert.Close(duty, s.Duty, 1e-9, what: $"duty of station {s.Index}");
+            RelAssert.Close(model.WeightN / stations, s.LiftN, 1e-9, what: $"lift of station {s.Index}");
             Assert.True(s.Stable);
         }
         Assert.True(Math.Abs(hover.YawTorqueNm) <= 1e-9 * hover.Stations.Sum(s => s.ShaftTorqueNm));
@@ -70,7 +71,7 @@ public sealed class HoverTrimTests
         Assert.Equal(HoverStatus.Hovering, hover.Status);
         double front = hover.Stations.Where(s => model.Stations[s.Index].XM > 0).Sum(s => s.LiftN);
         // The station masses sit at the stations, so the model's centre of gravity (not the body's) is the one to use.
-        Approx.Equal(model.WeightN * (a + model.CgXM) / (2 * a), front, 1e-7, what: "front pair lift");
+        RelAssert.Close(model.WeightN * (a + model.CgXM) / (2 * a), front, 1e-7, what: "front pair lift");
         if (cgX > 0)
         {
             var centred = HoverTrim.Solve(CraftRigs.Model(CraftRigs.Rectangle(a, b, 0, 0)));
@@ -86,8 +87,8 @@ public sealed class HoverTrimTests
         var model = CraftRigs.Model(CraftRigs.Circle(6, cgXM: 0.01));
         var hover = HoverTrim.Solve(model);
         double expected = Math.Sqrt(2 * CraftRigs.Wavenumber * Units.StandardGravity) / (2 * Math.PI);
-        Approx.Equal(expected, hover.HeaveFrequencyHz, 1e-6, what: "heave frequency, Hz");
-        Approx.Equal(2 * CraftRigs.Wavenumber * model.WeightN, hover.HeaveStiffnessNPerM, 1e-6, what: "heave stiffness");
+        RelAssert.Close(expected, hover.HeaveFrequencyHz, 1e-6, what: "heave frequency, Hz");
+        RelAssert.Close(2 * CraftRigs.Wavenumber * model.WeightN, hover.HeaveStiffnessNPerM, 1e-6, what: "heave stiffness");
     }
 
     // Thin-ring hoop stress sigma = rho omega^2 r^2 (S. P. Timoshenko & J. N. Goodier, Theory of Elasticity, 1970, rotating
@@ -103,7 +104,7 @@ public sealed class HoverTrimTests
         var hover = HoverTrim.Solve(model);
         var safety = HoverSafety.Assess(model, hover);
         var atMax = Assert.Single(safety.AtMaxRpm);
-        Approx.Equal(23.98e6, atMax.RingOwnStressPa!.Value, 2e-4, what: "ring hoop stress, Pa");
+        RelAssert.Close(23.98e6, atMax.RingOwnStressPa!.Value, 2e-4, what: "ring hoop stress, Pa");
         Assert.Equal(hover.Stations.Count, safety.AtHover.Count);
         Assert.Contains(safety.Cautions, c => c.Topic == global::RotorDrive.Core.Safety.CautionTopic.RotorBurst);
     }
@@ -157,16 +158,16 @@ public sealed class HoverTrimTests
             Assert.Contains(a.Status, new[] { HoverStatus.Hovering, HoverStatus.LimitExceeded });
             for (int i = 0; i < n; i++)
             {
-                Approx.Equal(a.Stations[i].SpeedRadPerS, b.Stations[i].SpeedRadPerS, 1e-7, what: $"speed {i}");
-                Approx.Equal(a.Stations[i].Duty, b.Stations[i].Duty, 1e-7, what: $"duty {i}");
-                Approx.Equal(-a.Stations[i].ReactionTorqueNm, b.Stations[i].ReactionTorqueNm, 1e-7, what: $"reaction {i}");
+                RelAssert.Close(a.Stations[i].SpeedRadPerS, b.Stations[i].SpeedRadPerS, 1e-7, what: $"speed {i}");
+                RelAssert.Close(a.Stations[i].Duty, b.Stations[i].Duty, 1e-7, what: $"duty {i}");
+                RelAssert.Close(-a.Stations[i].ReactionTorqueNm, b.Stations[i].ReactionTorqueNm, 1e-7, what: $"reaction {i}");
             }
             var kv = CraftRigs.Motor(kvRpmPerV: 102);
             var duties = Enumerable.Repeat(0.6, n).ToArray();
             double yaw = CommonDutyHover.SpeedsAt(model.WithParts(odd, kv, CraftRigs.Controller), duties, CraftRigs.Gap).YawTorqueNm;
             double yawMirror = CommonDutyHover.SpeedsAt(mirror.WithParts(odd, kv, CraftRigs.Controller), duties, CraftRigs.Gap).YawTorqueNm;
             Assert.True(Math.Abs(yaw) > 1e-6, "the mismatch should leave a residual yaw");
-            Approx.Equal(-yaw, yawMirror, 1e-7, what: "residual yaw");
+            RelAssert.Close(-yaw, yawMirror, 1e-7, what: "residual yaw");
         });
     }
 }

@@ -1,6 +1,7 @@
 using RotorDrive.Core.Craft;
 using RotorDrive.Core.Tests.Magnetics;
 using Xunit;
+using RotorDrive.Core.Tests.Support;
 
 namespace RotorDrive.Core.Tests.Craft;
 

@@ -1,3 +1,4 @@
+using RotorDrive.Core.Tests.Support;
 using FsCheck.Xunit;
 using RotorDrive.Core.Drive;
 using Xunit;
@@ -21,8 +22,8 @@ public class DriveBusTests
         var (s, points) = Solve(c);
         Assert.NotEqual(BusStatus.NoSolution, s.Status);
         double sum = points.Sum(p => p.BusCurrentA);
-        Approx.Equal(sum, s.PackCurrentA, 1e-12, floor: 1, what: "pack current = sum of bus currents");
-        Approx.Equal(c.Source.OpenCircuitVoltageV - c.Source.ResistanceOhm * sum, s.BusVoltageV, 1e-9, what: "V = Voc - R I");
+        RelAssert.Close(sum, s.PackCurrentA, 1e-12, 1e-12 * 1, what: "pack current = sum of bus currents");
+        RelAssert.Close(c.Source.OpenCircuitVoltageV - c.Source.ResistanceOhm * sum, s.BusVoltageV, 1e-9, what: "V = Voc - R I");
     }
 
     // Energy conservation of the averaged drive (Drela 2007 motor + averaged switch): bus power = shaft power + copper loss
@@ -52,14 +53,14 @@ public class DriveBusTests
             var input = c.Inputs[j];
             double limit = input.Drivetrain.CurrentLimitA;
             Assert.InRange(p.Duty, -1e-12, 1 + 1e-12);
-            Approx.Equal(p.Duty * s.BusVoltageV - p.MotorCurrentA * input.Drivetrain.Controller.OnResistanceOhm, p.MotorVoltageV, 1e-9, floor: 1, what: "Vm = d V - I Ron");
+            RelAssert.Close(p.Duty * s.BusVoltageV - p.MotorCurrentA * input.Drivetrain.Controller.OnResistanceOhm, p.MotorVoltageV, 1e-9, 1e-9 * 1, what: "Vm = d V - I Ron");
             if (p.Regime is not (DriveRegime.Rectifying or DriveRegime.ZeroDuty or DriveRegime.MaxDuty))
             {
                 Assert.True(Math.Abs(p.MotorCurrentA) <= limit * (1 + 1e-12), $"current {p.MotorCurrentA} above limit {limit} in {p.Regime}");
             }
             if (input.Command.Kind == DriveCommandKind.Duty && p.Regime == DriveRegime.Regulating)
             {
-                Approx.Equal(input.Command.Value, p.Duty, 1e-12, floor: 1, what: "commanded duty applied");
+                RelAssert.Close(input.Command.Value, p.Duty, 1e-12, 1e-12 * 1, what: "commanded duty applied");
             }
             if (!input.Braking && p.BackEmfV <= s.BusVoltageV)
             {
@@ -75,7 +76,7 @@ public class DriveBusTests
         var (fast, _) = Solve(c);
         var (scan, _) = Solve(c, new DriveBusOptions(MaxActiveSetPasses: 0));
         Assert.True(scan.Scanned);
-        Approx.Equal(scan.BusVoltageV, fast.BusVoltageV, 1e-9, what: "bus voltage");
+        RelAssert.Close(scan.BusVoltageV, fast.BusVoltageV, 1e-9, what: "bus voltage");
     }
 
     // A hint only changes the work, not the answer.
@@ -85,7 +86,7 @@ public class DriveBusTests
         var (plain, _) = Solve(c);
         var points = new DrivePoint[c.Inputs.Length];
         var hinted = DriveBus.Solve(c.Source, c.Inputs, points, 0.3 * c.Source.OpenCircuitVoltageV, DriveBusOptions.Default);
-        Approx.Equal(plain.BusVoltageV, hinted.BusVoltageV, 1e-9, what: "bus voltage");
+        RelAssert.Close(plain.BusVoltageV, hinted.BusVoltageV, 1e-9, what: "bus voltage");
     }
 
     // Averaged switch with a phase-current limit: at stall (no back-EMF) full duty would draw V / R_t; the limit lowers
@@ -96,9 +97,9 @@ public class DriveBusTests
         var drivetrain = new Drivetrain(DriveParts.Motor(resistanceOhm: 0.05), DriveParts.Controller(burstCurrentA: 40, onResistanceOhm: 0.01));
         var p = DriveBus.Evaluate(44.4, new DriveInput(drivetrain, DriveCommand.Duty(1), 0, 20, 20, false));
         Assert.Equal(DriveRegime.CurrentLimit, p.Regime);
-        Approx.Equal(40, p.MotorCurrentA, 1e-12);
-        Approx.Equal(40 * 0.06 / 44.4, p.Duty, 1e-12);
-        Approx.Equal(p.Duty * 40, p.BusCurrentA, 1e-12, what: "bus current = d I");
+        RelAssert.Close(40, p.MotorCurrentA, 1e-12);
+        RelAssert.Close(40 * 0.06 / 44.4, p.Duty, 1e-12);
+        RelAssert.Close(p.Duty * 40, p.BusCurrentA, 1e-12, what: "bus current = d I");
     }
 
     // Freewheeling bridge: with braking off, a duty below back-EMF / V gives no current (the diodes block), only the
@@ -112,7 +113,7 @@ public class DriveBusTests
         var on = DriveBus.Evaluate(44.4, new DriveInput(drivetrain, DriveCommand.Duty(0.5), omega, 20, 20, Braking: true));
         Assert.Equal(DriveRegime.Freewheel, off.Regime);
         Assert.Equal(0, off.MotorCurrentA);
-        Approx.Equal(0.05, off.BusCurrentA, 1e-12, what: "idle only");
+        RelAssert.Close(0.05, off.BusCurrentA, 1e-12, what: "idle only");
         Assert.True(on.MotorCurrentA < 0);
         Assert.True(on.BusCurrentA < 0);
     }
@@ -125,7 +126,7 @@ public class DriveBusTests
         double omega = 50 * drivetrain.Motor.KvRadPerSPerV;
         var p = DriveBus.Evaluate(44.4, new DriveInput(drivetrain, DriveCommand.Duty(0.2), omega, 20, 20, false));
         Assert.Equal(DriveRegime.Rectifying, p.Regime);
-        Approx.Equal((44.4 - 50) / 0.06, p.MotorCurrentA, 1e-12);
+        RelAssert.Close((44.4 - 50) / 0.06, p.MotorCurrentA, 1e-12);
     }
 
     // Maximum power transfer: a stalled motor at full duty nearly shorts the pack, so the bus falls below half its
@@ -137,7 +138,7 @@ public class DriveBusTests
         var input = new DriveInput(drivetrain, DriveCommand.Duty(1), 0, 20, 20, false);
         var s = DriveBus.Solve(new BusSource(10, 0.1), in input, out var p);
         Assert.Equal(BusStatus.Collapsed, s.Status);
-        Approx.Equal(10 * 0.01 / 0.11, s.BusVoltageV, 1e-12);
+        RelAssert.Close(10 * 0.01 / 0.11, s.BusVoltageV, 1e-12);
         Assert.Equal(DriveRegime.Regulating, p.Regime);
     }
 
@@ -159,8 +160,8 @@ public class DriveBusTests
         var input = new DriveInput(drivetrain, DriveCommand.MotorCurrent(25), 300, 60, 40, false);
         var s = DriveBus.Solve(new BusSource(44.4, 0.02), in input, out var p);
         Assert.Equal(DriveRegime.Regulating, p.Regime);
-        Approx.Equal(25, p.MotorCurrentA, 1e-12);
-        Approx.Equal(44.4 - 0.02 * p.BusCurrentA, s.BusVoltageV, 1e-12);
+        RelAssert.Close(25, p.MotorCurrentA, 1e-12);
+        RelAssert.Close(44.4 - 0.02 * p.BusCurrentA, s.BusVoltageV, 1e-12);
     }
 
     // A current-limited motor on a weak pack has three bus solutions (V^2 - Voc V + R_pack I_lim^2 R_t = 0 on the limited
@@ -176,7 +177,7 @@ public class DriveBusTests
         foreach (double hint in new[] { double.NaN, 3.0, 7.7, 100 })
         {
             var s = DriveBus.Solve(new BusSource(40, 1), inputs, points, hint, DriveBusOptions.Default);
-            Approx.Equal(high, s.BusVoltageV, 1e-12, what: $"hint {hint}");
+            RelAssert.Close(high, s.BusVoltageV, 1e-12, what: $"hint {hint}");
             Assert.Equal(DriveRegime.CurrentLimit, points[0].Regime);
         }
     }

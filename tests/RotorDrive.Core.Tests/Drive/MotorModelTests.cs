@@ -1,4 +1,5 @@
 using RotorDrive.Core.Drive;
+using RotorDrive.Core.Tests.Support;
 using Xunit;
 
 namespace RotorDrive.Core.Tests.Drive;
@@ -15,10 +16,10 @@ public class MotorModelTests
         var motor = DriveParts.Motor(kvRpmPerV: kvRpm, resistanceOhm: r, noLoadCurrentA: i0);
         double i = motor.CurrentForTorqueA(torque, 1.0);
         double omega = (volts - i * r) * motor.KvRadPerSPerV;
-        Approx.Equal(current, i, 5e-5, what: "current");
-        Approx.Equal(rpm, Units.RadPerSToRpm(omega), 5e-5, what: "rpm");
-        Approx.Equal(torque, motor.TorqueNm(motor.CurrentA(volts, omega, 20, 1.0), 1.0), 1e-12, what: "torque round trip");
-        Approx.Equal(efficiency, torque * omega / (volts * i), 5e-5, what: "efficiency");
+        RelAssert.Close(current, i, 5e-5, what: "current");
+        RelAssert.Close(rpm, Units.RadPerSToRpm(omega), 5e-5, what: "rpm");
+        RelAssert.Close(torque, motor.TorqueNm(motor.CurrentA(volts, omega, 20, 1.0), 1.0), 1e-12, what: "torque round trip");
+        RelAssert.Close(efficiency, torque * omega / (volts * i), 5e-5, what: "efficiency");
     }
 
     // Same worked values, reached by the operating-point search: constant 3 N m load, ideal 44.4 V source, lossless
@@ -38,9 +39,9 @@ public class MotorModelTests
         var result = OperatingPointFinder.Find(drive, ThrottleCommand.Duty(1.0), DriveParts.At20C());
         var point = Assert.Single(result.Equilibria);
         Assert.True(point.Stable);
-        Approx.Equal(current, point.MotorCurrentA, 5e-5, what: "current");
-        Approx.Equal(rpm, point.SpeedRpm, 5e-5, what: "rpm");
-        Approx.Equal(efficiency, point.Efficiency, 5e-5, what: "efficiency");
+        RelAssert.Close(current, point.MotorCurrentA, 5e-5, what: "current");
+        RelAssert.Close(rpm, point.SpeedRpm, 5e-5, what: "rpm");
+        RelAssert.Close(efficiency, point.Efficiency, 5e-5, what: "efficiency");
     }
 
     // Kt [N m/A] = 60 / (2 pi Kv [rpm/V]): the torque and speed constants are one constant in SI (Drela 2007).
@@ -51,8 +52,8 @@ public class MotorModelTests
     public void TorqueConstant_Is60Over2PiKv(double kvRpm, double ktNmPerA)
     {
         var motor = DriveParts.Motor(kvRpmPerV: kvRpm);
-        Approx.Equal(ktNmPerA, motor.TorqueConstantNmPerA, 1e-12);
-        Approx.Equal(60 / (2 * Math.PI * kvRpm), motor.TorqueConstantNmPerA, 1e-12);
+        RelAssert.Close(ktNmPerA, motor.TorqueConstantNmPerA, 1e-12);
+        RelAssert.Close(60 / (2 * Math.PI * kvRpm), motor.TorqueConstantNmPerA, 1e-12);
     }
 
     // IEC 60028 (international standard of resistance for copper): alpha20 = 0.00393 /K, R(T) = R20 (1 + alpha (T - 20));
@@ -64,7 +65,7 @@ public class MotorModelTests
     public void WindingResistance_FollowsIec60028CopperCoefficient(double r20, double tempC, double expected)
     {
         var motor = DriveParts.Motor(resistanceOhm: r20);
-        Approx.Equal(expected, motor.ResistanceAt(tempC), 1e-12);
+        RelAssert.Close(expected, motor.ResistanceAt(tempC), 1e-12);
     }
 
     // Reversible remanence loss of sintered NdFeB, -0.12 %/K (vendor technical note, Advanced Magnets: "typical
@@ -75,8 +76,8 @@ public class MotorModelTests
         var drivetrain = new Drivetrain(DriveParts.Motor(noLoadCurrentA: 0), DriveParts.Controller());
         var cold = DriveBus.Evaluate(44.4, new DriveInput(drivetrain, DriveCommand.MotorCurrent(20), 200, 20, 20, false));
         var hot = DriveBus.Evaluate(44.4, new DriveInput(drivetrain, DriveCommand.MotorCurrent(20), 200, 20, 120, false));
-        Approx.Equal(0.88 * cold.TorqueNm, hot.TorqueNm, 1e-12, what: "torque");
-        Approx.Equal(0.88 * cold.BackEmfV, hot.BackEmfV, 1e-12, what: "back-EMF");
+        RelAssert.Close(0.88 * cold.TorqueNm, hot.TorqueNm, 1e-12, what: "torque");
+        RelAssert.Close(0.88 * cold.BackEmfV, hot.BackEmfV, 1e-12, what: "back-EMF");
     }
 
     // C-rate definition: current as a multiple of the reference current It = capacity / 1 h (IEC 61434).
@@ -87,8 +88,8 @@ public class MotorModelTests
     public void CRate_IsCurrentOverCapacity(double cellAh, int parallel, double currentA, double cRate)
     {
         var pack = new BatteryPack("p", "lipo", 6, parallel, cellAh, 20, 40, 0.003, 1);
-        Approx.Equal(cRate, pack.CRate(currentA), 1e-12);
-        Approx.Equal(20 * cellAh * parallel, pack.ContinuousCurrentA, 1e-12, what: "continuous current = C x Ah");
-        Approx.Equal(40 * cellAh * parallel, pack.BurstCurrentA, 1e-12, what: "burst current = C x Ah");
+        RelAssert.Close(cRate, pack.CRate(currentA), 1e-12);
+        RelAssert.Close(20 * cellAh * parallel, pack.ContinuousCurrentA, 1e-12, what: "continuous current = C x Ah");
+        RelAssert.Close(40 * cellAh * parallel, pack.BurstCurrentA, 1e-12, what: "burst current = C x Ah");
     }
 }

@@ -1,5 +1,6 @@
 using RotorDrive.Core.Craft;
 using RotorDrive.Core.Drive;
+using RotorDrive.Core.Tests.Support;
 using Xunit;
 
 namespace RotorDrive.Core.Tests.Drive;
@@ -35,8 +36,8 @@ public class OperatingPointTests
         Assert.Equal(OperatingStatus.Found, result.Status);
         Assert.Equal(3, result.Equilibria.Count);
         var (low, middle, high) = (result.Equilibria[0], result.Equilibria[1], result.Equilibria[2]);
-        Approx.Equal(100.0 / 3, low.SpeedRadPerS, 1e-8, what: "low speed");
-        Approx.Equal(300, middle.SpeedRadPerS, 1e-8, what: "middle speed");
+        RelAssert.Close(100.0 / 3, low.SpeedRadPerS, 1e-8, what: "low speed");
+        RelAssert.Close(300, middle.SpeedRadPerS, 1e-8, what: "middle speed");
         Assert.True(low.Stable);
         Assert.False(middle.Stable);
         Assert.True(high.Stable);
@@ -48,7 +49,7 @@ public class OperatingPointTests
         Assert.Same(low, result.ReachedFromRest);
         foreach (var e in result.Equilibria)
         {
-            Approx.Equal(e.Load.TotalTorqueNm, e.Drive.TorqueNm, 1e-8, floor: 1, what: "torque balance residual");
+            RelAssert.Close(e.Load.TotalTorqueNm, e.Drive.TorqueNm, 1e-8, 1e-8 * 1, what: "torque balance residual");
         }
     }
 
@@ -71,8 +72,8 @@ public class OperatingPointTests
         double sLow = (1 - Math.Sqrt(1 - q * q)) / q, sHigh = (1 + Math.Sqrt(1 - q * q)) / q;
         var result = OperatingPointFinder.Find(StripDrive(q), ThrottleCommand.Duty(1), DriveParts.At20C());
         Assert.Equal(3, result.Equilibria.Count);
-        Approx.Equal(100 * sLow, result.Equilibria[0].SpeedRadPerS, 1e-7, what: "below the peak");
-        Approx.Equal(100 * sHigh, result.Equilibria[1].SpeedRadPerS, 1e-7, what: "above the peak");
+        RelAssert.Close(100 * sLow, result.Equilibria[0].SpeedRadPerS, 1e-7, what: "below the peak");
+        RelAssert.Close(100 * sHigh, result.Equilibria[1].SpeedRadPerS, 1e-7, what: "above the peak");
         Assert.True(result.Equilibria[0].Stable);
         Assert.False(result.Equilibria[1].Stable);
     }
@@ -107,8 +108,8 @@ public class OperatingPointTests
         var (low, middle, high) = (result.Equilibria[0], result.Equilibria[1], result.Equilibria[2]);
         // The finder's accuracy is relative to its search top (OperatingPointOptions.RelativeAccuracy, 1e-10).
         double top = result.SearchTopRadPerS;
-        Approx.Equal(lowSpeed, low.SpeedRadPerS, 1e-9, floor: top, what: "crossing below the drag peak");
-        Approx.Equal(peakSpeed / s, middle.SpeedRadPerS, 1e-9, floor: top, what: "crossing above the drag peak");
+        RelAssert.Close(lowSpeed, low.SpeedRadPerS, 1e-9, 1e-9 * top, what: "crossing below the drag peak");
+        RelAssert.Close(peakSpeed / s, middle.SpeedRadPerS, 1e-9, 1e-9 * top, what: "crossing above the drag peak");
         Assert.True(low.Stable);
         Assert.False(middle.Stable);
         Assert.True(high.Stable);
@@ -127,7 +128,7 @@ public class OperatingPointTests
         var held = Assert.Single(result.Equilibria);
         Assert.Equal(EquilibriumKind.Held, held.Kind);
         Assert.Equal(400, held.SpeedRadPerS);
-        Approx.Equal(2 * 4.0 / 17, held.Drive.TorqueNm, 1e-12, what: "held torque");
+        RelAssert.Close(2 * 4.0 / 17, held.Drive.TorqueNm, 1e-12, what: "held torque");
         Assert.Same(held, result.ReachedFromRest);
     }
 
@@ -139,7 +140,7 @@ public class OperatingPointTests
         var result = OperatingPointFinder.Find(StripDrive(0.6), ThrottleCommand.HoldSpeed(400), DriveParts.At20C());
         Assert.True(result.HoldMet);
         Assert.Equal(3, result.Equilibria.Count);
-        Approx.Equal(100.0 / 3, result.ReachedFromRest!.SpeedRadPerS, 1e-8);
+        RelAssert.Close(100.0 / 3, result.ReachedFromRest!.SpeedRadPerS, 1e-8);
         Assert.Equal(EquilibriumKind.Held, result.Equilibria[^1].Kind);
     }
 
@@ -151,7 +152,7 @@ public class OperatingPointTests
         Assert.False(result.HoldMet);
         Assert.Equal(DriveRegime.CurrentLimit, result.HoldStoppedBy);
         var stall = Assert.Single(result.Equilibria);
-        Approx.Equal(100.0 / 3, stall.SpeedRadPerS, 1e-8);
+        RelAssert.Close(100.0 / 3, stall.SpeedRadPerS, 1e-8);
     }
 
     // Hold above the motor's free speed (Kv x 44.4 V = 465 rad/s): the duty runs out first, and that is named.
@@ -190,7 +191,7 @@ public class OperatingPointTests
         Assert.Contains(high.ExceededLimits, m => m.Limit == DriveLimit.DutyHeadroom);
         Assert.Equal(10, low.Margins.Count);
         var erpm = high.Margins.Single(m => m.Limit == DriveLimit.ControllerErpm);
-        Approx.Equal(Units.RadPerSToRpm(high.SpeedRadPerS) * 7, erpm.ValueSi, 1e-12, what: "eRPM = rpm x pole pairs");
+        RelAssert.Close(Units.RadPerSToRpm(high.SpeedRadPerS) * 7, erpm.ValueSi, 1e-12, what: "eRPM = rpm x pole pairs");
     }
 
     // Compatibility: a 16-cell pack on a 6-14 cell controller, a reversal need on a one-way controller, and an eRPM cap
@@ -241,10 +242,10 @@ public class OperatingPointTests
         for (int i = 0; i < map.SpeedsRadPerS.Count; i++)
         {
             double s = map.SpeedsRadPerS[i] / 100;
-            Approx.Equal(2 * s / (1 + s * s), map.LoadTorqueNm[i], 1e-12, floor: 1e-12, what: "load");
+            RelAssert.Close(2 * s / (1 + s * s), map.LoadTorqueNm[i], 1e-12, 1e-12 * 1e-12, what: "load");
             if (map.Curves[1].Regimes[i] == DriveRegime.CurrentLimit)
             {
-                Approx.Equal(0.6, map.Curves[1].TorqueNm[i], 1e-12, what: "limited torque");
+                RelAssert.Close(0.6, map.Curves[1].TorqueNm[i], 1e-12, what: "limited torque");
             }
         }
         Assert.Equal(3, map.Curves[1].Equilibria.Count);

@@ -4,6 +4,7 @@ using FsCheck.Xunit;
 using RotorDrive.Core.Loads;
 using RotorDrive.Core.Tests.Magnetics;
 using Xunit;
+using RotorDrive.Core.Tests.Support;
 
 namespace RotorDrive.Core.Tests.Loads;
 

@@ -1,6 +1,7 @@
 using RotorDrive.Core.Loads;
 using RotorDrive.Core.Tests.Magnetics;
 using Xunit;
+using RotorDrive.Core.Tests.Support;
 
 namespace RotorDrive.Core.Tests.Loads;
 

@@ -5,6 +5,7 @@ using RotorDrive.Core.Loads;
 using RotorDrive.Core.Magnetics;
 using RotorDrive.Core.Tests.Magnetics;
 using Xunit;
+using RotorDrive.Core.Tests.Support;
 
 namespace RotorDrive.Core.Tests.Loads;
 

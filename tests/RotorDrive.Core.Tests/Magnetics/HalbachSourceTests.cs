@@ -3,6 +3,7 @@ using FsCheck.Fluent;
 using FsCheck.Xunit;
 using RotorDrive.Core.Magnetics;
 using Xunit;
+using RotorDrive.Core.Tests.Support;
 
 namespace RotorDrive.Core.Tests.Magnetics;
 

@@ -1,5 +1,6 @@
 using RotorDrive.Core.Magnetics;
 using Xunit;
+using RotorDrive.Core.Tests.Support;
 
 namespace RotorDrive.Core.Tests.Magnetics;
 

@@ -5,6 +5,7 @@ using FsCheck.Xunit;
 using MathNet.Numerics.Integration;
 using RotorDrive.Core.Magnetics;
 using Xunit;
+using RotorDrive.Core.Tests.Support;
 
 namespace RotorDrive.Core.Tests.Magnetics;
 

@@ -6,6 +6,7 @@ using MathNet.Numerics.Integration;
 using RotorDrive.Core.Magnetics;
 using RotorDrive.Core.Tests.Loads;
 using Xunit;
+using RotorDrive.Core.Tests.Support;
 
 namespace RotorDrive.Core.Tests.Magnetics;
 

@@ -1,6 +1,7 @@
 using RotorDrive.Core.Craft;
 using RotorDrive.Core.Magnetics;
 using RotorDrive.Core.Simulation;
+using RotorDrive.Core.Tests.Support;
 using Xunit;
 
 namespace RotorDrive.Core.Tests.Simulation;
@@ -22,7 +23,7 @@ public sealed class EnduranceSimulatorTests
         var sim = SimulationRigs.Prepared(rig, SimulationRigs.TableFor(plate));
         var result = EnduranceSimulator.Run(sim, 1.0, EnduranceOptions.Default with { MaxDurationS = 1e5 });
         Assert.Equal(EnduranceLimit.UsableCapacity, result.FirstLimit);
-        RelativeAssert.Equal(usable * capacityAh * 3600 / result.StartPackCurrentA, result.RuntimeS, 1e-9, what: "runtime, s");
+        RelAssert.Close(usable * capacityAh * 3600 / result.StartPackCurrentA, result.RuntimeS, 1e-9, what: "runtime, s");
         Assert.Contains("usable pack capacity", result.FirstLimitText);
     }
 
@@ -34,7 +35,7 @@ public sealed class EnduranceSimulatorTests
         var hot = EnduranceSimulator.Run(SimulationRigs.Prepared(SimulationRigs.Rig(100, motor: SimulationRigs.Motor(kvRpmPerV: 60),
             controller: SimulationRigs.Controller(burstCurrentA: 400, continuousCurrentA: 200), plateLimitC: 60)));
         Assert.Equal(EnduranceLimit.PlateTemperature, hot.FirstLimit);
-        RelativeAssert.Equal(60, hot.PeakPlateTempC, 1e-6, what: "plate temperature at the limit, C");
+        RelAssert.Close(60, hot.PeakPlateTempC, 1e-6, what: "plate temperature at the limit, C");
         Assert.Contains("plate temperature", hot.FirstLimitText);
 
         var cool = EnduranceSimulator.Run(SimulationRigs.Prepared(SimulationRigs.Rig(100, motor: SimulationRigs.Motor(kvRpmPerV: 60),
@@ -56,7 +57,7 @@ public sealed class EnduranceSimulatorTests
             controller: SimulationRigs.Controller(burstCurrentA: 400, continuousCurrentA: 200), plateLimitC: 60));
         var a = EnduranceSimulator.Run(sim, 1.0, EnduranceOptions.Default with { StepS = 5, RecordTrace = false });
         var b = EnduranceSimulator.Run(sim, 1.0, EnduranceOptions.Default with { StepS = 2.5, RecordTrace = false });
-        RelativeAssert.Equal(b.RuntimeS, a.RuntimeS, 1e-3, what: "runtime, s");
+        RelAssert.Close(b.RuntimeS, a.RuntimeS, 1e-3, what: "runtime, s");
     }
 
     // The endurance holds the trimmed hover: at t = 0 its operating point is HoverTrim's on the same model (speeds, motor
@@ -72,12 +73,12 @@ public sealed class EnduranceSimulatorTests
         Assert.True(trim.Stations[0].SpeedRadPerS > trim.Stations[2].SpeedRadPerS, "the station near the centre of gravity spins faster");
         for (int j = 0; j < 4; j++)
         {
-            RelativeAssert.Equal(trim.Stations[j].SpeedRadPerS, result.StartHover.Stations[j].SpeedRadPerS, 1e-9, what: $"speed {j}");
-            RelativeAssert.Equal(trim.Stations[j].MotorCurrentA, result.StartHover.Stations[j].MotorCurrentA, 1e-9, what: $"current {j}");
-            RelativeAssert.Equal(trim.Stations[j].SpeedRadPerS, result.Trace!.SpeedRadPerS[j][0], 1e-9, what: $"traced speed {j}");
+            RelAssert.Close(trim.Stations[j].SpeedRadPerS, result.StartHover.Stations[j].SpeedRadPerS, 1e-9, what: $"speed {j}");
+            RelAssert.Close(trim.Stations[j].MotorCurrentA, result.StartHover.Stations[j].MotorCurrentA, 1e-9, what: $"current {j}");
+            RelAssert.Close(trim.Stations[j].SpeedRadPerS, result.Trace!.SpeedRadPerS[j][0], 1e-9, what: $"traced speed {j}");
         }
-        RelativeAssert.Equal(trim.PackCurrentA, result.StartPackCurrentA, 1e-9, what: "pack current");
-        RelativeAssert.Equal(0.9, result.Trace!.SocFraction[0], 1e-12, what: "start state of charge from the model");
+        RelAssert.Close(trim.PackCurrentA, result.StartPackCurrentA, 1e-9, what: "pack current");
+        RelAssert.Close(0.9, result.Trace!.SocFraction[0], 1e-12, what: "start state of charge from the model");
     }
 
     // When no trim exists the run ends at once and says so: a payload the rotors cannot carry even at twice their rated

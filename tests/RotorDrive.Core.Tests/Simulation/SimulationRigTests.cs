@@ -1,5 +1,6 @@
 using RotorDrive.Core.Craft;
 using RotorDrive.Core.Simulation;
+using RotorDrive.Core.Tests.Support;
 using Xunit;
 
 namespace RotorDrive.Core.Tests.Simulation;
@@ -21,7 +22,7 @@ public sealed class SimulationRigTests
         Assert.Equal(0.005, lowered.LandedGapM(0), 12);
         Assert.True(lowered.LandedDragPeaks[0].TorqueNm > 1.05 * nominal.LandedDragPeaks[0].TorqueNm,
             $"drag peak {lowered.LandedDragPeaks[0].TorqueNm} N m at 5 mm against {nominal.LandedDragPeaks[0].TorqueNm} N m at 6 mm");
-        RelativeAssert.Equal(nominal.LandedDragPeaks[1].TorqueNm, lowered.LandedDragPeaks[1].TorqueNm, 1e-12, what: "the other stations' peaks");
+        RelAssert.Close(nominal.LandedDragPeaks[1].TorqueNm, lowered.LandedDragPeaks[1].TorqueNm, 1e-12, what: "the other stations' peaks");
 
         var a = SpinUp(nominal, 4.0);
         var b = SpinUp(lowered, 4.0);
@@ -41,8 +42,8 @@ public sealed class SimulationRigTests
         var variant = model.WithConditions(1, model.Stations[1].Conditions with { GapOffsetM = offsetM, PlateTempC = 45 });
         var hinted = SimulationRig.FromModel(model).With(variant);
         var full = SimulationRig.FromModel(variant);
-        RelativeAssert.Equal(full.LandedDragPeaks[1].SpeedRadPerS, hinted.LandedDragPeaks[1].SpeedRadPerS, 1e-5, what: "peak speed");
-        RelativeAssert.Equal(full.LandedDragPeaks[1].TorqueNm, hinted.LandedDragPeaks[1].TorqueNm, 1e-9, what: "peak torque");
+        RelAssert.Close(full.LandedDragPeaks[1].SpeedRadPerS, hinted.LandedDragPeaks[1].SpeedRadPerS, 1e-5, what: "peak speed");
+        RelAssert.Close(full.LandedDragPeaks[1].TorqueNm, hinted.LandedDragPeaks[1].TorqueNm, 1e-9, what: "peak torque");
     }
 
     // Parts set on one station reach the simulation: a controller whose current limit is below the current that balances
@@ -59,7 +60,7 @@ public sealed class SimulationRigTests
         var result = SpinUp(rig, 4.0);
         var nominal = SpinUp(SimulationRig.FromModel(model), 4.0);
         Assert.True(result.Stations[2].PassingCurrentA > 150, $"passing current {result.Stations[2].PassingCurrentA} A");
-        RelativeAssert.Equal(150, result.Stations[2].Motor.PeakA, 1e-9, what: "the weak station's peak current, A");
+        RelAssert.Close(150, result.Stations[2].Motor.PeakA, 1e-9, what: "the weak station's peak current, A");
         Assert.True(result.Stations[0].Motor.PeakA > 160, $"a strong station draws {result.Stations[0].Motor.PeakA} A");
         Assert.True(result.LiftoffTimeS > nominal.LiftoffTimeS, $"lift-off {result.LiftoffTimeS} s against {nominal.LiftoffTimeS} s");
         Assert.True(result.PeakYawTorqueNm > 1, "the unequal motor torques yaw the frame");
@@ -90,8 +91,8 @@ public sealed class SimulationRigTests
         var speeds = rig.HoverThrottle(ControllerMode.SpeedHold, 0.4);
         for (int j = 0; j < 4; j++)
         {
-            RelativeAssert.Equal(trim.Stations[j].Duty, duties[j], 1e-12, what: $"duty {j}");
-            RelativeAssert.Equal(trim.Stations[j].SpeedRadPerS, speeds[j], 1e-9, what: $"speed {j}");
+            RelAssert.Close(trim.Stations[j].Duty, duties[j], 1e-12, what: $"duty {j}");
+            RelAssert.Close(trim.Stations[j].SpeedRadPerS, speeds[j], 1e-9, what: $"speed {j}");
         }
     }
 }

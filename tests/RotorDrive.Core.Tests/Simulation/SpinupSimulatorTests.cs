@@ -1,5 +1,6 @@
 using RotorDrive.Core.Craft;
 using RotorDrive.Core.Simulation;
+using RotorDrive.Core.Tests.Support;
 using Xunit;
 
 namespace RotorDrive.Core.Tests.Simulation;
@@ -25,7 +26,7 @@ public sealed class SpinupSimulatorTests
         var trace = result.Trace!;
         for (int i = 1; i < trace.TimeS.Count; i += 5)
         {
-            RelativeAssert.Equal(torque * trace.TimeS[i] / SimulationRigs.Rotor.InertiaKgM2, trace.SpeedRadPerS[0][i], 1e-7, what: $"omega at {trace.TimeS[i]} s");
+            RelAssert.Close(torque * trace.TimeS[i] / SimulationRigs.Rotor.InertiaKgM2, trace.SpeedRadPerS[0][i], 1e-7, what: $"omega at {trace.TimeS[i]} s");
         }
         Assert.Null(result.LiftoffTimeS);
     }
@@ -51,7 +52,7 @@ public sealed class SpinupSimulatorTests
         for (int i = 1; i < trace.TimeS.Count; i += 7)
         {
             double t = trace.TimeS[i];
-            RelativeAssert.Equal(v / kt * (1 - Math.Exp(-t / tau)), trace.SpeedRadPerS[2][i], 1e-6, what: $"omega at {t} s");
+            RelAssert.Close(v / kt * (1 - Math.Exp(-t / tau)), trace.SpeedRadPerS[2][i], 1e-6, what: $"omega at {t} s");
         }
     }
 
@@ -66,9 +67,9 @@ public sealed class SpinupSimulatorTests
         var e = result.Energy;
         Assert.True(e.PackChemicalJ > 1000, $"the spin-up draws energy ({e.PackChemicalJ} J)");
         Assert.True(e.EddyJ > 0 && e.CopperJ > 0 && e.KineticChangeJ > 0 && e.PackInternalJ > 0 && e.ControllerJ > 0);
-        RelativeAssert.Equal(0, e.ResidualJ, 0, absoluteFloor: 1e-3 * e.PackChemicalJ, what: "energy residual, J");
+        RelAssert.Close(0, e.ResidualJ, 0, absoluteFloor: 1e-3 * e.PackChemicalJ, what: "energy residual, J");
         double kinetic = 4 * 0.5 * SimulationRigs.Rotor.InertiaKgM2 * Math.Pow(result.Stations[0].FinalSpeedRadPerS, 2);
-        RelativeAssert.Equal(kinetic, e.KineticChangeJ, 1e-9, what: "kinetic energy (all four rotors alike)");
+        RelAssert.Close(kinetic, e.KineticChangeJ, 1e-9, what: "kinetic energy (all four rotors alike)");
     }
 
     // The results must not depend on the integrator's step sizes: tightening the tolerance by four decades changes the
@@ -80,12 +81,12 @@ public sealed class SpinupSimulatorTests
         var coarse = SpinUp(rig, 3.0, SpinupOptions.Default with { RecordTrace = false });
         var fine = SpinUp(rig, 3.0, SpinupOptions.Default with { RelativeTolerance = 1e-10, AbsoluteTolerance = 1e-10, RecordTrace = false });
         Assert.True(fine.StepsAccepted > 2 * coarse.StepsAccepted, "the fine run takes more steps");
-        RelativeAssert.Equal(fine.LiftoffTimeS!.Value, coarse.LiftoffTimeS!.Value, 1e-4, what: "lift-off time");
-        RelativeAssert.Equal(fine.Stations[0].FinalSpeedRadPerS, coarse.Stations[0].FinalSpeedRadPerS, 1e-4, what: "final speed");
-        RelativeAssert.Equal(fine.Stations[0].Motor.PeakA, coarse.Stations[0].Motor.PeakA, 1e-4, what: "peak current");
-        RelativeAssert.Equal(fine.MinBusVoltageV, coarse.MinBusVoltageV, 1e-4, what: "lowest bus voltage");
-        RelativeAssert.Equal(fine.Energy.PackChemicalJ, coarse.Energy.PackChemicalJ, 1e-4, what: "energy drawn");
-        RelativeAssert.Equal(fine.Stations[1].PeakPlateTempC, coarse.Stations[1].PeakPlateTempC, 1e-4, what: "plate temperature");
+        RelAssert.Close(fine.LiftoffTimeS!.Value, coarse.LiftoffTimeS!.Value, 1e-4, what: "lift-off time");
+        RelAssert.Close(fine.Stations[0].FinalSpeedRadPerS, coarse.Stations[0].FinalSpeedRadPerS, 1e-4, what: "final speed");
+        RelAssert.Close(fine.Stations[0].Motor.PeakA, coarse.Stations[0].Motor.PeakA, 1e-4, what: "peak current");
+        RelAssert.Close(fine.MinBusVoltageV, coarse.MinBusVoltageV, 1e-4, what: "lowest bus voltage");
+        RelAssert.Close(fine.Energy.PackChemicalJ, coarse.Energy.PackChemicalJ, 1e-4, what: "energy drawn");
+        RelAssert.Close(fine.Stations[1].PeakPlateTempC, coarse.Stations[1].PeakPlateTempC, 1e-4, what: "plate temperature");
     }
 
     // A rotor whose controller limits the current below what balances the drag peak at the landed gap
@@ -127,7 +128,7 @@ public sealed class SpinupSimulatorTests
         double power = rig.Loads[0].Evaluate(w, 0.010, 20, 20).EddyTorqueNm * w;
         double mass = 8960 * Math.PI * (0.12 * 0.12 - 0.07 * 0.07) * 0.006;
         double rate = (trace.PlateTempC[0][1] - trace.PlateTempC[0][0]) / (trace.TimeS[1] - trace.TimeS[0]);
-        RelativeAssert.Equal(power / (mass * 385), rate, 2e-3, what: "initial plate heating rate, K/s");
+        RelAssert.Close(power / (mass * 385), rate, 2e-3, what: "initial plate heating rate, K/s");
     }
 
     // Counter-rotating pairs of identical drivetrains cancel their reaction torques (Newton's third law): no yaw. With
@@ -138,8 +139,8 @@ public sealed class SpinupSimulatorTests
     {
         var rig = SimulationRigs.Hovering();
         var balanced = SpinUp(SimulationRigs.Prepared(rig), 2.0);
-        RelativeAssert.Equal(0, balanced.PeakYawTorqueNm, 0, absoluteFloor: 1e-9, what: "balanced yaw torque");
-        RelativeAssert.Equal(0, balanced.FinalYawAngleRad, 0, absoluteFloor: 1e-12, what: "balanced yaw angle");
+        RelAssert.Close(0, balanced.PeakYawTorqueNm, 0, absoluteFloor: 1e-9, what: "balanced yaw torque");
+        RelAssert.Close(0, balanced.FinalYawAngleRad, 0, absoluteFloor: 1e-12, what: "balanced yaw angle");
 
         var oneWay = rig with { Stations = rig.Stations.Select(s => s with { Spin = SpinDirection.Clockwise }).ToArray() };
         var result = SpinUp(SimulationRigs.Prepared(oneWay), 2.0);

@@ -1,6 +1,8 @@
 using RotorDrive.Core.Drive;
 using RotorDrive.Core.Magnetics;
+using RotorDrive.Core.Numerics;
 using RotorDrive.Core.Simulation;
+using RotorDrive.Core.Tests.Support;
 using Xunit;
 
 namespace RotorDrive.Core.Tests.Simulation;
@@ -25,9 +27,9 @@ public class ThermalNodeTests
         // m = 8960 x 0.0505796 x 0.005 = 2.265968 kg, m c = 872.398 J/K; 500 W then heats at 0.573133 K/s
         // (lumped capacitance, Incropera section 5.2, with T = ambient so convection is zero).
         var node = PlatePatchThermalNode.UnderRotor(Rotor(0.08, 0.15), new Plate(Copper, 0.005), convectionWPerM2K: 10);
-        RelativeAssert.Equal(2.265968, node.MassKg, 1e-6, what: "patch mass, kg");
-        RelativeAssert.Equal(0.573133, node.RateKPerS(500, 25, 25), 1e-6, what: "initial rate, K/s");
-        RelativeAssert.Equal(2 * 0.0505796, node.CooledAreaM2, 1e-6, what: "both faces");
+        RelAssert.Close(2.265968, node.MassKg, 1e-6, what: "patch mass, kg");
+        RelAssert.Close(0.573133, node.RateKPerS(500, 25, 25), 1e-6, what: "initial rate, K/s");
+        RelAssert.Close(2 * 0.0505796, node.CooledAreaM2, 1e-6, what: "both faces");
     }
 
     [Fact]
@@ -36,9 +38,9 @@ public class ThermalNodeTests
         var plate = new Plate(Copper, 0.005);
         var narrow = PlatePatchThermalNode.UnderRotor(Rotor(0.08, 0.15), plate, 10);
         var wide = PlatePatchThermalNode.UnderRotor(Rotor(0.08, 0.15), plate, 10, spreadingFactor: 2.0, cooledFaces: 1);
-        RelativeAssert.Equal(2 * narrow.MassKg, wide.MassKg, 1e-12);
-        RelativeAssert.Equal(narrow.CooledAreaM2, wide.CooledAreaM2, 1e-12, what: "twice the area, one face");
-        RelativeAssert.Equal(narrow.RateKPerS(500, 20, 20) / 2, wide.RateKPerS(500, 20, 20), 1e-12);
+        RelAssert.Close(2 * narrow.MassKg, wide.MassKg, 1e-12);
+        RelAssert.Close(narrow.CooledAreaM2, wide.CooledAreaM2, 1e-12, what: "twice the area, one face");
+        RelAssert.Close(narrow.RateKPerS(500, 20, 20) / 2, wide.RateKPerS(500, 20, 20), 1e-12);
     }
 
     [Fact]
@@ -47,12 +49,12 @@ public class ThermalNodeTests
         // T_ss = T_amb + P / (h A), tau = m c / (h A) (Incropera section 5.2; Newton's law of cooling).
         var node = PlatePatchThermalNode.UnderRotor(Rotor(0.08, 0.15), new Plate(Copper, 0.005), 25);
         double hA = 25 * node.CooledAreaM2;
-        RelativeAssert.Equal(20 + 300 / hA, node.SteadyStateC(300, 20), 1e-12);
-        RelativeAssert.Equal(node.HeatCapacityJPerK / hA, node.TimeConstantS, 1e-12);
+        RelAssert.Close(20 + 300 / hA, node.SteadyStateC(300, 20), 1e-12);
+        RelAssert.Close(node.HeatCapacityJPerK / hA, node.TimeConstantS, 1e-12);
         Assert.Equal(0.0, node.RateKPerS(300, node.SteadyStateC(300, 20), 20), 10);
         // After one time constant 1 - 1/e of the rise is done (closed form of the first-order lag).
         double rise = node.SteadyStateC(300, 20) - 20;
-        RelativeAssert.Equal(20 + rise * (1 - Math.Exp(-1)), node.TemperatureAfterC(20, 300, 20, node.TimeConstantS), 1e-12);
+        RelAssert.Close(20 + rise * (1 - Math.Exp(-1)), node.TemperatureAfterC(20, 300, 20, node.TimeConstantS), 1e-12);
     }
 
     [Fact]
@@ -60,9 +62,9 @@ public class ThermalNodeTests
     {
         // One-node thermal circuit: T_ss = T_amb + P Rth (Incropera section 3.1 thermal resistance, 5.2 lumped model).
         var node = WindingThermalNode.FromMotor(Motor(rth: 0.8, tau: 300))!;
-        RelativeAssert.Equal(25 + 60 * 0.8, node.SteadyStateC(60, 25), 1e-12, what: "25 C + 60 W x 0.8 K/W");
-        RelativeAssert.Equal(300 / 0.8, node.HeatCapacityJPerK, 1e-12, what: "C = tau / Rth");
-        RelativeAssert.Equal(60 / node.HeatCapacityJPerK, node.RateKPerS(60, 25, 25), 1e-12, what: "P / C at ambient");
+        RelAssert.Close(25 + 60 * 0.8, node.SteadyStateC(60, 25), 1e-12, what: "25 C + 60 W x 0.8 K/W");
+        RelAssert.Close(300 / 0.8, node.HeatCapacityJPerK, 1e-12, what: "C = tau / Rth");
+        RelAssert.Close(60 / node.HeatCapacityJPerK, node.RateKPerS(60, 25, 25), 1e-12, what: "P / C at ambient");
     }
 
     [Theory]
@@ -77,14 +79,14 @@ public class ThermalNodeTests
         double start = 25, ambient = 25, power = 50;
         double tSs = node.SteadyStateC(power, ambient);
         double t = timeConstants * node.TimeConstantS;
-        RelativeAssert.Equal(tSs - (tSs - start) * Math.Exp(-timeConstants), node.TemperatureAfterC(start, power, ambient, t), 1e-12);
+        RelAssert.Close(tSs - (tSs - start) * Math.Exp(-timeConstants), node.TemperatureAfterC(start, power, ambient, t), 1e-12);
 
         // The rate function integrated by the Dormand-Prince integrator reproduces the closed form.
         var y = new[] { start };
         var result = new DormandPrince45(1, new DormandPrince45Options { RelativeTolerance = 1e-10, AbsoluteTolerance = 1e-10 })
             .Integrate((time, s, d) => d[0] = node.RateKPerS(power, s[0], ambient), 0, y, t);
         Assert.Equal(OdeStatus.Completed, result.Status);
-        RelativeAssert.Equal(node.TemperatureAfterC(start, power, ambient, t), y[0], 1e-9, what: "integrated temperature");
+        RelAssert.Close(node.TemperatureAfterC(start, power, ambient, t), y[0], 1e-9, what: "integrated temperature");
     }
 
     [Fact]
@@ -93,8 +95,8 @@ public class ThermalNodeTests
         // Drela 2007: losses = I^2 R + I0 x back-EMF. Hand computation: 20 A, R20 = 0.05 ohm at 70 C gives
         // R = 0.05 (1 + 0.00393 x 50) = 0.059825 ohm (IEC 60028 copper coefficient), I^2 R = 23.93 W; Kv = 100 rpm/V
         // = 10.47198 rad/s/V, 500 rad/s gives 47.74648 V, times I0 = 1 A: 47.74648 W; total 71.67648 W.
-        RelativeAssert.Equal(71.67648, WindingThermalNode.HeatW(Motor(), 20, 500, 70), 1e-6);
-        RelativeAssert.Equal(71.67648, WindingThermalNode.HeatW(Motor(), -20, -500, 70), 1e-6, what: "sign of current and speed");
+        RelAssert.Close(71.67648, WindingThermalNode.HeatW(Motor(), 20, 500, 70), 1e-6);
+        RelAssert.Close(71.67648, WindingThermalNode.HeatW(Motor(), -20, -500, 70), 1e-6, what: "sign of current and speed");
     }
 
     [Fact]

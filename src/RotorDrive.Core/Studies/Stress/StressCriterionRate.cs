@@ -1,3 +1,5 @@
+using RotorDrive.Core.Numerics;
+
 namespace RotorDrive.Core.Studies.Stress;
 
 /// <summary>How often one criterion failed in a study, with its 95 % Wilson score interval.</summary>

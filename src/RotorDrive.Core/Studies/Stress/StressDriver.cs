@@ -1,3 +1,5 @@
+using RotorDrive.Core.Numerics;
+
 namespace RotorDrive.Core.Studies.Stress;
 
 /// <summary>How strongly one drawn input drives one criterion's margin: Spearman's rank correlation over the samples.</summary>

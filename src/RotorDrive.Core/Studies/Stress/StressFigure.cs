@@ -1,3 +1,5 @@
+using RotorDrive.Core.Numerics;
+
 namespace RotorDrive.Core.Studies.Stress;
 
 /// <summary>The spread of one reported figure over a study's samples.</summary>

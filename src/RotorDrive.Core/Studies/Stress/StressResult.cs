@@ -1,3 +1,5 @@
+using RotorDrive.Core.Numerics;
+
 namespace RotorDrive.Core.Studies.Stress;
 
 /// <summary>The result of a stress study: failure rates with intervals, percentiles, drivers, the worst sample and every

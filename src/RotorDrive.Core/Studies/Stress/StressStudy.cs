@@ -1,3 +1,5 @@
+using RotorDrive.Core.Numerics;
+
 namespace RotorDrive.Core.Studies.Stress;
 
 /// <summary>Monte Carlo tolerance stress test: draws every sample's parts from its own stream, evaluates the samples in

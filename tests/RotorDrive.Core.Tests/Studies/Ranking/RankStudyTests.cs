@@ -5,6 +5,7 @@ using RotorDrive.Core.Studies.Ranking;
 using RotorDrive.Core.Tests.Magnetics;
 using Xunit;
 using static RotorDrive.Core.Tests.Studies.Ranking.RankingFixtures;
+using RotorDrive.Core.Tests.Support;
 
 namespace RotorDrive.Core.Tests.Studies.Ranking;
 

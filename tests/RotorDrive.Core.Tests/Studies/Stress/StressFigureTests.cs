@@ -1,3 +1,4 @@
+using RotorDrive.Core.Numerics;
 using RotorDrive.Core.Studies;
 using RotorDrive.Core.Studies.Stress;
 using Xunit;

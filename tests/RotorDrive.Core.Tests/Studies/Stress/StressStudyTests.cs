@@ -1,10 +1,12 @@
 using MathNet.Numerics.Distributions;
 using RotorDrive.Core.Craft;
+using RotorDrive.Core.Numerics;
 using RotorDrive.Core.Simulation;
 using RotorDrive.Core.Studies;
 using RotorDrive.Core.Tests.Magnetics;
 using RotorDrive.Core.Studies.Stress;
 using Xunit;
+using RotorDrive.Core.Tests.Support;
 
 namespace RotorDrive.Core.Tests.Studies.Stress;
 

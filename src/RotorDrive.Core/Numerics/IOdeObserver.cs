@@ -1,4 +1,4 @@
-namespace RotorDrive.Core.Simulation;
+namespace RotorDrive.Core.Numerics;
 
 /// <summary>Receives points of the solution while an integration runs (for time traces).</summary>
 /// <remarks>The state span is the integrator's own buffer: copy what you keep before returning.</remarks>

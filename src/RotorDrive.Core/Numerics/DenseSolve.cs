@@ -1,4 +1,4 @@
-namespace RotorDrive.Core.Craft;
+namespace RotorDrive.Core.Numerics;
 
 /// <summary>In-place Gaussian elimination with partial pivoting for the small dense systems of the trim (G. H. Golub &amp;
 /// C. F. Van Loan, Matrix Computations, 4th ed. 2013, algorithm 3.4.1). Written out because MathNet's LU allocates a

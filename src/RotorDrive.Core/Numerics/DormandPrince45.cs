@@ -1,6 +1,6 @@
 using System.Collections.Immutable;
 
-namespace RotorDrive.Core.Simulation;
+namespace RotorDrive.Core.Numerics;
 
 /// <summary>Adaptive explicit Runge-Kutta 5(4) integrator of Dormand and Prince with step-size control, first-same-as-
 /// last stages, a continuous extension (dense output), event location and observers; allocation-free per step.</summary>

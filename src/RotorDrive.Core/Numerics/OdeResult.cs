@@ -1,6 +1,6 @@
 using System.Collections.Immutable;
 
-namespace RotorDrive.Core.Simulation;
+namespace RotorDrive.Core.Numerics;
 
 /// <summary>The outcome of one integration: where it stopped, why, and what it cost.</summary>
 /// <param name="Status">Why the integration stopped.</param>

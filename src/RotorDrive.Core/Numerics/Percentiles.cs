@@ -1,4 +1,6 @@
-namespace RotorDrive.Core.Studies;
+using MathNet.Numerics.Statistics;
+
+namespace RotorDrive.Core.Numerics;
 
 /// <summary>Sample percentiles by linear interpolation between order statistics.</summary>
 /// <remarks>Definition 7 of R. J. Hyndman and Y. Fan, "Sample quantiles in statistical packages", The American
@@ -6,8 +8,8 @@ namespace RotorDrive.Core.Studies;
 /// Q(p) = x_(floor h + 1) + (h - floor h) (x_(floor h + 2) - x_(floor h + 1)). It is the default of R and NumPy and
 /// matches spreadsheet PERCENTILE.INC, so users can reproduce the figures. MathNet's Statistics.Percentile and
 /// Statistics.Quantile use definition 8 instead (approximately median-unbiased); both agree on the median and differ
-/// slightly in the tails for small samples. Equivalent to MathNet's SortedArrayStatistics.QuantileCustom with
-/// QuantileDefinition.R7.</remarks>
+/// slightly in the tails for small samples. Computed by MathNet's SortedArrayStatistics.QuantileCustom with
+/// QuantileDefinition.R7; this class adds the argument checks and the summary.</remarks>
 public static class Percentiles
 {
     /// <summary>The <paramref name="percent"/>-th percentile of values already sorted ascending.</summary>
@@ -19,7 +21,7 @@ public static class Percentiles
     {
         Preconditions.InRange(percent, 0, 100, nameof(percent));
         CheckSorted(sortedAscending);
-        return Interpolate(sortedAscending, percent);
+        return SortedArrayStatistics.QuantileCustom(sortedAscending.ToArray(), percent / 100.0, QuantileDefinition.R7);
     }
 
     /// <summary>The <paramref name="percent"/>-th percentile of values in any order (sorts a copy).</summary>
@@ -63,16 +65,8 @@ public static class Percentiles
         return array;
     }
 
-    private static double Interpolate(ReadOnlySpan<double> sorted, double percent)
-    {
-        double h = (sorted.Length - 1) * percent / 100.0;
-        int lo = (int)Math.Floor(h);
-        if (lo >= sorted.Length - 1)
-        {
-            return sorted[^1];
-        }
-        return sorted[lo] + (h - lo) * (sorted[lo + 1] - sorted[lo]);
-    }
+    private static double Interpolate(double[] sorted, double percent)
+        => SortedArrayStatistics.QuantileCustom(sorted, percent / 100.0, QuantileDefinition.R7);
 
     private static void CheckFinite(ReadOnlySpan<double> values)
     {

@@ -1,6 +1,7 @@
 using MathNet.Numerics;
+using RotorDrive.Core.Tests.Support;
 
-namespace RotorDrive.Core.Tests.Simulation;
+namespace RotorDrive.Core.Tests.Numerics;
 
 /// <summary>The observed order of convergence, measured once for every integrator and interpolation test.</summary>
 /// <remarks>If the error behaves as C h^p, log(error) is a straight line of slope p in log(h): the observed order is the
@@ -28,6 +29,6 @@ internal static class ConvergenceOrder
     public static void Assert(double expected, IReadOnlyList<double> steps, Func<double, double> errorForStep, double slack = 0.25)
     {
         double observed = Observed(steps, errorForStep);
-        RelativeAssert.InRange(observed, expected - slack, expected + slack, $"observed order (expected {expected})");
+        RelAssert.InRange(observed, expected - slack, expected + slack, $"observed order (expected {expected})");
     }
 }

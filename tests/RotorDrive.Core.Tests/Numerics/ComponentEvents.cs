@@ -1,6 +1,7 @@
+using RotorDrive.Core.Numerics;
 using RotorDrive.Core.Simulation;
 
-namespace RotorDrive.Core.Tests.Simulation;
+namespace RotorDrive.Core.Tests.Numerics;
 
 /// <summary>Event functions g_i = y[component_i], each with its direction.</summary>
 internal sealed class ComponentEvents(params (int Component, EventDirection Direction)[] functions) : IOdeEvents

@@ -1,4 +1,4 @@
-namespace RotorDrive.Core.Simulation;
+namespace RotorDrive.Core.Numerics;
 
 /// <summary>Which sign change of an event function counts as an event.</summary>
 public enum EventDirection

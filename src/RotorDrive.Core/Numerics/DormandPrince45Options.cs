@@ -1,4 +1,4 @@
-namespace RotorDrive.Core.Simulation;
+namespace RotorDrive.Core.Numerics;
 
 /// <summary>Settings of the <see cref="DormandPrince45"/> integrator; every value is checked when set.</summary>
 /// <remarks>Step-size control follows E. Hairer, S. P. Norsett and G. Wanner, "Solving Ordinary Differential

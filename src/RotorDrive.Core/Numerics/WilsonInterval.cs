@@ -1,6 +1,6 @@
 using MathNet.Numerics.Distributions;
 
-namespace RotorDrive.Core.Studies;
+namespace RotorDrive.Core.Numerics;
 
 /// <summary>Wilson's score confidence interval for a binomial proportion.</summary>
 /// <remarks>E. B. Wilson, "Probable inference, the law of succession, and statistical inference", J. Am. Stat. Assoc.

@@ -1,4 +1,4 @@
-namespace RotorDrive.Core.Simulation;
+namespace RotorDrive.Core.Numerics;
 
 /// <summary>Event functions g_i(t, y) whose sign change stops an integration (lift-off, touch-down, a limit reached).</summary>
 /// <remarks>The integrator evaluates all functions once per accepted step; when one changes sign in the direction

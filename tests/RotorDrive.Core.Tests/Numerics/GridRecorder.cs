@@ -1,6 +1,7 @@
+using RotorDrive.Core.Numerics;
 using RotorDrive.Core.Simulation;
 
-namespace RotorDrive.Core.Tests.Simulation;
+namespace RotorDrive.Core.Tests.Numerics;
 
 /// <summary>Keeps a copy of every observed point.</summary>
 internal sealed class GridRecorder : IOdeObserver

@@ -1,4 +1,4 @@
-namespace RotorDrive.Core.Simulation;
+namespace RotorDrive.Core.Numerics;
 
 /// <summary>The right-hand side y' = f(t, y) of an ODE system as a delegate, for callers that prefer a lambda to an
 /// <see cref="IOdeSystem"/> implementation.</summary>

@@ -1,6 +1,7 @@
+using RotorDrive.Core.Numerics;
 using RotorDrive.Core.Simulation;
 
-namespace RotorDrive.Core.Tests.Simulation;
+namespace RotorDrive.Core.Tests.Numerics;
 
 /// <summary>Initial value problems with closed-form solutions, shared by the integrator tests.</summary>
 internal sealed record TestProblem(string Name, double[] Initial, double StartS, double EndS, OdeDerivatives Derivatives, Func<double, double[]> Exact)

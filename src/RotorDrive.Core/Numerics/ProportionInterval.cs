@@ -1,4 +1,4 @@
-namespace RotorDrive.Core.Studies;
+namespace RotorDrive.Core.Numerics;
 
 /// <summary>An observed proportion (failures out of samples) with its two-sided confidence interval.</summary>
 /// <param name="Count">Number of samples with the outcome (for example failures), 0 to <paramref name="Trials"/>.</param>

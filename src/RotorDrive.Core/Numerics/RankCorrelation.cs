@@ -1,6 +1,6 @@
 using MathNet.Numerics.Statistics;
 
-namespace RotorDrive.Core.Studies;
+namespace RotorDrive.Core.Numerics;
 
 /// <summary>Spearman's rank correlation between a sampled input (a tolerance draw) and an output (a margin).</summary>
 /// <remarks>C. Spearman, "The proof and measurement of association between two things", Am. J. Psychol. 15, 72-101,

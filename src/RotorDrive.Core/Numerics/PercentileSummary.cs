@@ -1,4 +1,4 @@
-namespace RotorDrive.Core.Studies;
+namespace RotorDrive.Core.Numerics;
 
 /// <summary>Summary of a sampled figure: count, extremes, mean and the 5th, 50th and 95th percentiles
 /// (Hyndman and Fan 1996, definition 7; see <see cref="Percentiles"/>), in the figure's own SI unit (hence the Si suffix: m, N, s, ... or a fraction).</summary>

@@ -1,9 +1,11 @@
 using MathNet.Numerics.LinearAlgebra;
 using RotorDrive.Core.Craft;
+using RotorDrive.Core.Numerics;
 using RotorDrive.Core.Tests.Magnetics;
+using RotorDrive.Core.Tests.Support;
 using Xunit;
 
-namespace RotorDrive.Core.Tests.Craft;
+namespace RotorDrive.Core.Tests.Numerics;
 
 public class DenseSolveTests
 {
@@ -35,7 +37,7 @@ public class DenseSolveTests
         Assert.True(DenseSolve.Solve(a, x, size));
         for (int i = 0; i < size; i++)
         {
-            RelAssert.CloseOrSmall(expected[i], x[i], 1e-10, 1e-12, $"x[{i}]");
+            RelAssert.Close(expected[i], x[i], 1e-10, 1e-12, $"x[{i}]");
         }
     }
 

@@ -1,4 +1,4 @@
-namespace RotorDrive.Core.Simulation;
+namespace RotorDrive.Core.Numerics;
 
 // The Butcher tableau, the embedded error weights and the continuous extension.
 // Coefficients: J. R. Dormand & P. J. Prince, "A family of embedded Runge-Kutta formulae", J. Comput. Appl. Math. 6,

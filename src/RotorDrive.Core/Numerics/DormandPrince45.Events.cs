@@ -1,4 +1,4 @@
-namespace RotorDrive.Core.Simulation;
+namespace RotorDrive.Core.Numerics;
 
 // Event location on the continuous extension of the accepted step.
 public sealed partial class DormandPrince45

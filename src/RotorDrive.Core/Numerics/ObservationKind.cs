@@ -1,4 +1,4 @@
-namespace RotorDrive.Core.Simulation;
+namespace RotorDrive.Core.Numerics;
 
 /// <summary>Why the integrator hands a point of the solution to an observer.</summary>
 public enum ObservationKind

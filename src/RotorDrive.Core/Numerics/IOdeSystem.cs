@@ -1,4 +1,4 @@
-namespace RotorDrive.Core.Simulation;
+namespace RotorDrive.Core.Numerics;
 
 /// <summary>A system of first-order ordinary differential equations y' = f(t, y), written into a caller's buffer.</summary>
 /// <remarks>Implementations must not keep the spans beyond the call and must not allocate in <see cref="Derivatives"/>
