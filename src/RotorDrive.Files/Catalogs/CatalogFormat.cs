@@ -147,13 +147,21 @@ public abstract class CatalogFormat<TRow> where TRow : notnull
         using (var writer = CsvWriter.Create(text, CsvWriterOptions.Default with { NewLine = "\n", Separator = ',' }, leaveOpen: true))
         {
             writer.WriteHeader(Columns.Select(c => c.Name).ToArray());
-            foreach (var row in rows)
+            foreach (var row in Cells(rows))
             {
-                writer.WriteRecord(FormatRow(row));
+                writer.WriteRecord(row);
             }
             writer.Flush();
         }
         return text.ToString();
+    }
+
+    /// <summary>Rows as the text cells <see cref="Write"/> puts in the file, in <see cref="Columns"/> order (null for an
+    /// empty optional value): the catalog in its own columns and units, for display.</summary>
+    public IEnumerable<string?[]> Cells(IEnumerable<TRow> rows)
+    {
+        ArgumentNullException.ThrowIfNull(rows);
+        return rows.Select(FormatRow);
     }
 
     /// <summary>Formats a number so it reads back to the same double.</summary>

@@ -19,36 +19,28 @@ internal static class CatalogView
         ("cell curves", PartKind.CellCurve),
     ];
 
-    /// <summary>Reads a catalog file's valid rows as text cells (the file's columns, written back by its format).</summary>
-    public static CsvGrid Read(PartKind kind, string text, string path, out int problemCount)
+    /// <summary>Reads a catalog file's valid rows as text cells (the file's columns, formatted by its catalog format).</summary>
+    public static CatalogGrid Read(PartKind kind, string text, string path, out int problemCount)
     {
-        string csv;
         switch (kind)
         {
             case PartKind.Motor:
-                csv = Write(CatalogFormats.Motors, text, path, out problemCount);
-                break;
+                return Grid(CatalogFormats.Motors, text, path, out problemCount);
             case PartKind.Controller:
-                csv = Write(CatalogFormats.Controllers, text, path, out problemCount);
-                break;
+                return Grid(CatalogFormats.Controllers, text, path, out problemCount);
             case PartKind.Pack:
-                csv = Write(CatalogFormats.Packs, text, path, out problemCount);
-                break;
+                return Grid(CatalogFormats.Packs, text, path, out problemCount);
             case PartKind.Rotor:
-                csv = Write(CatalogFormats.Rotors, text, path, out problemCount);
-                break;
+                return Grid(CatalogFormats.Rotors, text, path, out problemCount);
             case PartKind.Plate:
-                csv = Write(CatalogFormats.Plates, text, path, out problemCount);
-                break;
+                return Grid(CatalogFormats.Plates, text, path, out problemCount);
             default:
-                csv = Write(CatalogFormats.CellCurves, text, path, out problemCount);
-                break;
+                return Grid(CatalogFormats.CellCurves, text, path, out problemCount);
         }
-        return CsvGrid.Parse(csv);
     }
 
     /// <summary>Rows whose any cell contains the filter text (case-insensitive), sorted by a column (numbers as numbers).</summary>
-    public static IReadOnlyList<IReadOnlyList<string>> FilterAndSort(CsvGrid grid, string filter, int sortColumn, bool descending)
+    public static IReadOnlyList<IReadOnlyList<string>> FilterAndSort(CatalogGrid grid, string filter, int sortColumn, bool descending)
     {
         IEnumerable<IReadOnlyList<string>> rows = grid.Rows;
         string f = filter.Trim();
@@ -71,10 +63,11 @@ internal static class CatalogView
         return rows.ToList();
     }
 
-    private static string Write<T>(CatalogFormat<T> format, string text, string path, out int problemCount) where T : notnull
+    private static CatalogGrid Grid<T>(CatalogFormat<T> format, string text, string path, out int problemCount) where T : notnull
     {
         var read = format.Read(text, path);
         problemCount = read.Problems.Count;
-        return format.Write(read.Rows);
+        var rows = format.Cells(read.Rows).Select(r => (IReadOnlyList<string>)r.Select(c => c ?? "").ToList()).ToList();
+        return new CatalogGrid(format.Columns.Select(c => c.Name).ToList(), rows);
     }
 }

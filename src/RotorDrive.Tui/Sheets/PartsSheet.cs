@@ -17,7 +17,7 @@ public sealed class PartsSheet : Sheet
     private readonly Label _file;
     private readonly Label _info;
     private readonly TableView _table;
-    private readonly Dictionary<PartKind, (string Path, CsvGrid Grid, int Problems)> _cache = [];
+    private readonly Dictionary<PartKind, (string Path, CatalogGrid Grid, int Problems)> _cache = [];
     private int _kind;
     private int _sortColumn = -1;
     private bool _descending;
@@ -113,7 +113,7 @@ public sealed class PartsSheet : Sheet
         {
             string? text = Context.Files.TryReadAllText(path, out string? failure);
             entry = text is null
-                ? (path, new CsvGrid([], []), 0)
+                ? (path, new CatalogGrid([], []), 0)
                 : (path, CatalogView.Read(kind, text, path, out int problems), problems);
             if (text is null)
             {
