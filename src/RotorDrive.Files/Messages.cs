@@ -68,6 +68,10 @@ public static class Messages
     /// <summary>A value that must be greater than zero.</summary>
     public static string MustBePositive(double value) => $"must be greater than 0; got {N(value)}";
 
+    /// <summary>A value beyond the physical bound of its kind (a typo, or a unit slip).</summary>
+    public static string MustBeAtMost(double max, double value)
+        => $"must be at most {N(max)} (a larger value is no part of a levitation rig; check the unit); got {N(value)}";
+
     /// <summary>A value that must not be negative.</summary>
     public static string MustBeNonNegative(double value) => $"must be 0 or more; got {N(value)}";
 

@@ -116,4 +116,23 @@ public sealed class HoverCommandTests : IDisposable
             Assert.Equal("", output);
         }
     }
+    // A payload the drivetrain cannot hold (issue 14 item 2): no operating state is printed (today's code printed duties
+    // above 1 and a bus voltage above the pack's), the stations that fall short are named, exit 1.
+    [Fact]
+    public async Task Hover_BeyondTheDrivetrain_PrintsNoImpossibleState()
+    {
+        var (code, output, error) = await CliRunner.RunAsync("hover", RepoPaths.DemoRig, "--payload-kg", "40", "--json");
+        Assert.True(code == ExitCodes.LimitFindings, error + output);
+        using var doc = JsonDocument.Parse(output);
+        var root = doc.RootElement;
+        Assert.Equal(0, root.GetProperty("stations").GetArrayLength());
+        Assert.Equal(JsonValueKind.Null, root.GetProperty("pack_voltage_v").ValueKind);
+        Assert.False(root.GetProperty("pass").GetBoolean());
+        Assert.Contains(root.GetProperty("limits").EnumerateArray(), l => l.GetProperty("limit").GetString() == "duty_headroom"
+            && l.GetProperty("station").ValueKind == JsonValueKind.Number);
+        var (_, text, _) = await CliRunner.RunAsync("hover", RepoPaths.DemoRig, "--payload-kg", "40");
+        Assert.Contains("No hover state exists here", text);
+        Assert.Contains("not a hover", text);
+        Assert.DoesNotContain("speed_rpm", text);
+    }
 }

@@ -176,4 +176,26 @@ public sealed class StressCommandTests : IDisposable
         Assert.Equal(ExitCodes.BadInput, (await CliRunner.RunAsync("stress", RepoPaths.DemoRig, "--sample", "-1")).ExitCode);
         Assert.Equal(ExitCodes.BadInput, (await CliRunner.RunAsync("stress", RepoPaths.DemoRig, "--threads", "0")).ExitCode);
     }
+    // A sample whose trim fails (here: a payload beyond what the drivetrain holds) counts as a trim failure and is left out
+    // of the hover figures' percentiles, which say how many they leave out (issue 14 item 2).
+    [Fact]
+    public async Task Stress_LeavesFailedTrimsOutOfTheHoverFigures_AndSaysHowMany()
+    {
+        string rig = CopyDemo(t => t.Replace("\"payload_kg\": 25,", "\"payload_kg\": 37,", StringComparison.Ordinal));
+        var (_, output, error) = await CliRunner.RunAsync("stress", rig, "--samples", "16", "--seed", "3", "--json");
+        using var doc = JsonDocument.Parse(output);
+        var root = doc.RootElement;
+        var trim = root.GetProperty("criteria").EnumerateArray().Single(c => c.GetProperty("key").GetString() == "trim");
+        var speed = root.GetProperty("percentiles").EnumerateArray().Single(p => p.GetProperty("figure").GetString() == "hover_speed_rpm");
+        int leftOut = speed.GetProperty("left_out").GetInt32();
+        Assert.True(leftOut > 0, error + output);
+        Assert.Equal(16, speed.GetProperty("count").GetInt32() + leftOut);
+        Assert.True(trim.GetProperty("failures").GetInt32() >= leftOut);
+        // No hover figure may come from a state the drivetrain cannot reach: the hover pack voltage stays below the
+        // packs' open-circuit voltage at full charge (Kirchhoff: V = Voc - I R with I > 0), 12 cells x 4.2 V.
+        var volts = root.GetProperty("percentiles").EnumerateArray().Single(p => p.GetProperty("figure").GetString() == "hover_pack_voltage_v");
+        Assert.True(volts.GetProperty("max").GetDouble() < 12 * 4.2);
+        var (_, text, _) = await CliRunner.RunAsync("stress", rig, "--samples", "16", "--seed", "3");
+        Assert.Contains($"leave out {leftOut} sample(s) without a trimmed hover", text);
+    }
 }

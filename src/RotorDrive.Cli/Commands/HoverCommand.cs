@@ -139,7 +139,11 @@ public static class HoverCommand
         string title = r.Mode == "trimmed" ? "Trimmed hover" : "Hover at one common duty";
         o.WriteLine($"{title}: {r.Rig}");
         o.WriteLine($"  mass {Numbers.Format(r.MassKg, 1)} kg (payload {Numbers.Format(r.PayloadKg, 1)} kg), weight {Numbers.Format(r.WeightN, 1)} N, gap {Numbers.Format(r.GapMm, 2)} mm");
-        if (r.Stations.Count > 0)
+        if (r.Stations.Count == 0)
+        {
+            o.WriteLine($"  No hover state exists here ({r.Status}); the findings below say what was found.");
+        }
+        else
         {
             o.WriteLine();
             var table = new TextTable(

@@ -203,7 +203,7 @@ public static class StressCommand
 
     private sealed record CriterionEntry(string Key, string Description, int Failures, double Rate, double CiLow, double CiHigh);
 
-    private sealed record FigureEntry(string Figure, int Count, double? Min, double? P5, double? P50, double? P95, double? Max, double? Mean);
+    private sealed record FigureEntry(string Figure, int Count, int LeftOut, double? Min, double? P5, double? P50, double? P95, double? Max, double? Mean);
 
     private sealed record DriverEntry(string Input, string Margin, double Rho);
 
@@ -283,7 +283,7 @@ public static class StressCommand
             verdict,
             rate,
             r.Criteria.Select(c => new CriterionEntry(c.Key, c.Description, c.Rate.Count, c.Rate.EstimateFraction, c.Rate.LowerFraction, c.Rate.UpperFraction)).ToList(),
-            r.Percentiles.Select(p => new FigureEntry(p.Key, p.Summary?.Count ?? 0, p.Summary?.MinSi, p.Summary?.P5Si, p.Summary?.P50Si, p.Summary?.P95Si, p.Summary?.MaxSi, p.Summary?.MeanSi)).ToList(),
+            r.Percentiles.Select(p => new FigureEntry(p.Key, p.Summary?.Count ?? 0, p.LeftOut, p.Summary?.MinSi, p.Summary?.P5Si, p.Summary?.P50Si, p.Summary?.P95Si, p.Summary?.MaxSi, p.Summary?.MeanSi)).ToList(),
             r.Drivers.Select(d => new DriverEntry(d.Input, d.Margin, d.Rho)).ToList(),
             sample is null ? null : new WorstEntry(sample.Index, sample.Outcome.MinimumMarginFraction, Failed(sample.Outcome), Parts(sample.Parts)),
             Cautions);
@@ -331,13 +331,18 @@ public static class StressCommand
         }
         criteria.Write(o, 2);
         o.WriteLine();
-        var figures = new TextTable(new TableColumn("figure"), new TableColumn("samples", Alignment.Right), new TableColumn("P5", Alignment.Right),
-            new TableColumn("P50", Alignment.Right), new TableColumn("P95", Alignment.Right));
+        var figures = new TextTable(new TableColumn("figure"), new TableColumn("samples", Alignment.Right), new TableColumn("left_out", Alignment.Right),
+            new TableColumn("P5", Alignment.Right), new TableColumn("P50", Alignment.Right), new TableColumn("P95", Alignment.Right));
         foreach (var p in r.Percentiles)
         {
-            figures.AddRow(p.Figure, p.Count.ToString(CultureInfo.InvariantCulture), Numbers.Format(p.P5, 2), Numbers.Format(p.P50, 2), Numbers.Format(p.P95, 2));
+            figures.AddRow(p.Figure, p.Count.ToString(CultureInfo.InvariantCulture), p.LeftOut.ToString(CultureInfo.InvariantCulture),
+                Numbers.Format(p.P5, 2), Numbers.Format(p.P50, 2), Numbers.Format(p.P95, 2));
         }
         figures.Write(o, 2);
+        if (r.Percentiles.FirstOrDefault(p => p.Figure == "hover_speed_rpm") is { LeftOut: > 0 } hover)
+        {
+            o.WriteLine($"  The hover figures leave out {hover.LeftOut} sample(s) without a trimmed hover; they count as trim failures.");
+        }
         o.WriteLine();
         o.WriteLine("  Drivers (Spearman rank correlation of a drawn value with a margin; + means larger is safer):");
         var drivers = new TextTable(new TableColumn("input"), new TableColumn("margin"), new TableColumn("rho", Alignment.Right));

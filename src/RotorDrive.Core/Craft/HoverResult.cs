@@ -39,7 +39,7 @@ public sealed record HoverResult(
     IReadOnlyList<HoverFinding> Findings,
     int Iterations)
 {
-    /// <summary>Whether the state balances the craft (any status but <see cref="HoverStatus.NoBalance"/> and
+    /// <summary>Whether the state balances the craft (any status but <see cref="HoverStatus.NoBalance"/>, <see cref="HoverStatus.BeyondDrivetrain"/> and
     /// <see cref="HoverStatus.TooFewStations"/>).</summary>
     public bool Balanced => Status is HoverStatus.Hovering or HoverStatus.LimitExceeded;
 

@@ -13,6 +13,11 @@ public enum HoverStatus
     /// converge); see the findings.</summary>
     NoBalance,
 
+    /// <summary>The speeds balance the craft, but the drivetrain cannot make the torques they need (a duty above the
+    /// controller's maximum, a current above its limit, or more than the pack can supply): no such state exists, and the
+    /// result holds none (the findings say what falls short and what full duty gives instead).</summary>
+    BeyondDrivetrain,
+
     /// <summary>Fewer than four stations: force, pitch, roll and yaw cannot all be balanced.</summary>
     TooFewStations,
 }

@@ -1,6 +1,7 @@
 using MathNet.Numerics.RootFinding;
 using RotorDrive.Core.Drive;
 using RotorDrive.Core.Numerics;
+using static System.FormattableString;
 
 namespace RotorDrive.Core.Craft;
 
@@ -475,6 +476,44 @@ public static class HoverTrim
         ws.Solved = true;
     }
 
+    // A balance the drivetrain cannot hold: say which stations fall short and what full duty gives instead (a state that
+    // exists, but is not a hover), and report no operating state.
+    private static HoverResult BeyondDrivetrain(RigModel model, HoverMode mode, double gapM, double[] speeds, double[] required,
+        DrivePoint[] points, BusSolution bus, int iterations)
+    {
+        var st = model.Stations;
+        var findings = new List<HoverFinding>();
+        if (bus.Status != BusStatus.Solved)
+        {
+            findings.Add(new HoverFinding(DriveLimit.PackCutoffVoltage.Key(), null,
+                Invariant($"the pack cannot supply the current this balance draws: its voltage collapses ({bus.Status})")));
+        }
+        for (int i = 0; i < st.Count; i++)
+        {
+            var s = st[i];
+            var dt = s.Drivetrain;
+            double backEmf = s.FluxFactor * speeds[i] / dt.Motor.KvRadPerSPerV;
+            // Against the pack's open-circuit voltage (no bus voltage under load is higher), the duty is a lower bound.
+            double voc = model.Source.OpenCircuitVoltageV;
+            double duty = (required[i] * dt.LoopResistanceAt(s.Conditions.WindingTempC) + backEmf) / voc;
+            if (bus.Status == BusStatus.Solved && points[i].Regime == DriveRegime.Regulating)
+            {
+                continue;
+            }
+            string needs = Invariant($"station {i}: the balance needs {Units.RadPerSToRpm(speeds[i]):0} rpm with {required[i]:0.0} A of motor current");
+            findings.Add(required[i] > dt.CurrentLimitA
+                ? new HoverFinding("controller_current_limit", i, Invariant($"{needs}, above the controller's limit of {dt.CurrentLimitA:0.0} A"))
+                : new HoverFinding(DriveLimit.DutyHeadroom.Key(), i, duty > dt.MaxDuty
+                    ? Invariant($"{needs}, which takes duty {duty:0.000} even at the pack's open-circuit {voc:0.0} V; the controller gives at most {dt.MaxDuty:0.000}")
+                    : Invariant($"{needs}, which takes more than the controller's duty of {dt.MaxDuty:0.000} once the pack sags under the total current")));
+        }
+        var full = CommonDutyHover.SpeedsAt(model, Enumerable.Repeat(1.0, st.Count).ToArray(), gapM);
+        findings.Add(new HoverFinding("drivetrain", null, Invariant(
+            $"no hover at {gapM * 1000:0.00} mm: the drivetrain cannot hold this balance. Closest it comes (not a hover): at full duty on every station the rotors lift {full.TotalLiftN:0} N in all (weight {model.WeightN:0} N) at up to {full.SpeedsRadPerS.Max(Units.RadPerSToRpm):0} rpm, without balancing pitch and roll")));
+        return new HoverResult(mode, HoverStatus.BeyondDrivetrain, gapM, model.MassKg, model.WeightN, [], double.NaN, double.NaN,
+            double.NaN, double.NaN, double.NaN, double.NaN, double.NaN, double.NaN, [], findings, iterations);
+    }
+
     private static HoverResult Failed(RigModel model, double gapM, HoverStatus status, HoverFinding finding, int iterations)
         => new(HoverMode.Trimmed, status, gapM, model.MassKg, model.WeightN, [], double.NaN, double.NaN, double.NaN, double.NaN,
             double.NaN, double.NaN, double.NaN, double.NaN, [], [finding], iterations);
@@ -510,6 +549,11 @@ public static class HoverTrim
                 $"the pack cannot supply {bus.PackCurrentA:0} A: its voltage collapses ({bus.Status})"));
         }
         double v = bus.BusVoltageV > 0 ? bus.BusVoltageV : model.Source.OpenCircuitVoltageV;
+        if (bus.Status != BusStatus.Solved || points.Any(p => p.Regime != DriveRegime.Regulating))
+        {
+            // The balance needs torques the drivetrain cannot make at these speeds: no such state exists.
+            return BeyondDrivetrain(model, mode, gapM, speeds, required, points, bus, iterations);
+        }
         var stations = new HoverStation[n];
         for (int i = 0; i < n; i++)
         {
@@ -519,12 +563,6 @@ public static class HoverTrim
             double backEmf = s.FluxFactor * speeds[i] / dt.Motor.KvRadPerSPerV;
             double loop = dt.LoopResistanceAt(s.Conditions.WindingTempC);
             double requiredDuty = (required[i] * loop + backEmf) / v;
-            bool free = point.Regime is DriveRegime.Regulating;
-            if (!free)
-            {
-                // The controller cannot deliver the torque: report the state it would need.
-                point = point with { MotorCurrentA = required[i], Duty = requiredDuty, BusCurrentA = requiredDuty * required[i] + dt.Controller.IdleCurrentA };
-            }
             var margins = new List<LimitMargin>(DriveMargins.ForStation(dt, s.Rotor, point))
             {
                 new(DriveLimit.DutyHeadroom, requiredDuty, model.Limits.MaxDuty),
@@ -547,8 +585,7 @@ public static class HoverTrim
                         $"station {i}: {m.Limit.Describe()} {m.ValueSi:0.###} {m.Limit.Unit()} exceeds the allowed {m.AllowedSi:0.###} {m.Limit.Unit()}"));
                 }
             }
-            // Where the controller cannot deliver the torque at all, the failing limit says so; stability is moot.
-            if (!stable && free)
+            if (!stable)
             {
                 findings.Add(new HoverFinding("stability", i,
                     $"station {i}: {Units.RadPerSToRpm(speeds[i]):0} rpm is not a stable equilibrium at duty {requiredDuty:0.000} (load torque rises faster than the motor's)"));

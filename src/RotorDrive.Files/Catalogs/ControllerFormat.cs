@@ -8,15 +8,15 @@ public sealed class ControllerFormat : CatalogFormat<ControllerRow>
         : base(
         [
             CatalogColumn.Text("id"),
-            CatalogColumn.Real("continuous_current_a", ValueRule.Positive),
-            CatalogColumn.Real("burst_current_a", ValueRule.Positive),
-            CatalogColumn.Real("burst_duration_s", ValueRule.NonNegative),
-            CatalogColumn.Integer("min_cells", ValueRule.AtLeast(1)),
-            CatalogColumn.Integer("max_cells", ValueRule.AtLeast(1)),
-            CatalogColumn.Real("on_resistance_mohm", ValueRule.NonNegative),
-            CatalogColumn.Real("idle_current_a", ValueRule.NonNegative),
-            CatalogColumn.Real("max_erpm", ValueRule.Positive),
-            CatalogColumn.Real("mass_g", ValueRule.Positive),
+            CatalogColumn.Real("continuous_current_a", ValueRule.PositiveAtMost(10000)),
+            CatalogColumn.Real("burst_current_a", ValueRule.PositiveAtMost(10000)),
+            CatalogColumn.Real("burst_duration_s", ValueRule.NonNegativeAtMost(3600)),
+            CatalogColumn.Integer("min_cells", ValueRule.AtLeast(1, 200)),
+            CatalogColumn.Integer("max_cells", ValueRule.AtLeast(1, 200)),
+            CatalogColumn.Real("on_resistance_mohm", ValueRule.NonNegativeAtMost(10000)),
+            CatalogColumn.Real("idle_current_a", ValueRule.NonNegativeAtMost(100)),
+            CatalogColumn.Real("max_erpm", ValueRule.PositiveAtMost(1e7)),
+            CatalogColumn.Real("mass_g", ValueRule.PositiveAtMost(1e6)),
             CatalogColumn.Boolean("reversible"),
         ])
     {

@@ -8,16 +8,16 @@ public sealed class MotorFormat : CatalogFormat<MotorRow>
         : base(
         [
             CatalogColumn.Text("id"),
-            CatalogColumn.Real("kv_rpm_per_v", ValueRule.Positive),
-            CatalogColumn.Real("resistance_ohm", ValueRule.Positive),
-            CatalogColumn.Real("no_load_current_a", ValueRule.NonNegative),
-            CatalogColumn.Real("no_load_voltage_v", ValueRule.Positive),
-            CatalogColumn.Real("max_current_a", ValueRule.Positive),
-            CatalogColumn.Real("max_power_w", ValueRule.Positive),
-            CatalogColumn.Integer("poles", ValueRule.AtLeast(2)),
-            CatalogColumn.Real("mass_g", ValueRule.Positive),
-            CatalogColumn.OptionalReal("thermal_resistance_k_per_w", ValueRule.Positive),
-            CatalogColumn.OptionalReal("thermal_time_constant_s", ValueRule.Positive),
+            CatalogColumn.Real("kv_rpm_per_v", ValueRule.PositiveAtMost(10000)),
+            CatalogColumn.Real("resistance_ohm", ValueRule.PositiveAtMost(1000)),
+            CatalogColumn.Real("no_load_current_a", ValueRule.NonNegativeAtMost(1000)),
+            CatalogColumn.Real("no_load_voltage_v", ValueRule.PositiveAtMost(1000)),
+            CatalogColumn.Real("max_current_a", ValueRule.PositiveAtMost(10000)),
+            CatalogColumn.Real("max_power_w", ValueRule.PositiveAtMost(1e6)),
+            CatalogColumn.Integer("poles", ValueRule.AtLeast(2, 200)),
+            CatalogColumn.Real("mass_g", ValueRule.PositiveAtMost(1e6)),
+            CatalogColumn.OptionalReal("thermal_resistance_k_per_w", ValueRule.PositiveAtMost(100)),
+            CatalogColumn.OptionalReal("thermal_time_constant_s", ValueRule.PositiveAtMost(1e5)),
             CatalogColumn.OptionalReal("max_winding_temp_c", ValueRule.Between(40, 250)),
         ])
     {

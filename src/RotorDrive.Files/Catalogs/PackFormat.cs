@@ -9,13 +9,13 @@ public sealed class PackFormat : CatalogFormat<PackRow>
         [
             CatalogColumn.Text("id"),
             CatalogColumn.Text("chemistry"),
-            CatalogColumn.Integer("cells_series", ValueRule.AtLeast(1)),
-            CatalogColumn.Integer("cells_parallel", ValueRule.AtLeast(1)),
-            CatalogColumn.Real("cell_capacity_mah", ValueRule.Positive),
-            CatalogColumn.Real("continuous_c", ValueRule.Positive),
-            CatalogColumn.Real("burst_c", ValueRule.Positive),
-            CatalogColumn.Real("cell_resistance_mohm", ValueRule.Positive),
-            CatalogColumn.Real("mass_g", ValueRule.Positive),
+            CatalogColumn.Integer("cells_series", ValueRule.AtLeast(1, 200)),
+            CatalogColumn.Integer("cells_parallel", ValueRule.AtLeast(1, 1000)),
+            CatalogColumn.Real("cell_capacity_mah", ValueRule.PositiveAtMost(1e6)),
+            CatalogColumn.Real("continuous_c", ValueRule.PositiveAtMost(1000)),
+            CatalogColumn.Real("burst_c", ValueRule.PositiveAtMost(1000)),
+            CatalogColumn.Real("cell_resistance_mohm", ValueRule.PositiveAtMost(10000)),
+            CatalogColumn.Real("mass_g", ValueRule.PositiveAtMost(1e7)),
         ])
     {
     }

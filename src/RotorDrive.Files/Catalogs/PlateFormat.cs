@@ -10,8 +10,8 @@ public sealed class PlateFormat : CatalogFormat<PlateRow>
             CatalogColumn.Text("id"),
             CatalogColumn.Real("conductivity_ms_per_m", ValueRule.Between(0.1, 70)),
             CatalogColumn.Real("temp_coeff_per_k", ValueRule.Between(-0.01, 0.01)),
-            CatalogColumn.Real("density_kg_m3", ValueRule.Positive),
-            CatalogColumn.Real("specific_heat_j_per_kg_k", ValueRule.Positive),
+            CatalogColumn.Real("density_kg_m3", ValueRule.PositiveAtMost(30000)),
+            CatalogColumn.Real("specific_heat_j_per_kg_k", ValueRule.PositiveAtMost(10000)),
         ])
     {
     }

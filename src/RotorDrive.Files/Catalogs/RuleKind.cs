@@ -17,4 +17,11 @@ public enum RuleKind
 
     /// <summary>A whole number of at least a minimum.</summary>
     AtLeast,
+
+    /// <summary>Greater than 0 and at most <see cref="ValueRule.Max"/> (a physical upper bound for a part of a levitation
+    /// rig; beyond it the number is a typo, and the analyses would overflow).</summary>
+    PositiveAtMost,
+
+    /// <summary>Zero or more and at most <see cref="ValueRule.Max"/> (a physical upper bound).</summary>
+    NonNegativeAtMost,
 }

@@ -18,8 +18,16 @@ public sealed record ValueRule(RuleKind Kind, double Min = 0, double Max = 0)
     /// <summary>Within [min, max].</summary>
     public static ValueRule Between(double min, double max) => new(RuleKind.Between, min, max);
 
-    /// <summary>A whole number of at least min.</summary>
-    public static ValueRule AtLeast(int min) => new(RuleKind.AtLeast, min);
+    /// <summary>Greater than 0 and at most <paramref name="max"/>.</summary>
+    /// <param name="max">Largest accepted value (a physical bound, not a preference).</param>
+    public static ValueRule PositiveAtMost(double max) => new(RuleKind.PositiveAtMost, 0, max);
+
+    /// <summary>Zero or more and at most <paramref name="max"/>.</summary>
+    /// <param name="max">Largest accepted value (a physical bound, not a preference).</param>
+    public static ValueRule NonNegativeAtMost(double max) => new(RuleKind.NonNegativeAtMost, 0, max);
+
+    /// <summary>A whole number of at least min (and at most max, a physical bound, when given).</summary>
+    public static ValueRule AtLeast(int min, int max = int.MaxValue) => new(RuleKind.AtLeast, min, max);
 
     /// <summary>The message for a value that breaks the rule, or null when it complies.</summary>
     public string? Check(double value) => Kind switch
@@ -28,6 +36,10 @@ public sealed record ValueRule(RuleKind Kind, double Min = 0, double Max = 0)
         RuleKind.NonNegative when !(value >= 0) => Messages.MustBeNonNegative(value),
         RuleKind.Between when !(value >= Min && value <= Max) => Messages.MustBeBetween(Min, Max, value),
         RuleKind.AtLeast when !(value >= Min) => Messages.MustBeAtLeast((int)Min, (int)value),
+        RuleKind.AtLeast when !(value <= Max) => Messages.MustBeAtMost(Max, value),
+        RuleKind.PositiveAtMost when !(value > 0) => Messages.MustBePositive(value),
+        RuleKind.NonNegativeAtMost when !(value >= 0) => Messages.MustBeNonNegative(value),
+        RuleKind.PositiveAtMost or RuleKind.NonNegativeAtMost when !(value <= Max) => Messages.MustBeAtMost(Max, value),
         _ => null,
     };
 
@@ -37,7 +49,10 @@ public sealed record ValueRule(RuleKind Kind, double Min = 0, double Max = 0)
         RuleKind.Positive => "> 0",
         RuleKind.NonNegative => ">= 0",
         RuleKind.Between => $"{Min.ToString(System.Globalization.CultureInfo.InvariantCulture)} to {Max.ToString(System.Globalization.CultureInfo.InvariantCulture)}",
+        RuleKind.AtLeast when Max < int.MaxValue => $"{Min.ToString(System.Globalization.CultureInfo.InvariantCulture)} to {Max.ToString(System.Globalization.CultureInfo.InvariantCulture)}",
         RuleKind.AtLeast => $">= {Min.ToString(System.Globalization.CultureInfo.InvariantCulture)}",
+        RuleKind.PositiveAtMost => $"> 0, at most {Max.ToString(System.Globalization.CultureInfo.InvariantCulture)}",
+        RuleKind.NonNegativeAtMost => $">= 0, at most {Max.ToString(System.Globalization.CultureInfo.InvariantCulture)}",
         _ => "any",
     };
 }

@@ -107,11 +107,11 @@ public static class RigResolver
         }
         else
         {
-            var empty = ctx.Required(craft.EmptyMassKg, "$.craft.empty_mass_kg", ValueRule.Positive);
-            var payload = ctx.Required(craft.PayloadKg, "$.craft.payload_kg", ValueRule.NonNegative);
-            var cgx = ctx.Required(craft.CgXMm, "$.craft.cg_x_mm", ValueRule.Any);
-            var cgy = ctx.Required(craft.CgYMm, "$.craft.cg_y_mm", ValueRule.Any);
-            var inertia = ctx.Required(craft.YawInertiaKgM2, "$.craft.yaw_inertia_kg_m2", ValueRule.Positive);
+            var empty = ctx.Required(craft.EmptyMassKg, "$.craft.empty_mass_kg", ValueRule.PositiveAtMost(10000));
+            var payload = ctx.Required(craft.PayloadKg, "$.craft.payload_kg", ValueRule.NonNegativeAtMost(10000));
+            var cgx = ctx.Required(craft.CgXMm, "$.craft.cg_x_mm", ValueRule.Between(-10000, 10000));
+            var cgy = ctx.Required(craft.CgYMm, "$.craft.cg_y_mm", ValueRule.Between(-10000, 10000));
+            var inertia = ctx.Required(craft.YawInertiaKgM2, "$.craft.yaw_inertia_kg_m2", ValueRule.PositiveAtMost(100000));
             var damping = ctx.Optional(craft.HeaveDampingRatio, "$.craft.heave_damping_ratio", ValueRule.Between(0, 2), RigDefaults.HeaveDampingRatio);
             if (empty is not null && payload is not null && cgx is not null && cgy is not null && inertia is not null && damping is not null)
             {
@@ -136,7 +136,7 @@ public static class RigResolver
             }
         }
         var ambient = ctx.Required(document.AmbientC, "$.ambient_c", ValueRule.Between(AmbientRangeC.Min, AmbientRangeC.Max));
-        var gearFriction = ctx.Optional(document.GearYawFrictionNm, "$.gear_yaw_friction_nm", ValueRule.NonNegative, RigDefaults.GearYawFrictionNm);
+        var gearFriction = ctx.Optional(document.GearYawFrictionNm, "$.gear_yaw_friction_nm", ValueRule.NonNegativeAtMost(10000), RigDefaults.GearYawFrictionNm);
 
         // Stations.
         var stations = new List<Station>();
@@ -223,6 +223,10 @@ public static class RigResolver
             {
                 ctx.Report("$.pack.count", Messages.MustBeAtLeast(1, packDoc.Count.Value));
             }
+            else if (packDoc.Count > 1000)
+            {
+                ctx.Report("$.pack.count", Messages.MustBeAtMost(1000, packDoc.Count.Value));
+            }
             else
             {
                 count = packDoc.Count;
@@ -254,12 +258,12 @@ public static class RigResolver
         }
         else
         {
-            var yaw = ctx.Required(lim.YawTorqueNm, "$.limits.yaw_torque_nm", ValueRule.Positive);
+            var yaw = ctx.Required(lim.YawTorqueNm, "$.limits.yaw_torque_nm", ValueRule.PositiveAtMost(10000));
             var plateMax = ctx.Required(lim.PlateTempC, "$.limits.plate_temp_c", ValueRule.Between(-40, 400));
             var cutoff = ctx.Optional(lim.CellCutoffV, "$.limits.cell_cutoff_v", ValueRule.Between(1.5, 4.5), RigDefaults.CellCutoffV);
             var usable = ctx.Optional(lim.UsableCapacityPct, "$.limits.usable_capacity_pct", ValueRule.Between(1, 100), RigDefaults.UsableCapacityPct);
             var duty = ctx.Optional(lim.MaxDuty, "$.limits.max_duty", ValueRule.Between(0.05, 1), RigDefaults.MaxDuty);
-            var liftoff = ctx.Optional(lim.LiftoffTimeS, "$.limits.liftoff_time_s", ValueRule.Positive, RigDefaults.LiftoffTimeS);
+            var liftoff = ctx.Optional(lim.LiftoffTimeS, "$.limits.liftoff_time_s", ValueRule.PositiveAtMost(3600), RigDefaults.LiftoffTimeS);
             if (yaw is not null && plateMax is not null && cutoff is not null && usable is not null && duty is not null && liftoff is not null)
             {
                 limits = new RigLimits(yaw.Value, plateMax.Value, cutoff.Value, usable.Value / 100.0, duty.Value, liftoff.Value);

@@ -155,8 +155,10 @@ public sealed class HoverTrimTests
             // Mirroring cannot change whether the craft balances or which limits fail; some drawn rigs (heavy payload,
             // far-off CG) balance with a limit exceeded, and the mirror law holds for them too.
             Assert.Equal(a.Status, b.Status);
-            Assert.Contains(a.Status, new[] { HoverStatus.Hovering, HoverStatus.LimitExceeded });
-            for (int i = 0; i < n; i++)
+            // A balance beyond the drivetrain reports no state (and the same stations falling short).
+            Assert.Contains(a.Status, new[] { HoverStatus.Hovering, HoverStatus.LimitExceeded, HoverStatus.BeyondDrivetrain });
+            Assert.Equal(a.Findings.Select(f => (f.Limit, f.Station)), b.Findings.Select(f => (f.Limit, f.Station)));
+            for (int i = 0; i < a.Stations.Count; i++)
             {
                 RelAssert.Close(a.Stations[i].SpeedRadPerS, b.Stations[i].SpeedRadPerS, 1e-7, what: $"speed {i}");
                 RelAssert.Close(a.Stations[i].Duty, b.Stations[i].Duty, 1e-7, what: $"duty {i}");
@@ -169,5 +171,37 @@ public sealed class HoverTrimTests
             Assert.True(Math.Abs(yaw) > 1e-6, "the mismatch should leave a residual yaw");
             RelAssert.Close(-yaw, yawMirror, 1e-7, what: "residual yaw");
         });
+    }
+    // A state that cannot exist is never reported (issue 14 item 2): from a light craft to one the drivetrain cannot hold,
+    // every balanced result lies within the drivetrain's physical range (duty at most the controller's maximum, the
+    // controller regulating, the bus below the pack's open-circuit voltage: Kirchhoff, V = Voc - I R with I > 0), and
+    // where the trim needs more, the result says so and holds no operating state.
+    [Fact]
+    public void Trim_NeverReportsAStateOutsideTheDrivetrainsRange_AndSaysWhenItNeedsMore()
+    {
+        bool beyond = false;
+        for (double payload = 0; payload <= 12; payload += 0.5)
+        {
+            var model = CraftRigs.Model(CraftRigs.Circle(4, cgXM: 0.03, payloadKg: payload));
+            var hover = HoverTrim.Solve(model);
+            if (hover.Balanced)
+            {
+                Assert.True(hover.BusVoltageV < model.Source.OpenCircuitVoltageV, $"payload {payload}: bus {hover.BusVoltageV} V");
+                foreach (var s in hover.Stations)
+                {
+                    Assert.True(s.Duty <= model.Stations[s.Index].Drivetrain.MaxDuty, $"payload {payload}: station {s.Index} duty {s.Duty}");
+                    Assert.Equal(global::RotorDrive.Core.Drive.DriveRegime.Regulating, s.Regime);
+                }
+            }
+            else if (hover.Status == HoverStatus.BeyondDrivetrain)
+            {
+                beyond = true;
+                Assert.Empty(hover.Stations);
+                Assert.True(double.IsNaN(hover.BusVoltageV));
+                Assert.Contains(hover.Findings, f => f.Station is not null && f.Limit is "duty_headroom" or "controller_current_limit");
+                Assert.Contains(hover.Findings, f => f.Limit == "drivetrain" && f.Message.Contains("not a hover", StringComparison.Ordinal));
+            }
+        }
+        Assert.True(beyond, "the sweep should reach a payload the drivetrain cannot hold");
     }
 }

@@ -32,6 +32,22 @@ public class ValueRuleTests
     public void Motor_RejectsNonPositiveValuesWherePhysicsForbidsThem(string row, int column, string field, double value)
         => Assert.Equal([new InputProblem("motors.csv", 2, column, field, Messages.MustBePositive(value))], Motor(row));
 
+    // Absurd magnitudes pass a "> 0" rule but overflow the analyses (issue 14 item 5: Kv 1e308 ended in "got Infinity",
+    // exit 3). Each column has a physical upper bound, far above any part of a levitation rig (common practice, no source:
+    // hobby and industrial motors stay below a few thousand rpm/V, 1 kohm, 10 kA; rotors below 2 m radius and 200 000 rpm).
+    [Theory]
+    [InlineData("m,1e308,0.05,1.2,12,60,2000,14,500,,,", 2, "kv_rpm_per_v", 1e308, 10000.0)]
+    [InlineData("m,100,5000,1.2,12,60,2000,14,500,,,", 3, "resistance_ohm", 5000.0, 1000.0)]
+    [InlineData("m,100,0.05,1.2,12,1e9,2000,14,500,,,", 6, "max_current_a", 1e9, 10000.0)]
+    [InlineData("m,100,0.05,1.2,12,60,2000,14,1e12,,,", 9, "mass_g", 1e12, 1e6)]
+    [InlineData("m,100,0.05,1e4,12,60,2000,14,500,,,", 4, "no_load_current_a", 1e4, 1000.0)]
+    public void Motor_RejectsAbsurdMagnitudes_WithTheirBound(string row, int column, string field, double value, double max)
+        => Assert.Equal([new InputProblem("motors.csv", 2, column, field, Messages.MustBeAtMost(max, value))], Motor(row));
+
+    [Fact]
+    public void Motor_RejectsAPoleCountBeyondItsBound()
+        => Assert.Equal([new InputProblem("motors.csv", 2, 8, "poles", Messages.MustBeAtMost(200, 400))], Motor("m,100,0.05,1.2,12,60,2000,400,500,,,"));
+
     [Fact]
     public void Motor_RejectsANegativeNoLoadCurrent()
         => Assert.Equal([new InputProblem("motors.csv", 2, 4, "no_load_current_a", Messages.MustBeNonNegative(-1.2))], Motor("m,100,0.05,-1.2,12,60,2000,14,500,,,"));

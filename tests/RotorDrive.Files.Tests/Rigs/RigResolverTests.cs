@@ -163,6 +163,20 @@ public class RigResolverTests
         Assert.Equal((path, Messages.MustBePositive(value)), (problem.Field, problem.Message));
     }
 
+    // Absurd magnitudes (issue 14 item 5: an empty mass of 1e308 kg passed check and ended in "got Infinity", exit 3): each
+    // rig number has a physical bound far above any levitation rig (common practice, no source).
+    [Theory]
+    [InlineData("\"empty_mass_kg\": 38", "\"empty_mass_kg\": 1e308", "$.craft.empty_mass_kg", 1e308, 10000.0)]
+    [InlineData("\"payload_kg\": 25", "\"payload_kg\": 1e6", "$.craft.payload_kg", 1e6, 10000.0)]
+    [InlineData("\"yaw_inertia_kg_m2\": 12", "\"yaw_inertia_kg_m2\": 1e300", "$.craft.yaw_inertia_kg_m2", 1e300, 100000.0)]
+    [InlineData("\"yaw_torque_nm\": 2", "\"yaw_torque_nm\": 1e200", "$.limits.yaw_torque_nm", 1e200, 10000.0)]
+    [InlineData("\"count\": 2", "\"count\": 5000", "$.pack.count", 5000.0, 1000.0)]
+    public void Resolve_ReportsAbsurdMagnitudes_WithTheirBound(string from, string to, string path, double value, double max)
+    {
+        var problem = Assert.Single(Resolve(from, to).Problems);
+        Assert.Equal((path, Messages.MustBeAtMost(max, value)), (problem.Field, problem.Message));
+    }
+
     [Fact]
     public void Resolve_ReportsAPackCountBelowOne()
     {

@@ -10,8 +10,8 @@ internal static class CatalogGenerators
     // Mantissas use the full double precision so the writer's round-trip formatting is really exercised.
     private static Gen<double> Unit => Gen.Choose(1, int.MaxValue).Select(m => m / (double)int.MaxValue);
 
-    /// <summary>A value in (0, 10^4].</summary>
-    public static Gen<double> Positive => Gen.Zip(Unit, Gen.Choose(-4, 4), (u, e) => u * Math.Pow(10, e));
+    /// <summary>A value in (0, 100]: within every column's physical upper bound (the smallest is 100).</summary>
+    public static Gen<double> Positive => Gen.Zip(Unit, Gen.Choose(-4, 2), (u, e) => u * Math.Pow(10, e));
 
     public static Gen<double> NonNegative => Gen.Frequency((1, Gen.Constant(0.0)), (9, Positive));
 

@@ -79,21 +79,23 @@ public class HoverYawSheetTests
         using var bench = new Bench();
         var sheet = await OpenAsync(bench);
         double before = sheet.Shown!.Review!.Hover.Stations[0].SpeedRadPerS;
-        EditRigField(bench, "$.gap.design_mm", "12");
+        EditRigField(bench, "$.gap.design_mm", "11");
         await OpenAsync(bench);
         var hover = sheet.Shown!.Review!.Hover;
-        Assert.Equal(0.012, hover.GapM, 12);
+        Assert.Equal(0.011, hover.GapM, 12);
         var expected = HoverTrim.Solve(RigModel.Build(bench.Context.Session.Rig!));
         Assert.Equal(expected.Stations[0].SpeedRadPerS, hover.Stations[0].SpeedRadPerS, 9);
         Assert.True(hover.Stations[0].SpeedRadPerS > before, "a larger gap needs a faster rotor for the same lift");
-        Assert.Contains("at 12.00 mm", sheet.Verdict);
+        Assert.Contains("at 11.00 mm", sheet.Verdict);
     }
 
     [Fact]
     public async Task AFailingLimit_CarriesItsTextMark_AndTheLegend()
     {
+        // At 7 mm the rotors turn below their drag peak and the motors draw more than their rating: a state that exists,
+        // with limits exceeded (a payload beyond the drivetrain gives no state at all; see the next test).
         using var bench = new Bench(columns: 120, rows: 40);
-        EditRigField(bench, "$.craft.payload_kg", "40");
+        EditRigField(bench, "$.gap.design_mm", "7");
         var sheet = await OpenAsync(bench);
         var review = sheet.Shown!.Review!;
         Assert.False(review.Pass);
@@ -114,8 +116,24 @@ public class HoverYawSheetTests
         Assert.NotEmpty(review.Findings);
         Assert.Contains("LIMITS THAT FAIL", sheet.SheetText);
         Assert.Equal(review.Findings.Count, sheet.SheetText.Split('\n').Count(l => l.StartsWith("  !! station ", StringComparison.Ordinal) || l.StartsWith("  !! pack", StringComparison.Ordinal)));
-        Assert.Contains($"max payload within every limit {F(HoverReview.PayloadCapacityKg(RigModel.Build(bench.Context.Session.Rig!), 0.010)!.Value, 1)} kg (carries 40.0)", sheet.SheetText);
+        Assert.Contains(HoverReview.PayloadCapacityKg(RigModel.Build(bench.Context.Session.Rig!), 0.007) is { } cap
+            ? $"max payload within every limit {F(cap, 1)} kg (carries 25.0)"
+            : "max payload: even the empty craft does not hover within every limit", sheet.SheetText);
         Assert.Contains("!!", bench.Screen);
+    }
+
+    // A payload the drivetrain cannot hold (issue 14 item 2): the sheet says there is no hover and shows no station state.
+    [Fact]
+    public async Task APayloadBeyondTheDrivetrain_ShowsNoHoverState()
+    {
+        using var bench = new Bench(columns: 120, rows: 40);
+        EditRigField(bench, "$.craft.payload_kg", "40");
+        var sheet = await OpenAsync(bench);
+        var review = sheet.Shown!.Review!;
+        Assert.Equal(HoverStatus.BeyondDrivetrain, review.Hover.Status);
+        Assert.Empty(review.Hover.Stations);
+        Assert.StartsWith("!! No hover:", sheet.Verdict);
+        Assert.Contains($"max payload within every limit {F(HoverReview.PayloadCapacityKg(RigModel.Build(bench.Context.Session.Rig!), 0.010)!.Value, 1)} kg (carries 40.0)", sheet.SheetText);
     }
 
     // A design gap below the landed gap is a rig problem (as `rotordrive check` says): no result sheet computes, each says why.

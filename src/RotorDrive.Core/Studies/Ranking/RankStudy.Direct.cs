@@ -59,8 +59,11 @@ public sealed partial class RankStudy
         var spin = DriveBus.Solve(BusSource.FromPack(bank, 1.0), spinInputs, spinPoints);
         JudgePeaks(spin, spinPoints, peakTorques, peaks, o);
 
-        var hover = HoverTrim.Solve(ModelFor(candidate), _hoverOptions);
-        if (!hover.Balanced)
+        // The trim in speed space (the drivetrain is judged below, against what these speeds need).
+        var model = ModelFor(candidate);
+        var trimmed = new double[n];
+        if (HoverTrim.SolveSpeeds(model.Stations, model.DesignGapM, model.WeightN, model.CgXM, model.CgYM, 0.0, trimmed, warm: false,
+                _hoverOptions, new HoverTrimWorkspace(n), out _) != HoverTrim.SpeedSolve.Converged)
         {
             o.Reject(RankRejectionKind.RotorSpeed);
             return ToEvaluation(candidate, o);
@@ -68,9 +71,10 @@ public sealed partial class RankStudy
         o.Trimmed = true;
         for (int i = 0; i < n; i++)
         {
-            o.Speeds[i] = hover.Stations[i].SpeedRadPerS;
-            o.Torques[i] = hover.Stations[i].ShaftTorqueNm;
-            o.EddyPowers[i] = hover.Stations[i].EddyPowerW;
+            var load = model.Stations[i].LoadAt(trimmed[i], model.DesignGapM);
+            o.Speeds[i] = trimmed[i];
+            o.Torques[i] = load.TotalTorqueNm;
+            o.EddyPowers[i] = load.EddyPowerW;
         }
 
         // Hover: each motor draws the current its trimmed torque needs; no current limit or duty clamp may interfere here.

@@ -123,7 +123,7 @@ public static class StressStudy
         int n = samples.Count;
         if (n == 0)
         {
-            return new StressResult(0, requested, seed, requested > 0, null, [], FigureKeys.Select(k => new StressFigure(k, null)).ToArray(),
+            return new StressResult(0, requested, seed, requested > 0, null, [], FigureKeys.Select(k => new StressFigure(k, null, 0)).ToArray(),
                 [], null, inputs, samples);
         }
 
@@ -170,7 +170,8 @@ public static class StressStudy
 
     private static StressFigure Figure(string key, IEnumerable<double?> values)
     {
-        var present = values.Where(v => v is not null && double.IsFinite(v.Value)).Select(v => v!.Value).ToArray();
-        return new StressFigure(key, present.Length == 0 ? null : Percentiles.Summarize(present));
+        var all = values.ToArray();
+        var present = all.Where(v => v is not null && double.IsFinite(v.Value)).Select(v => v!.Value).ToArray();
+        return new StressFigure(key, present.Length == 0 ? null : Percentiles.Summarize(present), all.Length - present.Length);
     }
 }
