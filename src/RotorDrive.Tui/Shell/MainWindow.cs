@@ -401,7 +401,7 @@ public sealed class MainWindow : Window
     {
         var session = _context.Session;
         string mark = session.IsDirty ? " * unsaved" : "";
-        string problems = session.Problems.Count + session.UntypedFields.Count is var n and > 0 ? $" | ! {n} problem(s)" : "";
+        string problems = session.Problems.Count + session.UntypedFields.Count + session.FailedBurstChecks.Count is var n and > 0 ? $" | ! {n} problem(s)" : "";
         string work = _context.Work.Current is { } job ? $" | {job.Name}..." : "";
         string failure = _context.Work.LastFailure is { } f ? $" | ! {f}" : "";
         string notice = _notice.Length > 0 ? " | " + _notice : "";
