@@ -4,6 +4,7 @@ using Terminal.Gui.Input;
 using Terminal.Gui.ViewBase;
 using Terminal.Gui.Views;
 using RotorDrive.Tui.Sheets;
+using RotorDrive.Tui.Text;
 
 namespace RotorDrive.Tui.Shell;
 
@@ -83,6 +84,12 @@ public sealed class MainWindow : Window
             help.ListSheets(_sheets.Select((s, i) => (_sheetKeys[i], s.SheetName)).ToList());
         }
         _context.App.Keyboard.KeyDown += OnApplicationKeyDown;
+        // Paths, file names and column names hold underscores: show them as written, never as hotkey marks.
+        LiteralText.Apply(this);
+        foreach (var sheet in _sheets)
+        {
+            LiteralText.Apply(sheet);
+        }
         ShowSheet(0, focusSheet: false);
     }
 

@@ -135,4 +135,13 @@ public class NothingLostTests
         bench.Window.ShowSheet("Stress");
         Assert.Contains(sheet.ResultLines, l => l.Contains("rotordrive stress /lab/demo-rig.json --seed 1 --sample", StringComparison.Ordinal));
     }
+
+    [Fact]
+    public void Underscores_InPathsAndFileNames_AreShownAsWritten()
+    {
+        using var bench = new Bench(120, 40);
+        bench.Prompts.Answers.Enqueue("/lab/my_rig_copy.json");
+        bench.Press(Key.F12);
+        Assert.Contains("Saved as /lab/my_rig_copy.json", bench.Screen);
+    }
 }
