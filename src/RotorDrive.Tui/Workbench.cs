@@ -60,10 +60,16 @@ public static class Workbench
     /// <summary>Runs the workbench in the real terminal until the user quits.</summary>
     /// <param name="rigPath">The rig file to open.</param>
     /// <param name="error">Where a rig that cannot be opened is reported (before the screen is taken over).</param>
+    /// <param name="ascii">True to draw charts and the sketch with plain characters and no colour (<see cref="Charts.ChartStyle.Plain"/>).</param>
     /// <returns>0 after a normal quit; 2 when the rig file cannot be opened.</returns>
-    public static int Run(string rigPath, TextWriter error)
+    public static int Run(string rigPath, TextWriter error, bool ascii = false)
     {
         ArgumentNullException.ThrowIfNull(error);
+        if (ascii)
+        {
+            // The one switch the charts and the station sketch read (ChartStyle.FromEnvironment), for this process only.
+            Environment.SetEnvironmentVariable("ROTORDRIVE_ASCII", "1");
+        }
         var files = new DiskFiles();
         if (CheckOpens(rigPath) is { } failure)
         {

@@ -14,14 +14,19 @@ public static class UiCommand
             Description = "The rig file to open (default: catalogs/demo-rig.json, from the current folder or the program's repository).",
             Arity = ArgumentArity.ZeroOrOne,
         };
+        var ascii = new Option<bool>("--ascii")
+        {
+            Description = "Draw charts and the station sketch with plain characters and no colour (for terminals without Unicode or colour; NO_COLOR=1 drops colour only).",
+        };
         var command = new Command("ui", "Open the terminal workbench: edit the rig, browse the catalogs, run the analyses and see their charts.");
         command.Arguments.Add(rig);
-        command.SetAction(parse => Run(parse.GetValue(rig), parse.InvocationConfiguration.Error));
+        command.Options.Add(ascii);
+        command.SetAction(parse => Run(parse.GetValue(rig), parse.InvocationConfiguration.Error, parse.GetValue(ascii)));
         return command;
     }
 
     /// <summary>Runs the workbench; returns 0 after a normal quit, 2 when the rig cannot be found or opened.</summary>
-    public static int Run(string? rigPath, TextWriter error)
+    public static int Run(string? rigPath, TextWriter error, bool ascii = false)
     {
         string? path = rigPath ?? Workbench.FindDemoRig(Directory.GetCurrentDirectory(), AppContext.BaseDirectory);
         if (path is null)
@@ -41,6 +46,6 @@ public static class UiCommand
             error.WriteLine("rotordrive ui: needs an interactive terminal (standard input and output must not be redirected).");
             return ExitCodes.BadInput;
         }
-        return Workbench.Run(path, error);
+        return Workbench.Run(path, error, ascii);
     }
 }

@@ -1,3 +1,4 @@
+using RotorDrive.Core.Magnetics;
 using RotorDrive.Core.Safety;
 
 namespace RotorDrive.Core.Craft;
@@ -10,8 +11,8 @@ public static class HoverSafety
 {
     /// <summary>The note shown with every retainer check.</summary>
     public const string NdFeBNote =
-        "Sintered NdFeB is brittle and weak in tension (tensile strength of the order of 80 MPa, from memory; see the "
-        + "magnet maker's data): the magnets must not carry their own centrifugal load, the retaining ring must.";
+        "Sintered NdFeB is brittle and weak in tension (see the magnet maker's data for its tensile strength): the magnets "
+        + "must not carry their own centrifugal load, the retaining ring must.";
 
     /// <summary>Assesses every station's rotor at its hover speed and every distinct rotor design at its rated speed,
     /// and chooses the cautions.</summary>
@@ -31,9 +32,18 @@ public static class HoverSafety
                 atHover.Add(RotorSafety.Assess(model.Stations[s.Index].Rotor, s.SpeedRadPerS, safety));
             }
         }
-        var atMax = model.Stations.Select(s => s.Rotor).Distinct().Select(r => RotorSafety.AtRatedSpeed(r, safety)).ToList();
+        var atMax = AtRatedSpeed(model.Stations.Select(s => s.Rotor), safety);
         double plate = model.Stations.Max(s => s.Conditions.PlateTempC);
         var cautions = Cautions.For(new CautionFindings(true, [.. atHover, .. atMax], plate), thresholds);
         return new HoverSafetyReport(atHover, atMax, NdFeBNote, cautions);
     }
+
+    /// <summary>Each distinct rotor design at its rated speed, in the order first met: the burst check a rig gets before
+    /// any hover is solved (the rig editor) and the one <see cref="Assess"/> reports as
+    /// <see cref="HoverSafetyReport.AtMaxRpm"/>.</summary>
+    /// <param name="rotors">The rig's rotors, one per station (repeats are assessed once).</param>
+    /// <param name="options">Material assumptions; null for <see cref="RotorSafetyOptions.Default"/>.</param>
+    /// <exception cref="ArgumentNullException"><paramref name="rotors"/> is null.</exception>
+    public static IReadOnlyList<RotorSafetyResult> AtRatedSpeed(IEnumerable<RotorDesign> rotors, RotorSafetyOptions? options = null)
+        => Preconditions.NotNull(rotors, nameof(rotors)).Distinct().Select(r => RotorSafety.AtRatedSpeed(r, options)).ToList();
 }

@@ -23,5 +23,5 @@ public sealed record HoverSafetyReport(
     public double? MinMaxRpmMargin => AtMaxRpm.Min(r => r.MarginFraction);
 
     /// <summary>Whether a retainer is over its allowable stress at hover speed or a rotor runs above its rated speed.</summary>
-    public bool Fails => AtHover.Any(r => r.AboveRatedSpeed || r.MarginFraction is < 0);
+    public bool Fails => AtHover.Any(r => r.Passes == false);
 }

@@ -31,4 +31,9 @@ public sealed record RotorSafetyResult(
 {
     /// <summary>Whether the assessed speed is above the rotor's maximum rated speed.</summary>
     public bool AboveRatedSpeed => SpeedRadPerS > RatedSpeedRadPerS;
+
+    /// <summary>The burst verdict every interface shows: false when the speed is above the rotor's rated speed or the ring
+    /// is over its allowable (margin below 0), true when the margin was assessed and is 0 or more, null when it could not
+    /// be assessed (see <see cref="Assessment"/>).</summary>
+    public bool? Passes => AboveRatedSpeed || Margin is < 0 ? false : Margin is null ? null : true;
 }

@@ -50,6 +50,9 @@ public sealed class ChartPanel : View
     /// <summary>The chart.</summary>
     public ChartView Chart => _chart;
 
+    /// <summary>The readout cursor's exact values on the chart ("" when the cursor is not in use).</summary>
+    public string CursorReadout => _chart.CursorReadout;
+
     /// <summary>The readout text (a few lines above the chart).</summary>
     public string Readout
     {

@@ -1,34 +1,55 @@
-using System.Drawing;
 using System.Globalization;
 using System.Text;
+using Terminal.Gui.Drawing;
+using Terminal.Gui.Input;
 using Terminal.Gui.ViewBase;
-using Terminal.Gui.Views;
+using Attribute = Terminal.Gui.Drawing.Attribute;
+using Color = Terminal.Gui.Drawing.Color;
 
 namespace RotorDrive.Tui.Charts;
 
-/// <summary>A chart in the terminal: curves drawn as lines of their own character (GraphView path annotations), marks
-/// as scatter points, axes scaled to the data, and a legend line in words under it.</summary>
+/// <summary>A chart in the terminal, drawn by <see cref="ChartRenderer"/>: curves in braille dots (or plain characters
+/// with <see cref="ChartStyle.Plain"/>), each series in its own colour and named in the legend on the last row, axes
+/// labelled at both ends. With the focus, Left/Right (Home/End) move a readout cursor along a series and Up/Down choose
+/// the series; the top row then prints the exact values there.</summary>
 public sealed class ChartView : View
 {
-    private readonly GraphView _graph;
-    private readonly Label _legend;
+    // Series colours, chosen to stay apart on dark and light backgrounds; the glyph in the legend tells them apart too.
+    private static readonly ColorName16[] Palette =
+    [
+        ColorName16.BrightGreen, ColorName16.BrightCyan, ColorName16.BrightYellow, ColorName16.BrightMagenta,
+        ColorName16.BrightRed, ColorName16.BrightBlue, ColorName16.Green, ColorName16.Cyan, ColorName16.Yellow, ColorName16.Magenta,
+    ];
+
     private ChartData? _data;
     private string _caption = "";
+    private (int Line, int Point)? _cursor;
+    private ChartPicture? _picture;
 
-    /// <summary>Creates an empty chart.</summary>
+    /// <summary>Creates an empty chart in the style the environment asks for (<see cref="ChartStyle.FromEnvironment"/>).</summary>
     public ChartView()
     {
-        _graph = new GraphView { X = 0, Y = 0, Width = Dim.Fill(), Height = Dim.Fill(1) };
-        _legend = new Label { X = 0, Y = Pos.AnchorEnd(1), Width = Dim.Fill(), Height = 1, Text = "" };
-        Add(_graph, _legend);
-        FrameChanged += (_, _) => Layout(_data);
+        CanFocus = true;
+        Style = ChartStyle.FromEnvironment();
     }
 
+    /// <summary>Braille or plain characters, colour or not.</summary>
+    public ChartStyle Style { get; set; }
+
     /// <summary>The legend text.</summary>
-    public string LegendText => _legend.Text;
+    public string LegendText => _data is null ? "" : (_caption.Length > 0 ? _caption + " " : "") + Legend(_data);
 
     /// <summary>The chart on show.</summary>
     public ChartData? Chart => _data;
+
+    /// <summary>The readout cursor (a line index and a point index), or null before a cursor key was pressed.</summary>
+    public (int Line, int Point)? ReadoutCursor => _cursor;
+
+    /// <summary>The exact values at the cursor ("" without a cursor).</summary>
+    public string CursorReadout => _data is not null && _cursor is { } c ? ChartRenderer.Readout(_data, c) : "";
+
+    /// <summary>The picture as last drawn (for tests), or one drawn now at the view's size.</summary>
+    public ChartPicture? Picture => _data is null ? null : _picture ?? Render();
 
     /// <summary>Shows new data.</summary>
     public void Show(ChartData? data) => Show(data, "");
@@ -36,9 +57,15 @@ public sealed class ChartView : View
     /// <summary>Shows new data with a caption at the start of the legend line (e.g. the page number).</summary>
     public void Show(ChartData? data, string caption)
     {
+        // The cursor stays on the same series and point index when the new data still has them (a recompute).
+        if (_cursor is { } c && (data is null || ChartRenderer.CursorPoint(data, c) is null))
+        {
+            _cursor = null;
+        }
         _data = data;
         _caption = caption ?? "";
-        Layout(data);
+        _picture = null;
+        SetNeedsDraw();
     }
 
     /// <summary>The legend: each line's character and name.</summary>
@@ -72,88 +99,88 @@ public sealed class ChartView : View
         return sb.ToString();
     }
 
-    private void Layout(ChartData? data)
+    /// <summary>Moves the readout cursor: <paramref name="points"/> along the series, <paramref name="lines"/> to another
+    /// series with points (keeping the nearest x). Starts on the first series' first point.</summary>
+    public void MoveCursor(int points, int lines)
     {
-        _graph.Reset();
-        _graph.Series.Clear();
-        _graph.Annotations.Clear();
-        if (data is null)
+        if (_data is null)
         {
-            _legend.Text = "";
-            SetNeedsDraw();
             return;
         }
-        _legend.Text = _caption.Length > 0 ? _caption + " " + Legend(data) : Legend(data);
-        var finite = data.Lines.SelectMany(l => l.Points).Where(p => double.IsFinite(p.X) && double.IsFinite(p.Y)).ToList();
-        if (finite.Count == 0)
+        var withPoints = Enumerable.Range(0, _data.Lines.Count).Where(i => _data.Lines[i].Points.Any(ChartRenderer.Finite)).ToList();
+        if (withPoints.Count == 0)
         {
-            SetNeedsDraw();
             return;
         }
-        double xMin = finite.Min(p => p.X), xMax = finite.Max(p => p.X);
-        double yMin = finite.Min(p => p.Y), yMax = finite.Max(p => p.Y);
-        if (xMax <= xMin)
+        if (_cursor is not { } c || ChartRenderer.CursorPoint(_data, c) is not { } at)
         {
-            xMax = xMin + 1;
-        }
-        if (data.YFromZero)
-        {
-            yMin = Math.Min(0, yMin);
+            _cursor = (withPoints[0], 0);
         }
         else
         {
-            // Fitted to the data with a margin, so a sag of a few per cent fills the chart instead of a flat line at its top.
-            double pad = Math.Max((yMax - yMin) * 0.15, Math.Max(Math.Abs(yMax), 1e-9) * 1e-3);
-            yMin -= pad;
-            yMax += pad;
-        }
-        if (yMax <= yMin)
-        {
-            yMax = yMin + 1;
-        }
-        yMax += (yMax - yMin) * 0.05;
-
-        const int marginLeft = 8;
-        const int marginBottom = 2;
-        // Three columns stay free on the right so the last tick's label is not cut off.
-        int width = Math.Max(10, (_graph.Viewport.Width > 0 ? _graph.Viewport.Width : 60) - marginLeft - 4);
-        int height = Math.Max(4, (_graph.Viewport.Height > 0 ? _graph.Viewport.Height : 14) - marginBottom - 1);
-        _graph.MarginLeft = marginLeft;
-        _graph.MarginBottom = marginBottom;
-        _graph.CellSize = new PointF((float)((xMax - xMin) / width), (float)((yMax - yMin) / height));
-        _graph.ScrollOffset = new PointF((float)xMin, (float)yMin);
-        double xStep = NiceStep((xMax - xMin) / width * 10);
-        double yStep = NiceStep((yMax - yMin) / height * 2);
-        _graph.AxisX.Increment = (float)xStep;
-        _graph.AxisX.ShowLabelsEvery = 1;
-        _graph.AxisX.Minimum = (float)(Math.Ceiling(xMin / xStep - 1e-9) * xStep);
-        _graph.AxisX.Text = data.XLabel;
-        _graph.AxisX.LabelGetter = v => Short(v.Value);
-        _graph.AxisY.Increment = (float)yStep;
-        _graph.AxisY.ShowLabelsEvery = 1;
-        _graph.AxisY.Minimum = (float)(Math.Ceiling(yMin / yStep - 1e-9) * yStep);
-        _graph.AxisY.Text = data.YLabel;
-        _graph.AxisY.LabelGetter = v => Short(v.Value);
-
-        foreach (var line in data.Lines)
-        {
-            var points = line.Points.Where(p => double.IsFinite(p.X) && double.IsFinite(p.Y)).Select(p => new PointF((float)p.X, (float)p.Y)).ToList();
-            if (points.Count == 0)
+            int line = c.Line, point = c.Point;
+            if (lines != 0)
             {
-                continue;
+                int k = withPoints.IndexOf(line);
+                line = withPoints[((k < 0 ? 0 : k) + lines % withPoints.Count + withPoints.Count) % withPoints.Count];
+                var next = _data.Lines[line].Points.Where(ChartRenderer.Finite).ToList();
+                point = next.Select((p, i) => (Distance: Math.Abs(p.X - at.X), i)).MinBy(t => t.Distance).i;
             }
-            if (line.Joined && points.Count > 1)
-            {
-                var path = new PathAnnotation { LineRune = new Rune(line.Glyph), BeforeSeries = true };
-                path.Points.AddRange(points);
-                _graph.Annotations.Add(path);
-            }
-            else
-            {
-                _graph.Series.Add(new ScatterSeries { Points = points, Fill = new GraphCellToRender(new Rune(line.Glyph)) });
-            }
+            int count = _data.Lines[line].Points.Count(ChartRenderer.Finite);
+            _cursor = (line, Math.Clamp(point + points, 0, count - 1));
         }
+        _picture = null;
         SetNeedsDraw();
+    }
+
+    /// <inheritdoc/>
+    protected override bool OnKeyDown(Key key)
+    {
+        if (key == Key.CursorLeft || key == Key.CursorRight)
+        {
+            MoveCursor(key == Key.CursorLeft ? -1 : 1, 0);
+            return true;
+        }
+        if (key == Key.CursorLeft.WithShift || key == Key.CursorRight.WithShift)
+        {
+            MoveCursor(key == Key.CursorLeft.WithShift ? -10 : 10, 0);
+            return true;
+        }
+        if (key == Key.Home || key == Key.End)
+        {
+            MoveCursor(key == Key.Home ? -100_000 : 100_000, 0);
+            return true;
+        }
+        if ((key == Key.CursorUp || key == Key.CursorDown) && _cursor is not null)
+        {
+            MoveCursor(0, key == Key.CursorUp ? -1 : 1);
+            return true;
+        }
+        return base.OnKeyDown(key);
+    }
+
+    /// <inheritdoc/>
+    protected override bool OnDrawingContent(DrawContext? context)
+    {
+        var normal = GetAttributeForRole(VisualRole.Normal);
+        SetAttribute(normal);
+        ClearViewport();
+        if (_data is null)
+        {
+            return true;
+        }
+        var picture = _picture = Render();
+        for (int r = 0; r < picture.Height; r++)
+        {
+            for (int c = 0; c < picture.Width; c++)
+            {
+                int owner = picture.OwnerAt(c, r);
+                SetAttribute(AttributeFor(owner, normal));
+                AddRune(c, r, new Rune(picture.CharAt(c, r)));
+            }
+        }
+        SetAttribute(normal);
+        return true;
     }
 
     /// <summary>The round tick step (1, 2 or 5 times a power of ten) nearest above a wanted step, so axis labels read 0, 2,
@@ -181,5 +208,29 @@ public sealed class ChartView : View
             : a == 0 ? "0"
             : v.ToString("0.###", CultureInfo.InvariantCulture);
         return s;
+    }
+
+    private ChartPicture Render()
+    {
+        int width = Viewport.Width > 0 ? Viewport.Width : 60;
+        int height = Viewport.Height > 0 ? Viewport.Height : 16;
+        return ChartRenderer.Render(_data!, width, height, Style, _cursor, _caption);
+    }
+
+    private Attribute AttributeFor(int owner, Attribute normal)
+    {
+        if (!Style.Colour || owner == ChartPicture.Blank || owner == ChartPicture.Text)
+        {
+            return normal;
+        }
+        if (owner == ChartPicture.Axis)
+        {
+            return new Attribute(new Color(ColorName16.Gray), normal.Background);
+        }
+        if (owner == ChartPicture.Cursor)
+        {
+            return new Attribute(new Color(ColorName16.White), new Color(ColorName16.Red));
+        }
+        return new Attribute(new Color(Palette[owner % Palette.Length]), normal.Background);
     }
 }

@@ -2,6 +2,7 @@ using System.Collections.ObjectModel;
 using Terminal.Gui.App;
 using Terminal.Gui.ViewBase;
 using Terminal.Gui.Views;
+using RotorDrive.Tui.Text;
 
 namespace RotorDrive.Tui.Services;
 
@@ -20,7 +21,10 @@ public sealed class TerminalPrompts : IWorkbenchPrompts
     public int? Ask(string title, string message, IReadOnlyList<string> answers)
     {
         using var dialog = new Dialog { Title = title, Width = Dim.Percent(80) };
-        dialog.Add(new Label { X = 1, Y = 1, Width = Dim.Fill(1), Height = Dim.Auto(), Text = message });
+        var text = new Label { X = 1, Y = 1, Width = Dim.Fill(1), Height = Dim.Auto(), Text = message };
+        // Messages name files: underscores in them are not hotkey marks.
+        LiteralText.Apply(text);
+        dialog.Add(text);
         // The first answer is the safe one (Cancel): added last, it is the dialog's default and sits at the right.
         // The answer is taken from the button actually pressed; closing the dialog any other way answers nothing.
         int? chosen = null;

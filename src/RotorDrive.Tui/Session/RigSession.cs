@@ -1,5 +1,6 @@
 using RotorDrive.Core;
 using RotorDrive.Core.Craft;
+using RotorDrive.Core.Safety;
 using RotorDrive.Core.Studies.Stress;
 using RotorDrive.Files;
 using RotorDrive.Files.Catalogs;
@@ -19,6 +20,8 @@ public sealed class RigSession
     private readonly HashSet<string> _edited = new(StringComparer.Ordinal);
     private RigSourceMap _locations = RigSourceMap.Empty;
     private IReadOnlyList<InputProblem> _readProblems = [];
+    private Rig? _burstFor;
+    private IReadOnlyList<RotorSafetyResult> _burst = [];
 
     /// <summary>Creates an empty session (no rig open).</summary>
     public RigSession(IWorkbenchFiles files)
@@ -47,6 +50,28 @@ public sealed class RigSession
 
     /// <summary>Every problem of the rig document and its catalogs.</summary>
     public IReadOnlyList<InputProblem> Problems { get; private set; } = [];
+
+    /// <summary>Core's burst check of each distinct rotor of the valid rig at its rated speed (<see cref="HoverSafety.AtRatedSpeed"/>,
+    /// the same list the hover review reports), empty when the rig is invalid.</summary>
+    public IReadOnlyList<RotorSafetyResult> BurstChecks
+    {
+        get
+        {
+            if (Rig is not { } rig)
+            {
+                return [];
+            }
+            if (!ReferenceEquals(_burstFor, rig))
+            {
+                _burst = HoverSafety.AtRatedSpeed(rig.Stations.Select(s => s.Rotor));
+                _burstFor = rig;
+            }
+            return _burst;
+        }
+    }
+
+    /// <summary>The burst checks that fail (counted with the problems in the status line).</summary>
+    public IReadOnlyList<RotorSafetyResult> FailedBurstChecks => BurstChecks.Where(b => b.Passes == false).ToList();
 
     /// <summary>True when the document differs from the file, or a field holds typed text not yet valid.</summary>
     public bool IsDirty { get; private set; }

@@ -186,7 +186,7 @@ public sealed class HoverYawSheet : Sheet
             foreach (var s in h.Stations)
             {
                 sb.AppendLine(Row((s.Index + 1).ToString(CultureInfo.InvariantCulture), s.Spin == SpinDirection.Clockwise ? "cw" : "ccw", F(s.SpeedRpm, 0),
-                    F(s.Duty, 3), F(s.MotorCurrentA, 1), F(s.BusCurrentA, 1), F(s.LiftSpecificPowerWPerN, 2), StationState(s)));
+                    F(s.Duty, 3), F(s.MotorCurrentA, 1), F(s.BusCurrentA, 1), F(s.LiftSpecificPowerWPerN, 2), StationState(s, review.Findings)));
             }
             sb.AppendLine();
             sb.AppendLine("MARGINS TO LIMITS, %");
@@ -242,19 +242,21 @@ public sealed class HoverYawSheet : Sheet
         }
         sb.AppendLine();
         var safety = review.Safety;
-        var worst = safety.AtHover.Where(x => x.HoopStressPa is not null).OrderByDescending(x => x.HoopStressPa).FirstOrDefault();
-        var worstMax = safety.AtMaxRpm.Where(x => x.HoopStressPa is not null).OrderByDescending(x => x.HoopStressPa).FirstOrDefault();
-        sb.AppendLine("RETAINING RING");
+        sb.AppendLine("RETAINING RING (burst checks)");
         if (safety.AtHover.Count > 0)
         {
             sb.AppendLine($"  rim speed {F(safety.AtHover.Max(x => x.RimSpeedMPerS), 1)} m/s at hover");
+            // The station closest to failing: a failed check first, then the smallest margin; one not assessed last.
+            var worst = safety.AtHover.OrderBy(x => x.Passes == false ? 0 : x.Margin is null ? 2 : 1).ThenBy(x => x.Margin ?? double.MaxValue).First();
+            sb.AppendLine("  " + BurstText.Line(worst, "hover"));
         }
-        sb.AppendLine(worst is null
-            ? "  hoop stress not assessed (the rotor row gives no retainer thickness)"
-            : $"  hoop stress {F(worst.HoopStressPa!.Value / 1e6, 1)} MPa at hover, allowed {F(worst.AllowablePa / 1e6, 1)} MPa, margin {(worst.MarginFraction is { } wm ? (wm < 0 ? Over : "") + Percent(wm) : "not assessed")}");
-        if (worstMax is not null)
+        else
         {
-            sb.AppendLine($"  at rated {F(Units.RadPerSToRpm(worstMax.SpeedRadPerS), 0)} rpm: {F(worstMax.HoopStressPa!.Value / 1e6, 1)} MPa, margin {(worstMax.MarginFraction is { } mm ? (mm < 0 ? Over : "") + Percent(mm) : "not assessed")}");
+            sb.AppendLine("  no hover speed, so no check at hover");
+        }
+        foreach (var rated in safety.AtMaxRpm)
+        {
+            sb.AppendLine("  " + BurstText.Line(rated, "rated"));
         }
         sb.AppendLine("  " + safety.MagnetNote);
         sb.AppendLine();
@@ -262,10 +264,12 @@ public sealed class HoverYawSheet : Sheet
         return sb.ToString();
     }
 
-    /// <summary>A station's state in the table: "ok", or marked with what is wrong ("!! unstable, 2 over").</summary>
-    internal static string StationState(HoverStation s)
+    /// <summary>A station's state in the table: "ok" only when Core's review finds nothing at the station, else marked with
+    /// what is wrong ("!! unstable, 2 over").</summary>
+    internal static string StationState(HoverStation s, IReadOnlyList<HoverFinding> findings)
     {
-        int over = s.Margins.Count(m => m.Exceeded);
+        // Core's findings for this station are the verdict; the exceeded margins are how many there are.
+        int over = Math.Max(s.Margins.Count(m => m.Exceeded), findings.Count(f => f.Station == s.Index));
         var wrong = new List<string>();
         if (!s.Stable)
         {

@@ -25,6 +25,10 @@ public abstract class Sheet : View
     /// <summary>The shared context.</summary>
     protected WorkbenchContext Context { get; }
 
+    /// <summary>What quitting would lose, in words ("the stress run's 50000 samples"), or null when the sheet holds no result
+    /// of a long run and none is running.</summary>
+    public virtual string? LongRunResults => null;
+
     /// <summary>Called (on the UI thread) when the sheet is shown and whenever the rig changes while it is shown.</summary>
     public abstract void Refresh();
 

@@ -10,6 +10,7 @@ using RotorDrive.Core.Studies.Ranking;
 using RotorDrive.Files.Rigs;
 using RotorDrive.Tui.Shell;
 using RotorDrive.Tui.Text;
+using RotorDrive.Tui.Work;
 
 namespace RotorDrive.Tui.Sheets;
 
@@ -298,7 +299,8 @@ public sealed class ShortlistSheet : Sheet
     private void Run(RankKey key, Rig rig, PartsCatalog catalog, bool immediately)
     {
         _requested = key;
-        var options = new RankOptions(Objective: key.Objective, Top: TopCount, MaxPackCount: key.MaxPacks);
+        // One processor stays free for the UI thread during the ranking; the ranking does not depend on the threads.
+        var options = new RankOptions(Objective: key.Objective, Top: TopCount, MaxPackCount: key.MaxPacks, MaxDegreeOfParallelism: BackgroundWork.WorkerThreads);
         Context.Work.Request(RankJob, (token, progress) =>
         {
             var study = RankStudy.Create(rig, catalog, options);
@@ -318,6 +320,9 @@ public sealed class ShortlistSheet : Sheet
     }
 
     private void OnWorkChanged(object? sender, EventArgs e) => ShowState();
+
+    /// <inheritdoc/>
+    public override string? LongRunResults => Context.Work.IsActive(RankJob) ? "the ranking in progress" : null;
 
     private void ShowObjective() => _objectiveLabel.Text = $"rank by {_objective.ToString().ToLowerInvariant()} (F7)";
 

@@ -17,7 +17,7 @@ namespace RotorDrive.Tui.Sheets;
 public sealed class StationsSheet : Sheet
 {
     private const int MinSketchRows = 8;
-    private const int RowsBelowSketch = 12;
+    private const int RowsBelowSketch = 13;
     private readonly Label _sketch;
     private readonly Label _legend;
     private readonly ListView _stations;
@@ -65,9 +65,9 @@ public sealed class StationsSheet : Sheet
             _fields.Add(binding);
         }
         _detail = new Label { X = 0, Y = Pos.Bottom(_sketch) + 7, Width = Dim.Fill(), Height = 1, Text = "" };
-        _safety = new Label { X = 0, Y = Pos.Bottom(_sketch) + 8, Width = Dim.Fill(), Height = 1, Text = "" };
+        _safety = new Label { X = 0, Y = Pos.Bottom(_sketch) + 8, Width = Dim.Fill(), Height = 2, Text = "" };
         Add(_safety);
-        _problems = new ListView { X = 0, Y = Pos.Bottom(_sketch) + 9, Width = Dim.Fill(), Height = Dim.Fill() };
+        _problems = new ListView { X = 0, Y = Pos.Bottom(_sketch) + 10, Width = Dim.Fill(), Height = Dim.Fill() };
         _problems.SetSource(_problemItems);
         Add(_detail, _problems);
     }
@@ -80,6 +80,12 @@ public sealed class StationsSheet : Sheet
 
     /// <summary>The sketch as drawn.</summary>
     internal string SketchText => _sketch.Text;
+
+    /// <summary>The selected station's burst check as shown (wrapped to the sheet's width).</summary>
+    internal string SafetyText => _safety.Text;
+
+    /// <summary>The problem list as shown.</summary>
+    internal IReadOnlyList<string> ProblemLines => _problemItems;
 
     /// <summary>Selects a station by index (0-based).</summary>
     internal void SelectStation(int index)
@@ -143,8 +149,11 @@ public sealed class StationsSheet : Sheet
             f.Field.Enabled = docStations.Count > 0;
             f.Refresh();
         }
+        // One list of what is wrong: typed text, input problems and Core's failed burst checks, so "no problems" never
+        // sits beside a failed check.
         var problems = session.UntypedFields.Select(u => $"! {u.Key}: {u.Value}")
             .Concat(session.Problems.Select(p => "! " + p.ToString()))
+            .Concat(session.FailedBurstChecks.Select(b => BurstText.Line(b, "rated")))
             .DefaultIfEmpty("No problems in the rig or its catalogs.")
             .ToList();
         _problemItems.Clear();
@@ -156,22 +165,10 @@ public sealed class StationsSheet : Sheet
         {
             ShowDetail(focused);
         }
-        _safety.Text = rig is not null && _selected < rig.Stations.Count ? SafetyLine(rig.Stations[_selected].Rotor) : "";
-    }
-
-    /// <summary>The rotor's burst check at its rated speed, from Core's <see cref="RotorSafety"/>, marked in text.</summary>
-    internal static string SafetyLine(RotorDesign rotor)
-    {
-        var r = RotorSafety.AtRatedSpeed(rotor);
-        string at = $"burst check {rotor.Id} at {Units.RadPerSToRpm(r.SpeedRadPerS):F0} rpm";
-        string rim = $"rim {r.RimSpeedMPerS:F0} m/s";
-        return r.Assessment switch
-        {
-            RetainerAssessment.Assessed => (r.MarginFraction!.Value < 0 ? "FAIL " : "ok ") + $"{at}: ring {r.HoopStressPa!.Value / 1e6:F0}/{r.AllowablePa!.Value / 1e6:F0} MPa, "
-                + $"margin {r.MarginFraction.Value:P0}, {rim}",
-            RetainerAssessment.NoAllowableStress => $"! {at}: ring {r.HoopStressPa!.Value / 1e6:F0} MPa, no allowable in the rotor row, {rim}",
-            _ => $"! {at}: ring not assessed (no retainer thickness in the rotor row), {rim}",
-        };
+        _safety.Text = rig is not null && _selected < rig.Stations.Count
+            && session.BurstChecks.FirstOrDefault(b => b.RotorId == rig.Stations[_selected].Rotor.Id) is { } check
+            ? string.Join("\n", Wrap.Lines(BurstText.Line(check, "rated"), Math.Max(20, _safety.Frame.Width > 0 ? _safety.Frame.Width : 60)))
+            : "";
     }
 
     /// <inheritdoc/>

@@ -10,6 +10,7 @@ using RotorDrive.Core.Studies.Stress;
 using RotorDrive.Tui.Session;
 using RotorDrive.Tui.Shell;
 using RotorDrive.Tui.Text;
+using RotorDrive.Tui.Work;
 
 namespace RotorDrive.Tui.Sheets;
 
@@ -45,12 +46,13 @@ public sealed class StressSheet : Sheet
     private readonly Label _hint;
     private readonly FieldList _tolerances;
     private readonly ListView _results;
-    private readonly ObservableCollection<string> _resultItems = [];
+    private ObservableCollection<string> _resultItems = [];
     private int _figure;
     private int _done;
     private int _requestedSamples;
     private bool _requested;
     private StressRun? _shown;
+    private bool _reproducibleShown;
 
     /// <summary>Creates the sheet.</summary>
     public StressSheet(WorkbenchContext context)
@@ -114,10 +116,24 @@ public sealed class StressSheet : Sheet
     internal string HistogramFigure => StressStudy.FigureKeys[_figure];
 
     /// <inheritdoc/>
+    public override string? LongRunResults
+        => Context.Work.IsActive(StressJob) ? $"the stress run in progress ({SamplesDone} of {_requestedSamples} samples done)"
+            : _shown is { Result.Samples: >= LongRunSamples } shown ? $"the stress results ({shown.Result.Samples} samples)"
+            : null;
+
+    /// <summary>Samples from which a finished stress run counts as a long run whose results quitting would lose.</summary>
+    public const int LongRunSamples = 1000;
+
+    /// <inheritdoc/>
     public override void Refresh()
     {
         _tolerances.Refresh();
         ShowHint();
+        if (_shown is { } shown && shown.Result.WorstSample is not null && Reproducible(shown) != _reproducibleShown)
+        {
+            // Saved or edited since the run: the line on reproducing the worst sample changes.
+            ShowResults();
+        }
         ShowState();
     }
 
@@ -165,7 +181,8 @@ public sealed class StressSheet : Sheet
             return;
         }
         var tolerances = session.Tolerances;
-        var options = new StressStudyOptions(settings.Samples, settings.Seed);
+        // One processor stays free for the UI thread (keys, drawing) during a long run; results do not depend on threads.
+        var options = new StressStudyOptions(settings.Samples, settings.Seed, BackgroundWork.WorkerThreads);
         _requested = true;
         _requestedSamples = settings.Samples;
         Volatile.Write(ref _done, 0);
@@ -235,6 +252,11 @@ public sealed class StressSheet : Sheet
         if (running)
         {
             int done = SamplesDone;
+            if (Context.Work.IsStopping(StressJob))
+            {
+                _state.Text = $"Stopping: summing up the {done} samples finished...";
+                return;
+            }
             _progress.Fraction = _requestedSamples > 0 ? (float)done / _requestedSamples : 0;
             _state.Text = done == 0 ? "Preparing the load tables... F8 stops" : $"Running: {done} of {_requestedSamples} samples... F8 stops";
             return;
@@ -252,11 +274,9 @@ public sealed class StressSheet : Sheet
 
     private void ShowResults()
     {
-        _resultItems.Clear();
-        foreach (string line in ResultText(Math.Max(40, _results.Viewport.Width > 0 ? _results.Viewport.Width : 60)))
-        {
-            _resultItems.Add(line);
-        }
+        // One new source per change: adding line by line to the bound collection re-measures the list per line.
+        _resultItems = new ObservableCollection<string>(ResultText(Math.Max(40, _results.Viewport.Width > 0 ? _results.Viewport.Width : 60)));
+        _results.SetSource(_resultItems);
         ShowState();
     }
 
@@ -315,13 +335,21 @@ public sealed class StressSheet : Sheet
         {
             var failed = StressCriteria.All.Where(c => !sample.Outcome.Passed(c)).Select(c => c.Key()).ToList();
             lines.Add("");
-            lines.Add($"Worst sample: {worst}, smallest margin {F(sample.Outcome.MinimumMarginFraction, 3)}, {(failed.Count == 0 ? "fails nothing" : "! fails " + string.Join(", ", failed))}");
-            lines.Add($"  rotordrive stress {Context.Session.RigPath ?? "RIG.json"} --seed {r.Seed} --sample {worst} shows it in full");
+            lines.Add($"Worst sample: {worst}, smallest margin {F(sample.Outcome.MinimumMargin, 3)}, {(failed.Count == 0 ? "fails nothing" : "! fails " + string.Join(", ", failed))}");
+            var session = Context.Session;
+            // The command reproduces the sample only from a file that holds the rig exactly as run.
+            _reproducibleShown = Reproducible(shown);
+            lines.Add(_reproducibleShown && session.RigPath is { } path
+                ? $"  rotordrive stress {path} --seed {r.Seed} --sample {worst} shows it in full"
+                : "  The rig as run is not the saved file: save the rig (F2) and run again (F5) for a command that shows this sample in full.");
         }
         lines.Add("");
         lines.Add("Estimates only: defer to the parts' ratings, local codes and licensed practice (see Help, cautions).");
         return lines;
     }
+
+    private bool Reproducible(StressRun shown)
+        => ReferenceEquals(shown.Rig, Context.Session.Rig) && !Context.Session.IsDirty && Context.Session.RigPath is not null;
 
     private static string CriterionLine(string key, ProportionInterval rate)
         => $"  {key,-13} {rate.Count,7} {Pct(rate.EstimateFraction),8}  {Pct(rate.LowerFraction)} - {Pct(rate.UpperFraction)}";

@@ -4,6 +4,7 @@ using Terminal.Gui.Input;
 using Terminal.Gui.ViewBase;
 using Terminal.Gui.Views;
 using RotorDrive.Tui.Sheets;
+using RotorDrive.Tui.Text;
 
 namespace RotorDrive.Tui.Shell;
 
@@ -23,6 +24,7 @@ public sealed class MainWindow : Window
     private string _notice = "";
     private int _current = -1;
     private bool _quitAnswered;
+    private string? _lastJob;
 
     /// <summary>Creates the window with its sheets (the window owns and disposes them).</summary>
     public MainWindow(WorkbenchContext context, IReadOnlyList<Sheet> sheets)
@@ -55,8 +57,23 @@ public sealed class MainWindow : Window
         _keys = new Label { X = 0, Y = Pos.AnchorEnd(1), Width = Dim.Fill(), Height = 1, Text = "" };
         Add(listFrame, _frame, _status, _progress, _keys);
 
-        _context.Session.Changed += (_, _) => RefreshAll();
-        _context.Work.StateChanged += (_, _) => UpdateStatus();
+        _context.Session.Changed += (_, _) =>
+        {
+            // A notice describes the state it was given in ("Not applied.", "Stopped."); an edit ends that state.
+            _notice = "";
+            RefreshAll();
+        };
+        _context.Work.StateChanged += (_, _) =>
+        {
+            string? running = _context.Work.Current?.Name;
+            if (running is not null && running != _lastJob)
+            {
+                // A new run ends what "Stopped." described.
+                _notice = "";
+            }
+            _lastJob = running;
+            UpdateStatus();
+        };
         _context.Notice += (_, message) =>
         {
             _notice = message;
@@ -67,6 +84,12 @@ public sealed class MainWindow : Window
             help.ListSheets(_sheets.Select((s, i) => (_sheetKeys[i], s.SheetName)).ToList());
         }
         _context.App.Keyboard.KeyDown += OnApplicationKeyDown;
+        // Paths, file names and column names hold underscores: show them as written, never as hotkey marks.
+        LiteralText.Apply(this);
+        foreach (var sheet in _sheets)
+        {
+            LiteralText.Apply(sheet);
+        }
         ShowSheet(0, focusSheet: false);
     }
 
@@ -134,7 +157,16 @@ public sealed class MainWindow : Window
         {
             return;
         }
-        if (_context.Session.WouldReplaceOtherFile(path))
+        if (_context.Session.RigPath is not null && _context.Files.Exists(path) && !_context.Session.WouldReplaceOtherFile(path))
+        {
+            int? answer = _context.Prompts.Ask("Save over the open file?", $"{path} is the rig file that is open. Save over it? (the old file is kept as .bak)", ["Cancel", "Save"]);
+            if (answer != 1)
+            {
+                Tell("Not saved.");
+                return;
+            }
+        }
+        else if (_context.Session.WouldReplaceOtherFile(path))
         {
             int? answer = _context.Prompts.Ask("Replace file?", $"{path} already exists. Replace it? (the old file is kept as .bak)", ["Cancel", "Replace"]);
             if (answer != 1)
@@ -164,10 +196,11 @@ public sealed class MainWindow : Window
         Tell(failure is null ? $"Opened {path}" : "! Cannot open: " + failure);
     }
 
-    /// <summary>Quits (F10, Ctrl+Q, Esc), asking first about unsaved edits; true when the window was asked to stop.</summary>
+    /// <summary>Quits (F10, Ctrl+Q), asking first about unsaved edits and about results of a long run that would be lost;
+    /// true when the window was asked to stop.</summary>
     public bool Quit()
     {
-        if (!_quitAnswered && !ResolveUnsaved("Quit"))
+        if (!_quitAnswered && (!ResolveLongRuns() || !ResolveUnsaved("Quit")))
         {
             return false;
         }
@@ -222,12 +255,18 @@ public sealed class MainWindow : Window
         }
         else if (key == Key.F8)
         {
+            bool any = _context.Work.Current is not null;
             _context.Work.Cancel();
-            Tell("Stopped.");
+            Tell(any ? "Stopped." : "Nothing is running.");
         }
-        else if (key == Key.F10 || key == Key.Q.WithCtrl || key == Key.Esc)
+        else if (key == Key.F10 || key == Key.Q.WithCtrl)
         {
             Quit();
+        }
+        else if (key == Key.Esc)
+        {
+            // Esc closes dialogs; in the window itself it never quits (a stray Esc must not lose a long run).
+            Tell("Esc does not quit: F10 or Ctrl+Q quits.");
         }
         else if (key == Key.PageDown.WithCtrl)
         {
@@ -292,6 +331,23 @@ public sealed class MainWindow : Window
         return index >= 0 ? index : null;
     }
 
+    /// <summary>Before quitting: when a sheet holds results of a long run (or one is running), asks. True to go ahead.</summary>
+    private bool ResolveLongRuns()
+    {
+        var runs = _sheets.Select(s => s.LongRunResults).OfType<string>().ToList();
+        if (runs.Count == 0)
+        {
+            return true;
+        }
+        int? answer = _context.Prompts.Ask("Quit", $"Quitting loses {string.Join(" and ", runs)}. Quit anyway?", ["Cancel", "Quit"]);
+        if (answer == 1)
+        {
+            return true;
+        }
+        Tell("Cancelled; nothing was lost.");
+        return false;
+    }
+
     /// <summary>Before a step that would drop unsaved edits: save, discard or cancel. True to go ahead.</summary>
     private bool ResolveUnsaved(string what)
     {
@@ -352,7 +408,7 @@ public sealed class MainWindow : Window
     {
         var session = _context.Session;
         string mark = session.IsDirty ? " * unsaved" : "";
-        string problems = session.Problems.Count + session.UntypedFields.Count is var n and > 0 ? $" | ! {n} problem(s)" : "";
+        string problems = session.Problems.Count + session.UntypedFields.Count + session.FailedBurstChecks.Count is var n and > 0 ? $" | ! {n} problem(s)" : "";
         string work = _context.Work.Current is { } job ? $" | {job.Name}..." : "";
         string failure = _context.Work.LastFailure is { } f ? $" | ! {f}" : "";
         string notice = _notice.Length > 0 ? " | " + _notice : "";

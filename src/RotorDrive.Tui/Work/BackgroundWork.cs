@@ -5,13 +5,25 @@ namespace RotorDrive.Tui.Work;
 /// <summary>Runs computations off the UI thread: each named job is debounced (a new request within the delay replaces
 /// the pending one), cancellable (a newer request or <see cref="Cancel"/> cancels the running one), reports progress,
 /// and hands its result back on the UI thread through the application's invoke mechanism.</summary>
+/// <remarks>Workers never call into the UI thread per item: progress is stored by the worker and read by one UI timer
+/// every <see cref="ProgressInterval"/> while a job runs, and a job's end is one invoke. Parallel studies started from
+/// the workbench use <see cref="WorkerThreads"/>, so one processor stays free for keys and drawing.</remarks>
 public sealed class BackgroundWork : IDisposable
 {
+    /// <summary>How often the UI thread reads the running jobs' progress (at least twice a second, as the issue asks).</summary>
+    public static TimeSpan ProgressInterval { get; } = TimeSpan.FromMilliseconds(250);
+
+    /// <summary>Threads a parallel study started from the workbench may use: one fewer than the processors (at least one),
+    /// so the UI thread keeps a processor to itself during a long run.</summary>
+    public static int WorkerThreads => Math.Max(1, Environment.ProcessorCount - 1);
+
     private readonly IApplication _app;
     private readonly TimeSpan _debounce;
     private readonly Dictionary<string, Job> _jobs = new(StringComparer.Ordinal);
     private readonly object _gate = new();
     private bool _disposed;
+    private object? _progressTimer;
+    private int _posts;
 
     /// <summary>Creates the runner for an application.</summary>
     /// <param name="app">The application whose UI thread receives results.</param>
@@ -47,6 +59,21 @@ public sealed class BackgroundWork : IDisposable
             return _jobs.TryGetValue(name, out var job) && (job.Running || job.Pending);
         }
     }
+
+    /// <summary>True while a job of this name was stopped (<see cref="Cancel"/>) but its worker has not returned yet (a
+    /// stress run aggregating the samples it finished).</summary>
+    /// <param name="name">The job's name.</param>
+    public bool IsStopping(string name)
+    {
+        lock (_gate)
+        {
+            return _jobs.TryGetValue(name, out var job) && job.Running && job.Token.IsCancellationRequested;
+        }
+    }
+
+    /// <summary>How many actions the workers have queued for the UI thread so far (one per finished job; tests check that
+    /// a long run does not queue one per item).</summary>
+    public int Posts => Volatile.Read(ref _posts);
 
     /// <summary>The last failure message, if the last job of any name threw; cleared when a job completes.</summary>
     public string? LastFailure { get; private set; }
@@ -96,8 +123,9 @@ public sealed class BackgroundWork : IDisposable
                 return;
             }
             job.Running = true;
+            StartProgressTimer();
             Raise();
-            var progress = new Progress(this, job);
+            var progress = new Progress(job);
             job.Task = Task.Run(() => work(job.Token, progress), job.Token).ContinueWith(t =>
             {
                 Post(() =>
@@ -185,6 +213,11 @@ public sealed class BackgroundWork : IDisposable
         // Disposed first: jobs cancelled by the disposal do not call back into views that are going away.
         _disposed = true;
         Cancel();
+        if (_progressTimer is not null)
+        {
+            _app.RemoveTimeout(_progressTimer);
+            _progressTimer = null;
+        }
         lock (_gate)
         {
             foreach (var job in _jobs.Values)
@@ -196,9 +229,45 @@ public sealed class BackgroundWork : IDisposable
 
     private void Raise() => StateChanged?.Invoke(this, EventArgs.Empty);
 
-    // Results and progress go back through the application's invoke mechanism: from a worker thread it queues the
-    // action for the UI loop's next iteration.
-    private void Post(Action action) => _app.Invoke(action);
+    // One UI timer reads the progress the workers stored while any job runs, and stops itself when none does.
+    private void StartProgressTimer()
+    {
+        if (_progressTimer is not null || _disposed)
+        {
+            return;
+        }
+        _progressTimer = _app.AddTimeout(ProgressInterval, () =>
+        {
+            bool running = false;
+            lock (_gate)
+            {
+                foreach (var job in _jobs.Values.Where(j => j.Running))
+                {
+                    running = true;
+                    job.TakeProgress();
+                }
+            }
+            // Every tick while a job runs, so counts a sheet keeps itself (samples done) move too.
+            if (running)
+            {
+                Raise();
+            }
+            if (!running || _disposed)
+            {
+                _progressTimer = null;
+                return false;
+            }
+            return true;
+        });
+    }
+
+    // Results go back through the application's invoke mechanism: from a worker thread it queues the action for the UI
+    // loop's next iteration.
+    private void Post(Action action)
+    {
+        Interlocked.Increment(ref _posts);
+        _app.Invoke(action);
+    }
 
     private sealed class Job(string name) : IDisposable
     {
@@ -220,7 +289,17 @@ public sealed class BackgroundWork : IDisposable
 
         public Action? Stopped { get; init; }
 
-        public double? Progress { get; set; }
+        private long _storedBits = BitConverter.DoubleToInt64Bits(double.NaN);
+        private long _shownBits = BitConverter.DoubleToInt64Bits(double.NaN);
+
+        // What the UI shows: the stored value as of the last timer tick (NaN bits: none reported yet).
+        public double? Progress => BitConverter.Int64BitsToDouble(Interlocked.Read(ref _shownBits)) is var v && double.IsNaN(v) ? null : v;
+
+        // Called from a worker: stores the value only; the UI timer picks it up.
+        public void Store(double value) => Interlocked.Exchange(ref _storedBits, BitConverter.DoubleToInt64Bits(value));
+
+        // On the UI thread: makes the stored value the shown one.
+        public void TakeProgress() => Interlocked.Exchange(ref _shownBits, Interlocked.Read(ref _storedBits));
 
         public void Cancel()
         {
@@ -237,22 +316,9 @@ public sealed class BackgroundWork : IDisposable
         public void Dispose() => _cts.Dispose();
     }
 
-    private sealed class Progress(BackgroundWork owner, Job job) : IProgress<double>
+    // Stores the fraction for the UI timer (whole per cent, so the line does not flicker); never posts to the UI thread.
+    private sealed class Progress(Job job) : IProgress<double>
     {
-        private int _lastPercent = -1;
-
-        public void Report(double value)
-        {
-            int percent = (int)Math.Clamp(value * 100, 0, 100);
-            if (percent == Interlocked.Exchange(ref _lastPercent, percent))
-            {
-                return;
-            }
-            owner.Post(() =>
-            {
-                job.Progress = percent / 100.0;
-                owner.Raise();
-            });
-        }
+        public void Report(double value) => job.Store(Math.Floor(Math.Clamp(value, 0, 1) * 100) / 100.0);
     }
 }

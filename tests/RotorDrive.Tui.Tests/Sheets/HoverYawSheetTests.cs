@@ -54,8 +54,11 @@ public class HoverYawSheetTests
         Assert.Contains($"equal duty {F(yaw.EqualDuty!.Value, 4)} leaves {F(yaw.ResidualTorqueNm!.Value, 3)} N m", sheet.SheetText);
         Assert.Contains($"authority {F(yaw.AuthorityNm, 2)} N m (ccw {F(yaw.AuthorityPositiveNm, 2)}, cw {F(yaw.AuthorityNegativeNm, 2)})", sheet.SheetText);
         Assert.Contains($"bounded by {yaw.AuthorityLimitedBy!.Replace('_', ' ')}", sheet.SheetText);
-        var worst = review.Safety.AtHover.MaxBy(r => r.HoopStressPa)!;
-        Assert.Contains($"hoop stress {F(worst.HoopStressPa!.Value / 1e6, 1)} MPa at hover", sheet.SheetText);
+        // The burst verdict and margin are Core's, worded as on every sheet: the station with the smallest margin at hover,
+        // and each rotor design at its rated speed.
+        var worst = review.Safety.AtHover.MinBy(r => r.Margin)!;
+        Assert.Contains(RotorDrive.Tui.Text.BurstText.Line(worst, "hover"), sheet.SheetText);
+        Assert.Contains(RotorDrive.Tui.Text.BurstText.Line(review.Safety.AtMaxRpm[0], "rated"), sheet.SheetText);
         // The first screen shows the verdict and the station table.
         Assert.Contains("STATIONS", bench.Screen);
     }

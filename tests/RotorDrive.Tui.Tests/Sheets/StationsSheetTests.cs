@@ -77,6 +77,30 @@ public class StationsSheetTests
         var expected = RotorDrive.Core.Safety.RotorSafety.AtRatedSpeed(rotor);
         string screen = bench.Screen;
         Assert.Contains($"rim {expected.RimSpeedMPerS:F0} m/s", screen);
-        Assert.Contains(StationsSheet.SafetyLine(rotor), screen);
+        var sheet = Assert.IsType<StationsSheet>(bench.Window.CurrentSheet);
+        Assert.Equal(RotorDrive.Tui.Text.BurstText.Line(expected, "rated"), System.Text.RegularExpressions.Regex.Replace(sheet.SafetyText, @"\s+", " "));
+        Assert.StartsWith(expected.Passes == true ? "passes burst check" : "! ", RotorDrive.Tui.Text.BurstText.Line(expected, "rated"));
+    }
+
+    [Fact]
+    public void AFailedBurstCheck_IsListedWithTheProblems_AndCounted_NeverBesideNoProblems()
+    {
+        using var bench = new Bench(columns: 120, rows: 40);
+        bench.Window.ShowSheet("Stations");
+        var sheet = Assert.IsType<StationsSheet>(bench.Window.CurrentSheet);
+        var rotor = sheet.Fields.Single(f => f.Spec.JsonPath == "$.stations[0].rotor");
+        rotor.Field.SetFocus();
+        rotor.Field.Text = "";
+        bench.Type("hx150-p6");
+        var session = bench.Context.Session;
+        Assert.NotNull(session.Rig);
+        // The demo catalog's hx150-p6 (invented) has a thin 90 MPa ring: Core's check at its rated speed fails.
+        var failed = Assert.Single(session.FailedBurstChecks);
+        Assert.Equal(false, failed.Passes);
+        string line = RotorDrive.Tui.Text.BurstText.Line(failed, "rated");
+        Assert.StartsWith("! FAILS burst check, rotor hx150-p6", line);
+        Assert.Contains(line, sheet.ProblemLines);
+        Assert.DoesNotContain("No problems in the rig or its catalogs.", sheet.ProblemLines);
+        Assert.Contains($"! {session.Problems.Count + 1} problem(s)", bench.Window.StatusText);
     }
 }

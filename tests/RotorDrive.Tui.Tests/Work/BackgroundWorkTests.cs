@@ -117,6 +117,7 @@ public sealed class BackgroundWorkTests : IDisposable
         for (int i = 0; i < 200 && seen.Count == 0; i++)
         {
             await Task.Delay(10);
+            _time.Advance(BackgroundWork.ProgressInterval);
             _app.TimedEvents!.RunTimers();
         }
         gate.Set();
@@ -163,5 +164,47 @@ public sealed class BackgroundWorkTests : IDisposable
         await SettleAsync();
         Assert.True(delivered >= 1, "the work's own result reached the UI thread");
         Assert.False(_work.IsActive("stress"));
+    }
+
+    [Fact]
+    public async Task ALongRun_ReportsProgressThroughOneUiTimer_NotOneInvokePerItem()
+    {
+        // 50,000 items, each reporting its progress the way the stress study does (once per finished sample).
+        const int items = 50_000;
+        using var release = new ManualResetEventSlim(false);
+        int ticksSeen = 0;
+        _work.StateChanged += (_, _) =>
+        {
+            if (_work.Current is { Progress: { } })
+            {
+                ticksSeen++;
+            }
+        };
+        _work.Request("stress", (token, progress) =>
+        {
+            for (int i = 1; i <= items; i++)
+            {
+                progress.Report((double)i / items);
+                if (i == items / 2)
+                {
+                    release.Wait(TimeSpan.FromSeconds(10));
+                }
+            }
+            return items;
+        }, _ => { }, immediately: true);
+        // Half way, the UI timer's next tick shows the stored progress.
+        for (int i = 0; i < 500 && _work.Current is not { Progress: >= 0.5 }; i++)
+        {
+            await Task.Delay(5);
+            _time.Advance(BackgroundWork.ProgressInterval);
+            _app.TimedEvents!.RunTimers();
+        }
+        Assert.Equal(0.5, _work.Current!.Value.Progress);
+        release.Set();
+        await SettleAsync();
+        Assert.True(ticksSeen >= 1);
+        // The whole run queued one action for the UI thread (its result), not one per item or per per cent.
+        Assert.Equal(1, _work.Posts);
+        Assert.Null(_work.Current);
     }
 }
