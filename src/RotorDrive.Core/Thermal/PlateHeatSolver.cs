@@ -213,6 +213,13 @@ internal sealed class PlateHeatSolver
         CraftYM = yM;
     }
 
+    /// <summary>Raises (or lowers) the whole plate uniformly by an excess over ambient, K (a plate that starts away from
+    /// ambient).</summary>
+    public void SetUniformExcess(double kelvin)
+    {
+        _a[0] = new Complex(Preconditions.Finite(kelvin, nameof(kelvin)) * LengthM * LengthM, 0);
+    }
+
     /// <summary>Mean temperature over each source's magnet annulus now, C.</summary>
     /// <param name="means">One value per source, written.</param>
     public void Means(Span<double> means)
