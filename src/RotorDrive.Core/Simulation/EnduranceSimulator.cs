@@ -147,6 +147,13 @@ public static class EnduranceSimulator
                         (limit, station) = (midLimit, midStation);
                     }
                 }
+                if (limit == EnduranceLimit.PlateTemperature)
+                {
+                    // The peak does not rise linearly across a step: find the instant the field's own hottest point
+                    // reaches the limit by regula falsi with the Illinois modification (exact advances of the field;
+                    // M. Dowell & P. Jarratt, BIT 11, 1971).
+                    hi = PlateLimitFraction(plate.Solver, snapshot, power, h, vx, vy, hot.TemperatureC - limitC, hotEnd.TemperatureC - limitC, limitC);
+                }
                 for (int i = 0; i <= n; i++)
                 {
                     s1[i] = s0[i] + hi * (s1[i] - s0[i]);
@@ -160,8 +167,6 @@ public static class EnduranceSimulator
                 hotEnd = plate.Solver.Hottest();
                 if (limit == EnduranceLimit.PlateTemperature)
                 {
-                    // The bisection stops on the interpolated peak; the field itself is what the result reports.
-                    hotEnd = hotEnd with { TemperatureC = Math.Max(hotEnd.TemperatureC, limitC) };
                     station = plate.NearestStation(hotEnd, route);
                     plateLimitTime = t;
                 }
@@ -206,6 +211,43 @@ public static class EnduranceSimulator
             PlateLimitTimeS = plateLimitTime,
             PlateSetup = plate.Setup,
         };
+    }
+
+    // The fraction of the step at which the hottest point of the field reaches the limit, given the excess over the limit
+    // at both ends (below, then at or above it).
+    private static double PlateLimitFraction(Thermal.PlateHeatSolver solver, Thermal.PlateHeatSolver.Snapshot snapshot, double[] power, double h,
+        double vx, double vy, double f0, double f1, double limitC)
+    {
+        if (!(f0 < 0) || !(f1 >= 0))
+        {
+            return f0 >= 0 ? 0.0 : 1.0;
+        }
+        double a = 0, b = 1, fa = f0, fb = f1;
+        int side = 0;
+        for (int iteration = 0; iteration < 30 && b - a > 1e-12; iteration++)
+        {
+            double c = (a * fb - b * fa) / (fb - fa);
+            solver.Restore(snapshot);
+            solver.Advance(power, Math.Max(c, 1e-12) * h, vx, vy);
+            double fc = solver.Hottest().TemperatureC - limitC;
+            if (Math.Abs(fc) < 1e-7)
+            {
+                return c;
+            }
+            if (fc < 0)
+            {
+                (a, fa) = (c, fc);
+                fb = side == -1 ? 0.5 * fb : fb;
+                side = -1;
+            }
+            else
+            {
+                (b, fb) = (c, fc);
+                fa = side == 1 ? 0.5 * fa : fa;
+                side = 1;
+            }
+        }
+        return b;
     }
 
     // The trimmed hover at one state: [charge drawn C, winding temperatures, plate temperatures].
