@@ -12,7 +12,8 @@ namespace RotorDrive.Core.Numerics;
 /// twiddle factors for one length; it is immutable and thread-safe.</remarks>
 internal sealed class Fft
 {
-    private readonly Complex[] _twiddles;
+    private readonly double[] _twiddleRe;
+    private readonly double[] _twiddleIm;
     private readonly int[] _reversed;
 
     /// <summary>Prepares the transform of one length.</summary>
@@ -25,11 +26,13 @@ internal sealed class Fft
             throw new ArgumentOutOfRangeException(nameof(length), length, $"the transform length must be a power of two from 1 to 2^24; got {length}.");
         }
         Length = length;
-        _twiddles = new Complex[Math.Max(1, length / 2)];
+        _twiddleRe = new double[Math.Max(1, length / 2)];
+        _twiddleIm = new double[Math.Max(1, length / 2)];
         for (int k = 0; k < length / 2; k++)
         {
             double a = -2.0 * Math.PI * k / length;
-            _twiddles[k] = new Complex(Math.Cos(a), Math.Sin(a));
+            _twiddleRe[k] = Math.Cos(a);
+            _twiddleIm[k] = Math.Sin(a);
         }
         _reversed = new int[length];
         int bits = 0;
@@ -70,23 +73,26 @@ internal sealed class Fft
                 (data[i], data[j]) = (data[j], data[i]);
             }
         }
+        // Butterflies on the interleaved (re, im) doubles: the same arithmetic as Complex, without its operator calls.
+        var v = System.Runtime.InteropServices.MemoryMarshal.Cast<Complex, double>(data);
+        double sign = inverse ? -1.0 : 1.0;
         for (int size = 2; size <= n; size <<= 1)
         {
             int half = size >> 1;
             int stride = n / size;
-            for (int start = 0; start < n; start += size)
+            for (int k = 0; k < half; k++)
             {
-                for (int k = 0; k < half; k++)
+                double wr = _twiddleRe[k * stride], wi = sign * _twiddleIm[k * stride];
+                for (int start = k; start < n; start += size)
                 {
-                    Complex w = _twiddles[k * stride];
-                    if (inverse)
-                    {
-                        w = Complex.Conjugate(w);
-                    }
-                    Complex a = data[start + k];
-                    Complex b = w * data[start + k + half];
-                    data[start + k] = a + b;
-                    data[start + k + half] = a - b;
+                    int a = 2 * start, b = 2 * (start + half);
+                    double br = wr * v[b] - wi * v[b + 1];
+                    double bi = wr * v[b + 1] + wi * v[b];
+                    double ar = v[a], ai = v[a + 1];
+                    v[a] = ar + br;
+                    v[a + 1] = ai + bi;
+                    v[b] = ar - br;
+                    v[b + 1] = ai - bi;
                 }
             }
         }

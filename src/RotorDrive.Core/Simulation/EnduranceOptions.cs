@@ -9,7 +9,7 @@ namespace RotorDrive.Core.Simulation;
 /// <param name="StopAtPlateLimit">True (default) ends the run when the hottest point of the plate reaches the rig's
 /// limit; false runs on and only records when it did (<see cref="EnduranceResult.PlateLimitTimeS"/>), as the plate sweep
 /// does to give the pack-limited time too.</param>
-/// <param name="PlateCellM">Largest spacing of the plate grid, m, or null (default) for a quarter of the narrowest magnet
+/// <param name="PlateCellM">Largest spacing of the plate grid, m, or null (default) for a third of the narrowest magnet
 /// annulus.</param>
 /// <param name="PlateMarginLengths">Margin round the area the rotors cover, in diffusion lengths sqrt(4 alpha t) for the
 /// horizon (or 2.5 x as many loss lengths when shorter); default 2.</param>

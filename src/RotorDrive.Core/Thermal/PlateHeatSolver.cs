@@ -177,7 +177,7 @@ internal sealed class PlateHeatSolver
     /// <param name="horizonS">Longest time the run is expected to last, s.</param>
     /// <param name="marginLengths">Margin in diffusion lengths sqrt(4 alpha t) (or 2.5 x as many loss lengths, when
     /// shorter); 2 keeps the wrapped-round heat below about 0.3 % of the local rise.</param>
-    /// <param name="cellM">Largest grid spacing, m, or null for a quarter of the narrowest magnet annulus.</param>
+    /// <param name="cellM">Largest grid spacing, m, or null for a third of the narrowest magnet annulus.</param>
     /// <param name="maxCount">Largest number of points per side (power of two).</param>
     /// <param name="ambientC">Ambient temperature, C.</param>
     public static PlateHeatSolver Create(PlateSheet sheet, IReadOnlyList<AnnularSource> sources, (double MinX, double MaxX, double MinY, double MaxY) craftBox,
@@ -196,7 +196,7 @@ internal sealed class PlateHeatSolver
         double diffusion = Math.Sqrt(4 * sheet.DiffusivityM2PerS * horizonS);
         double margin = Math.Min(marginLengths * diffusion, 2.5 * marginLengths * sheet.LossLengthM);
         double length = Math.Max(x1 - x0, y1 - y0) + margin;
-        double cell = cellM ?? sources.Min(s => s.OuterRadiusM - s.InnerRadiusM) / 4;
+        double cell = cellM ?? sources.Min(s => s.OuterRadiusM - s.InnerRadiusM) / 3;
         Preconditions.Positive(cell, nameof(cellM));
         int count = 16;
         while (count < maxCount && length / count > cell)
