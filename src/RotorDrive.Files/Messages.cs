@@ -211,6 +211,12 @@ public static class Messages
 
     // ---- command line ----
 
+    /// <summary>A route leg that is neither a dwell nor a move.</summary>
+    public static string RouteLegShape() => "a route leg is either a dwell {\"dwell_s\": ...} or a move {\"x_mm\": ..., \"y_mm\": ..., \"speed_m_per_s\": ...}, not a mix";
+
+    /// <summary>An empty route.</summary>
+    public static string RouteEmpty() => "the route needs at least one leg (leave the key out to hover in place)";
+
     /// <summary>An unexpected failure reported in one line.</summary>
     public static string Unexpected(string detail) => $"unexpected error: {detail}";
 }

@@ -4,12 +4,15 @@ using RotorDrive.Cli.Output;
 using RotorDrive.Core;
 using RotorDrive.Core.Craft;
 using RotorDrive.Core.Simulation;
+using RotorDrive.Core.Thermal;
 using RotorDrive.Files;
 
 namespace RotorDrive.Cli.Commands;
 
-/// <summary><c>rotordrive endurance RIG.json [--csv FILE] [--force] [--json]</c>: how long the rig hovers from a full pack
-/// before the first limit (pack cutoff or usable capacity, trim, winding temperature, currents, plate temperature).</summary>
+/// <summary><c>rotordrive endurance RIG.json [--csv FILE] [--plate-map FILE] [--plate-sweep] [--force] [--json]</c>: how
+/// long the rig hovers from a full pack, in place or along its route, before the first limit (pack cutoff or usable
+/// capacity, trim, winding temperature, currents, the plate's hottest point); or, with <c>--plate-sweep</c>, the same for
+/// every plate material in the catalog and thicknesses from 3 to 25 mm.</summary>
 /// <remarks>Exit 1 when a limit other than the pack's usable capacity or cutoff ends the run (running out of charge is the
 /// expected end of a hover; overheating or overcurrent is a finding), or when no hover exists at the start.</remarks>
 public static class EnduranceCommand
@@ -21,14 +24,28 @@ public static class EnduranceCommand
         var csv = CommonOptions.Csv("the endurance time traces");
         var force = CommonOptions.Force();
         var json = CommonOptions.Json();
+        var plateMap = new Option<string?>("--plate-map")
+        {
+            Description = "Write the plate's temperature field at the end of the run to this CSV file (x_mm, y_mm, temperature_c).",
+            HelpName = "FILE",
+        };
+        var sweep = new Option<bool>("--plate-sweep")
+        {
+            Description = "Hover in place over every plate material of the catalog at thicknesses from 3 to 25 mm: time to the plate limit, hover power and pack-limited time per floor.",
+        };
         var command = new Command("endurance", "Hover time from a full pack until the first limit, with traces of charge, voltage, currents and temperatures.");
         command.Arguments.Add(rig);
         command.Options.Add(csv);
         command.Options.Add(force);
         command.Options.Add(json);
-        command.SetAction(parse => Run(
+        command.Options.Add(plateMap);
+        command.Options.Add(sweep);
+        command.SetAction(parse => parse.GetValue(sweep)
+            ? Sweep(parse.GetValue(rig)!, parse.GetValue(json), parse.InvocationConfiguration.Output, parse.InvocationConfiguration.Error)
+            : Run(
             parse.GetValue(rig)!,
             parse.GetValue(csv),
+            parse.GetValue(plateMap),
             parse.GetValue(force),
             parse.GetValue(json),
             parse.InvocationConfiguration.Output,
@@ -36,9 +53,9 @@ public static class EnduranceCommand
         return command;
     }
 
-    private static int Run(string rigPath, string? csvPath, bool force, bool json, TextWriter output, TextWriter error)
+    private static int Run(string rigPath, string? csvPath, string? mapPath, bool force, bool json, TextWriter output, TextWriter error)
     {
-        if (CommonOptions.RefusesExistingCsv("endurance", csvPath, force, error))
+        if (CommonOptions.RefusesExistingCsv("endurance", csvPath, force, error) || CommonOptions.RefusesExistingCsv("endurance", mapPath, force, error))
         {
             return ExitCodes.BadInput;
         }
@@ -53,6 +70,15 @@ public static class EnduranceCommand
         if (csvPath is not null && result.Trace is { } trace)
         {
             var problem = AtomicFile.WriteAllText(csvPath, TraceCsv.Format(trace), force);
+            if (problem is not null)
+            {
+                ProblemReport.Print([problem], error);
+                return ExitCodes.BadInput;
+            }
+        }
+        if (mapPath is not null && result.PlateMap is { } map)
+        {
+            var problem = AtomicFile.WriteAllText(mapPath, PlateMapCsv(map), force);
             if (problem is not null)
             {
                 ProblemReport.Print([problem], error);
@@ -76,9 +102,16 @@ public static class EnduranceCommand
             result.PeakPlateTempC,
             rig.Limits.PlateTempC,
             sim.PlateSpreadingFactor,
-            PlatePatch(sim.PlateSpreadingFactor),
+            PlateModel(result.PlateSetup, sim.PlateSpreadingFactor),
             result.Steps,
-            pass);
+            pass)
+        {
+            PlateLimitTimeS = result.PlateLimitTimeS,
+            PlateHotspot = result.PlateHotspot is { } hot ? new HotspotReport(hot.XM * 1000, hot.YM * 1000, hot.TemperatureC) : null,
+            PlateConductivityWPerMK = result.PlateSetup?.ConductivityWPerMK,
+            PlateLossWPerM2K = result.PlateSetup?.LossWPerM2K,
+            Trace = result.Trace is { } tr ? TraceEntries(tr, result) : null,
+        };
         if (json)
         {
             JsonOutput.Write(output, report);
@@ -92,8 +125,13 @@ public static class EnduranceCommand
                 ? "  at the start: no trimmed hover exists"
                 : $"  at the start: {string.Join(" / ", report.StartSpeedsRpm.Select(r => Numbers.Format(r, 0)))} rpm (stations 0..{report.StartSpeedsRpm.Count - 1}), pack current {Numbers.Format(report.StartPackCurrentA, 1)} A");
             output.WriteLine($"  at the end: state of charge {Numbers.Format(report.FinalSocPct, 1)} %, bus {Numbers.Format(report.FinalBusVoltageV, 1)} V, pack current {Numbers.Format(report.FinalPackCurrentA, 1)} A");
-            output.WriteLine($"  hottest winding {Numbers.Format(report.PeakWindingTempC, 1)} C, hottest plate patch {Numbers.Format(report.PeakPlateTempC, 1)} C (limit {Numbers.Format(report.PlateLimitC, 0)} C)");
-            output.WriteLine($"  plate patch: {report.PlatePatch}");
+            output.WriteLine($"  hottest winding {Numbers.Format(report.PeakWindingTempC, 1)} C, hottest point of the plate {Numbers.Format(report.PeakPlateTempC, 1)} C (limit {Numbers.Format(report.PlateLimitC, 0)} C)");
+            if (report.PlateHotspot is { } h)
+            {
+                output.WriteLine($"  plate hot spot at the end: x {Numbers.Format(h.XMm, 0)} mm, y {Numbers.Format(h.YMm, 0)} mm, {Numbers.Format(h.TemperatureC, 1)} C"
+                    + (report.PlateLimitTimeS is { } tl ? $"; the plate limit is reached at {Numbers.Format(tl, 0)} s" : string.Empty));
+            }
+            output.WriteLine($"  plate model: {report.PlatePatch}");
             output.WriteLine();
             output.WriteLine(pass ? "Result: the pack ends the hover (no thermal or current limit first)." : "Result: FAILS: a limit other than the pack ends the hover.");
             output.WriteLine("Caution: plates and windings get hot enough to burn; lithium packs can burn when over-discharged. Estimates only: defer to manufacturers' ratings.");
@@ -121,6 +159,16 @@ public static class EnduranceCommand
         int Steps,
         bool Pass)
     {
+        public double? PlateLimitTimeS { get; init; }
+
+        public HotspotReport? PlateHotspot { get; init; }
+
+        public double? PlateConductivityWPerMK { get; init; }
+
+        public double? PlateLossWPerM2K { get; init; }
+
+        public IReadOnlyList<TraceEntry>? Trace { get; init; }
+
         public EnduranceReport(string rig, double runtimeS, double runtimeMin, EnduranceLimit kind, string text, int? station, IReadOnlyList<double> rpm, double current,
             double soc, double voltage, double finalCurrent, double winding, double plate, double plateLimit, double spreading, string patch, int steps, bool pass)
             : this(rig, runtimeS, runtimeMin, text, kind, station, rpm, current, soc, voltage, finalCurrent, winding, plate, plateLimit, spreading, patch, steps, pass)
@@ -128,8 +176,136 @@ public static class EnduranceCommand
         }
     }
 
-    // The plate-patch assumption in words (the lumped plate node of PlatePatchThermalNode.UnderRotor).
-    private static string PlatePatch(double spreading) => spreading <= 1
-        ? "eddy heat kept in the plate under each magnet annulus (spreading factor 1, the hottest assumption; set plate.spreading_factor in the rig file for a wider patch)"
-        : $"eddy heat spread over {Numbers.Format(spreading, 2)} x the magnet annulus area (plate.spreading_factor)";
+    // The plate model in words: a sheet with lateral conduction and face loss, and what it was built from.
+    private static string PlateModel(PlateFieldSetup? setup, double spreading)
+    {
+        if (setup is null)
+        {
+            return "not modelled";
+        }
+        string k = setup.ConductivityEstimated ? "estimated by the Wiedemann-Franz law" : "from the catalog";
+        string spin = spreading > 1 ? $"; plate.spreading_factor {Numbers.Format(spreading, 2)} applies to the spin-up's lumped patch only" : string.Empty;
+        return $"2-D sheet with lateral conduction (k {Numbers.Format(setup.ConductivityWPerMK, 0)} W/(m K), {k}) and face loss {Numbers.Format(setup.LossWPerM2K, 1)} W/(m^2 K); "
+            + $"eddy heat spread over each magnet annulus as the load model's strips give it; grid {setup.GridCount} x {setup.GridCount} at {Numbers.Format(setup.GridSpacingM * 1000, 1)} mm over {Numbers.Format(setup.DomainM, 2)} m{spin}";
+    }
+
+    private static List<TraceEntry> TraceEntries(SpinupTrace trace, EnduranceResult result)
+    {
+        int n = trace.SpeedRadPerS.Count;
+        var list = new List<TraceEntry>(trace.TimeS.Count);
+        for (int i = 0; i < trace.TimeS.Count; i++)
+        {
+            var position = result.CraftPositionTraceM?[i] ?? (0, 0);
+            list.Add(new TraceEntry(
+                trace.TimeS[i],
+                Enumerable.Range(0, n).Select(j => Units.RadPerSToRpm(trace.SpeedRadPerS[j][i])).ToArray(),
+                Enumerable.Range(0, n).Select(j => trace.MotorCurrentA[j][i]).ToArray(),
+                trace.GapM[i] * 1000,
+                trace.BusVoltageV[i],
+                trace.PackCurrentA[i],
+                trace.SocFraction[i] * 100,
+                Enumerable.Range(0, n).Select(j => trace.WindingTempC[j][i]).ToArray(),
+                Enumerable.Range(0, n).Select(j => trace.PlateTempC[j][i]).ToArray(),
+                result.PlatePeakTraceC?[i] ?? double.NaN,
+                position.XM * 1000,
+                position.YM * 1000,
+                trace.YawTorqueNm[i]));
+        }
+        return list;
+    }
+
+    // x_mm, y_mm, temperature_c per grid point, row by row (invariant culture).
+    private static string PlateMapCsv(PlateTemperatureMap map)
+    {
+        var sb = new System.Text.StringBuilder("x_mm,y_mm,temperature_c\n");
+        var inv = CultureInfo.InvariantCulture;
+        for (int row = 0; row < map.Count; row++)
+        {
+            for (int column = 0; column < map.Count; column++)
+            {
+                sb.Append((map.XM(column) * 1000).ToString("0.###", inv)).Append(',')
+                    .Append((map.YM(row) * 1000).ToString("0.###", inv)).Append(',')
+                    .Append(map.At(column, row).ToString("0.####", inv)).Append('\n');
+            }
+        }
+        return sb.ToString();
+    }
+
+    private static int Sweep(string rigPath, bool json, TextWriter output, TextWriter error)
+    {
+        var loaded = RigInput.LoadOrReport(rigPath, error);
+        var model = loaded is null ? null : CraftInput.ModelOrReport("endurance", rigPath, error);
+        if (loaded is null || model is null)
+        {
+            return ExitCodes.BadInput;
+        }
+        var materials = loaded.Catalog!.Plates;
+        var progress = new Progress<int>(done => error.Write($"\rplate sweep: {done} / {materials.Count * PlateSweepStudy.DefaultThicknessesM.Count} floors"));
+        var rows = PlateSweepStudy.Run(model, materials, null, null, json ? null : progress);
+        if (!json)
+        {
+            error.WriteLine();
+        }
+        var report = new SweepReport(model.Rig.Name, model.Rig.Limits.PlateTempC, rows.Select(r => new SweepRow(
+            r.MaterialId, r.ThicknessM * 1000, r.HoverExists, r.HoverPowerW, r.PlatePowerW, r.PlateLimitTimeS, r.RuntimeS, r.EndedBy.ToString(), r.HoverTimeS, r.PlateCutsHover)).ToArray());
+        if (json)
+        {
+            JsonOutput.Write(output, report);
+            return ExitCodes.Ok;
+        }
+        output.WriteLine($"Plate sweep: {report.Rig}, hovering in place from a full pack, plate limit {Numbers.Format(report.PlateLimitC, 0)} C");
+        var table = new TextTable(
+            new TableColumn("plate"),
+            new TableColumn("mm", Alignment.Right),
+            new TableColumn("hover W", Alignment.Right),
+            new TableColumn("to plate limit s", Alignment.Right),
+            new TableColumn("pack-limited s", Alignment.Right),
+            new TableColumn("hover s", Alignment.Right),
+            new TableColumn("verdict"));
+        foreach (var r in report.Floors)
+        {
+            table.AddRow(
+                r.Material,
+                Numbers.Format(r.ThicknessMm, 0),
+                r.HoverExists ? Numbers.Format(r.HoverPowerW, 0) : "no hover",
+                r.PlateLimitTimeS is { } t ? Numbers.Format(t, 0) : "never",
+                r.HoverExists ? Numbers.Format(r.RuntimeS, 0) : "-",
+                Numbers.Format(r.HoverTimeS, 0),
+                !r.HoverExists ? "no trimmed hover" : r.PlateCutsHover ? "plate cuts the hover short" : $"ok ({r.EndedBy})");
+        }
+        table.Write(output);
+        output.WriteLine("Caution: plates get hot enough to burn. Estimates only: defer to manufacturers' ratings and local codes.");
+        return ExitCodes.Ok;
+    }
+
+    private sealed record HotspotReport(double XMm, double YMm, double TemperatureC);
+
+    private sealed record TraceEntry(
+        double TimeS,
+        IReadOnlyList<double> SpeedRpm,
+        IReadOnlyList<double> CurrentA,
+        double GapMm,
+        double PackVoltageV,
+        double PackCurrentA,
+        double SocPct,
+        IReadOnlyList<double> WindingTempC,
+        IReadOnlyList<double> PlateUnderStationC,
+        double PlatePeakC,
+        double CraftXMm,
+        double CraftYMm,
+        double YawTorqueNm);
+
+    private sealed record SweepRow(
+        string Material,
+        double ThicknessMm,
+        bool HoverExists,
+        double HoverPowerW,
+        double PlatePowerW,
+        double? PlateLimitTimeS,
+        double RuntimeS,
+        string EndedBy,
+        double HoverTimeS,
+        bool PlateCutsHover);
+
+    private sealed record SweepReport(string Rig, double PlateLimitC, IReadOnlyList<SweepRow> Floors);
 }

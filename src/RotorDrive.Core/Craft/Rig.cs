@@ -49,6 +49,20 @@ public sealed record Rig(
         return new LoadTableRange(rotor.MaxSpeedRadPerS, 0.5 * LandedGapM, 3.0 * DesignGapM, cold, hot);
     }
 
+    /// <summary>How the plate's faces lose heat (rig file <c>plate.convection_top_w_per_m2k</c>,
+    /// <c>plate.convection_bottom_w_per_m2k</c>, <c>plate.emissivity</c>), or null for
+    /// <see cref="PlateConvectionWPerM2K"/> on both faces and no radiation. Used by the plate field of the endurance
+    /// run.</summary>
+    public Thermal.PlateCooling? PlateCooling { get; init; }
+
+    /// <summary>The plate's face cooling in effect: <see cref="PlateCooling"/>, or both faces at
+    /// <see cref="PlateConvectionWPerM2K"/>.</summary>
+    public Thermal.PlateCooling EffectivePlateCooling => PlateCooling ?? Thermal.PlateCooling.BothFaces(PlateConvectionWPerM2K);
+
+    /// <summary>The route the craft follows during an endurance run (rig file <c>route</c>), or null to hover in place
+    /// at the rig origin.</summary>
+    public CraftRoute? Route { get; init; }
+
     /// <summary>Total mass: structure, payload, rotors, assigned motors and controllers, and packs, kg.</summary>
     public double TotalMassKg =>
         Body.EmptyMassKg + Body.PayloadKg

@@ -12,9 +12,10 @@ namespace RotorDrive.Core.Simulation;
 /// <param name="FinalBusVoltageV">Bus voltage at the end, V (0 when no trim existed there).</param>
 /// <param name="FinalPackCurrentA">Pack current at the end, A (0 when no trim existed there).</param>
 /// <param name="PeakWindingTempC">Highest winding temperature, C.</param>
-/// <param name="PeakPlateTempC">Highest plate patch temperature, C.</param>
+/// <param name="PeakPlateTempC">Highest temperature anywhere on the plate during the run, C.</param>
 /// <param name="Steps">Quasi-static steps taken.</param>
-/// <param name="Trace">One sample per step (yaw rate and angle are zero: the trim holds the yaw), or null.</param>
+/// <param name="Trace">One sample per step (yaw rate and angle are zero: the trim holds the yaw; the plate temperature per
+/// station is the mean over its magnet annulus), or null.</param>
 public sealed record EnduranceResult(
     double RuntimeS,
     EnduranceLimit FirstLimit,
@@ -28,4 +29,23 @@ public sealed record EnduranceResult(
     double PeakWindingTempC,
     double PeakPlateTempC,
     int Steps,
-    SpinupTrace? Trace);
+    SpinupTrace? Trace)
+{
+    /// <summary>The hottest point of the plate at the end of the run.</summary>
+    public Thermal.PlateHotspot? PlateHotspot { get; init; }
+
+    /// <summary>The plate's temperature field at the end of the run.</summary>
+    public Thermal.PlateTemperatureMap? PlateMap { get; init; }
+
+    /// <summary>The hottest temperature on the plate at each trace sample, C (null without a trace).</summary>
+    public IReadOnlyList<double>? PlatePeakTraceC { get; init; }
+
+    /// <summary>The craft origin's position at each trace sample, m (null without a trace).</summary>
+    public IReadOnlyList<(double XM, double YM)>? CraftPositionTraceM { get; init; }
+
+    /// <summary>When the hottest point of the plate first reached the rig's limit, s, or null when it never did.</summary>
+    public double? PlateLimitTimeS { get; init; }
+
+    /// <summary>The plate model used (conductivity, loss, grid).</summary>
+    public PlateFieldSetup? PlateSetup { get; init; }
+}

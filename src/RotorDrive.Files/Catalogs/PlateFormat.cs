@@ -12,6 +12,7 @@ public sealed class PlateFormat : CatalogFormat<PlateRow>
             CatalogColumn.Real("temp_coeff_per_k", ValueRule.Between(-0.01, 0.01)),
             CatalogColumn.Real("density_kg_m3", ValueRule.PositiveAtMost(30000)),
             CatalogColumn.Real("specific_heat_j_per_kg_k", ValueRule.PositiveAtMost(10000)),
+            CatalogColumn.OptionalReal("thermal_conductivity_w_per_m_k", ValueRule.Between(1, 1000)),
         ])
     {
     }
@@ -28,13 +29,14 @@ public sealed class PlateFormat : CatalogFormat<PlateRow>
         var alpha = row.Real("temp_coeff_per_k");
         var density = row.Real("density_kg_m3");
         var heat = row.Real("specific_heat_j_per_kg_k");
+        var thermal = row.Real("thermal_conductivity_w_per_m_k");
         if (id is null || sigma is null || alpha is null || density is null || heat is null)
         {
             return null;
         }
-        return new PlateRow(id, sigma.Value, alpha.Value, density.Value, heat.Value);
+        return new PlateRow(id, sigma.Value, alpha.Value, density.Value, heat.Value) { ThermalConductivityWPerMK = thermal };
     }
 
     private protected override string?[] FormatRow(PlateRow p) =>
-        [p.Id, F(p.ConductivityMsPerM), F(p.TempCoeffPerK), F(p.DensityKgM3), F(p.SpecificHeatJPerKgK)];
+        [p.Id, F(p.ConductivityMsPerM), F(p.TempCoeffPerK), F(p.DensityKgM3), F(p.SpecificHeatJPerKgK), F(p.ThermalConductivityWPerMK)];
 }

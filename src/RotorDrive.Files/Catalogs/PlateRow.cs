@@ -10,6 +10,12 @@ public sealed record PlateRow(
     double DensityKgM3,
     double SpecificHeatJPerKgK)
 {
+    /// <summary>Thermal conductivity, W/(m K), or null (optional column; the Wiedemann-Franz estimate is used).</summary>
+    public double? ThermalConductivityWPerMK { get; init; }
+
     /// <summary>The material in SI units (MS/m to S/m).</summary>
-    public PlateMaterial ToMaterial() => new(Id, ConductivityMsPerM * 1e6, TempCoeffPerK, DensityKgM3, SpecificHeatJPerKgK);
+    public PlateMaterial ToMaterial() => new(Id, ConductivityMsPerM * 1e6, TempCoeffPerK, DensityKgM3, SpecificHeatJPerKgK)
+    {
+        ThermalConductivityWPerMK = ThermalConductivityWPerMK,
+    };
 }

@@ -10,6 +10,11 @@ public static class RigDefaults
     /// assumption).</summary>
     public const double PlateSpreadingFactor = 1.0;
 
+    /// <summary>plate.emissivity: 0, no radiation from the plate (bare rolled aluminium and copper radiate little, about
+    /// 0.04 to 0.1: F. P. Incropera et al., "Fundamentals of Heat and Mass Transfer", Table A.11, from memory; set about 0.8
+    /// for a painted or anodised plate).</summary>
+    public const double PlateEmissivity = 0.0;
+
     /// <summary>craft.heave_damping_ratio.</summary>
     public const double HeaveDampingRatio = 0.2;
 

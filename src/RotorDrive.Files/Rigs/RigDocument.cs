@@ -39,6 +39,9 @@ public sealed class RigDocument
     /// <summary>"tolerances": part spreads for the stress test (optional; absent means no spread).</summary>
     public RigTolerancesSection? Tolerances { get; set; }
 
+    /// <summary>"route": the legs the craft follows during an endurance run, or null to hover in place.</summary>
+    public List<RigRouteLegSection>? Route { get; set; }
+
     /// <summary>A deep copy, for editing without touching the original.</summary>
     public RigDocument Clone() => RigDocumentReader.Read(RigDocumentWriter.Write(this), "(copy)").Document!;
 }

@@ -59,6 +59,9 @@ public static class RigDocumentReader
                 TemperatureC = p.Number("temperature_c"),
                 ConvectionWPerM2K = p.Number("convection_w_per_m2k"),
                 SpreadingFactor = p.Number("spreading_factor"),
+                ConvectionTopWPerM2K = p.Number("convection_top_w_per_m2k"),
+                ConvectionBottomWPerM2K = p.Number("convection_bottom_w_per_m2k"),
+                Emissivity = p.Number("emissivity"),
             };
             p.ReportUnknownKeys();
         }
@@ -135,6 +138,33 @@ public static class RigDocumentReader
         }
 
         doc.Tolerances = ReadTolerances(top.Take("tolerances"), file, problems);
+
+        var routeNode = top.Take("route");
+        if (routeNode is JsonArrayNode legs)
+        {
+            doc.Route = [];
+            for (int i = 0; i < legs.Items.Count; i++)
+            {
+                var r = JsonObjectScope.Open(legs.Items[i], $"$.route[{i}]", file, problems);
+                if (r is null)
+                {
+                    doc.Route.Add(new RigRouteLegSection());
+                    continue;
+                }
+                doc.Route.Add(new RigRouteLegSection
+                {
+                    XMm = r.Number("x_mm"),
+                    YMm = r.Number("y_mm"),
+                    SpeedMPerS = r.Number("speed_m_per_s"),
+                    DwellS = r.Number("dwell_s"),
+                });
+                r.ReportUnknownKeys();
+            }
+        }
+        else if (routeNode is not null)
+        {
+            problems.Add(new InputProblem(file, routeNode.Line, routeNode.Column, "$.route", Messages.WrongType("an array", routeNode.Describe())));
+        }
 
         top.ReportUnknownKeys();
         var ordered = problems.OrderBy(x => x.Line).ThenBy(x => x.Column).ToList();

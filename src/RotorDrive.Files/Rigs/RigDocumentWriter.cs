@@ -34,6 +34,9 @@ public static class RigDocumentWriter
                 Num(w, "temperature_c", p.TemperatureC);
                 Num(w, "convection_w_per_m2k", p.ConvectionWPerM2K);
                 Num(w, "spreading_factor", p.SpreadingFactor);
+                Num(w, "convection_top_w_per_m2k", p.ConvectionTopWPerM2K);
+                Num(w, "convection_bottom_w_per_m2k", p.ConvectionBottomWPerM2K);
+                Num(w, "emissivity", p.Emissivity);
                 w.WriteEndObject();
             }
             if (document.Craft is { } k)
@@ -111,6 +114,20 @@ public static class RigDocumentWriter
                     w.WriteEndObject();
                 }
                 w.WriteEndObject();
+            }
+            if (document.Route is { } route)
+            {
+                w.WriteStartArray("route");
+                foreach (var leg in route)
+                {
+                    w.WriteStartObject();
+                    Num(w, "x_mm", leg.XMm);
+                    Num(w, "y_mm", leg.YMm);
+                    Num(w, "speed_m_per_s", leg.SpeedMPerS);
+                    Num(w, "dwell_s", leg.DwellS);
+                    w.WriteEndObject();
+                }
+                w.WriteEndArray();
             }
             w.WriteEndObject();
         }

@@ -18,4 +18,15 @@ public sealed class RigPlateSection
     /// <summary>"spreading_factor": plate patch area that takes a rotor's eddy heat / the magnet annulus area, at least 1
     /// (optional; default 1, the heat kept under the annulus: the hottest assumption).</summary>
     public double? SpreadingFactor { get; set; }
+
+    /// <summary>"convection_top_w_per_m2k": heat transfer coefficient of the top face, W/(m^2 K) (optional; default
+    /// convection_w_per_m2k).</summary>
+    public double? ConvectionTopWPerM2K { get; set; }
+
+    /// <summary>"convection_bottom_w_per_m2k": heat transfer coefficient of the bottom face, W/(m^2 K) (optional; default
+    /// convection_w_per_m2k).</summary>
+    public double? ConvectionBottomWPerM2K { get; set; }
+
+    /// <summary>"emissivity": emissivity of the top face for radiation, 0..1 (optional; default 0, no radiation).</summary>
+    public double? Emissivity { get; set; }
 }

@@ -4,6 +4,7 @@ using RotorDrive.Core.Drive;
 using RotorDrive.Core.Magnetics;
 using RotorDrive.Core.Studies;
 using RotorDrive.Core.Studies.Stress;
+using RotorDrive.Core.Thermal;
 using RotorDrive.Files.Catalogs;
 
 namespace RotorDrive.Files.Rigs;
@@ -85,7 +86,7 @@ public static class RigResolver
 
         // Plate.
         PlateMaterial? material = null;
-        double? thickness = null, plateTemp = null, convection = null, spreading = null;
+        double? thickness = null, plateTemp = null, convection = null, spreading = null, top = null, bottom = null, emissivity = null;
         if (document.Plate is not { } plate)
         {
             ctx.Missing("$.plate");
@@ -97,6 +98,12 @@ public static class RigResolver
             plateTemp = ctx.Required(plate.TemperatureC, "$.plate.temperature_c", ValueRule.Between(PlateTempRangeC.Min, PlateTempRangeC.Max));
             convection = ctx.Optional(plate.ConvectionWPerM2K, "$.plate.convection_w_per_m2k", ValueRule.Between(0.1, 1000), RigDefaults.ConvectionWPerM2K);
             spreading = ctx.Optional(plate.SpreadingFactor, "$.plate.spreading_factor", ValueRule.Between(1, 100), RigDefaults.PlateSpreadingFactor);
+            if (convection is { } both)
+            {
+                top = ctx.Optional(plate.ConvectionTopWPerM2K, "$.plate.convection_top_w_per_m2k", ValueRule.Between(0, 1000), both);
+                bottom = ctx.Optional(plate.ConvectionBottomWPerM2K, "$.plate.convection_bottom_w_per_m2k", ValueRule.Between(0, 100_000), both);
+            }
+            emissivity = ctx.Optional(plate.Emissivity, "$.plate.emissivity", ValueRule.Between(0, 1), RigDefaults.PlateEmissivity);
         }
 
         // Craft.
@@ -270,6 +277,7 @@ public static class RigResolver
             }
         }
 
+        var (route, routeOk) = ResolveRoute(document, ctx);
         var tolerances = ResolveTolerances(document, ctx);
         if (tolerances is not null && limits is not null && body is not null && material is not null && thickness is not null
             && plateTemp is not null && ambient is not null && design is not null && landed is not null && partsOk && stationsOk)
@@ -282,7 +290,7 @@ public static class RigResolver
         var ordered = problems.OrderBy(p => p.Line).ThenBy(p => p.Column).ToList();
         if (ordered.Count > 0 || !partsOk || !stationsOk || !packOk || name is null || material is null || thickness is null
             || plateTemp is null || convection is null || spreading is null || body is null || design is null || landed is null || ambient is null
-            || gearFriction is null || limits is null)
+            || gearFriction is null || limits is null || top is null || bottom is null || emissivity is null || !routeOk)
         {
             return new RigResolveResult(null, ordered);
         }
@@ -301,8 +309,57 @@ public static class RigResolver
             convection.Value)
         {
             PlateSpreadingFactor = spreading.Value,
+            PlateCooling = new PlateCooling(top.Value, bottom.Value, emissivity.Value),
+            Route = route,
         };
         return new RigResolveResult(rig, ordered) { Tolerances = tolerances ?? StressTolerances.None };
+    }
+
+    // "route": each leg a dwell (dwell_s > 0) or a move (x_mm, y_mm, speed_m_per_s > 0), never a mix.
+    private static (CraftRoute? Route, bool Ok) ResolveRoute(RigDocument document, Context ctx)
+    {
+        if (document.Route is not { } legs)
+        {
+            return (null, true);
+        }
+        if (legs.Count == 0)
+        {
+            ctx.Report("$.route", Messages.RouteEmpty());
+            return (null, false);
+        }
+        var result = new List<RouteLeg>();
+        bool ok = true;
+        for (int i = 0; i < legs.Count; i++)
+        {
+            var leg = legs[i];
+            string path = $"$.route[{i}]";
+            bool move = leg.XMm is not null || leg.YMm is not null || leg.SpeedMPerS is not null;
+            if (leg.DwellS is not null && !move)
+            {
+                if (ctx.Required(leg.DwellS, path + ".dwell_s", ValueRule.Positive) is { } dwell)
+                {
+                    result.Add(RouteLeg.Dwell(dwell));
+                    continue;
+                }
+            }
+            else if (leg.DwellS is null && move)
+            {
+                var x = ctx.Required(leg.XMm, path + ".x_mm", ValueRule.Between(-100_000, 100_000));
+                var y = ctx.Required(leg.YMm, path + ".y_mm", ValueRule.Between(-100_000, 100_000));
+                var speed = ctx.Required(leg.SpeedMPerS, path + ".speed_m_per_s", ValueRule.Between(0.001, 20));
+                if (x is not null && y is not null && speed is not null)
+                {
+                    result.Add(RouteLeg.Move(x.Value / 1000.0, y.Value / 1000.0, speed.Value));
+                    continue;
+                }
+            }
+            else
+            {
+                ctx.Report(path, Messages.RouteLegShape());
+            }
+            ok = false;
+        }
+        return ok ? (new CraftRoute(result), true) : (null, false);
     }
 
     /// <summary>Checks the "tolerances" section of a document and converts it to SI; problems are added to

@@ -27,8 +27,9 @@ public sealed class EnduranceSimulatorTests
         Assert.Contains("usable pack capacity", result.FirstLimitText);
     }
 
-    // The first limit is the one reached first, and it is named: a hot plate patch (lumped node, Incropera 5.2) under
-    // still air ends the hover before the pack; with a generous plate limit the pack ends it.
+    // The first limit is the one reached first, and it is named: the plate's hottest point (sheet field, DESIGN 4.8) under
+    // still air ends the hover before the pack, and the run stops with it at the limit; with a generous plate limit
+    // and strong cooling the pack ends it.
     [Fact]
     public void FirstLimit_IsNamed_PlateBeforePack_ThenPack()
     {
@@ -49,7 +50,8 @@ public sealed class EnduranceSimulatorTests
         }
     }
 
-    // Halving the quasi-static step changes the runtime by less than 0.1 % (Heun's method is second order).
+    // Step convergence: halving the quasi-static step changes the runtime by less than 0.1 % (Heun's method for charge and
+    // windings is second order; the plate field is exact over each step for its mean eddy powers).
     [Fact]
     public void Runtime_DoesNotDependOnTheStep()
     {
