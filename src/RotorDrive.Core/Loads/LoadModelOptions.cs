@@ -10,7 +10,7 @@ public sealed record LoadModelOptions
     public static LoadModelOptions Default { get; } = new();
 
     /// <summary>The eddy-current model (default <see cref="LoadModelKind.ThreeDimensional"/>).</summary>
-    public LoadModelKind Model { get; init; } = LoadModelKind.TwoDimensional;
+    public LoadModelKind Model { get; init; } = LoadModelKind.ThreeDimensional;
 
     /// <summary>Two-dimensional model only: apply the Russell-Norsworthy finite-width factor to the plate conductivity (default true).</summary>
     public bool EndEffectCorrection { get; init; } = true;
