@@ -1,17 +1,34 @@
 namespace RotorDrive.Core.Loads;
 
 /// <summary>Settings of the rotor load model.</summary>
-/// <remarks>Defaults: end correction on, 24 Gauss-Legendre points over the magnet annulus, standard air.</remarks>
+/// <remarks>Defaults: the three-dimensional model with 8 radial strips, 4 harmonics of the array and a Fourier series cut at
+/// 1e-6 of the fundamental at a 2 mm gap; for the two-dimensional model, the end correction on and 24 Gauss-Legendre points
+/// over the magnet annulus; standard air.</remarks>
 public sealed record LoadModelOptions
 {
     /// <summary>The defaults.</summary>
     public static LoadModelOptions Default { get; } = new();
 
-    /// <summary>Apply the Russell-Norsworthy finite-width factor to the plate conductivity (default true).</summary>
+    /// <summary>The eddy-current model (default <see cref="LoadModelKind.ThreeDimensional"/>).</summary>
+    public LoadModelKind Model { get; init; } = LoadModelKind.ThreeDimensional;
+
+    /// <summary>Two-dimensional model only: apply the Russell-Norsworthy finite-width factor to the plate conductivity (default true).</summary>
     public bool EndEffectCorrection { get; init; } = true;
 
-    /// <summary>Gauss-Legendre points over the magnet annulus, 2..256 (default 24).</summary>
+    /// <summary>Two-dimensional model: Gauss-Legendre points over the magnet annulus, 2..256 (default 24).</summary>
     public int RadialPoints { get; init; } = 24;
+
+    /// <summary>Three-dimensional model: radial strips (Gauss-Legendre points), 2..256 (default 8).</summary>
+    public int StripPoints { get; init; } = 8;
+
+    /// <summary>Three-dimensional model: harmonics of the array kept, 1..64 (default 4).</summary>
+    public int Harmonics { get; init; } = 4;
+
+    /// <summary>Three-dimensional model: the gap at which the series truncation tolerance is met, m (default 2 mm).</summary>
+    public double ReferenceGapM { get; init; } = 0.002;
+
+    /// <summary>Three-dimensional model: relative truncation tolerance of the Fourier series (default 1e-6).</summary>
+    public double SeriesTolerance { get; init; } = 1e-6;
 
     /// <summary>Air for the windage torque (default <see cref="AirProperties.Standard"/>).</summary>
     public AirProperties Air { get; init; } = AirProperties.Standard;

@@ -2,8 +2,8 @@ using RotorDrive.Core.Magnetics;
 
 namespace RotorDrive.Core.Loads;
 
-/// <summary>The rotor load computed directly from the physics: eddy lift and drag by radial quadrature of the 2-D layer
-/// model, disc windage and bearing drag.</summary>
+/// <summary>The rotor load computed directly from the physics: eddy lift and drag from the three-dimensional model (or the
+/// two-dimensional strip model on request), disc windage and bearing drag.</summary>
 /// <remarks>
 /// <para>Eddy part: <see cref="RotorEddyModel"/> (../DESIGN.md §4.1-4.3) at the plate's conductivity at the given plate
 /// temperature (<see cref="PlateMaterial.ConductivityAt"/>, §4.4), scaled by (Br(T)/Br20)^2 for the magnet temperature.
@@ -42,7 +42,10 @@ public sealed class PhysicsRotorLoad : IRotorLoad
         Rotor = rotor;
         Plate = plate;
         Options = options;
-        _eddy = new RotorEddyModel(rotor, plate.ThicknessM, options.EndEffectCorrection, options.RadialPoints);
+        Preconditions.NonNegative(plate.BackIronM, "plate back iron thickness");
+        _eddy = options.Model == LoadModelKind.TwoDimensional
+            ? RotorEddyModel.TwoDimensional(rotor, plate, options.EndEffectCorrection, options.RadialPoints)
+            : RotorEddyModel.ThreeDimensional(rotor, plate, options.StripPoints, options.Harmonics, options.ReferenceGapM, options.SeriesTolerance);
         _windageRadiusM = rotor.OuterRadiusM + Math.Max(0.0, rotor.RetainerThicknessM ?? 0.0);
         _airDensity = options.Air.DensityKgM3;
         _airViscosity = options.Air.KinematicViscosityM2PerS;

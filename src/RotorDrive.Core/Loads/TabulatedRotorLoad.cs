@@ -38,6 +38,7 @@ public sealed class TabulatedRotorLoad : IRotorLoad
     private readonly double _gapMin;
     private readonly double _gapMax;
     private readonly double _invGapStep;
+    private readonly double[]? _staticLift;
 
     internal TabulatedRotorLoad(PhysicsRotorLoad direct, LoadTableRange range)
     {
@@ -63,7 +64,18 @@ public sealed class TabulatedRotorLoad : IRotorLoad
         {
             _rows[i] = new double[_gapPoints * Stride];
         }
-        Fill(direct.Eddy, lnStep, gapStep);
+        if (direct.Eddy.BackIronDecay.Length > 0)
+        {
+            FillWithRotorIron(direct.Eddy, lnStep, gapStep);
+        }
+        else
+        {
+            Fill(direct.Eddy, lnStep, gapStep);
+        }
+        if (direct.Eddy.PlateBackIron)
+        {
+            _staticLift = StaticLift(direct.Eddy, gapStep);
+        }
         (LargestLiftN, LargestTorqueNm) = Largest();
     }
 
@@ -121,10 +133,12 @@ public sealed class TabulatedRotorLoad : IRotorLoad
         {
             return Interpolate(Math.Log(sigmaOmega), gapM);
         }
-        // Low-speed laws: Re R is even and Im R odd in eps, so lift ~ x^2 and torque ~ x; relative error ~ (x/x_peak)^2.
+        // Low-speed laws: Re R is even and Im R odd in eps, so lift - lift(0) ~ x^2 and torque ~ x; relative error
+        // ~ (x/x_peak)^2. Lift at standstill is 0 over a plate in air and the steel's attraction over a steel-backed plate.
         (double liftMin, double torqueMin) = Interpolate(_lnXMin, gapM);
         double ratio = sigmaOmega / _xMin;
-        return (liftMin * ratio * ratio, torqueMin * ratio);
+        double still = _staticLift is null ? 0.0 : StaticLiftAt(gapM);
+        return (still + (liftMin - still) * ratio * ratio, torqueMin * ratio);
     }
 
     /// <summary>True when a query is answered from the table rather than the direct model.</summary>
@@ -182,7 +196,8 @@ public sealed class TabulatedRotorLoad : IRotorLoad
     // for torque, with u = ln x; slopes are stored pre-multiplied by the cell sizes so the lookup needs no scaling.
     private void Fill(RotorEddyModel eddy, double lnStep, double gapStep)
     {
-        int radii = eddy.RadialPoints;
+        int radii = eddy.ModeCount;
+        bool plateIron = eddy.PlateBackIron;
         ReadOnlySpan<double> k = eddy.WavenumberPerM;
         ReadOnlySpan<double> kd = eddy.ThicknessTimesWavenumber;
         ReadOnlySpan<double> epsPerX = eddy.EpsPerSigmaOmega;
@@ -213,7 +228,7 @@ public sealed class TabulatedRotorLoad : IRotorLoad
             double x = Math.Exp(_lnXMin + i * lnStep);
             for (int j = 0; j < radii; j++)
             {
-                Complex r = PlateResponse.ReflectionWithSlope(epsPerX[j] * x, kd[j], out Complex slope);
+                Complex r = PlateResponse.ReflectionWithSlope(epsPerX[j] * x, kd[j], plateIron, out Complex slope);
                 coefficients[j] = -liftWeight[j] * r.Real;
                 coefficients[padded + j] = -liftWeight[j] * slope.Real * lnStep;
                 coefficients[2 * padded + j] = -torqueWeight[j] * r.Imaginary;
@@ -263,6 +278,102 @@ public sealed class TabulatedRotorLoad : IRotorLoad
         Unsafe.Add(ref node, 5) = Vector256.Sum(torqueU);
         Unsafe.Add(ref node, 6) = Vector256.Sum(torqueG);
         Unsafe.Add(ref node, 7) = Vector256.Sum(torqueUG);
+    }
+
+    // With a steel back disc on the rotor the gap enters also through 1/|1 - R c e|^2 (c = e^(-2 k h), e = e^(-2 k g)), so a
+    // node is no longer a dot product of speed and gap factors: each node sums F = e X / Q over the modes, X = Re R or Im R,
+    // Q = |1 - R c e|^2, with its exact derivatives in u = ln x (through dR/du) and g (through e).
+    private void FillWithRotorIron(RotorEddyModel eddy, double lnStep, double gapStep)
+    {
+        int modes = eddy.ModeCount;
+        bool plateIron = eddy.PlateBackIron;
+        double[] k = eddy.WavenumberPerM.ToArray();
+        double[] kd = eddy.ThicknessTimesWavenumber.ToArray();
+        double[] epsPerX = eddy.EpsPerSigmaOmega.ToArray();
+        double[] liftWeight = eddy.LiftWeightN.ToArray();
+        double[] torqueWeight = eddy.TorqueWeightNm.ToArray();
+        double[] decay = eddy.BackIronDecay.ToArray();
+        var gapFactor = new double[_gapPoints * modes];
+        for (int l = 0; l < _gapPoints; l++)
+        {
+            double g = _gapMin + l * gapStep;
+            for (int j = 0; j < modes; j++)
+            {
+                gapFactor[l * modes + j] = Math.Exp(-2.0 * k[j] * g);
+            }
+        }
+        var r = new Complex[modes];
+        var dr = new Complex[modes];
+        for (int i = 0; i < _speedPoints; i++)
+        {
+            double x = Math.Exp(_lnXMin + i * lnStep);
+            for (int j = 0; j < modes; j++)
+            {
+                r[j] = PlateResponse.ReflectionWithSlope(epsPerX[j] * x, kd[j], plateIron, out dr[j]);
+            }
+            for (int l = 0; l < _gapPoints; l++)
+            {
+                Span<double> node = _rows[i].AsSpan(l * Stride, Stride);
+                node.Clear();
+                for (int j = 0; j < modes; j++)
+                {
+                    double e = gapFactor[l * modes + j];
+                    double rho = decay[j] * e;
+                    double rr = r[j].Real, ri = r[j].Imaginary, sr = dr[j].Real, si = dr[j].Imaginary;
+                    double a = 1.0 - rho * rr;
+                    double q = a * a + rho * rho * ri * ri;
+                    double qu = -2.0 * rho * (a * sr - rho * ri * si);
+                    double rhoG = -2.0 * k[j] * rho;
+                    double qg = 2.0 * rhoG * (rho * (rr * rr + ri * ri) - rr);
+                    double qug = -2.0 * rhoG * (a * sr - rho * ri * si) - 2.0 * rho * (-rhoG * (rr * sr + ri * si));
+                    double eg = -2.0 * k[j] * e;
+                    AddNode(node, 0, -liftWeight[j], e, eg, rr, sr, q, qu, qg, qug, lnStep, gapStep);
+                    AddNode(node, 4, -torqueWeight[j], e, eg, ri, si, q, qu, qg, qug, lnStep, gapStep);
+                }
+            }
+        }
+    }
+
+    // Adds w e X / Q and its scaled derivatives d/du, d/dg and d2/du dg to four node slots.
+    private static void AddNode(Span<double> node, int at, double w, double e, double eg, double x, double xu, double q, double qu, double qg, double qug,
+        double lnStep, double gapStep)
+    {
+        double inv = 1.0 / q;
+        double inv2 = inv * inv;
+        double fu = xu * inv - x * qu * inv2;
+        node[at] += w * e * x * inv;
+        node[at + 1] += w * e * fu * lnStep;
+        node[at + 2] += w * (eg * x * inv - e * x * qg * inv2) * gapStep;
+        double fug = -xu * qg * inv2 - x * (qug * inv2 - 2.0 * qu * qg * inv2 * inv);
+        node[at + 3] += w * (eg * fu + e * fug) * lnStep * gapStep;
+    }
+
+    // Lift at standstill over a steel-backed plate (value and gap slope times the gap step per gap node).
+    private double[] StaticLift(RotorEddyModel eddy, double gapStep)
+    {
+        var result = new double[2 * _gapPoints];
+        const double h = 1e-7;
+        for (int l = 0; l < _gapPoints; l++)
+        {
+            double g = _gapMin + l * gapStep;
+            result[2 * l] = eddy.Evaluate(0.0, 0.0, g).LiftN;
+            // Central difference of a smooth sum of exponentials in g; only the Hermite slope, error ~ (k h)^2.
+            double up = eddy.Evaluate(0.0, 0.0, g + h).LiftN;
+            double down = eddy.Evaluate(0.0, 0.0, Math.Max(0.0, g - h)).LiftN;
+            result[2 * l + 1] = (up - down) / (g + h - Math.Max(0.0, g - h)) * gapStep;
+        }
+        return result;
+    }
+
+    private double StaticLiftAt(double gapM)
+    {
+        double[] s = _staticLift!;
+        double v = (gapM - _gapMin) * _invGapStep;
+        int l = Math.Clamp((int)v, 0, _gapPoints - 2);
+        double t = v - l;
+        double t2 = t * t, t3 = t2 * t;
+        double h1 = 3 * t2 - 2 * t3, h0 = 1 - h1, d0 = t3 - 2 * t2 + t, d1 = t3 - t2;
+        return h0 * s[2 * l] + d0 * s[2 * l + 1] + h1 * s[2 * l + 2] + d1 * s[2 * l + 3];
     }
 
     private (double Lift, double Torque) Largest()

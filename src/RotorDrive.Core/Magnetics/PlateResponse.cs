@@ -46,12 +46,61 @@ public static class PlateResponse
         return ReflectionCore(magneticReynolds, thicknessTimesWavenumber, out _, computeSlope: false);
     }
 
+    /// <summary>Reflection coefficient R of a plate laid on steel, from eps = mu0 sigma we / k^2 and k d.</summary>
+    /// <remarks>The steel is infinitely permeable and non-conducting, so the tangential field vanishes at the plate's bottom
+    /// face: in the plate B_z = C cosh(gamma (z + d)), hence Z = (gamma/k) tanh(gamma d) and R = (1 - Z)/(1 + Z) (the layer
+    /// problem of ../DESIGN.md §4.2 with H_t = 0 at z = -d; the same boundary condition as the back iron of the layer models
+    /// in N. Paudel and J. Bird, IEEE Trans. Magn. 48(1), 2012). Written with E = e^(-2 gamma d) and u = gamma/k as
+    /// R = ((1 + E) - u (1 - E)) / ((1 + E) + u (1 - E)). At standstill (u = 1) R = e^(-2 k d) &gt; 0: the steel's image
+    /// pulls the source down (negative lift); at high speed R tends to -1 as for a plate in air.</remarks>
+    /// <param name="magneticReynolds">eps = mu0 sigma we / k^2 (signed).</param>
+    /// <param name="thicknessTimesWavenumber">k d, greater than 0.</param>
+    /// <exception cref="ArgumentOutOfRangeException">An argument is NaN, infinite or out of range.</exception>
+    public static Complex SteelBackedReflection(double magneticReynolds, double thicknessTimesWavenumber)
+    {
+        Preconditions.Finite(magneticReynolds, nameof(magneticReynolds));
+        Preconditions.Positive(thicknessTimesWavenumber, nameof(thicknessTimesWavenumber));
+        return SteelBackedCore(magneticReynolds, thicknessTimesWavenumber, out _, computeSlope: false);
+    }
+
     /// <summary>R and its logarithmic slope eps dR/deps (for table derivatives); arguments are not checked.</summary>
     internal static Complex ReflectionWithSlope(double eps, double kd, out Complex slope)
         => ReflectionCore(eps, kd, out slope, computeSlope: true);
 
+    /// <summary>R and its logarithmic slope for a free or a steel-backed plate; arguments are not checked.</summary>
+    internal static Complex ReflectionWithSlope(double eps, double kd, bool steelBacked, out Complex slope)
+        => steelBacked ? SteelBackedCore(eps, kd, out slope, computeSlope: true) : ReflectionCore(eps, kd, out slope, computeSlope: true);
+
     /// <summary>R without argument checks, for the quadrature kernels.</summary>
     internal static Complex ReflectionUnchecked(double eps, double kd) => ReflectionCore(eps, kd, out _, computeSlope: false);
+
+    /// <summary>R of a free or a steel-backed plate without argument checks.</summary>
+    internal static Complex ReflectionUnchecked(double eps, double kd, bool steelBacked)
+        => steelBacked ? SteelBackedCore(eps, kd, out _, computeSlope: false) : ReflectionCore(eps, kd, out _, computeSlope: false);
+
+    private static Complex SteelBackedCore(double eps, double kd, out Complex slope, bool computeSlope)
+    {
+        double modulus = double.Hypot(1.0, eps);
+        double ur = Math.Sqrt(0.5 * (modulus + 1.0));
+        var u = new Complex(ur, eps / (2.0 * ur));
+        Complex oneMinusE = -ExpM1(-2.0 * kd * u);
+        Complex e = 1.0 - oneMinusE;
+        Complex numerator = 1.0 + e - u * oneMinusE;
+        Complex denominator = 1.0 + e + u * oneMinusE;
+        Complex r = numerator / denominator;
+        if (!computeSlope)
+        {
+            slope = Complex.Zero;
+            return r;
+        }
+        // dR/du from dE/du = -2 k d E, then eps dR/deps = eps (dR/du) i/(2u).
+        Complex de = -2.0 * kd * e;
+        Complex dNumerator = de * (1.0 + u) - oneMinusE;
+        Complex dDenominator = de * (1.0 - u) + oneMinusE;
+        Complex dr = (dNumerator - r * dDenominator) / denominator;
+        slope = eps * dr * new Complex(0, 0.5) / u;
+        return r;
+    }
 
     private static Complex ReflectionCore(double eps, double kd, out Complex slope, bool computeSlope)
     {

@@ -1,8 +1,9 @@
 namespace RotorDrive.Core.Magnetics;
 
-/// <summary>A Halbach-array magnet rotor design, in SI units.</summary>
+/// <summary>A magnet rotor design (a Halbach array, or alternating poles on a steel disc), in SI units.</summary>
 /// <remarks>Pole pairs p = Segments / SegmentsPerWavelength; at radius r the field pattern has wavenumber k = p / r
-/// (K. Halbach, Nucl. Instrum. Methods 169, 1980). Optional catalog columns are null when absent.</remarks>
+/// (K. Halbach, Nucl. Instrum. Methods 169, 1980). An alternating-pole rotor has two magnets per wavelength
+/// (SegmentsPerWavelength = 2). Optional catalog columns are null when absent.</remarks>
 /// <param name="Id">Catalog id.</param>
 /// <param name="Segments">Number of magnet segments N around the ring.</param>
 /// <param name="SegmentsPerWavelength">Segments per magnetic wavelength M (4 for a classic Halbach array).</param>
@@ -37,6 +38,20 @@ public sealed record RotorDesign(
     double? RetainerThicknessM,
     double? RetainerAllowablePa)
 {
+    /// <summary>How the magnets are arranged (default <see cref="RotorArray.Halbach"/>).</summary>
+    public RotorArray Array { get; init; } = RotorArray.Halbach;
+
+    /// <summary>Fraction of each pole pitch covered by magnet for an alternating-pole rotor, 0.3 to 1 (default 1; a Halbach
+    /// array is always full).</summary>
+    public double MagnetArcFraction { get; init; } = 1.0;
+
+    /// <summary>Thickness of a steel back disc behind the magnets, m (0, the default, for none). The steel is treated as
+    /// infinitely permeable and non-conducting, so only its presence matters, not its thickness.</summary>
+    public double BackIronM { get; init; }
+
+    /// <summary>Whether the magnets sit on a steel back disc.</summary>
+    public bool HasBackIron => BackIronM > 0;
+
     /// <summary>Pole pairs p = N / M.</summary>
     public int PolePairs => Segments / SegmentsPerWavelength;
 

@@ -3,19 +3,30 @@ using MathNet.Numerics.Integration;
 
 namespace RotorDrive.Core.Magnetics;
 
-/// <summary>Eddy-current lift, drag torque and plate loss of a Halbach rotor over a plate, by radial quadrature of the 2-D
-/// strip model.</summary>
+/// <summary>Eddy-current lift, drag torque and plate loss of a magnet rotor over a plate: the three-dimensional model (radial
+/// strips, each a finite-width band solved by a double Fourier series, with the array's harmonics) or the two-dimensional
+/// strip model with the Russell-Norsworthy width factor.</summary>
 /// <remarks>
-/// <para>Each radius r of the magnet annulus is treated as a 2-D strip (../DESIGN.md §4.3): wavenumber k = p/r, source
-/// field from <see cref="HalbachSource"/>, plate response from <see cref="PlateResponse"/> at electrical speed
-/// we = p omega, pressures from <see cref="EddyPressure"/>. Lift = integral of P_L 2 pi r dr and torque = integral of
-/// P_D r 2 pi r dr over [r_i, r_o] by Gauss-Legendre quadrature (MathNet.Numerics GaussLegendreRule; nodes and weights
-/// computed once here). Plate loss = integral of P_D (omega r) 2 pi r dr, summed separately.</para>
-/// <para>With the end correction on, the conductivity at each radius is multiplied by the Russell-Norsworthy factor
-/// (<see cref="EndEffect"/>) for active width r_o - r_i and a wide plate. Because the conductivity and the speed enter
-/// only through eps = mu0 sigma p omega / k^2, all results depend on them only through sigma times omega; the gap enters
-/// only through the source amplitude, e^(-2 k g) in the pressures. Values are at the rotor's 20 C remanence; forces
-/// scale with the square of the remanence.</para>
+/// <para>Both models are a sum over "modes": a wavenumber k that sets the gap decay e^(-2 k g) and the plate's response
+/// R(eps, k d), a weight for lift and one for torque. Lift = -sum w_L e^(-2 k g) Re R and torque = -sum w_T e^(-2 k g) Im R,
+/// with eps = mu0 sigma omega (|n| p) / k^2 (../DESIGN.md §4.2-4.3, 4.7). Because the conductivity and the speed enter
+/// only through eps, all results depend on them only through sigma omega; forces scale with the remanence squared.</para>
+/// <para>Three-dimensional model (../DESIGN.md §4.7; the default for analyses): the magnet annulus is cut into radial
+/// strips at Gauss-Legendre radii r (MathNet GaussLegendreRule). At each radius the rotor is replaced by a straight band of
+/// the magnets' full radial width w = r_o - r_i moving at omega r, with the circumferential wavenumber |n| p / r of each
+/// harmonic n of the array (<see cref="ArraySource"/>), over a plate much wider than the rotor, and the band's mean
+/// pressures come from <see cref="FiniteWidthBand"/> (double Fourier series with an artificial radial period, after
+/// T. Lubin and A. Rezzoug, IEEE Trans. Magn. 51(10), 2015; each component the layer problem with k^2 = q^2 + k_y^2,
+/// J. R. Reitz, J. Appl. Phys. 41, 1970). The pole pitch's growth with radius is represented by the strips; what the
+/// band leaves out is the curvature of the magnets' edges within one strip (the pitch varies across the width by
+/// r_o/r_i) and the radial variation of the pressure within the width, whose mean is what the strip integral uses. The
+/// series is truncated where the neglected terms fall below a relative tolerance at a reference gap.</para>
+/// <para>Two-dimensional model (the first generation): each radius is a 2-D strip with wavenumber p/r and the Halbach
+/// fundamental; with the end correction on, the conductivity is multiplied by the Russell-Norsworthy factor
+/// (<see cref="EndEffect"/>) for active width r_o - r_i.</para>
+/// <para>Steel: under the plate it changes R (<see cref="PlateResponse.SteelBackedReflection"/>); behind the magnets it is an
+/// image source and a reflector, the modes then carry e^(-2 k h) and the field on the plate is divided by
+/// 1 - R e^(-2 k (g + h)).</para>
 /// <para>Instances are immutable and thread-safe; evaluation allocates nothing.</para>
 /// </remarks>
 public sealed class RotorEddyModel
@@ -26,8 +37,9 @@ public sealed class RotorEddyModel
     private readonly double[] _epsPerSigmaOmega;
     private readonly double[] _liftWeightN;
     private readonly double[] _torqueWeightNm;
+    private readonly double[] _backIronDecay;
 
-    /// <summary>Builds the quadrature for a rotor over a plate of a given thickness.</summary>
+    /// <summary>Builds the two-dimensional strip quadrature for a Halbach rotor over a plate in air (the first-generation model).</summary>
     /// <param name="rotor">The rotor design (its remanence at 20 C is used).</param>
     /// <param name="plateThicknessM">Plate thickness, m, greater than 0.</param>
     /// <param name="endEffectCorrection">Apply the Russell-Norsworthy factor to the conductivity (default true).</param>
@@ -35,6 +47,12 @@ public sealed class RotorEddyModel
     /// <exception cref="ArgumentNullException">The rotor is null.</exception>
     /// <exception cref="ArgumentOutOfRangeException">The geometry is invalid or a count is out of range.</exception>
     public RotorEddyModel(RotorDesign rotor, double plateThicknessM, bool endEffectCorrection = true, int radialPoints = 24)
+        : this(rotor, plateThicknessM, plateBackIron: false, threeDimensional: false, endEffectCorrection, radialPoints, harmonics: 1, referenceGapM: 0, tolerance: 0)
+    {
+    }
+
+    private RotorEddyModel(RotorDesign rotor, double plateThicknessM, bool plateBackIron, bool threeDimensional, bool endEffectCorrection,
+        int radialPoints, int harmonics, double referenceGapM, double tolerance)
     {
         Preconditions.NotNull(rotor, nameof(rotor));
         Preconditions.Positive(plateThicknessM, nameof(plateThicknessM));
@@ -42,6 +60,7 @@ public sealed class RotorEddyModel
         Preconditions.Positive(rotor.InnerRadiusM, "rotor inner radius");
         Preconditions.Positive(rotor.MagnetThicknessM, "rotor magnet thickness");
         Preconditions.NonNegative(rotor.RemanenceT, "rotor remanence");
+        Preconditions.NonNegative(rotor.BackIronM, "rotor back iron thickness");
         if (!(rotor.OuterRadiusM > rotor.InnerRadiusM) || !double.IsFinite(rotor.OuterRadiusM))
         {
             throw new ArgumentOutOfRangeException(nameof(rotor), rotor.OuterRadiusM, $"rotor outer radius must exceed the inner radius {rotor.InnerRadiusM} m; got {rotor.OuterRadiusM} m.");
@@ -51,32 +70,69 @@ public sealed class RotorEddyModel
 
         Rotor = rotor;
         PlateThicknessM = plateThicknessM;
-        EndEffectCorrection = endEffectCorrection;
+        PlateBackIron = plateBackIron;
+        IsThreeDimensional = threeDimensional;
+        EndEffectCorrection = !threeDimensional && endEffectCorrection;
         RadialPoints = radialPoints;
+        Harmonics = harmonics;
 
-        var rule = new GaussLegendreRule(rotor.InnerRadiusM, rotor.OuterRadiusM, radialPoints);
-        int p = rotor.PolePairs;
-        double halfWidth = 0.5 * rotor.ActiveWidthM;
-        _radiusM = new double[radialPoints];
-        _wavenumberPerM = new double[radialPoints];
-        _thicknessTimesWavenumber = new double[radialPoints];
-        _epsPerSigmaOmega = new double[radialPoints];
-        _liftWeightN = new double[radialPoints];
-        _torqueWeightNm = new double[radialPoints];
-        for (int j = 0; j < radialPoints; j++)
+        var modes = threeDimensional
+            ? ThreeDimensionalModes(rotor, plateThicknessM, radialPoints, harmonics, referenceGapM, tolerance)
+            : TwoDimensionalModes(rotor, plateThicknessM, endEffectCorrection, radialPoints);
+        int count = modes.Count;
+        _radiusM = new double[count];
+        _wavenumberPerM = new double[count];
+        _thicknessTimesWavenumber = new double[count];
+        _epsPerSigmaOmega = new double[count];
+        _liftWeightN = new double[count];
+        _torqueWeightNm = new double[count];
+        _backIronDecay = new double[rotor.HasBackIron ? count : 0];
+        for (int j = 0; j < count; j++)
         {
-            double r = rule.GetAbscissa(j);
-            double k = p / r;
-            double faceField = HalbachSource.FieldT(rotor.RemanenceT, rotor.SegmentsPerWavelength, rotor.MagnetThicknessM, k, 0.0);
-            double endFactor = endEffectCorrection ? EndEffect.RussellNorsworthyFactor(k, halfWidth) : 1.0;
-            double area = rule.GetWeight(j) * 2.0 * Math.PI * r;
-            _radiusM[j] = r;
-            _wavenumberPerM[j] = k;
-            _thicknessTimesWavenumber[j] = k * plateThicknessM;
-            _epsPerSigmaOmega[j] = Units.Mu0 * endFactor * p / (k * k);
-            _liftWeightN[j] = area * faceField * faceField / Units.Mu0;
-            _torqueWeightNm[j] = _liftWeightN[j] * r;
+            Mode m = modes[j];
+            _radiusM[j] = m.Radius;
+            _wavenumberPerM[j] = m.K;
+            _thicknessTimesWavenumber[j] = m.K * plateThicknessM;
+            _epsPerSigmaOmega[j] = m.EpsPerSigmaOmega;
+            _liftWeightN[j] = m.LiftWeight;
+            _torqueWeightNm[j] = m.TorqueWeight;
+            if (rotor.HasBackIron)
+            {
+                _backIronDecay[j] = Math.Exp(-2.0 * m.K * rotor.MagnetThicknessM);
+            }
         }
+    }
+
+    /// <summary>The two-dimensional strip model (first generation) for any rotor over any plate.</summary>
+    /// <param name="rotor">The rotor design.</param>
+    /// <param name="plate">The plate (its thickness and steel backing; the conductivity is passed to Evaluate).</param>
+    /// <param name="endEffectCorrection">Apply the Russell-Norsworthy factor.</param>
+    /// <param name="radialPoints">Gauss-Legendre points over the annulus, 2..256.</param>
+    /// <exception cref="ArgumentNullException">An argument is null.</exception>
+    /// <exception cref="ArgumentOutOfRangeException">The geometry is invalid or a count is out of range.</exception>
+    public static RotorEddyModel TwoDimensional(RotorDesign rotor, Plate plate, bool endEffectCorrection = true, int radialPoints = 24)
+    {
+        Preconditions.NotNull(plate, nameof(plate));
+        return new RotorEddyModel(rotor, plate.ThicknessM, plate.HasBackIron, threeDimensional: false, endEffectCorrection, radialPoints, 1, 0, 0);
+    }
+
+    /// <summary>The three-dimensional model (../DESIGN.md §4.7).</summary>
+    /// <param name="rotor">The rotor design.</param>
+    /// <param name="plate">The plate (its thickness and steel backing).</param>
+    /// <param name="stripPoints">Gauss-Legendre radial strips, 2..256 (default 8).</param>
+    /// <param name="harmonics">Harmonics of the array kept, 1..64 (default 4: orders 1, -3, 5, -7 of a 4-segment Halbach array).</param>
+    /// <param name="referenceGapM">Smallest gap at which the truncation tolerance is to hold, m, greater than 0 (default 2 mm);
+    /// smaller gaps stay close but converge more slowly.</param>
+    /// <param name="tolerance">Relative truncation tolerance of the Fourier series, 1e-12..1e-2 (default 1e-6).</param>
+    /// <exception cref="ArgumentNullException">An argument is null.</exception>
+    /// <exception cref="ArgumentOutOfRangeException">The geometry is invalid or a setting is out of range.</exception>
+    public static RotorEddyModel ThreeDimensional(RotorDesign rotor, Plate plate, int stripPoints = 8, int harmonics = 4, double referenceGapM = 0.002, double tolerance = 1e-6)
+    {
+        Preconditions.NotNull(plate, nameof(plate));
+        Preconditions.InRange(harmonics, 1, 64, nameof(harmonics));
+        Preconditions.Positive(referenceGapM, nameof(referenceGapM));
+        Preconditions.InRange(tolerance, 1e-12, 1e-2, nameof(tolerance));
+        return new RotorEddyModel(rotor, plate.ThicknessM, plate.HasBackIron, threeDimensional: true, false, stripPoints, harmonics, referenceGapM, tolerance);
     }
 
     /// <summary>The rotor design.</summary>
@@ -85,11 +141,23 @@ public sealed class RotorEddyModel
     /// <summary>Plate thickness, m.</summary>
     public double PlateThicknessM { get; }
 
-    /// <summary>Whether the Russell-Norsworthy end correction is applied.</summary>
+    /// <summary>Whether the plate lies on steel.</summary>
+    public bool PlateBackIron { get; }
+
+    /// <summary>Whether this is the three-dimensional model.</summary>
+    public bool IsThreeDimensional { get; }
+
+    /// <summary>Whether the Russell-Norsworthy end correction is applied (two-dimensional model only).</summary>
     public bool EndEffectCorrection { get; }
 
-    /// <summary>Number of Gauss-Legendre points over the annulus.</summary>
+    /// <summary>Number of Gauss-Legendre points (radial strips) over the annulus.</summary>
     public int RadialPoints { get; }
+
+    /// <summary>Harmonics of the array kept (1 for the two-dimensional model).</summary>
+    public int Harmonics { get; }
+
+    /// <summary>Number of modes (wavenumbers) the model sums.</summary>
+    public int ModeCount => _radiusM.Length;
 
     /// <summary>Eddy lift, torque and plate loss at a conductivity, a signed shaft speed and an air gap, at 20 C remanence.</summary>
     /// <param name="conductivitySPerM">Plate conductivity, S/m, at least 0.</param>
@@ -102,34 +170,110 @@ public sealed class RotorEddyModel
         Preconditions.Finite(speedRadPerS, nameof(speedRadPerS));
         Preconditions.NonNegative(gapM, nameof(gapM));
         double sigmaOmega = conductivitySPerM * speedRadPerS;
+        bool rotorIron = _backIronDecay.Length > 0;
         double lift = 0, torque = 0, power = 0;
         for (int j = 0; j < _radiusM.Length; j++)
         {
-            Complex r = PlateResponse.ReflectionUnchecked(_epsPerSigmaOmega[j] * sigmaOmega, _thicknessTimesWavenumber[j]);
+            Complex r = PlateResponse.ReflectionUnchecked(_epsPerSigmaOmega[j] * sigmaOmega, _thicknessTimesWavenumber[j], PlateBackIron);
             double source = Math.Exp(-2.0 * _wavenumberPerM[j] * gapM);
+            if (rotorIron)
+            {
+                // Multiple reflections between plate and rotor steel: field on the plate divided by 1 - R e^(-2 k (g + h)).
+                Complex d = 1.0 - r * (source * _backIronDecay[j]);
+                source /= d.Real * d.Real + d.Imaginary * d.Imaginary;
+            }
             lift -= _liftWeightN[j] * source * r.Real;
-            torque -= _torqueWeightNm[j] * source * r.Imaginary;
+            double t = -_torqueWeightNm[j] * source * r.Imaginary;
+            torque += t;
             // Plate loss summed on its own: drag pressure times the local slip speed omega r, over the strip's area.
-            power -= _liftWeightN[j] * source * r.Imaginary * (speedRadPerS * _radiusM[j]);
+            power += t * speedRadPerS;
         }
         return new EddyForces(lift, torque, power);
     }
 
-    /// <summary>Quadrature radii, m (for table builders).</summary>
+    /// <summary>Mode radii, m (for table builders).</summary>
     internal ReadOnlySpan<double> RadiusM => _radiusM;
 
-    /// <summary>Wavenumbers k = p/r at the quadrature radii, 1/m.</summary>
+    /// <summary>Mode wavenumbers k, 1/m (the gap decay is e^(-2 k g)).</summary>
     internal ReadOnlySpan<double> WavenumberPerM => _wavenumberPerM;
 
-    /// <summary>k d at the quadrature radii.</summary>
+    /// <summary>k d of each mode.</summary>
     internal ReadOnlySpan<double> ThicknessTimesWavenumber => _thicknessTimesWavenumber;
 
-    /// <summary>eps per unit sigma omega at the quadrature radii (end factor included).</summary>
+    /// <summary>eps per unit sigma omega of each mode (end factor included in the two-dimensional model).</summary>
     internal ReadOnlySpan<double> EpsPerSigmaOmega => _epsPerSigmaOmega;
 
-    /// <summary>Quadrature weight times area times Bface^2/mu0 for lift, N, at the quadrature radii.</summary>
+    /// <summary>Lift weight of each mode, N (area times B_face^2/mu0 times the series weight).</summary>
     internal ReadOnlySpan<double> LiftWeightN => _liftWeightN;
 
-    /// <summary>Lift weight times radius for torque, N m.</summary>
+    /// <summary>Torque weight of each mode, N m (lift weight times radius times q/k).</summary>
     internal ReadOnlySpan<double> TorqueWeightNm => _torqueWeightNm;
+
+    /// <summary>e^(-2 k h) of each mode when the rotor has a steel back disc, else empty.</summary>
+    internal ReadOnlySpan<double> BackIronDecay => _backIronDecay;
+
+    // Width of the groups of Fourier terms beyond k_y = 2 p / r, relative to k_y (see FiniteWidthBand.Terms).
+    private const double Lumping = 0.2;
+
+    private readonly record struct Mode(double Radius, double K, double EpsPerSigmaOmega, double LiftWeight, double TorqueWeight);
+
+    private static List<Mode> TwoDimensionalModes(RotorDesign rotor, double plateThicknessM, bool endEffectCorrection, int radialPoints)
+    {
+        var rule = new GaussLegendreRule(rotor.InnerRadiusM, rotor.OuterRadiusM, radialPoints);
+        int p = rotor.PolePairs;
+        double halfWidth = 0.5 * rotor.ActiveWidthM;
+        SourceHarmonic fundamental = ArraySource.Harmonics(rotor, 1)[0];
+        var modes = new List<Mode>(radialPoints);
+        for (int j = 0; j < radialPoints; j++)
+        {
+            double r = rule.GetAbscissa(j);
+            double k = p / (double)r;
+            double faceField = rotor.RemanenceT * ArraySource.FaceField(fundamental, k, k, rotor.MagnetThicknessM, rotor.HasBackIron);
+            double endFactor = endEffectCorrection ? EndEffect.RussellNorsworthyFactor(k, halfWidth) : 1.0;
+            double area = rule.GetWeight(j) * 2.0 * Math.PI * r;
+            double lift = area * faceField * faceField / Units.Mu0;
+            modes.Add(new Mode(r, k, Units.Mu0 * endFactor * p / (k * k), lift, lift * r));
+        }
+        return modes;
+    }
+
+    private static List<Mode> ThreeDimensionalModes(RotorDesign rotor, double plateThicknessM, int stripPoints, int harmonicCount, double referenceGapM, double tolerance)
+    {
+        var rule = new GaussLegendreRule(rotor.InnerRadiusM, rotor.OuterRadiusM, stripPoints);
+        int p = rotor.PolePairs;
+        double width = rotor.ActiveWidthM;
+        double br2 = rotor.RemanenceT * rotor.RemanenceT;
+        SourceHarmonic[] harmonics = ArraySource.Harmonics(rotor, harmonicCount);
+        var modes = new List<Mode>();
+        for (int j = 0; j < stripPoints; j++)
+        {
+            double r = rule.GetAbscissa(j);
+            double area = rule.GetWeight(j) * 2.0 * Math.PI * r;
+            double fundamental = p / r;
+            // One artificial period per strip, set by the fundamental (the slowest-decaying coupling between copies).
+            double period = FiniteWidthBand.DefaultPeriodM(fundamental, width);
+            // The truncation reference is the fundamental's two-dimensional value at the reference gap, so weak
+            // harmonics are cut relative to what matters for the strip.
+            double face1 = ArraySource.FaceField(harmonics[0], fundamental, fundamental, rotor.MagnetThicknessM, rotor.HasBackIron);
+            double reference = face1 * face1 * Math.Exp(-2.0 * fundamental * referenceGapM);
+            foreach (SourceHarmonic h in harmonics)
+            {
+                int order = Math.Abs(h.Order);
+                double q = order * fundamental;
+                foreach ((double ky, double weight) in FiniteWidthBand.Terms(h, q, width, period, rotor.MagnetThicknessM, rotor.HasBackIron, referenceGapM, tolerance * reference, Lumping, 2.0 * fundamental))
+                {
+                    double k = double.Hypot(q, ky);
+                    double f = ArraySource.FaceField(h, q, k, rotor.MagnetThicknessM, rotor.HasBackIron);
+                    double lift = area * br2 * weight * f * f / Units.Mu0;
+                    // Skip terms that cannot matter at the reference gap (zeros of the sinc, weak harmonics).
+                    if (lift * Math.Exp(-2.0 * k * referenceGapM) < 1e-3 * tolerance * area * br2 * reference / Units.Mu0)
+                    {
+                        continue;
+                    }
+                    modes.Add(new Mode(r, k, Units.Mu0 * order * p / (k * k), lift, lift * r * (q / k)));
+                }
+            }
+        }
+        return modes;
+    }
 }

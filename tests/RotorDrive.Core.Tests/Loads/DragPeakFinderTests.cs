@@ -15,7 +15,7 @@ public class DragPeakFinderTests
     {
         var rotor = TestRigs.Rotor with { Segments = 8, SegmentsPerWavelength = 4, InnerRadiusM = 0.1, OuterRadiusM = 0.1001 };
         var plate = new Plate(TestRigs.Copper, 1e-5);
-        var load = new PhysicsRotorLoad(rotor, plate, new LoadModelOptions { EndEffectCorrection = false });
+        var load = new PhysicsRotorLoad(rotor, plate, new LoadModelOptions { Model = LoadModelKind.TwoDimensional, EndEffectCorrection = false });
         double w = 2 / (Units.Mu0 * TestRigs.Copper.ConductivitySPerM * plate.ThicknessM);
         double expected = w / 0.10005;
         DragPeak peak = DragPeakFinder.Find(load, 0.01, 20, 20, 100 * expected);

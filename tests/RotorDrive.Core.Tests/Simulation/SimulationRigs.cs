@@ -64,8 +64,11 @@ internal static class SimulationRigs
 
     private static readonly Lazy<TabulatedRotorLoad> CopperTable = new(() => TableFor(CopperPlate));
 
-    /// <summary>The rotor's table over a plate.</summary>
-    public static TabulatedRotorLoad TableFor(Plate plate) => RotorLoadTable.Build(Rotor, plate, new LoadTableRange(Rotor.MaxSpeedRadPerS, 0.003, 0.03, -20, 200));
+    /// <summary>The rotor's table over a plate, from the first-generation (2-D) load model: this rig was sized on it, and the
+    /// transient tests check the simulator's mechanics, not the load model (under the 3-D model its 100 kg body would need
+    /// more than full duty to hover).</summary>
+    public static TabulatedRotorLoad TableFor(Plate plate)
+        => RotorLoadTable.Build(Rotor, plate, new LoadTableRange(Rotor.MaxSpeedRadPerS, 0.003, 0.03, -20, 200), new LoadModelOptions { Model = LoadModelKind.TwoDimensional });
 
     /// <summary>A prepared rig on the shared copper table (or on the given load).</summary>
     public static SimulationRig Prepared(Rig rig, IRotorLoad? load = null)
