@@ -1,7 +1,7 @@
 namespace RotorDrive.Core.Loads;
 
 /// <summary>Settings of the rotor load model.</summary>
-/// <remarks>Defaults: end correction on, 24 Gauss-Legendre points over the magnet annulus, standard air.</remarks>
+/// <remarks>Defaults: end correction on, 24 Gauss-Legendre points over the magnet annulus, standard air, no calibration.</remarks>
 public sealed record LoadModelOptions
 {
     /// <summary>The defaults.</summary>
@@ -15,4 +15,7 @@ public sealed record LoadModelOptions
 
     /// <summary>Air for the windage torque (default <see cref="AirProperties.Standard"/>).</summary>
     public AirProperties Air { get; init; } = AirProperties.Standard;
+
+    /// <summary>Factors fitted to bench data for this rotor over this plate, or null for the uncorrected model (default).</summary>
+    public LoadCalibration? Calibration { get; init; }
 }

@@ -59,8 +59,8 @@ internal sealed class SpreadRotorLoad : IRotorLoad
         Preconditions.Finite(speedRadPerS, nameof(speedRadPerS));
         Preconditions.NonNegative(gapM, nameof(gapM));
         var direct = _nominal.Direct;
-        double sigma = PhysicsRotorLoad.PlateConductivity(direct.Plate.Material, plateTempC) * _conductivityRatio;
-        double scale = PhysicsRotorLoad.RemanenceScale(direct.Rotor, magnetTempC) * _remanenceScale;
+        double sigma = direct.ConductivityAt(plateTempC) * _conductivityRatio;
+        double scale = direct.ForceScale(magnetTempC) * _remanenceScale;
         double x = sigma * Math.Abs(speedRadPerS);
         (double lift, double torque) = _nominal.EddyAtSigmaOmega(x, gapM);
         if (_thinner is not null && _thicker is not null)
