@@ -163,16 +163,15 @@ public static partial class CalibrationStudy
                     + "if the inertia is right, check the rotor row's remanence and radii and the gap.");
             }
         }
-        else if (ffOut)
+        else
         {
-            // Each series' own scale over the uncorrected eddy part at the fitted conductivity factor.
+            // Each series' own scale over the uncorrected eddy part at the fitted conductivity factor: a column in another
+            // unit shows as one series (or both) far outside the plausible force scale.
             double ScaleOf(string name)
             {
                 double sxy = 0, sxx = 0;
-                var points = request.Points!;
-                for (int i = 0; i < points.Count; i++)
+                foreach (var pt in request.Points!)
                 {
-                    var pt = points[i];
                     var (lift, torque) = problem.Eddy(cf, 1.0, pt.SpeedRadPerS, pt.GapM, pt.PlateTempC ?? request.PlateTempC);
                     if (name == "torque")
                     {
@@ -191,23 +190,25 @@ public static partial class CalibrationStudy
             double torqueScale = ScaleOf("torque");
             double liftScale = series.Contains("lift") ? ScaleOf("lift") : double.NaN;
             bool Plausible(double forceScale) => forceScale > 0 && Math.Sqrt(forceScale) >= options.FieldFactorRange.Min && Math.Sqrt(forceScale) <= options.FieldFactorRange.Max;
-            if (!Plausible(torqueScale) && (double.IsNaN(liftScale) || Plausible(liftScale) || TorqueUnit(torqueScale) is not null))
+            bool torqueBad = !Plausible(torqueScale);
+            bool liftBad = !double.IsNaN(liftScale) && !Plausible(liftScale);
+            if (torqueBad && TorqueUnit(torqueScale) is { } unit)
             {
-                string? unit = TorqueUnit(torqueScale);
-                if (unit is not null)
-                {
-                    return (CalibrationRefusal.TorqueUnits,
-                        $"the torques are about {torqueScale:G3} times what the model gives: the torque_nm column looks like {unit}, not N m. Convert it to N m and run again.");
-                }
+                return (CalibrationRefusal.TorqueUnits,
+                    $"the torques are about {torqueScale:G3} times what the model gives: the torque_nm column looks like {unit}, not N m. Convert it to N m and run again.");
             }
-            else if (!double.IsNaN(liftScale) && !Plausible(liftScale) && LiftUnit(liftScale) is { } liftUnit)
+            if (liftBad && !torqueBad && LiftUnit(liftScale) is { } liftUnit)
             {
                 return (CalibrationRefusal.LiftUnits,
                     $"the lifts are about {liftScale:G3} times what the model gives while the torques agree: the lift_n column looks like {liftUnit}, not N. Convert it to N and run again.");
             }
-            return (CalibrationRefusal.ImplausibleFactor,
-                $"the forces need a field factor of {ff:G3}, outside the plausible {options.FieldFactorRange.Min:G3}..{options.FieldFactorRange.Max:G3} "
-                + $"(torque {torqueScale:G3} times the model). Likely cause: the data belong to another rotor, plate or gap, or a column is in another unit; check the rotor row (remanence_t, radii, magnet_thickness_mm) and gap_mm.");
+            if (ffOut || torqueBad || liftBad)
+            {
+                return (CalibrationRefusal.ImplausibleFactor,
+                    $"the forces need a field factor of {ff:G3} (torque {torqueScale:G3} times the model{(double.IsNaN(liftScale) ? "" : $", lift {liftScale:G3} times")}), outside the plausible "
+                    + $"{options.FieldFactorRange.Min:G3}..{options.FieldFactorRange.Max:G3}. Likely cause: the data belong to another rotor, plate or gap, or a column is in another unit; "
+                    + "check the rotor row (remanence_t, radii, magnet_thickness_mm) and gap_mm.");
+            }
         }
         if (cfOut)
         {
