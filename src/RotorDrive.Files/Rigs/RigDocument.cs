@@ -39,6 +39,9 @@ public sealed class RigDocument
     /// <summary>"tolerances": part spreads for the stress test (optional; absent means no spread).</summary>
     public RigTolerancesSection? Tolerances { get; set; }
 
+    /// <summary>"calibrations": bench calibration file per rotor id, relative to the rig file (optional).</summary>
+    public Dictionary<string, string>? Calibrations { get; set; }
+
     /// <summary>A deep copy, for editing without touching the original.</summary>
     public RigDocument Clone() => RigDocumentReader.Read(RigDocumentWriter.Write(this), "(copy)").Document!;
 }

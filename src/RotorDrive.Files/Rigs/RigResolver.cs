@@ -1,6 +1,7 @@
 using RotorDrive.Core;
 using RotorDrive.Core.Craft;
 using RotorDrive.Core.Drive;
+using RotorDrive.Core.Loads;
 using RotorDrive.Core.Magnetics;
 using RotorDrive.Core.Studies;
 using RotorDrive.Core.Studies.Stress;
@@ -275,6 +276,8 @@ public static class RigResolver
             CheckSpreads(nominal, tolerances, ctx);
         }
 
+        var calibrations = ResolveCalibrations(document, rigFile, stations, stationsOk, ctx);
+
         var ordered = problems.OrderBy(p => p.Line).ThenBy(p => p.Column).ToList();
         if (ordered.Count > 0 || !partsOk || !stationsOk || !packOk || name is null || material is null || thickness is null
             || plateTemp is null || convection is null || spreading is null || body is null || design is null || landed is null || ambient is null
@@ -297,8 +300,57 @@ public static class RigResolver
             convection.Value)
         {
             PlateSpreadingFactor = spreading.Value,
+            Calibrations = calibrations,
         };
         return new RigResolveResult(rig, ordered) { Tolerances = tolerances ?? StressTolerances.None };
+    }
+
+    // "calibrations": {rotor id: file}, each file relative to the rig file, made for that rotor and its present catalog row.
+    private static Dictionary<string, RotorCalibration> ResolveCalibrations(RigDocument document, string rigFile, List<Station> stations, bool stationsOk, Context ctx)
+    {
+        var result = new Dictionary<string, RotorCalibration>(StringComparer.Ordinal);
+        if (document.Calibrations is not { } entries)
+        {
+            return result;
+        }
+        string folder = Path.GetDirectoryName(rigFile) ?? "";
+        foreach (var (rotorId, fileName) in entries)
+        {
+            string path = "$.calibrations." + rotorId;
+            var rotor = stations.Select(s => s.Rotor).FirstOrDefault(r => string.Equals(r.Id, rotorId, StringComparison.Ordinal));
+            if (rotor is null)
+            {
+                if (stationsOk)
+                {
+                    ctx.Report(path, Messages.CalibrationUnusedRotor(rotorId));
+                }
+                continue;
+            }
+            string full = Path.IsPathRooted(fileName) ? fileName : Path.Combine(folder, fileName);
+            var fileProblems = new List<InputProblem>();
+            string? text = TextFiles.TryRead(full, fileProblems);
+            var read = text is null ? null : Bench.CalibrationFile.Read(text, full, fileProblems);
+            foreach (var p in fileProblems)
+            {
+                ctx.Problems.Add(p);
+            }
+            if (read is not { } r)
+            {
+                continue;
+            }
+            if (!string.Equals(r.Calibration.RotorId, rotorId, StringComparison.Ordinal))
+            {
+                ctx.Problems.Add(new InputProblem(full, 0, 0, "rotor", Messages.CalibrationRotorMismatch(r.Calibration.RotorId, rotorId)));
+                continue;
+            }
+            if (!string.Equals(r.RotorRowSha256, Bench.CalibrationFile.RotorRowHash(rotor), StringComparison.OrdinalIgnoreCase))
+            {
+                ctx.Problems.Add(new InputProblem(full, 0, 0, "rotor_row_sha256", Messages.CalibrationRotorChanged(rotorId)));
+                continue;
+            }
+            result[rotorId] = r.Calibration with { Source = fileName };
+        }
+        return result;
     }
 
     /// <summary>Checks the "tolerances" section of a document and converts it to SI; problems are added to
@@ -444,6 +496,8 @@ public static class RigResolver
     /// <summary>Collects problems for one resolve, placing each at its JSON path's position.</summary>
     private sealed class Context(string file, RigSourceMap map, List<InputProblem> problems)
     {
+        public List<InputProblem> Problems => problems;
+
         public void Report(string path, string message)
         {
             var (line, column) = map.Find(path);

@@ -95,7 +95,7 @@ public sealed class LiftDragSheet : ChartSheet
             MaxPlateTempC = Math.Max(rigRange.MaxPlateTempC, plateTempC),
         };
         progress?.Report(0.1);
-        var table = RotorLoadTable.Build(design, rig.Plate, range);
+        var table = RotorLoadTable.Build(design, rig.Plate, range, rig.LoadOptionsFor(design));
         token.ThrowIfCancellationRequested();
         progress?.Report(0.8);
         double[] speeds = SpeedGrid.ZeroTo(Units.RadPerSToRpm(design.MaxSpeedRadPerS), Points - 1).Select(Units.RpmToRadPerS).ToArray();
