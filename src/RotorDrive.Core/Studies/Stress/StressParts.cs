@@ -25,6 +25,9 @@ public sealed record StressParts(
     double CgOffsetXM,
     double CgOffsetYM)
 {
+    /// <summary>Drawn bench calibrations by rotor design id (empty when the rig has none, see <c>Rig.Calibrations</c>).</summary>
+    public IReadOnlyDictionary<string, Loads.LoadCalibration> Calibrations { get; init; } = new Dictionary<string, Loads.LoadCalibration>();
+
     /// <summary>The value of a quantity: for a per-station one at <paramref name="station"/>, otherwise the rig's.</summary>
     /// <param name="quantity">The quantity.</param>
     /// <param name="station">Station index for per-station quantities (ignored otherwise).</param>
