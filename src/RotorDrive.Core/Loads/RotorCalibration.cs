@@ -6,4 +6,9 @@ namespace RotorDrive.Core.Loads;
 /// <param name="Covariance">4 x 4 covariance of conductivity factor, field factor, bearing drag (N m) and bearing damping
 /// (N m per rad/s), in that order; rows and columns of quantities not fitted are zero.</param>
 /// <param name="Source">The calibration file's name, for reports.</param>
-public sealed record RotorCalibration(string RotorId, LoadCalibration Factors, double[][] Covariance, string Source);
+public sealed record RotorCalibration(string RotorId, LoadCalibration Factors, double[][] Covariance, string Source)
+{
+    /// <summary>The steady bench points the calibration was fitted to, when they were found with it (for showing measured
+    /// points over the fitted curve); empty for a spin-down or when the data file is not at hand.</summary>
+    public IReadOnlyList<Studies.Calibration.BenchPoint> BenchPoints { get; init; } = [];
+}

@@ -91,8 +91,8 @@ public static class CalibrationFile
     /// <param name="text">The whole file.</param>
     /// <param name="file">The file name for problems.</param>
     /// <param name="problems">Where every problem is reported.</param>
-    /// <returns>The calibration with its rotor-row hash, or null when the file has problems.</returns>
-    public static (RotorCalibration Calibration, string RotorRowSha256)? Read(string text, string file, List<InputProblem> problems)
+    /// <returns>The calibration with its rotor-row hash and its data file's name and hash, or null when the file has problems.</returns>
+    public static (RotorCalibration Calibration, string RotorRowSha256, string? DataFile, string? DataSha256)? Read(string text, string file, List<InputProblem> problems)
     {
         ArgumentNullException.ThrowIfNull(text);
         ArgumentNullException.ThrowIfNull(problems);
@@ -191,7 +191,9 @@ public static class CalibrationFile
             return null;
         }
         var factors = new LoadCalibration(values[0], values[1], fitted[2] ? values[2] : null, fitted[3] ? values[3] : null);
-        return (new RotorCalibration(rotor, factors, covariance, Path.GetFileName(file)), rotorHash);
+        string? dataFile = rows.TryGetValue("data_file", out var d) && d.Fields[1].Length > 0 ? d.Fields[1] : null;
+        string? dataHash = rows.TryGetValue("data_sha256", out var h) && h.Fields[1].Length > 0 ? h.Fields[1] : null;
+        return (new RotorCalibration(rotor, factors, covariance, Path.GetFileName(file)), rotorHash, dataFile, dataHash);
     }
 
     // File units per SI unit: bearing damping is written per 1000 rpm.

@@ -348,9 +348,28 @@ public static class RigResolver
                 ctx.Problems.Add(new InputProblem(full, 0, 0, "rotor_row_sha256", Messages.CalibrationRotorChanged(rotorId)));
                 continue;
             }
-            result[rotorId] = r.Calibration with { Source = fileName };
+            result[rotorId] = r.Calibration with { Source = fileName, BenchPoints = BenchPointsBeside(full, r.DataFile, r.DataSha256) };
         }
         return result;
+    }
+
+    // The steady points a calibration was fitted to, when its data file lies beside it unchanged (same SHA-256); otherwise
+    // none: they are only shown over the fitted curve, never used for a result.
+    private static IReadOnlyList<Core.Studies.Calibration.BenchPoint> BenchPointsBeside(string calibrationPath, string? dataFile, string? dataSha256)
+    {
+        if (dataFile is null || dataSha256 is null)
+        {
+            return [];
+        }
+        string path = Path.Combine(Path.GetDirectoryName(calibrationPath) ?? "", dataFile);
+        var ignored = new List<InputProblem>();
+        string? text = File.Exists(path) ? TextFiles.TryRead(path, ignored) : null;
+        if (text is null || !string.Equals(Hashes.Sha256(text), dataSha256, StringComparison.OrdinalIgnoreCase))
+        {
+            return [];
+        }
+        var data = Bench.BenchData.Read(text, path, 0);
+        return data.IsClean && data.Points is { } points ? points : [];
     }
 
     /// <summary>Checks the "tolerances" section of a document and converts it to SI; problems are added to
