@@ -61,7 +61,10 @@ public static class StressSampler
         {
             calibrations[rotor] = CalibrationDraw.Draw(calibration, held, random);
         }
-        return new StressParts(sampleIndex, stations, thickness, sigma, ambient, plateTemp, soc, packR, payload, cgx, cgy) { Calibrations = calibrations };
+        return new StressParts(sampleIndex, stations, thickness, sigma, ambient, plateTemp, soc, packR, payload, cgx, cgy)
+        {
+            Calibrations = calibrations.Count == 0 ? StressParts.NoCalibrations : calibrations,
+        };
     }
 
     /// <summary>The nominal parts (no spread): what every sample draws with <see cref="StressTolerances.None"/>.</summary>
