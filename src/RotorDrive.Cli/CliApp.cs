@@ -25,6 +25,7 @@ public static class CliApp
         root.Subcommands.Add(YawCommand.Create());
         root.Subcommands.Add(RankCommand.Create());
         root.Subcommands.Add(StressCommand.Create());
+        root.Subcommands.Add(CalibrateCommand.Create());
         NumericOptions.Apply(root);
         return root;
     }

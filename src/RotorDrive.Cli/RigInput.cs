@@ -19,9 +19,26 @@ public static class RigInput
         var result = RigLoader.Load(rigPath);
         if (result.IsClean)
         {
+            // Every analysis of this rig uses the calibrated loads; say so once, on stderr so --json output stays clean.
+            foreach (var line in CalibrationNotes(result.Rig!))
+            {
+                error.WriteLine(line);
+            }
             return result;
         }
         ProblemReport.Print(result.Problems, error);
         return null;
+    }
+
+    /// <summary>One line per calibrated rotor design: which file and which factors the analyses use.</summary>
+    /// <param name="rig">The rig.</param>
+    public static IEnumerable<string> CalibrationNotes(Core.Craft.Rig rig)
+    {
+        ArgumentNullException.ThrowIfNull(rig);
+        foreach (var (rotor, c) in rig.Calibrations.OrderBy(c => c.Key, StringComparer.Ordinal))
+        {
+            yield return $"note: rotor '{rotor}' uses its bench calibration {c.Source} (conductivity_factor {Numbers.Format(c.Factors.ConductivityFactor, 3)}, "
+                + $"field_factor {Numbers.Format(c.Factors.FieldFactor, 3)})";
+        }
     }
 }

@@ -123,6 +123,35 @@ public static class Messages
     public static string NoCurveForChemistry(string chemistry, string curveFile)
         => $"chemistry '{chemistry}' has no open-circuit voltage curve in {curveFile}";
 
+    // ---- bench data and calibration files ----
+
+    /// <summary>A spin-down whose times do not increase.</summary>
+    public static string TimeNotIncreasing(double previous, double value) => $"time_s must increase row by row; {N(value)} follows {N(previous)}";
+
+    /// <summary>Too few rows of bench data.</summary>
+    public static string TooFewBenchRows(int rows, int needed) => $"the bench file has {rows} usable row(s); at least {needed} are needed";
+
+    /// <summary>A bench file whose header names neither shape.</summary>
+    public static string BenchHeaderUnknown()
+        => "the header must name either a spin-down (time_s, speed_rpm, optional gap_mm) or steady points (speed_rpm, gap_mm, torque_nm, optional lift_n, plate_temp_c)";
+
+    /// <summary>A calibration file row or key that is missing.</summary>
+    public static string CalibrationMissing(string key) => $"the calibration file has no '{key}' row";
+
+    /// <summary>A calibration made for another rotor.</summary>
+    public static string CalibrationRotorMismatch(string fileRotor, string rigRotor)
+        => $"this calibration was made for rotor '{fileRotor}', not '{rigRotor}'";
+
+    /// <summary>A rotor row that changed since its calibration.</summary>
+    public static string CalibrationRotorChanged(string rotor)
+        => $"the catalog row of rotor '{rotor}' changed since this calibration (rotor_row_sha256 differs); run 'rotordrive calibrate' again";
+
+    /// <summary>A calibration entry for a rotor no station uses.</summary>
+    public static string CalibrationUnusedRotor(string rotor) => $"no station uses rotor '{rotor}'";
+
+    /// <summary>A calibration factor that no load model accepts.</summary>
+    public static string CalibrationFactorInvalid(string key, double value) => $"{key} must be greater than 0; got {N(value)}";
+
     // ---- rig file (JSON) ----
 
     /// <summary>The rig file is not valid JSON.</summary>

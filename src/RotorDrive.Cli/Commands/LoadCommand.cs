@@ -166,7 +166,7 @@ public static class LoadCommand
             MinPlateTempC = Math.Min(rigRange.MinPlateTempC, plateTempC),
             MaxPlateTempC = Math.Max(rigRange.MaxPlateTempC, plateTempC),
         };
-        var options = new LoadModelOptions { EndEffectCorrection = request.EndCorrection };
+        var options = rig.LoadOptionsFor(design, new LoadModelOptions { EndEffectCorrection = request.EndCorrection });
         TabulatedRotorLoad table = RotorLoadTable.Build(design, rig.Plate, tableRange, options);
         LoadSweepResult result = LoadSweep.Run(table, design.Id, request.EndCorrection, gapM, plateTempC, magnetTempC, speeds, topSpeed);
 

@@ -63,6 +63,24 @@ public sealed record Rig(
     /// at the rig origin.</summary>
     public CraftRoute? Route { get; init; }
 
+    /// <summary>Bench calibrations by rotor design id (rig file <c>calibrations</c>); empty when none. Every analysis builds
+    /// a calibrated rotor's load with its factors (<see cref="LoadOptionsFor"/>).</summary>
+    public IReadOnlyDictionary<string, RotorCalibration> Calibrations { get; init; } = new Dictionary<string, RotorCalibration>();
+
+    /// <summary>The calibration of a rotor design, or null when it has none.</summary>
+    /// <param name="rotor">The rotor design.</param>
+    public RotorCalibration? CalibrationOf(RotorDesign rotor)
+        => rotor is not null && Calibrations.TryGetValue(rotor.Id, out var c) ? c : null;
+
+    /// <summary>The load model settings for a rotor of this rig: the given settings with the rotor's calibration, if any.</summary>
+    /// <param name="rotor">The rotor design.</param>
+    /// <param name="options">Base settings, or null for <see cref="LoadModelOptions.Default"/>.</param>
+    public LoadModelOptions LoadOptionsFor(RotorDesign rotor, LoadModelOptions? options = null)
+    {
+        options ??= LoadModelOptions.Default;
+        return CalibrationOf(rotor) is { } c ? options with { Calibration = c.Factors } : options;
+    }
+
     /// <summary>Total mass: structure, payload, rotors, assigned motors and controllers, and packs, kg.</summary>
     public double TotalMassKg =>
         Body.EmptyMassKg + Body.PayloadKg

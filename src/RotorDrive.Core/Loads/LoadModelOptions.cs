@@ -3,7 +3,7 @@ namespace RotorDrive.Core.Loads;
 /// <summary>Settings of the rotor load model.</summary>
 /// <remarks>Defaults: the three-dimensional model with 8 radial strips, 4 harmonics of the array and a Fourier series cut at
 /// 1e-6 of the fundamental at a 2 mm gap; for the two-dimensional model, the end correction on and 24 Gauss-Legendre points
-/// over the magnet annulus; standard air.</remarks>
+/// over the magnet annulus; standard air; no calibration.</remarks>
 public sealed record LoadModelOptions
 {
     /// <summary>The defaults.</summary>
@@ -32,4 +32,7 @@ public sealed record LoadModelOptions
 
     /// <summary>Air for the windage torque (default <see cref="AirProperties.Standard"/>).</summary>
     public AirProperties Air { get; init; } = AirProperties.Standard;
+
+    /// <summary>Factors fitted to bench data for this rotor over this plate, or null for the uncorrected model (default).</summary>
+    public LoadCalibration? Calibration { get; init; }
 }

@@ -18,6 +18,10 @@ public sealed class PhysicsRotorLoad : IRotorLoad
     private readonly double _windageRadiusM;
     private readonly double _airDensity;
     private readonly double _airViscosity;
+    private readonly double _conductivityFactor;
+    private readonly double _forceFactor;
+    private readonly double _bearingDragNm;
+    private readonly double _bearingDampingNmPerRadPerS;
 
     /// <summary>Builds the direct model for a rotor over a plate.</summary>
     /// <param name="rotor">The rotor design.</param>
@@ -39,10 +43,17 @@ public sealed class PhysicsRotorLoad : IRotorLoad
         Preconditions.NonNegative(rotor.BearingDragNm, "rotor bearing drag");
         Preconditions.NonNegative(rotor.BearingDampingNmPerRadPerS, "rotor bearing damping");
         Preconditions.Finite(rotor.RemanenceTempCoeffPerK, "rotor remanence temperature coefficient");
+        var calibration = options.Calibration ?? LoadCalibration.Identity;
+        calibration.Validate();
         Rotor = rotor;
         Plate = plate;
         Options = options;
         Preconditions.NonNegative(plate.BackIronM, "plate back iron thickness");
+        _conductivityFactor = calibration.ConductivityFactor;
+        // Pressures go as the square of the source field (../DESIGN.md §4.2), so a field factor f scales forces by f^2.
+        _forceFactor = calibration.FieldFactor * calibration.FieldFactor;
+        _bearingDragNm = calibration.BearingDragNm ?? rotor.BearingDragNm;
+        _bearingDampingNmPerRadPerS = calibration.BearingDampingNmPerRadPerS ?? rotor.BearingDampingNmPerRadPerS;
         _eddy = options.Model == LoadModelKind.TwoDimensional
             ? RotorEddyModel.TwoDimensional(rotor, plate, options.EndEffectCorrection, options.RadialPoints)
             : RotorEddyModel.ThreeDimensional(rotor, plate, options.StripPoints, options.Harmonics, options.ReferenceGapM, options.SeriesTolerance);
@@ -60,6 +71,9 @@ public sealed class PhysicsRotorLoad : IRotorLoad
     /// <summary>The model settings.</summary>
     public LoadModelOptions Options { get; }
 
+    /// <summary>The calibration applied (<see cref="LoadCalibration.Identity"/> when the options carry none).</summary>
+    public LoadCalibration Calibration => Options.Calibration ?? LoadCalibration.Identity;
+
     /// <summary>The eddy-current quadrature this load uses.</summary>
     public RotorEddyModel Eddy => _eddy;
 
@@ -76,15 +90,21 @@ public sealed class PhysicsRotorLoad : IRotorLoad
     {
         Preconditions.Finite(speedRadPerS, nameof(speedRadPerS));
         Preconditions.NonNegative(gapM, nameof(gapM));
-        double sigma = PlateConductivity(Plate.Material, plateTempC);
-        double scale = RemanenceScale(Rotor, magnetTempC);
+        double sigma = ConductivityAt(plateTempC);
+        double scale = ForceScale(magnetTempC);
         EddyForces eddy = _eddy.Evaluate(sigma, speedRadPerS, gapM);
         double windage = DiscWindage.TorqueUnchecked(speedRadPerS, _windageRadiusM, _airDensity, _airViscosity);
-        double bearing = BearingDrag.TorqueUnchecked(speedRadPerS, Rotor.BearingDragNm, Rotor.BearingDampingNmPerRadPerS);
+        double bearing = BearingDrag.TorqueUnchecked(speedRadPerS, _bearingDragNm, _bearingDampingNmPerRadPerS);
         return new LoadPoint(scale * eddy.LiftN, scale * eddy.TorqueNm, windage, bearing, scale * eddy.PowerW);
     }
 
-    /// <summary>Eddy lift and torque at 20 C remanence for a product sigma*omega (S rad / (m s), at least 0) and a gap.</summary>
+    /// <summary>The conductivity the rotor sees at a plate temperature: the material's, times the calibration's factor, S/m.</summary>
+    internal double ConductivityAt(double plateTempC) => PlateConductivity(Plate.Material, plateTempC) * _conductivityFactor;
+
+    /// <summary>Scale of the eddy forces at a magnet temperature: (Br(T)/Br20)^2 times the calibration's field factor squared.</summary>
+    internal double ForceScale(double magnetTempC) => RemanenceScale(Rotor, magnetTempC) * _forceFactor;
+
+    /// <summary>Eddy lift and torque at 20 C remanence (no calibration factor) for a product sigma*omega (S rad / (m s), at least 0) and a gap.</summary>
     internal (double LiftN, double TorqueNm) EddyAtSigmaOmega(double sigmaOmega, double gapM)
     {
         EddyForces f = _eddy.Evaluate(sigmaOmega, 1.0, gapM);
@@ -94,7 +114,7 @@ public sealed class PhysicsRotorLoad : IRotorLoad
     /// <summary>Windage plus bearing torque at a signed speed, N m.</summary>
     internal (double WindageNm, double BearingNm) MechanicalTorques(double speedRadPerS)
         => (DiscWindage.TorqueUnchecked(speedRadPerS, _windageRadiusM, _airDensity, _airViscosity),
-            BearingDrag.TorqueUnchecked(speedRadPerS, Rotor.BearingDragNm, Rotor.BearingDampingNmPerRadPerS));
+            BearingDrag.TorqueUnchecked(speedRadPerS, _bearingDragNm, _bearingDampingNmPerRadPerS));
 
     /// <summary>Plate conductivity at a temperature, checked to be positive.</summary>
     internal static double PlateConductivity(PlateMaterial material, double plateTempC)

@@ -44,8 +44,7 @@ public sealed class TabulatedRotorLoad : IRotorLoad
     {
         _direct = direct;
         Range = range;
-        PlateMaterial material = direct.Plate.Material;
-        double sigmaHigh = Math.Max(PhysicsRotorLoad.PlateConductivity(material, range.MinPlateTempC), PhysicsRotorLoad.PlateConductivity(material, range.MaxPlateTempC));
+        double sigmaHigh = Math.Max(direct.ConductivityAt(range.MinPlateTempC), direct.ConductivityAt(range.MaxPlateTempC));
         _speedPoints = range.SpeedPoints;
         _gapPoints = range.GapPoints;
         _xMax = sigmaHigh * range.MaxSpeedRadPerS;
@@ -91,10 +90,10 @@ public sealed class TabulatedRotorLoad : IRotorLoad
     /// <summary>Largest tabulated sigma omega, S rad/(m s).</summary>
     public double SigmaOmegaMax => _xMax;
 
-    /// <summary>Largest eddy lift on the table's nodes (20 C remanence), N.</summary>
+    /// <summary>Largest eddy lift on the table's nodes (20 C remanence, before any calibration field factor), N.</summary>
     public double LargestLiftN { get; }
 
-    /// <summary>Largest eddy torque on the table's nodes (20 C remanence), N m.</summary>
+    /// <summary>Largest eddy torque on the table's nodes (20 C remanence, before any calibration field factor), N m.</summary>
     public double LargestTorqueNm { get; }
 
     /// <summary>Evaluates lift, eddy torque, windage, bearing drag and eddy power at a speed, gap and temperatures.</summary>
@@ -107,8 +106,8 @@ public sealed class TabulatedRotorLoad : IRotorLoad
     {
         Preconditions.Finite(speedRadPerS, nameof(speedRadPerS));
         Preconditions.NonNegative(gapM, nameof(gapM));
-        double sigma = PhysicsRotorLoad.PlateConductivity(_direct.Plate.Material, plateTempC);
-        double scale = PhysicsRotorLoad.RemanenceScale(_direct.Rotor, magnetTempC);
+        double sigma = _direct.ConductivityAt(plateTempC);
+        double scale = _direct.ForceScale(magnetTempC);
         (double lift, double torque) = EddyAtSigmaOmega(sigma * Math.Abs(speedRadPerS), gapM);
         lift *= scale;
         torque *= scale;

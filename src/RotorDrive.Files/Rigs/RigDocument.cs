@@ -42,6 +42,9 @@ public sealed class RigDocument
     /// <summary>"route": the legs the craft follows during an endurance run, or null to hover in place.</summary>
     public List<RigRouteLegSection>? Route { get; set; }
 
+    /// <summary>"calibrations": bench calibration file per rotor id, relative to the rig file (optional).</summary>
+    public Dictionary<string, string>? Calibrations { get; set; }
+
     /// <summary>A deep copy, for editing without touching the original.</summary>
     public RigDocument Clone() => RigDocumentReader.Read(RigDocumentWriter.Write(this), "(copy)").Document!;
 }

@@ -166,6 +166,31 @@ public static class RigDocumentReader
             problems.Add(new InputProblem(file, routeNode.Line, routeNode.Column, "$.route", Messages.WrongType("an array", routeNode.Describe())));
         }
 
+        if (top.Take("calibrations") is { } calibrationsNode)
+        {
+            if (calibrationsNode is JsonObjectNode calibrations)
+            {
+                doc.Calibrations = new Dictionary<string, string>(StringComparer.Ordinal);
+                foreach (var member in calibrations.Members)
+                {
+                    if (member.Value is JsonScalarNode { Kind: JsonScalarKind.String, Text: { } fileName })
+                    {
+                        doc.Calibrations[member.Key] = fileName;
+                    }
+                    else
+                    {
+                        problems.Add(new InputProblem(file, member.Value.Line, member.Value.Column, "$.calibrations." + member.Key,
+                            Messages.WrongType("a file name (string)", member.Value.Describe())));
+                    }
+                }
+            }
+            else
+            {
+                problems.Add(new InputProblem(file, calibrationsNode.Line, calibrationsNode.Column, "$.calibrations",
+                    Messages.WrongType("an object {rotor id: calibration file}", calibrationsNode.Describe())));
+            }
+        }
+
         top.ReportUnknownKeys();
         var ordered = problems.OrderBy(x => x.Line).ThenBy(x => x.Column).ToList();
         return new RigDocumentReadResult(doc, map, ordered);

@@ -129,6 +129,15 @@ public static class RigDocumentWriter
                 }
                 w.WriteEndArray();
             }
+            if (document.Calibrations is { Count: > 0 } calibrations)
+            {
+                w.WriteStartObject("calibrations");
+                foreach (var (rotor, fileName) in calibrations)
+                {
+                    w.WriteString(rotor, fileName);
+                }
+                w.WriteEndObject();
+            }
             w.WriteEndObject();
         }
         return Encoding.UTF8.GetString(stream.ToArray()) + "\n";

@@ -5,7 +5,7 @@ public static class RigKeys
 {
     /// <summary>Top-level keys.</summary>
     public static IReadOnlyList<string> Top { get; } =
-        ["name", "catalogs", "plate", "craft", "gap", "ambient_c", "gear_yaw_friction_nm", "stations", "pack", "limits", "tolerances", "route"];
+        ["name", "catalogs", "plate", "craft", "gap", "ambient_c", "gear_yaw_friction_nm", "stations", "pack", "limits", "tolerances", "route", "calibrations"];
 
     /// <summary>Keys of "catalogs".</summary>
     public static IReadOnlyList<string> Catalogs { get; } = ["motors", "controllers", "packs", "cell_curves", "rotors", "plates"];

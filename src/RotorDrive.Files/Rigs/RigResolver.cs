@@ -1,6 +1,7 @@
 using RotorDrive.Core;
 using RotorDrive.Core.Craft;
 using RotorDrive.Core.Drive;
+using RotorDrive.Core.Loads;
 using RotorDrive.Core.Magnetics;
 using RotorDrive.Core.Studies;
 using RotorDrive.Core.Studies.Stress;
@@ -287,6 +288,8 @@ public static class RigResolver
             CheckSpreads(nominal, tolerances, ctx);
         }
 
+        var calibrations = ResolveCalibrations(document, rigFile, stations, stationsOk, ctx);
+
         var ordered = problems.OrderBy(p => p.Line).ThenBy(p => p.Column).ToList();
         if (ordered.Count > 0 || !partsOk || !stationsOk || !packOk || name is null || material is null || thickness is null
             || plateTemp is null || convection is null || spreading is null || body is null || design is null || landed is null || ambient is null
@@ -311,6 +314,7 @@ public static class RigResolver
             PlateSpreadingFactor = spreading.Value,
             PlateCooling = new PlateCooling(top.Value, bottom.Value, emissivity.Value),
             Route = route,
+            Calibrations = calibrations,
         };
         return new RigResolveResult(rig, ordered) { Tolerances = tolerances ?? StressTolerances.None };
     }
@@ -360,6 +364,73 @@ public static class RigResolver
             ok = false;
         }
         return ok ? (new CraftRoute(result), true) : (null, false);
+    }
+
+    // "calibrations": {rotor id: file}, each file relative to the rig file, made for that rotor and its present catalog row.
+    private static Dictionary<string, RotorCalibration> ResolveCalibrations(RigDocument document, string rigFile, List<Station> stations, bool stationsOk, Context ctx)
+    {
+        var result = new Dictionary<string, RotorCalibration>(StringComparer.Ordinal);
+        if (document.Calibrations is not { } entries)
+        {
+            return result;
+        }
+        string folder = Path.GetDirectoryName(rigFile) ?? "";
+        foreach (var (rotorId, fileName) in entries)
+        {
+            string path = "$.calibrations." + rotorId;
+            var rotor = stations.Select(s => s.Rotor).FirstOrDefault(r => string.Equals(r.Id, rotorId, StringComparison.Ordinal));
+            if (rotor is null)
+            {
+                if (stationsOk)
+                {
+                    ctx.Report(path, Messages.CalibrationUnusedRotor(rotorId));
+                }
+                continue;
+            }
+            string full = Path.IsPathRooted(fileName) ? fileName : Path.Combine(folder, fileName);
+            var fileProblems = new List<InputProblem>();
+            string? text = TextFiles.TryRead(full, fileProblems);
+            var read = text is null ? null : Bench.CalibrationFile.Read(text, full, fileProblems);
+            foreach (var p in fileProblems)
+            {
+                ctx.Problems.Add(p);
+            }
+            if (read is not { } r)
+            {
+                continue;
+            }
+            if (!string.Equals(r.Calibration.RotorId, rotorId, StringComparison.Ordinal))
+            {
+                ctx.Problems.Add(new InputProblem(full, 0, 0, "rotor", Messages.CalibrationRotorMismatch(r.Calibration.RotorId, rotorId)));
+                continue;
+            }
+            if (!string.Equals(r.RotorRowSha256, Bench.CalibrationFile.RotorRowHash(rotor), StringComparison.OrdinalIgnoreCase))
+            {
+                ctx.Problems.Add(new InputProblem(full, 0, 0, "rotor_row_sha256", Messages.CalibrationRotorChanged(rotorId)));
+                continue;
+            }
+            result[rotorId] = r.Calibration with { Source = fileName, BenchPoints = BenchPointsBeside(full, r.DataFile, r.DataSha256) };
+        }
+        return result;
+    }
+
+    // The steady points a calibration was fitted to, when its data file lies beside it unchanged (same SHA-256); otherwise
+    // none: they are only shown over the fitted curve, never used for a result.
+    private static IReadOnlyList<Core.Studies.Calibration.BenchPoint> BenchPointsBeside(string calibrationPath, string? dataFile, string? dataSha256)
+    {
+        if (dataFile is null || dataSha256 is null)
+        {
+            return [];
+        }
+        string path = Path.Combine(Path.GetDirectoryName(calibrationPath) ?? "", dataFile);
+        var ignored = new List<InputProblem>();
+        string? text = File.Exists(path) ? TextFiles.TryRead(path, ignored) : null;
+        if (text is null || !string.Equals(Hashes.Sha256(text), dataSha256, StringComparison.OrdinalIgnoreCase))
+        {
+            return [];
+        }
+        var data = Bench.BenchData.Read(text, path, 0);
+        return data.IsClean && data.Points is { } points ? points : [];
     }
 
     /// <summary>Checks the "tolerances" section of a document and converts it to SI; problems are added to
@@ -505,6 +576,8 @@ public static class RigResolver
     /// <summary>Collects problems for one resolve, placing each at its JSON path's position.</summary>
     private sealed class Context(string file, RigSourceMap map, List<InputProblem> problems)
     {
+        public List<InputProblem> Problems => problems;
+
         public void Report(string path, string message)
         {
             var (line, column) = map.Find(path);

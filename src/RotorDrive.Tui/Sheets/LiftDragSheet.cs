@@ -95,7 +95,7 @@ public sealed class LiftDragSheet : ChartSheet
             MaxPlateTempC = Math.Max(rigRange.MaxPlateTempC, plateTempC),
         };
         progress?.Report(0.1);
-        var table = RotorLoadTable.Build(design, rig.Plate, range);
+        var table = RotorLoadTable.Build(design, rig.Plate, range, rig.LoadOptionsFor(design));
         token.ThrowIfCancellationRequested();
         progress?.Report(0.8);
         double[] speeds = SpeedGrid.ZeroTo(Units.RadPerSToRpm(design.MaxSpeedRadPerS), Points - 1).Select(Units.RpmToRadPerS).ToArray();
@@ -118,19 +118,40 @@ public sealed class LiftDragSheet : ChartSheet
             + $"lift {top.LiftN:F0} N at {top.SpeedRpm:F0} rpm; share of weight {share:F0} N "
             + (lifting is null ? "! not reached by rated speed" : $"from {lifting.SpeedRpm:F0} rpm");
         var rpm = r.Rows.Select(x => x.SpeedRpm).ToList();
+        var torqueLines = new List<ChartLine>
+        {
+            new("eddy", '.', r.Rows.Select(x => (x.SpeedRpm, x.EddyTorqueNm)).ToList()),
+            new("total torque", '*', r.Rows.Select(x => (x.SpeedRpm, x.TotalTorqueNm)).ToList()),
+            new("drag peak", 'X', [(peak.SpeedRpm, peak.TorqueNm)], Joined: false),
+        };
+        var liftLines = new List<ChartLine>
+        {
+            new("lift", '*', r.Rows.Select(x => (x.SpeedRpm, x.LiftN)).ToList()),
+            ChartLine.Level("weight share per station", '-', rpm[0], rpm[^1], share),
+        };
+        // Measured bench points at the shown gap (within a quarter millimetre) over the calibrated curves.
+        if (rig.Calibrations.TryGetValue(r.RotorId, out var calibration))
+        {
+            var measured = calibration.BenchPoints.Where(p => Math.Abs(p.GapM - r.GapM) <= 0.25e-3).ToList();
+            if (measured.Count > 0)
+            {
+                torqueLines.Add(new ChartLine("measured", 'o', measured.Select(p => (Units.RadPerSToRpm(p.SpeedRadPerS), p.TorqueNm)).ToList(), Joined: false));
+                var lifts = measured.Where(p => p.LiftN is not null).Select(p => (Units.RadPerSToRpm(p.SpeedRadPerS), p.LiftN!.Value)).ToList();
+                if (lifts.Count > 0)
+                {
+                    liftLines.Add(new ChartLine("measured", 'o', lifts, Joined: false));
+                }
+            }
+            // The note joins the first readout line, so the sheet's layout is the same with or without a calibration.
+            int firstLineEnd = Panel.Readout.IndexOf('\n', StringComparison.Ordinal);
+            Panel.Readout = Panel.Readout[..firstLineEnd]
+                + $"; calibrated {calibration.Source} (cond. x{calibration.Factors.ConductivityFactor:F3}, field x{calibration.Factors.FieldFactor:F3}, {measured.Count} bench pts here)"
+                + Panel.Readout[firstLineEnd..];
+        }
         Panel.ShowPages(
         [
-            new ChartData("speed, rpm", "torque, N m",
-            [
-                new ChartLine("eddy", '.', r.Rows.Select(x => (x.SpeedRpm, x.EddyTorqueNm)).ToList()),
-                new ChartLine("total torque", '*', r.Rows.Select(x => (x.SpeedRpm, x.TotalTorqueNm)).ToList()),
-                new ChartLine("drag peak", 'X', [(peak.SpeedRpm, peak.TorqueNm)], Joined: false),
-            ]),
-            new ChartData("speed, rpm", "lift, N",
-            [
-                new ChartLine("lift", '*', r.Rows.Select(x => (x.SpeedRpm, x.LiftN)).ToList()),
-                ChartLine.Level("weight share per station", '-', rpm[0], rpm[^1], share),
-            ]),
+            new ChartData("speed, rpm", "torque, N m", torqueLines),
+            new ChartData("speed, rpm", "lift, N", liftLines),
         ]);
     }
 }

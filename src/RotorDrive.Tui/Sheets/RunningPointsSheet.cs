@@ -55,7 +55,7 @@ public sealed class RunningPointsSheet : ChartSheet
         {
             return null;
         }
-        var table = RotorLoadTable.Build(s.Rotor, rig.Plate, rig.LoadTableRangeFor(s.Rotor));
+        var table = RotorLoadTable.Build(s.Rotor, rig.Plate, rig.LoadTableRangeFor(s.Rotor), rig.LoadOptionsFor(s.Rotor));
         return new StationDrive(new Drivetrain(s.Motor!, s.Controller!), rig.Packs!, s.Rotor, table, rig.Limits.Station);
     }
 

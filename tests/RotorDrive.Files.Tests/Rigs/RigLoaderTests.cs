@@ -149,6 +149,7 @@ public class RigLoaderTests
             Pack = new RigPackSection { Id = "p", Count = 2 },
             Limits = new RigLimitsSection { YawTorqueNm = 1, PlateTempC = 2, CellCutoffV = 3, UsableCapacityPct = 4, MaxDuty = 0.5, LiftoffTimeS = 6 },
             Tolerances = new RigTolerancesSection(),
+            Calibrations = new Dictionary<string, string> { ["r"] = "r-calibration.csv" },
         };
         doc.Tolerances.Entries["motor_kv_rpm_per_v"] = RigToleranceEntry.NormalPercent(2);
         doc.Tolerances.Entries["gap_offset_mm"] = RigToleranceEntry.NormalAbsolute(0.5);
@@ -156,7 +157,7 @@ public class RigLoaderTests
         doc.Tolerances.Entries["ambient_c"] = RigToleranceEntry.UniformAbsolute(-5, 5);
         var expected = RigKeys.Top.Concat(RigKeys.Catalogs).Concat(RigKeys.Plate).Concat(RigKeys.Craft).Concat(RigKeys.Gap)
             .Concat(RigKeys.Station).Concat(RigKeys.Pack).Concat(RigKeys.Limits)
-            .Concat(["motor_kv_rpm_per_v", "gap_offset_mm", "motor_resistance_ohm", "ambient_c"]).Concat(RigToleranceKeys.EntryKeys).Order().ToList();
+            .Concat(["motor_kv_rpm_per_v", "gap_offset_mm", "motor_resistance_ohm", "ambient_c", "r"]).Concat(RigToleranceKeys.EntryKeys).Order().ToList();
         string written = RigDocumentWriter.Write(doc);
         Assert.Equal(expected, KeysOf(written));
         Assert.Empty(RigDocumentReader.Read(written, "w.json").Problems);

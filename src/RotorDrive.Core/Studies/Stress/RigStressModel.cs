@@ -12,7 +12,7 @@ namespace RotorDrive.Core.Studies.Stress;
 /// <para>A sample's variant (<see cref="Variant"/>): per station, the motor with its drawn Kv, winding resistance and
 /// no-load current and the controller's drawn current limit (<see cref="DriveOptions.CurrentLimitScale"/>), the drawn gap
 /// offset, plate temperature and ambient (windings and magnets) in its <see cref="StationConditions"/>, and its load
-/// wrapped for the drawn remanence, plate conductivity and plate thickness over the shared tables; for the rig, the
+/// wrapped for the drawn remanence, plate conductivity, plate thickness and bench calibration (factors drawn correlated from the fit's covariance, <see cref="StressSampler"/>) over the shared tables; for the rig, the
 /// drawn payload, centre-of-gravity offset, state of charge and pack resistance. Quantities that keep their nominal
 /// value leave the nominal model untouched, so with no spread a sample is the nominal model itself.</para>
 /// <para>Load tables: the nominal model's (one per rotor design). The plate thickness changes the plate's response
@@ -67,7 +67,8 @@ public sealed class RigStressModel : IStressModel
         }
         _wrapsLoads = tolerances.Of(StressQuantity.PlateThickness).Shape != ToleranceShape.None
             || tolerances.Of(StressQuantity.PlateConductivity).Shape != ToleranceShape.None
-            || tolerances.Of(StressQuantity.MagnetRemanence).Shape != ToleranceShape.None;
+            || tolerances.Of(StressQuantity.MagnetRemanence).Shape != ToleranceShape.None
+            || Rig.Calibrations.Count > 0;
         ThicknessStepM = SpreadStep(tolerances.Of(StressQuantity.PlateThickness), Rig.Plate.ThicknessM);
         foreach (var station in nominal.Stations)
         {
@@ -83,7 +84,8 @@ public sealed class RigStressModel : IStressModel
             if (ThicknessStepM > 0 && !_thicknessTables.ContainsKey(table))
             {
                 var plate = table.Direct.Plate;
-                var load = nominal.Options.Load;
+                // The nominal table's own settings, so a rotor's calibration carries over to the thickness tables.
+                var load = table.Direct.Options;
                 _thicknessTables[table] = (
                     RotorLoadTable.Build(table.Direct.Rotor, plate with { ThicknessM = plate.ThicknessM - ThicknessStepM }, table.Range, load),
                     RotorLoadTable.Build(table.Direct.Rotor, plate with { ThicknessM = plate.ThicknessM + ThicknessStepM }, table.Range, load));
@@ -147,12 +149,13 @@ public sealed class RigStressModel : IStressModel
             {
                 station = station with { Conditions = conditions };
             }
-            if ((plateVaries || p.RemanenceT != s.Rotor.RemanenceT) && s.Load is TabulatedRotorLoad table)
+            var drawn = parts.Calibrations.TryGetValue(s.Rotor.Id, out var c) ? c : null;
+            if ((plateVaries || p.RemanenceT != s.Rotor.RemanenceT || drawn is not null) && s.Load is TabulatedRotorLoad table)
             {
                 var extra = _thicknessTables.TryGetValue(table, out var pair) ? pair : default;
                 station = station with
                 {
-                    Load = new SpreadRotorLoad(table, extra.Thinner, extra.Thicker, ThicknessStepM, parts.PlateThicknessM, parts.PlateConductivitySPerM, p.RemanenceT),
+                    Load = new SpreadRotorLoad(table, extra.Thinner, extra.Thicker, ThicknessStepM, parts.PlateThicknessM, parts.PlateConductivitySPerM, p.RemanenceT, drawn),
                 };
             }
             if (!ReferenceEquals(station, s))

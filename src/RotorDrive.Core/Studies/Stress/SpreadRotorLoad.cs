@@ -26,6 +26,8 @@ internal sealed class SpreadRotorLoad : IRotorLoad
     private readonly double _wThick;
     private readonly double _conductivityRatio;
     private readonly double _remanenceScale;
+    private readonly double? _bearingDragNm;
+    private readonly double? _bearingDampingNmPerRadPerS;
 
     /// <param name="nominal">The table at the nominal thickness.</param>
     /// <param name="thinner">The table at d0 - h, or null when the thickness does not vary.</param>
@@ -34,8 +36,11 @@ internal sealed class SpreadRotorLoad : IRotorLoad
     /// <param name="thicknessM">The drawn thickness, m.</param>
     /// <param name="conductivity20SPerM">The drawn conductivity at 20 C, S/m.</param>
     /// <param name="remanenceT">The drawn remanence at 20 C, T.</param>
+    /// <param name="calibration">The drawn bench calibration of the rotor, or null to keep the table's own: its factors
+    /// replace the table's (conductivity factor along sigma omega, field factor squared on the forces), its bearing terms
+    /// the table's.</param>
     public SpreadRotorLoad(TabulatedRotorLoad nominal, TabulatedRotorLoad? thinner, TabulatedRotorLoad? thicker, double stepM,
-        double thicknessM, double conductivity20SPerM, double remanenceT)
+        double thicknessM, double conductivity20SPerM, double remanenceT, LoadCalibration? calibration = null)
     {
         _nominal = nominal;
         _thinner = thinner;
@@ -51,6 +56,15 @@ internal sealed class SpreadRotorLoad : IRotorLoad
         _conductivityRatio = conductivity20SPerM / nominal.Direct.Plate.Material.ConductivitySPerM;
         double ratio = remanenceT / nominal.Direct.Rotor.RemanenceT;
         _remanenceScale = ratio * ratio;
+        if (calibration is not null)
+        {
+            var table = nominal.Direct.Calibration;
+            _conductivityRatio *= calibration.ConductivityFactor / table.ConductivityFactor;
+            double field = calibration.FieldFactor / table.FieldFactor;
+            _remanenceScale *= field * field;
+            _bearingDragNm = calibration.BearingDragNm;
+            _bearingDampingNmPerRadPerS = calibration.BearingDampingNmPerRadPerS;
+        }
     }
 
     /// <inheritdoc/>
@@ -59,8 +73,8 @@ internal sealed class SpreadRotorLoad : IRotorLoad
         Preconditions.Finite(speedRadPerS, nameof(speedRadPerS));
         Preconditions.NonNegative(gapM, nameof(gapM));
         var direct = _nominal.Direct;
-        double sigma = PhysicsRotorLoad.PlateConductivity(direct.Plate.Material, plateTempC) * _conductivityRatio;
-        double scale = PhysicsRotorLoad.RemanenceScale(direct.Rotor, magnetTempC) * _remanenceScale;
+        double sigma = direct.ConductivityAt(plateTempC) * _conductivityRatio;
+        double scale = direct.ForceScale(magnetTempC) * _remanenceScale;
         double x = sigma * Math.Abs(speedRadPerS);
         (double lift, double torque) = _nominal.EddyAtSigmaOmega(x, gapM);
         if (_thinner is not null && _thicker is not null)
@@ -77,6 +91,11 @@ internal sealed class SpreadRotorLoad : IRotorLoad
             torque = -torque;
         }
         (double windage, double bearing) = direct.MechanicalTorques(speedRadPerS);
+        if (_bearingDragNm is not null || _bearingDampingNmPerRadPerS is not null)
+        {
+            bearing = BearingDrag.TorqueUnchecked(speedRadPerS, _bearingDragNm ?? direct.Calibration.BearingDragNm ?? direct.Rotor.BearingDragNm,
+                _bearingDampingNmPerRadPerS ?? direct.Calibration.BearingDampingNmPerRadPerS ?? direct.Rotor.BearingDampingNmPerRadPerS);
+        }
         return new LoadPoint(lift, torque, windage, bearing, torque * speedRadPerS);
     }
 }

@@ -25,6 +25,13 @@ public sealed record StressParts(
     double CgOffsetXM,
     double CgOffsetYM)
 {
+    /// <summary>Drawn bench calibrations by rotor design id (empty when the rig has none, see <c>Rig.Calibrations</c>).</summary>
+    /// <remarks>A rig without calibrations shares one empty instance, so parts of such rigs keep value equality.</remarks>
+    public IReadOnlyDictionary<string, Loads.LoadCalibration> Calibrations { get; init; } = NoCalibrations;
+
+    /// <summary>The shared empty set of drawn calibrations.</summary>
+    public static IReadOnlyDictionary<string, Loads.LoadCalibration> NoCalibrations { get; } = new Dictionary<string, Loads.LoadCalibration>();
+
     /// <summary>The value of a quantity: for a per-station one at <paramref name="station"/>, otherwise the rig's.</summary>
     /// <param name="quantity">The quantity.</param>
     /// <param name="station">Station index for per-station quantities (ignored otherwise).</param>

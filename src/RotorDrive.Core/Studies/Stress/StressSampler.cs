@@ -1,5 +1,6 @@
 using RotorDrive.Core.Craft;
 using RotorDrive.Core.Drive;
+using RotorDrive.Core.Loads;
 
 namespace RotorDrive.Core.Studies.Stress;
 
@@ -47,7 +48,24 @@ public static class StressSampler
         double payload = Math.Max(0, tolerances.Of(StressQuantity.Payload).Apply(rig.Body.PayloadKg, random));
         double cgx = tolerances.Of(StressQuantity.CgOffsetX).Apply(0, random);
         double cgy = tolerances.Of(StressQuantity.CgOffsetY).Apply(0, random);
-        return new StressParts(sampleIndex, stations, thickness, sigma, ambient, plateTemp, soc, packR, payload, cgx, cgy);
+        // Bench calibrations are drawn last, so a rig without them keeps exactly the streams it had. The rig's own spread of
+        // plate conductivity or remanence overrides the drawn conductivity or field factor.
+        var held = new[]
+        {
+            tolerances.Of(StressQuantity.PlateConductivity).Shape != ToleranceShape.None,
+            tolerances.Of(StressQuantity.MagnetRemanence).Shape != ToleranceShape.None,
+            false,
+            false,
+        };
+        var calibrations = new Dictionary<string, LoadCalibration>(StringComparer.Ordinal);
+        foreach (var (rotor, calibration) in rig.Calibrations.OrderBy(c => c.Key, StringComparer.Ordinal))
+        {
+            calibrations[rotor] = CalibrationDraw.Draw(calibration, held, random);
+        }
+        return new StressParts(sampleIndex, stations, thickness, sigma, ambient, plateTemp, soc, packR, payload, cgx, cgy)
+        {
+            Calibrations = calibrations.Count == 0 ? StressParts.NoCalibrations : calibrations,
+        };
     }
 
     /// <summary>The nominal parts (no spread): what every sample draws with <see cref="StressTolerances.None"/>.</summary>
