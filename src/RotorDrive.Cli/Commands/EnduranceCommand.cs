@@ -5,6 +5,7 @@ using RotorDrive.Core;
 using RotorDrive.Core.Craft;
 using RotorDrive.Core.Simulation;
 using RotorDrive.Files;
+using RotorDrive.Files.Plots;
 
 namespace RotorDrive.Cli.Commands;
 
@@ -15,30 +16,34 @@ namespace RotorDrive.Cli.Commands;
 public static class EnduranceCommand
 {
     /// <summary>Builds the subcommand.</summary>
-    public static Command Create()
+    /// <param name="clock">The clock for the date on plots; the system clock when null.</param>
+    public static Command Create(TimeProvider? clock = null)
     {
         var rig = CommonOptions.RigArgument();
         var csv = CommonOptions.Csv("the endurance time traces");
         var force = CommonOptions.Force();
+        var plot = CommonOptions.Plot("charge, pack voltage and temperatures (the plate peak) against time");
         var json = CommonOptions.Json();
         var command = new Command("endurance", "Hover time from a full pack until the first limit, with traces of charge, voltage, currents and temperatures.");
         command.Arguments.Add(rig);
         command.Options.Add(csv);
         command.Options.Add(force);
         command.Options.Add(json);
+        command.Options.Add(plot);
         command.SetAction(parse => Run(
             parse.GetValue(rig)!,
             parse.GetValue(csv),
             parse.GetValue(force),
             parse.GetValue(json),
+            new PlotRequest(parse.GetValue(plot), CommonOptions.Today(clock)),
             parse.InvocationConfiguration.Output,
             parse.InvocationConfiguration.Error));
         return command;
     }
 
-    private static int Run(string rigPath, string? csvPath, bool force, bool json, TextWriter output, TextWriter error)
+    private static int Run(string rigPath, string? csvPath, bool force, bool json, PlotRequest plot, TextWriter output, TextWriter error)
     {
-        if (CommonOptions.RefusesExistingCsv("endurance", csvPath, force, error))
+        if (CommonOptions.RefusesExistingCsv("endurance", csvPath, force, error) || CommonOptions.RefusesPlot("endurance", plot.Path, force, error))
         {
             return ExitCodes.BadInput;
         }
@@ -97,6 +102,15 @@ public static class EnduranceCommand
             output.WriteLine();
             output.WriteLine(pass ? "Result: the pack ends the hover (no thermal or current limit first)." : "Result: FAILS: a limit other than the pack ends the hover.");
             output.WriteLine("Caution: plates and windings get hot enough to burn; lithium packs can burn when over-discharged. Estimates only: defer to manufacturers' ratings.");
+        }
+        if (plot.Path is { } plotPath)
+        {
+            double? maxWinding = sim.Drivetrains.Select(d => d.Motor.MaxWindingTempC).Where(m => m is not null).Min();
+            var figure = EndurancePlot.Build(result, rig.Limits, sim.Packs.CellsSeries, maxWinding, rig.Name, plot.Today);
+            if (!CommonOptions.WritePlot("endurance", figure, plotPath, force, error))
+            {
+                return ExitCodes.BadInput;
+            }
         }
         return pass ? ExitCodes.Ok : ExitCodes.LimitFindings;
     }
