@@ -26,6 +26,7 @@ public static class CliApp
         root.Subcommands.Add(YawCommand.Create());
         root.Subcommands.Add(RankCommand.Create(clock));
         root.Subcommands.Add(StressCommand.Create(clock));
+        root.Subcommands.Add(ReportCommand.Create(clock));
         return root;
     }
 
