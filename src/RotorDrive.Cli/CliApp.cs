@@ -27,6 +27,7 @@ public static class CliApp
         root.Subcommands.Add(RankCommand.Create(clock));
         root.Subcommands.Add(StressCommand.Create(clock));
         root.Subcommands.Add(ReportCommand.Create(clock));
+        root.Subcommands.Add(DemoCommand.Create());
         return root;
     }
 

@@ -134,6 +134,9 @@ public static class PlotWriter
                 stamp.LabelFontName = EmbeddedFont.Family;
             }
             plot.Font.Set(EmbeddedFont.Family);
+            // ScottPlot draws a plot twice on its first render when the layout settles; a render in memory at the panel's
+            // size first keeps the SVG to one copy of every element.
+            plot.RenderInMemory(WidthPx, figure.Panels.Count <= 1 ? SingleHeightPx : PanelHeightPx);
             plots.Add(plot);
         }
         // A new Multiplot holds one empty plot of its own; start it from the first panel instead.
