@@ -12,20 +12,23 @@ namespace RotorDrive.Cli;
 public static class CliApp
 {
     /// <summary>Builds the root command with every subcommand.</summary>
-    public static RootCommand BuildRoot()
+    /// <param name="clock">The clock for the date stamped on plots and reports; the system clock when null.</param>
+    public static RootCommand BuildRoot(TimeProvider? clock = null)
     {
         var root = new RootCommand("RotorDrive: drivetrain choice and analysis for eddy-current levitation rigs.");
         root.Subcommands.Add(CheckCommand.Create());
-        root.Subcommands.Add(LoadCommand.Create());
-        root.Subcommands.Add(OperateCommand.Create());
+        root.Subcommands.Add(LoadCommand.Create(clock));
+        root.Subcommands.Add(OperateCommand.Create(clock));
         root.Subcommands.Add(UiCommand.Create());
-        root.Subcommands.Add(SpinupCommand.Create());
-        root.Subcommands.Add(EnduranceCommand.Create());
+        root.Subcommands.Add(SpinupCommand.Create(clock));
+        root.Subcommands.Add(EnduranceCommand.Create(clock));
         root.Subcommands.Add(HoverCommand.Create());
         root.Subcommands.Add(YawCommand.Create());
-        root.Subcommands.Add(RankCommand.Create());
-        root.Subcommands.Add(StressCommand.Create());
+        root.Subcommands.Add(RankCommand.Create(clock));
+        root.Subcommands.Add(StressCommand.Create(clock));
         root.Subcommands.Add(CalibrateCommand.Create());
+        root.Subcommands.Add(ReportCommand.Create(clock));
+        root.Subcommands.Add(DemoCommand.Create());
         NumericOptions.Apply(root);
         return root;
     }
@@ -34,13 +37,14 @@ public static class CliApp
     /// <param name="args">The arguments.</param>
     /// <param name="output">Where results go (stdout by default).</param>
     /// <param name="error">Where problems and progress go (stderr by default).</param>
-    public static async Task<int> RunAsync(string[] args, TextWriter? output = null, TextWriter? error = null)
+    /// <param name="clock">The clock for the date stamped on plots and reports; the system clock when null.</param>
+    public static async Task<int> RunAsync(string[] args, TextWriter? output = null, TextWriter? error = null, TimeProvider? clock = null)
     {
         output ??= Console.Out;
         error ??= Console.Error;
         try
         {
-            var parse = BuildRoot().Parse(args);
+            var parse = BuildRoot(clock).Parse(args);
             if (parse.Errors.Count > 0)
             {
                 foreach (var e in parse.Errors)

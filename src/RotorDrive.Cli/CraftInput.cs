@@ -14,10 +14,18 @@ public static class CraftInput
     {
         ArgumentNullException.ThrowIfNull(error);
         var loaded = RigInput.LoadOrReport(rigPath, error);
-        if (loaded is null)
-        {
-            return null;
-        }
+        return loaded is null ? null : ModelOrReport(command, loaded, error);
+    }
+
+    /// <summary>Builds the model of a rig already loaded clean; on missing parts prints them and returns null.</summary>
+    /// <param name="command">The subcommand's name, for the message.</param>
+    /// <param name="loaded">The loaded rig (no problems).</param>
+    /// <param name="error">Where problems go.</param>
+    public static RigModel? ModelOrReport(string command, Files.RigLoadResult loaded, TextWriter error)
+    {
+        ArgumentNullException.ThrowIfNull(loaded);
+        ArgumentNullException.ThrowIfNull(error);
+        string rigPath = loaded.RigPath;
         var rig = loaded.Rig!;
         var missing = RigModel.MissingParts(rig);
         if (missing.Count > 0)

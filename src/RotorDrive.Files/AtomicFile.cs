@@ -11,8 +11,24 @@ public static class AtomicFile
     /// <returns>Null on success; otherwise a problem naming the file and the reason (nothing was changed).</returns>
     public static InputProblem? WriteAllText(string path, string text, bool overwrite)
     {
-        ArgumentNullException.ThrowIfNull(path);
         ArgumentNullException.ThrowIfNull(text);
+        return Write(path, temp => File.WriteAllText(temp, text, new System.Text.UTF8Encoding(encoderShouldEmitUTF8Identifier: false)), overwrite);
+    }
+
+    /// <summary>Writes bytes (an image) to a path.</summary>
+    /// <param name="path">Destination file.</param>
+    /// <param name="bytes">The whole content.</param>
+    /// <param name="overwrite">False refuses to replace an existing file.</param>
+    /// <returns>Null on success; otherwise a problem naming the file and the reason (nothing was changed).</returns>
+    public static InputProblem? WriteAllBytes(string path, byte[] bytes, bool overwrite)
+    {
+        ArgumentNullException.ThrowIfNull(bytes);
+        return Write(path, temp => File.WriteAllBytes(temp, bytes), overwrite);
+    }
+
+    private static InputProblem? Write(string path, Action<string> writeTemp, bool overwrite)
+    {
+        ArgumentNullException.ThrowIfNull(path);
         string? temp = null;
         try
         {
@@ -27,7 +43,7 @@ public static class AtomicFile
                 return new InputProblem(path, 0, 0, "", Messages.FileNotWritten("the folder does not exist"));
             }
             temp = Path.Combine(folder, "." + Path.GetFileName(full) + "." + Guid.NewGuid().ToString("N")[..8] + ".tmp");
-            File.WriteAllText(temp, text, new System.Text.UTF8Encoding(encoderShouldEmitUTF8Identifier: false));
+            writeTemp(temp);
             if (overwrite)
             {
                 File.Move(temp, full, overwrite: true);

@@ -22,6 +22,9 @@ public static class Messages
     /// <summary>Writing a file failed.</summary>
     public static string FileNotWritten(string reason) => $"cannot write the file: {reason}";
 
+    /// <summary>A plot file named with an extension that picks no image format.</summary>
+    public static string PlotExtension() => "a plot file must end in .svg or .png (the extension picks the format)";
+
     // ---- CSV structure ----
 
     /// <summary>A CSV file with no header row.</summary>

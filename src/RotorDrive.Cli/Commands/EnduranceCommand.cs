@@ -6,6 +6,7 @@ using RotorDrive.Core.Craft;
 using RotorDrive.Core.Simulation;
 using RotorDrive.Core.Thermal;
 using RotorDrive.Files;
+using RotorDrive.Files.Plots;
 
 namespace RotorDrive.Cli.Commands;
 
@@ -18,11 +19,13 @@ namespace RotorDrive.Cli.Commands;
 public static class EnduranceCommand
 {
     /// <summary>Builds the subcommand.</summary>
-    public static Command Create()
+    /// <param name="clock">The clock for the date on plots; the system clock when null.</param>
+    public static Command Create(TimeProvider? clock = null)
     {
         var rig = CommonOptions.RigArgument();
         var csv = CommonOptions.Csv("the endurance time traces");
         var force = CommonOptions.Force();
+        var plot = CommonOptions.Plot("charge, pack voltage and temperatures (the plate peak) against time");
         var json = CommonOptions.Json();
         var plateMap = new Option<string?>("--plate-map")
         {
@@ -40,6 +43,7 @@ public static class EnduranceCommand
         command.Options.Add(json);
         command.Options.Add(plateMap);
         command.Options.Add(sweep);
+        command.Options.Add(plot);
         command.SetAction(parse => parse.GetValue(sweep)
             ? Sweep(parse.GetValue(rig)!, parse.GetValue(json), parse.InvocationConfiguration.Output, parse.InvocationConfiguration.Error)
             : Run(
@@ -48,14 +52,16 @@ public static class EnduranceCommand
             parse.GetValue(plateMap),
             parse.GetValue(force),
             parse.GetValue(json),
+            new PlotRequest(parse.GetValue(plot), CommonOptions.Today(clock)),
             parse.InvocationConfiguration.Output,
             parse.InvocationConfiguration.Error));
         return command;
     }
 
-    private static int Run(string rigPath, string? csvPath, string? mapPath, bool force, bool json, TextWriter output, TextWriter error)
+    private static int Run(string rigPath, string? csvPath, string? mapPath, bool force, bool json, PlotRequest plot, TextWriter output, TextWriter error)
     {
-        if (CommonOptions.RefusesExistingCsv("endurance", csvPath, force, error) || CommonOptions.RefusesExistingCsv("endurance", mapPath, force, error))
+        if (CommonOptions.RefusesExistingCsv("endurance", csvPath, force, error) || CommonOptions.RefusesExistingCsv("endurance", mapPath, force, error)
+            || CommonOptions.RefusesPlot("endurance", plot.Path, force, error))
         {
             return ExitCodes.BadInput;
         }
@@ -135,6 +141,15 @@ public static class EnduranceCommand
             output.WriteLine();
             output.WriteLine(pass ? "Result: the pack ends the hover (no thermal or current limit first)." : "Result: FAILS: a limit other than the pack ends the hover.");
             output.WriteLine("Caution: plates and windings get hot enough to burn; lithium packs can burn when over-discharged. Estimates only: defer to manufacturers' ratings.");
+        }
+        if (plot.Path is { } plotPath)
+        {
+            double? maxWinding = sim.Drivetrains.Select(d => d.Motor.MaxWindingTempC).Where(m => m is not null).Min();
+            var figure = EndurancePlot.Build(result, rig.Limits, sim.Packs.CellsSeries, maxWinding, rig.Name, plot.Today);
+            if (!CommonOptions.WritePlot("endurance", figure, plotPath, force, error))
+            {
+                return ExitCodes.BadInput;
+            }
         }
         return pass ? ExitCodes.Ok : ExitCodes.LimitFindings;
     }

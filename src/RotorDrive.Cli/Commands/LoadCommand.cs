@@ -6,6 +6,7 @@ using RotorDrive.Core;
 using RotorDrive.Core.Craft;
 using RotorDrive.Core.Loads;
 using RotorDrive.Core.Magnetics;
+using RotorDrive.Files.Plots;
 
 namespace RotorDrive.Cli.Commands;
 
@@ -20,7 +21,8 @@ public static class LoadCommand
     public const int DefaultSteps = 25;
 
     /// <summary>Builds the subcommand.</summary>
-    public static Command Create()
+    /// <param name="clock">The clock for the date on plots; the system clock when null.</param>
+    public static Command Create(TimeProvider? clock = null)
     {
         var rig = CommonOptions.RigArgument();
         var station = new Option<int?>("--station")
@@ -75,6 +77,8 @@ public static class LoadCommand
             Description = "Use the bare 2-D strip model, without the Russell-Norsworthy finite-width correction.",
         };
         var json = CommonOptions.Json();
+        var plot = CommonOptions.Plot("torque and lift against speed with the drag peak");
+        var force = CommonOptions.Force();
 
         var command = new Command("load", "One rotor's lift, eddy/windage/bearing torque and plate loss versus speed, and its drag peak.");
         command.Arguments.Add(rig);
@@ -85,6 +89,8 @@ public static class LoadCommand
         command.Options.Add(plateTemp);
         command.Options.Add(noEnd);
         command.Options.Add(json);
+        command.Options.Add(plot);
+        command.Options.Add(force);
         command.Validators.Add(r =>
         {
             if (r.GetResult(station) is { Implicit: false } && r.GetResult(rotor) is { Implicit: false })
@@ -101,7 +107,10 @@ public static class LoadCommand
                 parse.GetValue(rpm),
                 parse.GetValue(plateTemp),
                 !parse.GetValue(noEnd),
-                parse.GetValue(json)),
+                parse.GetValue(json),
+                parse.GetValue(plot),
+                parse.GetValue(force),
+                CommonOptions.Today(clock)),
             parse.InvocationConfiguration.Output,
             parse.InvocationConfiguration.Error));
         return command;
@@ -111,6 +120,10 @@ public static class LoadCommand
     private static int Run(LoadRequest request, TextWriter output, TextWriter error)
     {
         ArgumentNullException.ThrowIfNull(request);
+        if (CommonOptions.RefusesPlot("load", request.PlotPath, request.Force, error))
+        {
+            return ExitCodes.BadInput;
+        }
         var loaded = RigInput.LoadOrReport(request.RigPath, error);
         if (loaded is null)
         {
@@ -178,6 +191,10 @@ public static class LoadCommand
         else
         {
             WriteText(report, rig, design, output);
+        }
+        if (request.PlotPath is { } plotPath && !CommonOptions.WritePlot("load", LoadPlot.Build(result, rig.Name, request.Today), plotPath, request.Force, error))
+        {
+            return ExitCodes.BadInput;
         }
         if (speedsRpm[^1] > Units.RadPerSToRpm(design.MaxSpeedRadPerS) * (1 + 1e-9))
         {
@@ -270,7 +287,10 @@ public static class LoadCommand
         RpmRange? Rpm,
         double? PlateTempC,
         bool EndCorrection,
-        bool Json);
+        bool Json,
+        string? PlotPath,
+        bool Force,
+        DateOnly Today);
 
     private sealed record LoadReport(
         string Rotor,

@@ -6,6 +6,7 @@ using RotorDrive.Core;
 using RotorDrive.Core.Craft;
 using RotorDrive.Core.Drive;
 using RotorDrive.Core.Loads;
+using RotorDrive.Files.Plots;
 using RotorDrive.Files;
 
 namespace RotorDrive.Cli.Commands;
@@ -19,7 +20,8 @@ public static class OperateCommand
     private static readonly CultureInfo Ci = CultureInfo.InvariantCulture;
 
     /// <summary>Builds the subcommand.</summary>
-    public static Command Create()
+    /// <param name="clock">The clock for the date on plots; the system clock when null.</param>
+    public static Command Create(TimeProvider? clock = null)
     {
         var rig = CommonOptions.RigArgument();
         var json = CommonOptions.Json();
@@ -41,6 +43,8 @@ public static class OperateCommand
             HelpName = "S",
             DefaultValueFactory = _ => 100,
         };
+        var plot = CommonOptions.Plot("the motor torque lines over the load curve with every equilibrium");
+        var force = CommonOptions.Force();
         var sweep = new Option<bool>("--sweep") { Description = "Table of the point reached from rest over duty 0 to 1 in steps of 0.05." };
 
         station.Validators.Add(r => Check(r, r.GetValueOrDefault<int>() >= 0, $"--station must be 0 or more; got {r.GetValueOrDefault<int>()}."));
@@ -51,7 +55,7 @@ public static class OperateCommand
 
         var command = new Command("operate", "Find every steady operating point of one rotor on its motor, controller and pack, with stability and limit margins.");
         command.Arguments.Add(rig);
-        foreach (var option in new Option[] { station, motor, controller, pack, duty, hold, gap, soc, sweep, json })
+        foreach (var option in new Option[] { station, motor, controller, pack, duty, hold, gap, soc, sweep, json, plot, force })
         {
             command.Options.Add(option);
         }
@@ -80,7 +84,10 @@ public static class OperateCommand
                 parse.GetValue(gap),
                 parse.GetValue(soc),
                 parse.GetValue(sweep),
-                parse.GetValue(json)),
+                parse.GetValue(json),
+                parse.GetValue(plot),
+                parse.GetValue(force),
+                CommonOptions.Today(clock)),
             parse.InvocationConfiguration.Output,
             parse.InvocationConfiguration.Error));
         return command;
@@ -98,12 +105,19 @@ public static class OperateCommand
         double? GapMm,
         double SocPct,
         bool Sweep,
-        bool Json);
+        bool Json,
+        string? PlotPath = null,
+        bool Force = false,
+        DateOnly Today = default);
 
     /// <summary>Runs the analysis; returns 0 when every limit holds, 1 when one fails, 2 on bad input.</summary>
     public static int Run(OperateRequest request, TextWriter output, TextWriter error)
     {
         ArgumentNullException.ThrowIfNull(request);
+        if (CommonOptions.RefusesPlot("operate", request.PlotPath, request.Force, error))
+        {
+            return ExitCodes.BadInput;
+        }
         var loaded = RigInput.LoadOrReport(request.RigPath, error);
         if (loaded is null)
         {
@@ -125,6 +139,16 @@ public static class OperateCommand
             var rows = OperatingPointFinder.SweepDuty(drive, conditions, SweepSteps);
             var sweepReport = Report(request, setup, gapM, rows[^1], sweep: rows);
             Write(request, sweepReport, output);
+            if (request.PlotPath is { } sweepPlot)
+            {
+                var map = TorqueSpeedMap.Compute(drive, conditions, PlotDuties);
+                var crossings = map.Curves.SelectMany(c => c.Equilibria).ToList();
+                var figure = OperatePlot.Build(map, crossings, $"station {request.Station}, duty swept", rig.Name, request.Today);
+                if (!CommonOptions.WritePlot("operate", figure, sweepPlot, request.Force, error))
+                {
+                    return ExitCodes.BadInput;
+                }
+            }
             return rows[0].Compatible ? ExitCodes.Ok : ExitCodes.LimitFindings;
         }
 
@@ -132,8 +156,26 @@ public static class OperateCommand
         var result = OperatingPointFinder.Find(drive, throttle, conditions);
         var report = Report(request, setup, gapM, result, sweep: null);
         Write(request, report, output);
+        if (request.PlotPath is { } plotPath)
+        {
+            // The torque line at the duty asked for; holding a speed, at each duty the controller settled on.
+            double[] duties = throttle.Kind == ThrottleKind.Duty
+                ? [throttle.Value]
+                : result.Equilibria.Select(e => e.Duty).Where(d => d > 0).Distinct().DefaultIfEmpty(rig.Limits.MaxDuty).ToArray();
+            var map = TorqueSpeedMap.Compute(drive, conditions, duties);
+            string what = throttle.Kind == ThrottleKind.Duty
+                ? $"station {request.Station} at duty {throttle.Value.ToString("0.###", Ci)}"
+                : $"station {request.Station} holding {Units.RadPerSToRpm(throttle.Value).ToString("0", Ci)} rpm";
+            if (!CommonOptions.WritePlot("operate", OperatePlot.Build(map, result.Equilibria, what, rig.Name, request.Today), plotPath, request.Force, error))
+            {
+                return ExitCodes.BadInput;
+            }
+        }
         return report.LimitsHold ? ExitCodes.Ok : ExitCodes.LimitFindings;
     }
+
+    // Torque lines drawn for --sweep: a few duties across the range, not all twenty.
+    private static readonly double[] PlotDuties = [0.25, 0.5, 0.75, 1.0];
 
     private static string Show(double? value) => value is { } v ? v.ToString(Ci) : "nothing";
 

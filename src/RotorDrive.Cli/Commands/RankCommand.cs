@@ -8,6 +8,7 @@ using RotorDrive.Core.Craft;
 using RotorDrive.Core.Simulation;
 using RotorDrive.Core.Studies.Ranking;
 using RotorDrive.Files;
+using RotorDrive.Files.Plots;
 
 namespace RotorDrive.Cli.Commands;
 
@@ -19,7 +20,8 @@ namespace RotorDrive.Cli.Commands;
 public static class RankCommand
 {
     /// <summary>Builds the subcommand.</summary>
-    public static Command Create()
+    /// <param name="clock">The clock for the date on plots; the system clock when null.</param>
+    public static Command Create(TimeProvider? clock = null)
     {
         var rig = CommonOptions.RigArgument();
         var by = new Option<RankObjective>("--by")
@@ -50,6 +52,7 @@ public static class RankCommand
         var csv = CommonOptions.Csv("every accepted combination in rank order");
         var force = CommonOptions.Force();
         var json = CommonOptions.Json();
+        var plot = CommonOptions.Plot("pack runtime against mass for the Pareto set, with the rig's own choice");
         var command = new Command("rank", "Rank every motor x controller x pack from the catalogs for the rig, explaining every rejection.");
         command.Arguments.Add(rig);
         command.Options.Add(by);
@@ -58,8 +61,10 @@ public static class RankCommand
         command.Options.Add(csv);
         command.Options.Add(force);
         command.Options.Add(json);
+        command.Options.Add(plot);
         command.SetAction(parse => Run(
-            new RankRequest(parse.GetValue(rig)!, parse.GetValue(by), parse.GetValue(top), parse.GetValue(whyNot), parse.GetValue(csv), parse.GetValue(force), parse.GetValue(json)),
+            new RankRequest(parse.GetValue(rig)!, parse.GetValue(by), parse.GetValue(top), parse.GetValue(whyNot), parse.GetValue(csv), parse.GetValue(force), parse.GetValue(json),
+                new PlotRequest(parse.GetValue(plot), CommonOptions.Today(clock))),
             parse.InvocationConfiguration.Output,
             parse.InvocationConfiguration.Error));
         return command;
@@ -93,7 +98,7 @@ public static class RankCommand
             }
             whyNotIndex = index;
         }
-        if (CommonOptions.RefusesExistingCsv("rank", request.CsvPath, request.Force, error))
+        if (CommonOptions.RefusesExistingCsv("rank", request.CsvPath, request.Force, error) || CommonOptions.RefusesPlot("rank", request.Plot.Path, request.Force, error))
         {
             return ExitCodes.BadInput;
         }
@@ -136,6 +141,11 @@ public static class RankCommand
         else
         {
             WriteText(output, rig, study, result, pareto, explained, request);
+        }
+        if (request.Plot.Path is { } plotPath
+            && !CommonOptions.WritePlot("rank", RankPlot.Build(result, study.Evaluate, rig.Name, request.Plot.Today), plotPath, request.Force, error))
+        {
+            return ExitCodes.BadInput;
         }
         return result.AcceptedCount > 0 ? ExitCodes.Ok : ExitCodes.LimitFindings;
     }
@@ -374,7 +384,7 @@ public static class RankCommand
         }
     }
 
-    private sealed record RankRequest(string RigPath, RankObjective By, int Top, string? WhyNot, string? CsvPath, bool Force, bool Json);
+    private sealed record RankRequest(string RigPath, RankObjective By, int Top, string? WhyNot, string? CsvPath, bool Force, bool Json, PlotRequest Plot);
 
     private sealed record RankReport(
         string Rig,

@@ -5,6 +5,7 @@ using RotorDrive.Core;
 using RotorDrive.Core.Craft;
 using RotorDrive.Core.Simulation;
 using RotorDrive.Files;
+using RotorDrive.Files.Plots;
 
 namespace RotorDrive.Cli.Commands;
 
@@ -18,7 +19,8 @@ namespace RotorDrive.Cli.Commands;
 public static class SpinupCommand
 {
     /// <summary>Builds the subcommand.</summary>
-    public static Command Create()
+    /// <param name="clock">The clock for the date on plots; the system clock when null.</param>
+    public static Command Create(TimeProvider? clock = null)
     {
         var rig = CommonOptions.RigArgument();
         var ramp = new Option<double>("--ramp-s")
@@ -59,6 +61,7 @@ public static class SpinupCommand
         var csv = CommonOptions.Csv("the spin-up time traces");
         var force = CommonOptions.Force();
         var json = CommonOptions.Json();
+        var plot = CommonOptions.Plot("speed, current, gap and bus voltage against time");
         var command = new Command("spinup", "Spin-up from the landing gear through the drag peak to hover, and the landing with braking on and off.");
         command.Arguments.Add(rig);
         command.Options.Add(ramp);
@@ -67,6 +70,7 @@ public static class SpinupCommand
         command.Options.Add(csv);
         command.Options.Add(force);
         command.Options.Add(json);
+        command.Options.Add(plot);
         command.SetAction(parse => Run(
             parse.GetValue(rig)!,
             parse.GetValue(ramp),
@@ -75,14 +79,15 @@ public static class SpinupCommand
             parse.GetValue(csv),
             parse.GetValue(force),
             parse.GetValue(json),
+            new PlotRequest(parse.GetValue(plot), CommonOptions.Today(clock)),
             parse.InvocationConfiguration.Output,
             parse.InvocationConfiguration.Error));
         return command;
     }
 
-    private static int Run(string rigPath, double rampS, ControllerMode mode, double soc, string? csvPath, bool force, bool json, TextWriter output, TextWriter error)
+    private static int Run(string rigPath, double rampS, ControllerMode mode, double soc, string? csvPath, bool force, bool json, PlotRequest plot, TextWriter output, TextWriter error)
     {
-        if (CommonOptions.RefusesExistingCsv("spinup", csvPath, force, error))
+        if (CommonOptions.RefusesExistingCsv("spinup", csvPath, force, error) || CommonOptions.RefusesPlot("spinup", plot.Path, force, error))
         {
             return ExitCodes.BadInput;
         }
@@ -114,6 +119,10 @@ public static class SpinupCommand
         else
         {
             WriteText(report, rig, output);
+        }
+        if (plot.Path is { } plotPath && !CommonOptions.WritePlot("spinup", SpinupPlot.Build(spin, rig.DesignGapM, rig.Name, plot.Today), plotPath, force, error))
+        {
+            return ExitCodes.BadInput;
         }
         return study.Passes ? ExitCodes.Ok : ExitCodes.LimitFindings;
     }

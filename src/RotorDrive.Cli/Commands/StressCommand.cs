@@ -5,6 +5,7 @@ using RotorDrive.Core;
 using RotorDrive.Core.Studies;
 using RotorDrive.Core.Studies.Stress;
 using RotorDrive.Files.Exports;
+using RotorDrive.Files.Plots;
 
 namespace RotorDrive.Cli.Commands;
 
@@ -25,7 +26,8 @@ public static class StressCommand
     public const int TextDrivers = 10;
 
     /// <summary>Builds the subcommand.</summary>
-    public static Command Create()
+    /// <param name="clock">The clock for the date on plots; the system clock when null.</param>
+    public static Command Create(TimeProvider? clock = null)
     {
         var rig = CommonOptions.RigArgument();
         var samples = new Option<int>("--samples") { Description = "Number of samples; default 2000.", HelpName = "N", DefaultValueFactory = _ => DefaultSamples };
@@ -69,6 +71,7 @@ public static class StressCommand
         var csv = CommonOptions.Csv("one row per sample (with --sample: the spin-up trace)");
         var force = CommonOptions.Force();
         var json = CommonOptions.Json();
+        var plot = CommonOptions.Plot("a histogram of every margin with its limit");
 
         var command = new Command("stress", "Tolerance stress test: Monte Carlo over part spreads, spin-up and trimmed hover per sample.");
         command.Arguments.Add(rig);
@@ -80,16 +83,25 @@ public static class StressCommand
         command.Options.Add(csv);
         command.Options.Add(force);
         command.Options.Add(json);
+        command.Options.Add(plot);
+        command.Validators.Add(r =>
+        {
+            if (r.GetResult(plot) is { Implicit: false } && r.GetResult(sample) is { Implicit: false })
+            {
+                r.AddError("--plot draws the margins of a whole run; it cannot be combined with --sample.");
+            }
+        });
         command.SetAction((parse, cancellationToken) => RunAsync(
             new StressRequest(parse.GetValue(rig)!, parse.GetValue(samples), parse.GetValue(seed), parse.GetValue(sample), parse.GetValue(threads),
-                parse.GetValue(accept), parse.GetValue(csv), parse.GetValue(force), parse.GetValue(json)),
+                parse.GetValue(accept), parse.GetValue(csv), parse.GetValue(force), parse.GetValue(json),
+                new PlotRequest(parse.GetValue(plot), CommonOptions.Today(clock))),
             parse.InvocationConfiguration.Output,
             parse.InvocationConfiguration.Error,
             cancellationToken));
         return command;
     }
 
-    private sealed record StressRequest(string RigPath, int Samples, int Seed, int? Sample, int? Threads, double AcceptPct, string? Csv, bool Force, bool Json);
+    private sealed record StressRequest(string RigPath, int Samples, int Seed, int? Sample, int? Threads, double AcceptPct, string? Csv, bool Force, bool Json, PlotRequest Plot);
 
     private static async Task<int> RunAsync(StressRequest request, TextWriter output, TextWriter error, CancellationToken cancellationToken)
     {
@@ -105,7 +117,7 @@ public static class StressCommand
                 + "assign them in the rig file (stations[].motor, stations[].controller, pack).");
             return ExitCodes.BadInput;
         }
-        if (CommonOptions.RefusesExistingCsv("stress", request.Csv, request.Force, error))
+        if (CommonOptions.RefusesExistingCsv("stress", request.Csv, request.Force, error) || CommonOptions.RefusesPlot("stress", request.Plot.Path, request.Force, error))
         {
             return ExitCodes.BadInput;
         }
@@ -148,6 +160,11 @@ public static class StressCommand
         else
         {
             WriteText(report, tolerances.Varied.Count, output);
+        }
+        if (request.Plot.Path is { } plotPath
+            && !CommonOptions.WritePlot("stress", StressPlot.Build(result, rig.Name, request.Plot.Today), plotPath, request.Force, error))
+        {
+            return ExitCodes.BadInput;
         }
         return report.Verdict == "pass" ? ExitCodes.Ok : ExitCodes.LimitFindings;
     }

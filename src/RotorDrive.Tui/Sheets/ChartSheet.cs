@@ -6,8 +6,8 @@ using RotorDrive.Tui.Shell;
 namespace RotorDrive.Tui.Sheets;
 
 /// <summary>A sheet drawn on one <see cref="ChartPanel"/> whose figures follow the rig: it recomputes (off the UI thread,
-/// in the derived sheet) when the rig changes or one of its what-if inputs does, F5 recomputes at once, F7 turns the
-/// chart pages, and an invalid rig clears the charts with a line saying so.</summary>
+/// in the derived sheet) when the rig changes or one of its what-if inputs does, F5 recomputes at once, F6 writes the
+/// chart pages to an SVG or PNG file, F7 turns the chart pages, and an invalid rig clears the charts with a line saying so.</summary>
 public abstract class ChartSheet : Sheet
 {
     private readonly string _needsValidRig;
@@ -61,6 +61,11 @@ public abstract class ChartSheet : Sheet
         if (key == Key.F5)
         {
             Recompute(immediately: true);
+            return true;
+        }
+        if (key == Key.F6)
+        {
+            ChartFile.Export(Context, Panel.Pages, SheetName);
             return true;
         }
         return false;

@@ -19,6 +19,7 @@ public static class KeyMap
         ("F3", "open another rig file (asks first when there are unsaved edits)"),
         ("F4", "pick a catalog id for the field being edited (rotor, motor, controller, pack, plate, spin; the Shortlist's why-not motor)"),
         ("F5", "recompute the current sheet now (Shortlist: rank again; Stress: run the stress test)"),
+        ("F6", "write the chart sheet's charts to a file, .svg or .png by the name given (Lift & drag, Running points, Spin-up, Endurance; asks before replacing a file)"),
         ("F7", "sheet action: sort the parts table by the selected column / arrows or letters in the sketch / Shortlist: rank by the next objective / Stress: histogram of the next figure"),
         ("F8", "stop the computation that is running (a stopped stress run shows the samples finished, marked PARTIAL)"),
         ("F10, Ctrl+Q", "quit (asks first when there are unsaved edits or results of a long run)"),

@@ -425,6 +425,10 @@ public sealed class MainWindow : Window
             _status.Width = Dim.Fill();
         }
         string sheetKeys = _current >= 0 && _sheets[_current].KeyHints.Length > 0 ? _sheets[_current].KeyHints + "  " : "";
+        if (_current >= 0 && _sheets[_current] is ChartSheet)
+        {
+            sheetKeys += "F6 chart file  ";
+        }
         _keys.Text = $"F1 Help  F2 Save  F3 Open  {sheetKeys}F8 Stop  F10 Quit";
     }
 }
