@@ -35,5 +35,5 @@ public sealed record RotorSafetyResult(
     /// <summary>The burst verdict every interface shows: false when the speed is above the rotor's rated speed or the ring
     /// is over its allowable (margin below 0), true when the margin was assessed and is 0 or more, null when it could not
     /// be assessed (see <see cref="Assessment"/>).</summary>
-    public bool? Passes => AboveRatedSpeed || Margin is < 0 ? false : Margin is null ? null : true;
+    public bool? Passes => AboveRatedSpeed || MarginFraction is < 0 ? false : MarginFraction is null ? null : true;
 }

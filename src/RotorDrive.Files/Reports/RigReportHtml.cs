@@ -123,9 +123,9 @@ public static class RigReportHtml
         {
             list.Add("Ranking: the rig's own drivetrain is rejected: " + string.Join("; ", own.Rejections.Select(r => r.Message)));
         }
-        if (report.Stress is { FailureRate: { } rate } && !(rate.Upper < report.StressAcceptPct / 100))
+        if (report.Stress is { FailureRate: { } rate } && !(rate.UpperFraction < report.StressAcceptPct / 100))
         {
-            list.Add($"Stress test: {rate.Count} of {rate.Trials} samples fail a criterion; the 95 % interval reaches {N(rate.Upper * 100, 2)} %, not below the accepted {N(report.StressAcceptPct, 2)} %.");
+            list.Add($"Stress test: {rate.Count} of {rate.Trials} samples fail a criterion; the 95 % interval reaches {N(rate.UpperFraction * 100, 2)} %, not below the accepted {N(report.StressAcceptPct, 2)} %.");
         }
         return list;
     }
@@ -182,11 +182,11 @@ public static class RigReportHtml
         s.Append("<table><tr><th>station</th><th>spin</th><th>duty</th><th>speed, rpm</th><th>lift, N</th><th>torque, N m</th><th>motor, A</th><th>bus, A</th><th>into plate, W</th><th>W per N</th><th>stable</th><th>least margin</th></tr>\n");
         foreach (var st in hover.Stations)
         {
-            var least = st.Margins.Count > 0 ? st.Margins.MinBy(m => m.Margin) : (LimitMargin?)null;
+            var least = st.Margins.Count > 0 ? st.Margins.MinBy(m => m.MarginFraction) : (LimitMargin?)null;
             s.Append("<tr><td class=\"n\">").Append(st.Index).Append("</td><td>").Append(E(st.Spin.ToString())).Append("</td>");
             Cells(s, N(st.Duty, 3), N(st.SpeedRpm, 0), N(st.LiftN, 1), N(st.ShaftTorqueNm, 2), N(st.MotorCurrentA, 1), N(st.BusCurrentA, 1), N(st.EddyPowerW, 0), N(st.LiftSpecificPowerWPerN, 2));
             s.Append("<td>").Append(st.Stable ? "yes" : "<span class=\"fail\">NO</span>").Append("</td><td>")
-                .Append(least is { } m ? E($"{m.Limit.Describe()} {N(m.Margin * 100, 0)} %") : "").Append("</td></tr>\n");
+                .Append(least is { } m ? E($"{m.Limit.Describe()} {N(m.MarginFraction * 100, 0)} %") : "").Append("</td></tr>\n");
         }
         s.Append("</table>\n<p>").Append(E($"Pack {N(hover.BusVoltageV, 2)} V, {N(hover.PackCurrentA, 1)} A, {N(hover.ElectricalPowerW, 0)} W; into the plate {N(hover.PlatePowerW, 0)} W; "
             + $"lift-specific power {N(hover.LiftSpecificPowerWPerN, 2)} W/N; heave natural frequency {N(hover.HeaveFrequencyHz, 2)} Hz (undamped)."))
@@ -199,7 +199,7 @@ public static class RigReportHtml
         s.Append("<p>").Append(Verdict(y.Pass)).Append("</p>\n<table>\n");
         Row(s, "equal duty", y.EqualDuty is { } d ? N(d, 3) : "none (no equal-duty hover)");
         Row(s, "residual yaw torque at equal duty", y.ResidualTorqueNm is { } r ? $"{N(r, 3)} N m" : "n/a");
-        Row(s, "differential duty that cancels it", y.TrimDutyDelta is { } t ? N(t, 4) : "n/a");
+        Row(s, "differential duty that cancels it", y.TrimDeltaDuty is { } t ? N(t, 4) : "n/a");
         Row(s, "yaw authority", $"{N(y.AuthorityNm, 3)} N m against a tolerance of {N(y.LimitNm, 3)} N m" + (y.AuthorityLimitedBy is { } by ? $" (limited by {by})" : ""));
         s.Append("</table>\n");
         foreach (var f in y.Findings)
@@ -276,14 +276,14 @@ public static class RigReportHtml
             return;
         }
         var rate = stress.FailureRate;
-        bool pass = rate is { } x && x.Upper < report.StressAcceptPct / 100;
+        bool pass = rate is { } x && x.UpperFraction < report.StressAcceptPct / 100;
         s.Append("<p>").Append(Verdict(pass)).Append(E($" {stress.Samples} samples (seed {stress.Seed})" + (stress.Partial ? ", stopped early" : "")
-            + (rate is { } fr ? $": {fr.Count} fail at least one criterion, {N(fr.Estimate * 100, 2)} % (95 % interval {N(fr.Lower * 100, 2)} to {N(fr.Upper * 100, 2)} %); accepted below {N(report.StressAcceptPct, 2)} %." : ".")))
+            + (rate is { } fr ? $": {fr.Count} fail at least one criterion, {N(fr.EstimateFraction * 100, 2)} % (95 % interval {N(fr.LowerFraction * 100, 2)} to {N(fr.UpperFraction * 100, 2)} %); accepted below {N(report.StressAcceptPct, 2)} %." : ".")))
             .Append("</p>\n<table><tr><th>criterion</th><th>failed samples</th><th>rate, %</th></tr>\n");
         foreach (var c in stress.Criteria)
         {
             s.Append("<tr><td>").Append(E($"{c.Key}: {c.Description}")).Append("</td>");
-            Cells(s, c.Rate.Count.ToString(Ci), N(c.Rate.Estimate * 100, 2));
+            Cells(s, c.Rate.Count.ToString(Ci), N(c.Rate.EstimateFraction * 100, 2));
             s.Append("</tr>\n");
         }
         s.Append("</table>\n");

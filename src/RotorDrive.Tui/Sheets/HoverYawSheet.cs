@@ -247,7 +247,7 @@ public sealed class HoverYawSheet : Sheet
         {
             sb.AppendLine($"  rim speed {F(safety.AtHover.Max(x => x.RimSpeedMPerS), 1)} m/s at hover");
             // The station closest to failing: a failed check first, then the smallest margin; one not assessed last.
-            var worst = safety.AtHover.OrderBy(x => x.Passes == false ? 0 : x.Margin is null ? 2 : 1).ThenBy(x => x.Margin ?? double.MaxValue).First();
+            var worst = safety.AtHover.OrderBy(x => x.Passes == false ? 0 : x.MarginFraction is null ? 2 : 1).ThenBy(x => x.MarginFraction ?? double.MaxValue).First();
             sb.AppendLine("  " + BurstText.Line(worst, "hover"));
         }
         else

@@ -335,7 +335,7 @@ public sealed class StressSheet : Sheet
         {
             var failed = StressCriteria.All.Where(c => !sample.Outcome.Passed(c)).Select(c => c.Key()).ToList();
             lines.Add("");
-            lines.Add($"Worst sample: {worst}, smallest margin {F(sample.Outcome.MinimumMargin, 3)}, {(failed.Count == 0 ? "fails nothing" : "! fails " + string.Join(", ", failed))}");
+            lines.Add($"Worst sample: {worst}, smallest margin {F(sample.Outcome.MinimumMarginFraction, 3)}, {(failed.Count == 0 ? "fails nothing" : "! fails " + string.Join(", ", failed))}");
             var session = Context.Session;
             // The command reproduces the sample only from a file that holds the rig exactly as run.
             _reproducibleShown = Reproducible(shown);

@@ -27,7 +27,7 @@ public static class BurstText
         return result.Assessment switch
         {
             RetainerAssessment.Assessed => $"{verdict} {at}: ring {Mpa(result.HoopStressPa)} MPa, allowed {Mpa(result.AllowablePa)} MPa, "
-                + $"margin {Percent(result.Margin!.Value)}, {rim}{over}",
+                + $"margin {Percent(result.MarginFraction!.Value)}, {rim}{over}",
             RetainerAssessment.NoAllowableStress => $"{verdict} {at}: ring {Mpa(result.HoopStressPa)} MPa, no allowable stress in the rotor row, {rim}{over}",
             _ => $"{verdict} {at}: ring stress not assessed (the rotor row gives no retainer thickness), {rim}{over}",
         };

@@ -2,6 +2,7 @@ using System.Numerics;
 using MathNet.Numerics.Integration;
 using RotorDrive.Core.Magnetics;
 using RotorDrive.Core.Tests.Loads;
+using RotorDrive.Core.Tests.Support;
 using Xunit;
 
 namespace RotorDrive.Core.Tests.Magnetics;

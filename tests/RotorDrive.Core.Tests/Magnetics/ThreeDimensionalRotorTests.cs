@@ -2,6 +2,7 @@ using MathNet.Numerics.Integration;
 using RotorDrive.Core.Loads;
 using RotorDrive.Core.Magnetics;
 using RotorDrive.Core.Tests.Loads;
+using RotorDrive.Core.Tests.Support;
 using Xunit;
 
 namespace RotorDrive.Core.Tests.Magnetics;
@@ -79,8 +80,8 @@ public class ThreeDimensionalRotorTests
             double g = range.MinGapM + (range.MaxGapM - range.MinGapM) * random.NextDouble();
             (double lift, double torque) = table.EddyAtSigmaOmega(x, g);
             (double directLift, double directTorque) = table.Direct.EddyAtSigmaOmega(x, g);
-            RelAssert.CloseOrSmall(directLift, lift, 1e-3, 1e-6 * largest, $"lift at x = {x:G3}, g = {g:G3}");
-            RelAssert.CloseOrSmall(directTorque, torque, 1e-3, 1e-6 * largest, $"torque at x = {x:G3}, g = {g:G3}");
+            RelAssert.Close(directLift, lift, 1e-3, 1e-6 * largest, $"lift at x = {x:G3}, g = {g:G3}");
+            RelAssert.Close(directTorque, torque, 1e-3, 1e-6 * largest, $"torque at x = {x:G3}, g = {g:G3}");
         }
         LoadPoint still = table.Evaluate(0, 0.01, 20, 20);
         Assert.True(still.LiftN < 0, $"standstill lift over a steel-backed plate is {still.LiftN} N; the steel must pull the rotor down");

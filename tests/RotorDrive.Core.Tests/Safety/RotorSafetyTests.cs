@@ -106,13 +106,13 @@ public class RotorSafetyTests
     {
         // Definition of the margin (allowable / stress - 1) and of the rated speed; no outside value needed.
         var ok = RotorSafety.Assess(Rotor(), Speed6000Rpm);
-        Assert.True(ok.Margin >= 0);
+        Assert.True(ok.MarginFraction >= 0);
         Assert.Equal(true, ok.Passes);
         var weak = RotorSafety.Assess(Rotor(allowablePa: 1e6), Speed6000Rpm);
-        Assert.True(weak.Margin < 0);
+        Assert.True(weak.MarginFraction < 0);
         Assert.Equal(false, weak.Passes);
         var fast = RotorSafety.Assess(Rotor(maxRpm: 5000), Speed6000Rpm);
-        Assert.True(fast.Margin >= 0);
+        Assert.True(fast.MarginFraction >= 0);
         Assert.Equal(false, fast.Passes);
         Assert.Null(RotorSafety.Assess(Rotor(retainerM: null), Speed6000Rpm).Passes);
         Assert.Null(RotorSafety.Assess(Rotor(allowablePa: null), Speed6000Rpm).Passes);

@@ -2,6 +2,7 @@ using MathNet.Numerics;
 using RotorDrive.Core.Magnetics;
 using RotorDrive.Core.Simulation;
 using RotorDrive.Core.Tests.Simulation;
+using RotorDrive.Core.Tests.Support;
 using RotorDrive.Core.Thermal;
 using Xunit;
 
@@ -25,7 +26,7 @@ public sealed class PlateHeatSolverTests
         var solver = new PlateHeatSolver(sheet, [Ring(0.1)], -1, -1, 2, 256, 20);
         solver.Advance([500.0], 120, 0, 0);
         double expected = 20 + 500 / (4 * Math.PI * 200 * 0.012) * SpecialFunctions.ExponentialIntegral(0.01 / (4 * sheet.DiffusivityM2PerS * 120), 1);
-        RelativeAssert.Equal(expected - 20, solver.PointC(0, 0) - 20, 0.01, what: "centre rise, K");
+        RelAssert.Close(expected - 20, solver.PointC(0, 0) - 20, 0.01, what: "centre rise, K");
     }
 
     [Fact]
@@ -40,8 +41,8 @@ public sealed class PlateHeatSolverTests
         var solver = new PlateHeatSolver(sheet, [Ring(a)], -2, -2, 4, 256, 20);
         solver.Advance([500.0], 1e6, 0, 0);
         double scale = 500 / (2 * Math.PI * 200 * 0.012);
-        RelativeAssert.Equal(scale * SpecialFunctions.BesselK0(a / l), solver.PointC(0, 0) - 20, 0.005, what: "centre");
-        RelativeAssert.Equal(scale * SpecialFunctions.BesselI0(a / l) * SpecialFunctions.BesselK0(0.3 / l), solver.PointC(0.3, 0) - 20, 0.005, what: "r = 0.3 m");
+        RelAssert.Close(scale * SpecialFunctions.BesselK0(a / l), solver.PointC(0, 0) - 20, 0.005, what: "centre");
+        RelAssert.Close(scale * SpecialFunctions.BesselI0(a / l) * SpecialFunctions.BesselK0(0.3 / l), solver.PointC(0.3, 0) - 20, 0.005, what: "r = 0.3 m");
     }
 
     [Theory]
@@ -78,10 +79,10 @@ public sealed class PlateHeatSolverTests
             }
             return 100 / (2 * Math.PI * 100 * 0.01) * Math.Exp(-b * xi) * sum;
         }
-        RelativeAssert.Equal(Rosenthal(-0.1, 0), solver.PointC(cx - 0.1, cy), 0.01, what: "behind");
-        RelativeAssert.Equal(Rosenthal(0, 0.1), solver.PointC(cx, cy + 0.1), 0.01, what: "aside");
-        RelativeAssert.Equal(Rosenthal(0.1, 0), solver.PointC(cx + 0.1, cy), 0.02, what: "ahead");
-        RelativeAssert.Equal(Rosenthal(-0.2, 0.05), solver.PointC(cx - 0.2, cy + 0.05), 0.02, what: "far behind");
+        RelAssert.Close(Rosenthal(-0.1, 0), solver.PointC(cx - 0.1, cy), 0.01, what: "behind");
+        RelAssert.Close(Rosenthal(0, 0.1), solver.PointC(cx, cy + 0.1), 0.01, what: "aside");
+        RelAssert.Close(Rosenthal(0.1, 0), solver.PointC(cx + 0.1, cy), 0.02, what: "ahead");
+        RelAssert.Close(Rosenthal(-0.2, 0.05), solver.PointC(cx - 0.2, cy + 0.05), 0.02, what: "far behind");
     }
 
     [Fact]
@@ -99,7 +100,7 @@ public sealed class PlateHeatSolverTests
         }
         var map = solver.Field();
         double stored = sheet.HeatCapacityJPerM2K * map.SpacingM * map.SpacingM * map.TemperaturesC.Sum(t => t - 22);
-        RelativeAssert.Equal(solver.DepositedJ, stored + solver.LostJ, 1e-6, what: "deposited = stored + lost, J");
+        RelAssert.Close(solver.DepositedJ, stored + solver.LostJ, 1e-6, what: "deposited = stored + lost, J");
         Assert.True(solver.LostJ > 0.05 * solver.DepositedJ, "the faces lost a noticeable share");
     }
 
@@ -127,8 +128,8 @@ public sealed class PlateHeatSolverTests
         }
         double perimeterPerArea = 2 * Math.PI * (0.06 + 0.13) / (Math.PI * (0.13 * 0.13 - 0.06 * 0.06));
         double Deficit(double t) => 2.0 / 3.0 * perimeterPerArea * Math.Sqrt(sheet.DiffusivityM2PerS * t / Math.PI);
-        RelativeAssert.Equal(Deficit(0.5), 1 - Ratio(0.5), 0.1, what: "shortfall at 0.5 s");
-        RelativeAssert.Equal(Deficit(2), 1 - Ratio(2), 0.1, what: "shortfall at 2 s");
+        RelAssert.Close(Deficit(0.5), 1 - Ratio(0.5), 0.1, what: "shortfall at 0.5 s");
+        RelAssert.Close(Deficit(2), 1 - Ratio(2), 0.1, what: "shortfall at 2 s");
         double late = Ratio(100);
         Assert.True(late < 0.7, $"at 100 s the lumped patch overstates the rise: ratio {late}");
     }
