@@ -54,7 +54,7 @@ internal static class CatalogView
             bool numeric = grid.Rows.All(r => Cell(r).Length == 0 || double.TryParse(Cell(r), NumberStyles.Float, CultureInfo.InvariantCulture, out _));
             rows = numeric
                 ? rows.OrderBy(r => double.TryParse(Cell(r), NumberStyles.Float, CultureInfo.InvariantCulture, out double v) ? v : double.MaxValue)
-                : rows.OrderBy(Cell, StringComparer.OrdinalIgnoreCase);
+                : rows.OrderBy(Cell, NaturalOrder.Instance);
             if (descending)
             {
                 rows = rows.Reverse();

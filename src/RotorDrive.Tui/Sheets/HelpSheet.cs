@@ -3,6 +3,7 @@ using System.Text;
 using Terminal.Gui.ViewBase;
 using Terminal.Gui.Views;
 using RotorDrive.Core.Safety;
+using RotorDrive.Core.Studies.Ranking;
 using RotorDrive.Tui.Shell;
 using RotorDrive.Tui.Text;
 
@@ -68,6 +69,17 @@ public sealed class HelpSheet : Sheet
         sb.AppendLine("  +      centre of gravity in the station sketch");
         sb.AppendLine("  P      on the Shortlist: in the Pareto set over runtime, mass and current margin");
         sb.AppendLine("  PARTIAL  on the Stress sheet: a run stopped early; its figures cover the samples finished");
+        sb.AppendLine();
+        sb.AppendLine("WORDS ON THE SHEETS");
+        sb.AppendLine("  margin %  how far a figure stays inside its limit, as a share of the limit: (limit - value) / limit for an");
+        sb.AppendLine("            upper limit such as a current, (value - limit) / limit for a lower one; 0 % is at the limit,");
+        sb.AppendLine("            below 0 % the limit is broken (marked !!). A retaining ring's margin is allowable stress / stress - 1.");
+        sb.AppendLine("  score     on the Shortlist: each of runtime, mass (lower is better) and current margin is scaled to 0..1");
+        var w = RankWeights.Default;
+        sb.AppendLine(FormattableString.Invariant($"            over the combinations that pass (0 the worst, 1 the best), then weighted {w.Runtime} / {w.Mass} / {w.Margin} and"));
+        sb.AppendLine("            divided by the sum of the weights, so 1 would be best at all three.");
+        sb.AppendLine("  burst check  Core's retaining-ring check of a rotor: passes, FAILS (over its allowable stress or above its");
+        sb.AppendLine("            rated speed) or not assessed (the rotor row lacks the retainer's thickness or allowable stress).");
         sb.AppendLine();
         sb.AppendLine("CAUTIONS");
         foreach (var caution in Cautions.All)

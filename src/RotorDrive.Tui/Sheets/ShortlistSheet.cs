@@ -6,6 +6,7 @@ using Terminal.Gui.ViewBase;
 using Terminal.Gui.Views;
 using RotorDrive.Core;
 using RotorDrive.Core.Craft;
+using RotorDrive.Core.Simulation;
 using RotorDrive.Core.Studies.Ranking;
 using RotorDrive.Files.Rigs;
 using RotorDrive.Tui.Shell;
@@ -29,7 +30,7 @@ public sealed class ShortlistSheet : Sheet
     public const int MaxPacks = 16;
 
     /// <summary>The table's columns.</summary>
-    public static IReadOnlyList<string> Columns { get; } = ["rank", "P", "run min", "mass kg", "margin %", "motor", "controller", "packs", "lift-off s", "score"];
+    public static IReadOnlyList<string> Columns { get; } = ["rank", "P", "hover min", "ends by", "pack-only min", "mass kg", "margin %", "motor", "controller", "packs", "lift-off s", "score"];
 
     private const string RankJob = "ranking";
     private const string WhyNotJob = "why not";
@@ -361,7 +362,11 @@ public sealed class ShortlistSheet : Sheet
             var f = e.Figures!;
             return (IReadOnlyList<string>)
             [
-                t.Rank.ToString(CultureInfo.InvariantCulture), t.InParetoSet ? "P" : "", F(f.RuntimeS / 60, 1), F(f.TotalMassKg, 1),
+                // The hover time is the endurance run's (pack, windings and plate together), with what ends it; the quick
+                // check's pack-only figure is labelled so.
+                t.Rank.ToString(CultureInfo.InvariantCulture), t.InParetoSet ? "P" : "",
+                e.Simulation is { } sim ? F(sim.EnduranceRuntimeS / 60, 1) : "-", e.Simulation is { } ending ? Ending(ending.EnduranceLimit) : "-",
+                F(f.RuntimeS / 60, 1), F(f.TotalMassKg, 1),
                 f.CurrentMarginFraction is { } m ? F(m * 100, 0) : "-", e.MotorId, e.ControllerId, $"{e.Candidate.PackCount} x {e.PackId}",
                 t.LiftoffTimeS is { } s ? F(s, 2) : "none", F(t.Score, 3),
             ];
@@ -372,6 +377,21 @@ public sealed class ShortlistSheet : Sheet
             _table.Value = new TableSelection(new Point(0, 0));
         }
     }
+
+    /// <summary>What ended an endurance run, in one or two words for the table.</summary>
+    internal static string Ending(EnduranceLimit limit) => limit switch
+    {
+        EnduranceLimit.TimeLimit => "time limit",
+        EnduranceLimit.PackCutoff => "pack cutoff",
+        EnduranceLimit.UsableCapacity => "pack empty",
+        EnduranceLimit.TrimLost => "lost trim",
+        EnduranceLimit.WindingTemperature => "winding temp",
+        EnduranceLimit.MotorCurrent => "motor current",
+        EnduranceLimit.ControllerCurrent => "ctrl current",
+        EnduranceLimit.PackCurrent => "pack current",
+        EnduranceLimit.PlateTemperature => "plate temp",
+        _ => limit.ToString().ToLowerInvariant(),
+    };
 
     private void ShowAssigned()
     {

@@ -258,7 +258,7 @@ public sealed class StressSheet : Sheet
                 return;
             }
             _progress.Fraction = _requestedSamples > 0 ? (float)done / _requestedSamples : 0;
-            _state.Text = done == 0 ? "Preparing the load tables... F8 stops" : $"Running: {done} of {_requestedSamples} samples... F8 stops";
+            _state.Text = done == 0 ? "Preparing the load tables... F8 stops" : $"Running: {done} of {_requestedSamples}... F8 stops";
             return;
         }
         if (_shown is not { } shown)

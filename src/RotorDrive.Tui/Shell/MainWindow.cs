@@ -24,6 +24,8 @@ public sealed class MainWindow : Window
     private string _notice = "";
     private int _current = -1;
     private bool _quitAnswered;
+    private readonly FrameView _listFrame;
+    private readonly Label _tooSmall;
     private string? _lastJob;
 
     /// <summary>Creates the window with its sheets (the window owns and disposes them).</summary>
@@ -56,6 +58,10 @@ public sealed class MainWindow : Window
         _progress = new ProgressBar { X = Pos.AnchorEnd(21), Y = Pos.AnchorEnd(2), Width = 20, Height = 1, Visible = false };
         _keys = new Label { X = 0, Y = Pos.AnchorEnd(1), Width = Dim.Fill(), Height = 1, Text = "" };
         Add(listFrame, _frame, _status, _progress, _keys);
+        _listFrame = listFrame;
+        _tooSmall = new Label { X = 0, Y = 0, Width = Dim.Fill(), Height = Dim.Fill(), Visible = false, Text = "" };
+        Add(_tooSmall);
+        FrameChanged += (_, _) => CheckSize();
 
         _context.Session.Changed += (_, _) =>
         {
@@ -92,6 +98,13 @@ public sealed class MainWindow : Window
         }
         ShowSheet(0, focusSheet: false);
     }
+
+    /// <summary>Smallest terminal the sheets are laid out for.</summary>
+    public static readonly (int Columns, int Rows) MinimumSize = (80, 24);
+
+    /// <summary>True while the terminal is smaller than <see cref="MinimumSize"/> and the window says so instead of drawing
+    /// broken sheets.</summary>
+    public bool TooSmall => _tooSmall.Visible;
 
     /// <summary>The key of each sheet in list order (see <see cref="KeyMap.SheetKey"/>).</summary>
     public IReadOnlyList<string> SheetKeys => _sheetKeys;
@@ -320,6 +333,33 @@ public sealed class MainWindow : Window
         ShowSheet(index, focusSheet: false);
         _list.SetFocus();
         key.Handled = true;
+    }
+
+    private void CheckSize()
+    {
+        var size = Frame.Size;
+        bool small = size.Width > 0 && size.Height > 0 && (size.Width < MinimumSize.Columns || size.Height < MinimumSize.Rows);
+        if (small == _tooSmall.Visible && !small)
+        {
+            return;
+        }
+        _tooSmall.Text = small
+            ? $"The terminal is {size.Width} x {size.Height} characters; the workbench needs at least {MinimumSize.Columns} x {MinimumSize.Rows}.\n"
+                + "Enlarge the window and the sheets come back as they were. F10 or Ctrl+Q quits."
+            : "";
+        _tooSmall.Visible = small;
+        _listFrame.Visible = !small;
+        _frame.Visible = !small;
+        _status.Visible = !small;
+        _keys.Visible = !small;
+        if (small)
+        {
+            _progress.Visible = false;
+        }
+        else
+        {
+            UpdateStatus();
+        }
     }
 
     private bool IsRunningTop() => _context.App.TopRunnableView is null || ReferenceEquals(_context.App.TopRunnableView, this);

@@ -46,10 +46,14 @@ public class ShortlistSheetTests
                 var row = table.Row(i);
                 Assert.Equal(entry.Rank.ToString(CultureInfo.InvariantCulture), row[0]);
                 Assert.Equal(entry.InParetoSet ? "P" : "", row[1]);
-                Assert.Equal((entry.Evaluation.Figures!.RuntimeS / 60).ToString("F1", CultureInfo.InvariantCulture), row[2]);
-                Assert.Equal(entry.Evaluation.MotorId, row[5]);
-                Assert.Equal(entry.Evaluation.ControllerId, row[6]);
-                Assert.Equal($"{entry.Evaluation.Candidate.PackCount} x {entry.Evaluation.PackId}", row[7]);
+                // The hover time is the endurance run's, with its ending; the quick pack-only figure is labelled so.
+                var sim = entry.Evaluation.Simulation!;
+                Assert.Equal((sim.EnduranceRuntimeS / 60).ToString("F1", CultureInfo.InvariantCulture), row[2]);
+                Assert.Equal(ShortlistSheet.Ending(sim.EnduranceLimit), row[3]);
+                Assert.Equal((entry.Evaluation.Figures!.RuntimeS / 60).ToString("F1", CultureInfo.InvariantCulture), row[4]);
+                Assert.Equal(entry.Evaluation.MotorId, row[7]);
+                Assert.Equal(entry.Evaluation.ControllerId, row[8]);
+                Assert.Equal($"{entry.Evaluation.Candidate.PackCount} x {entry.Evaluation.PackId}", row[9]);
             }
             // The rig's own drivetrain (or1050-kv90 + sc120-12s + 2 x lp12s-20ah) where Core places it.
             var own = study.AssignedCandidate!.Value;

@@ -144,4 +144,18 @@ public class NothingLostTests
         bench.Press(Key.F12);
         Assert.Contains("Saved as /lab/my_rig_copy.json", bench.Screen);
     }
+
+    [Fact]
+    public void ATerminalOf70By20_SaysItIsTooSmall_AndTheSheetsComeBackWhenEnlarged()
+    {
+        using var bench = new Bench(70, 20);
+        Assert.True(bench.Window.TooSmall);
+        string screen = bench.Screen;
+        Assert.Contains("The terminal is 70 x 20 characters; the", screen);
+        Assert.DoesNotContain("Sheets", screen);
+        bench.App.Driver!.SetScreenSize(80, 24);
+        bench.Draw();
+        Assert.False(bench.Window.TooSmall);
+        Assert.Contains("Sheets", bench.Screen);
+    }
 }
