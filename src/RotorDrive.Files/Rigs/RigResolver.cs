@@ -71,7 +71,10 @@ public static class RigResolver
     /// <param name="catalogs">The loaded catalogs; ids rejected there are not reported again.</param>
     /// <param name="rigFile">The rig file's name, for problems.</param>
     /// <param name="locations">Positions of the document's keys in the file, or null.</param>
-    public static RigResolveResult Resolve(RigDocument document, CatalogLoadResult? catalogs, string rigFile, RigSourceMap? locations = null)
+    /// <param name="readText">Reads a calibration or bench file named by "calibrations" (a problem and null when it cannot);
+    /// null reads from disk. The terminal UI passes its own file service.</param>
+    public static RigResolveResult Resolve(RigDocument document, CatalogLoadResult? catalogs, string rigFile, RigSourceMap? locations = null,
+        Func<string, List<InputProblem>, string?>? readText = null)
     {
         ArgumentNullException.ThrowIfNull(document);
         ArgumentNullException.ThrowIfNull(rigFile);
@@ -288,7 +291,7 @@ public static class RigResolver
             CheckSpreads(nominal, tolerances, ctx);
         }
 
-        var calibrations = ResolveCalibrations(document, rigFile, stations, stationsOk, ctx);
+        var calibrations = ResolveCalibrations(document, rigFile, stations, stationsOk, ctx, readText ?? TextFiles.TryRead);
 
         var ordered = problems.OrderBy(p => p.Line).ThenBy(p => p.Column).ToList();
         if (ordered.Count > 0 || !partsOk || !stationsOk || !packOk || name is null || material is null || thickness is null
@@ -367,7 +370,8 @@ public static class RigResolver
     }
 
     // "calibrations": {rotor id: file}, each file relative to the rig file, made for that rotor and its present catalog row.
-    private static Dictionary<string, RotorCalibration> ResolveCalibrations(RigDocument document, string rigFile, List<Station> stations, bool stationsOk, Context ctx)
+    private static Dictionary<string, RotorCalibration> ResolveCalibrations(RigDocument document, string rigFile, List<Station> stations, bool stationsOk, Context ctx,
+        Func<string, List<InputProblem>, string?> readText)
     {
         var result = new Dictionary<string, RotorCalibration>(StringComparer.Ordinal);
         if (document.Calibrations is not { } entries)
@@ -389,7 +393,7 @@ public static class RigResolver
             }
             string full = Path.IsPathRooted(fileName) ? fileName : Path.Combine(folder, fileName);
             var fileProblems = new List<InputProblem>();
-            string? text = TextFiles.TryRead(full, fileProblems);
+            string? text = readText(full, fileProblems);
             var read = text is null ? null : Bench.CalibrationFile.Read(text, full, fileProblems);
             foreach (var p in fileProblems)
             {
@@ -409,14 +413,15 @@ public static class RigResolver
                 ctx.Problems.Add(new InputProblem(full, 0, 0, "rotor_row_sha256", Messages.CalibrationRotorChanged(rotorId)));
                 continue;
             }
-            result[rotorId] = r.Calibration with { Source = fileName, BenchPoints = BenchPointsBeside(full, r.DataFile, r.DataSha256) };
+            result[rotorId] = r.Calibration with { Source = fileName, BenchPoints = BenchPointsBeside(full, r.DataFile, r.DataSha256, readText) };
         }
         return result;
     }
 
     // The steady points a calibration was fitted to, when its data file lies beside it unchanged (same SHA-256); otherwise
     // none: they are only shown over the fitted curve, never used for a result.
-    private static IReadOnlyList<Core.Studies.Calibration.BenchPoint> BenchPointsBeside(string calibrationPath, string? dataFile, string? dataSha256)
+    private static IReadOnlyList<Core.Studies.Calibration.BenchPoint> BenchPointsBeside(string calibrationPath, string? dataFile, string? dataSha256,
+        Func<string, List<InputProblem>, string?> readText)
     {
         if (dataFile is null || dataSha256 is null)
         {
@@ -424,7 +429,7 @@ public static class RigResolver
         }
         string path = Path.Combine(Path.GetDirectoryName(calibrationPath) ?? "", dataFile);
         var ignored = new List<InputProblem>();
-        string? text = File.Exists(path) ? TextFiles.TryRead(path, ignored) : null;
+        string? text = readText(path, ignored);
         if (text is null || !string.Equals(Hashes.Sha256(text), dataSha256, StringComparison.OrdinalIgnoreCase))
         {
             return [];

@@ -288,9 +288,20 @@ public sealed class RigSession
         return problems.Count > 0 ? null : CatalogLoader.FromTexts(texts, paths);
     }
 
+    // Calibration and bench files named by the rig, read through the session's file service like the catalogs.
+    private string? ReadText(string path, List<InputProblem> problems)
+    {
+        string? text = _files.TryReadAllText(path, out string? failure);
+        if (text is null)
+        {
+            problems.Add(new InputProblem(path, 0, 0, "", failure ?? Messages.FileNotFound()));
+        }
+        return text;
+    }
+
     private void Resolve()
     {
-        var resolved = RigResolver.Resolve(Document!, Catalogs, RigPath ?? "rig.json", _locations);
+        var resolved = RigResolver.Resolve(Document!, Catalogs, RigPath ?? "rig.json", _locations, ReadText);
         // Type problems found when reading stay until the user edits that field (the reader left the key absent).
         var readFields = _readProblems.Where(p => p.Field.Length > 0 && !WasEdited(p.Field)).Select(p => p.Field).ToHashSet(StringComparer.Ordinal);
         var kept = _readProblems.Where(p => p.Field.Length == 0 || readFields.Contains(p.Field));

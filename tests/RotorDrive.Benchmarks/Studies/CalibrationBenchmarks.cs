@@ -39,9 +39,10 @@ public class CalibrationBenchmarks
         double speed = Units.RpmToRadPerS(5000);
         for (int i = 0; i < 200; i++)
         {
-            trace.Add(new SpinDownSample(i * 0.012, speed + Units.RpmToRadPerS(Normal.Sample(random, 0, 3)), rig.DesignGapM));
-            var path = RungeKutta.FourthOrder(speed, 0, 0.012, 21, (_, s) => s <= 0 ? 0 : -load.Evaluate(s, rig.DesignGapM, 22, 22).TotalTorqueNm / rotor.InertiaKgM2);
-            speed = path[^1];
+            double measured = speed > 0 ? Math.Max(0, speed + Units.RpmToRadPerS(Normal.Sample(random, 0, 3))) : 0;
+            trace.Add(new SpinDownSample(i * 0.01, measured, rig.DesignGapM));
+            var path = RungeKutta.FourthOrder(speed, 0, 0.01, 21, (_, s) => s <= 0 ? 0 : -load.Evaluate(s, rig.DesignGapM, 22, 22).TotalTorqueNm / rotor.InertiaKgM2);
+            speed = Math.Max(0, path[^1]);
         }
         _spinDown = new CalibrationRequest(rotor, rig.Plate, 22, 22, null, trace);
     }

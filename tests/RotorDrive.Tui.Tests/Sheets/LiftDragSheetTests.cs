@@ -83,4 +83,33 @@ public class LiftDragSheetTests
         var sheet = Assert.IsType<LiftDragSheet>(bench.Window.CurrentSheet);
         Assert.Equal(0.012, sheet.Result!.GapM, 12);
     }
+
+    // A rig naming a steady-point calibration shows the bench points at the shown gap over the calibrated curves, and the
+    // readout names the calibration (files read through the workbench's own file service).
+    [Fact]
+    public async Task CalibratedRig_ShowsMeasuredBenchPointsOverTheFittedCurve()
+    {
+        var files = MemoryFiles.WithDemoCatalogs();
+        string benchFolder = Path.Combine(Repo.CatalogsFolder, "bench");
+        foreach (string path in Directory.GetFiles(benchFolder))
+        {
+            files["/lab/bench/" + Path.GetFileName(path)] = File.ReadAllText(path);
+        }
+        var loaded = RotorDrive.Files.RigLoader.Load(Repo.DemoRig);
+        var rig = loaded.Rig!;
+        var rotor = loaded.Catalog!.Rotors.First(r => r.Id == "hx130-p4");
+        var data = RotorDrive.Files.Bench.BenchData.Read(files["/lab/bench/hx130-load-cell.csv"], "hx130-load-cell.csv", 10);
+        var fit = RotorDrive.Core.Studies.Calibration.CalibrationStudy.Run(
+            new RotorDrive.Core.Studies.Calibration.CalibrationRequest(rotor, rig.Plate, rig.PlateTemperatureC, rig.AmbientC, data.Points, null));
+        files["/lab/bench/hx130-calibration.csv"] = RotorDrive.Files.Bench.CalibrationFile.Write(fit, rotor, "hx130-load-cell.csv", data.Sha256);
+
+        using var bench = new Bench(columns: 160, rows: 30, rigPath: "/lab/bench/demo-rig-calibrated.json", files: files);
+        bench.Window.ShowSheet("Lift & drag");
+        await bench.SettleAsync();
+        var sheet = Assert.IsType<LiftDragSheet>(bench.Window.CurrentSheet);
+        Assert.NotNull(sheet.Result);
+        Assert.Contains("calibrated hx130-calibration.csv", sheet.Readout);
+        Assert.Contains("13 bench pts here", sheet.Readout);
+        Assert.Contains("measured", sheet.Chart.LegendText);
+    }
 }

@@ -220,10 +220,9 @@ public static partial class CalibrationStudy
         int n = measured.Length;
         var x = Vector<double>.Build.Dense(n, i => i);
         var y = Vector<double>.Build.Dense(n, i => measured[i] / scale[i]);
-        var weights = Vector<double>.Build.Dense(n, 1.0);
         Vector<double> Model(Vector<double> theta, Vector<double> _) => Vector<double>.Build.Dense(Weighted(problem, map, theta, scale));
         Matrix<double> Jacobian(Vector<double> theta, Vector<double> _) => WeightedJacobian(problem, map, theta, scale);
-        var objective = ObjectiveFunction.NonlinearModel(Model, Jacobian, x, y, weights);
+        var objective = ObjectiveFunction.NonlinearModel(Model, Jacobian, x, y, null);
         var minimiser = new LevenbergMarquardtMinimizer(maximumIterations: maxIterations);
         var result = minimiser.FindMinimum(objective, start);
         return (result.MinimizingPoint, result.Iterations);
