@@ -112,7 +112,7 @@ public sealed class HoverCommandTests : IDisposable
         {
             var (code, output, error) = await CliRunner.RunAsync(command, rig);
             Assert.Equal(ExitCodes.BadInput, code);
-            Assert.Contains("station 0 has no motor", error);
+            Assert.Contains("station 1 has no motor", error);
             Assert.Equal("", output);
         }
     }

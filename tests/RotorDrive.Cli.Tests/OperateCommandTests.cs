@@ -228,4 +228,23 @@ public sealed class OperateCommandTests : IDisposable
             return rig;
         }
     }
+    // One numbering everywhere (issue 14 item 6): stations count from 1 as people count and as the workbench shows them;
+    // --station 6 is the demo rig's sixth (last) station, --station 7 does not exist and --station 0 is refused.
+    [Fact]
+    public async Task Station_CountsFromOne_LikeTheWorkbench()
+    {
+        var (code, output, error) = await CliRunner.RunAsync("operate", RepoPaths.DemoRig, "--station", "6", "--json");
+        Assert.True(code is ExitCodes.Ok or ExitCodes.LimitFindings, error);
+        using var doc = System.Text.Json.JsonDocument.Parse(output);
+        Assert.Equal(6, doc.RootElement.GetProperty("station").GetInt32());
+        var (seven, _, sevenError) = await CliRunner.RunAsync("operate", RepoPaths.DemoRig, "--station", "7");
+        Assert.Equal(ExitCodes.BadInput, seven);
+        Assert.Contains("numbered 1 to 6", sevenError);
+        var (zero, _, zeroError) = await CliRunner.RunAsync("load", RepoPaths.DemoRig, "--station", "0");
+        Assert.Equal(ExitCodes.BadInput, zero);
+        Assert.Contains("--station counts from 1", zeroError);
+        var (_, hover, _) = await CliRunner.RunAsync("hover", RepoPaths.DemoRig, "--json");
+        using var h = System.Text.Json.JsonDocument.Parse(hover);
+        Assert.Equal([1, 2, 3, 4, 5, 6], h.RootElement.GetProperty("stations").EnumerateArray().Select(s => s.GetProperty("index").GetInt32()));
+    }
 }

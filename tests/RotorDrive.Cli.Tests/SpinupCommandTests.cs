@@ -60,7 +60,7 @@ public sealed class SpinupCommandTests : IDisposable
         using var doc = JsonDocument.Parse(output);
         var root = doc.RootElement;
         Assert.Equal(JsonValueKind.Null, root.GetProperty("time_to_liftoff_s").ValueKind);
-        Assert.Equal([0, 1, 2, 3, 4, 5], root.GetProperty("stalled_stations").EnumerateArray().Select(e => e.GetInt32()));
+        Assert.Equal([1, 2, 3, 4, 5, 6], root.GetProperty("stalled_stations").EnumerateArray().Select(e => e.GetInt32()));
         double suggested = root.GetProperty("stations")[0].GetProperty("suggested_current_limit_a").GetDouble();
         Assert.InRange(suggested, 100, 170);
     }
@@ -176,7 +176,7 @@ public sealed class SpinupCommandTests : IDisposable
         {
             var (code, output, error) = await CliRunner.RunAsync(command, Rig);
             Assert.Equal(ExitCodes.BadInput, code);
-            Assert.Contains("station 0 has no motor", error);
+            Assert.Contains("station 1 has no motor", error);
             Assert.Contains("demo-rig.json", error);
             Assert.Equal("", output);
         }

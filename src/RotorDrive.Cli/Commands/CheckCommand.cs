@@ -130,7 +130,7 @@ public static class CheckCommand
                 new TableColumn("spin"), new TableColumn("rotor"), new TableColumn("motor"), new TableColumn("controller"));
             foreach (var s in r.Stations)
             {
-                table.AddRow(s.Index.ToString(System.Globalization.CultureInfo.InvariantCulture), Numbers.Format(s.XMm, 0), Numbers.Format(s.YMm, 0),
+                table.AddRow((s.Index + 1).ToString(System.Globalization.CultureInfo.InvariantCulture), Numbers.Format(s.XMm, 0), Numbers.Format(s.YMm, 0),
                     s.Spin, s.Rotor, s.Motor ?? "-", s.Controller ?? "-");
             }
             table.Write(o, 2);

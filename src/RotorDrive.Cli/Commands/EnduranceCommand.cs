@@ -98,7 +98,7 @@ public static class EnduranceCommand
             result.RuntimeS / 60.0,
             result.FirstLimit,
             result.FirstLimitText,
-            result.LimitStation,
+            result.LimitStation + 1,
             result.StartHover.Stations.Select(h => h.SpeedRpm).ToArray(),
             result.StartPackCurrentA,
             result.FinalSocFraction * 100,
@@ -129,7 +129,7 @@ public static class EnduranceCommand
             output.WriteLine($"  ended by: {report.FirstLimit}");
             output.WriteLine(report.StartSpeedsRpm.Count == 0
                 ? "  at the start: no trimmed hover exists"
-                : $"  at the start: {string.Join(" / ", report.StartSpeedsRpm.Select(r => Numbers.Format(r, 0)))} rpm (stations 0..{report.StartSpeedsRpm.Count - 1}), pack current {Numbers.Format(report.StartPackCurrentA, 1)} A");
+                : $"  at the start: {string.Join(" / ", report.StartSpeedsRpm.Select(r => Numbers.Format(r, 0)))} rpm (stations 1..{report.StartSpeedsRpm.Count}), pack current {Numbers.Format(report.StartPackCurrentA, 1)} A");
             output.WriteLine($"  at the end: state of charge {Numbers.Format(report.FinalSocPct, 1)} %, bus {Numbers.Format(report.FinalBusVoltageV, 1)} V, pack current {Numbers.Format(report.FinalPackCurrentA, 1)} A");
             output.WriteLine($"  hottest winding {Numbers.Format(report.PeakWindingTempC, 1)} C, hottest point of the plate {Numbers.Format(report.PeakPlateTempC, 1)} C (limit {Numbers.Format(report.PlateLimitC, 0)} C)");
             if (report.PlateHotspot is { } h)

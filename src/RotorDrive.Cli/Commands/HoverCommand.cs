@@ -104,7 +104,7 @@ public static class HoverCommand
         var h = review.Hover;
         var safety = review.Safety;
         var stations = h.Stations.Select(s => new StationEntry(
-            s.Index, s.Spin == SpinDirection.Clockwise ? "cw" : "ccw", s.Duty, s.SpeedRpm, s.LiftN, s.ShaftTorqueNm, s.ReactionTorqueNm,
+            s.Index + 1, s.Spin == SpinDirection.Clockwise ? "cw" : "ccw", s.Duty, s.SpeedRpm, s.LiftN, s.ShaftTorqueNm, s.ReactionTorqueNm,
             s.MotorCurrentA, s.BusCurrentA, s.EddyPowerW, s.ElectricalPowerW, s.LiftSpecificPowerWPerN, s.Regime.ToString(), s.Stable,
             s.Margins.Select(Margin).ToList())).ToList();
         var hoverRotors = safety.AtHover;
@@ -119,7 +119,7 @@ public static class HoverCommand
                 worstMax?.HoopStressPa / 1e6, worstMax?.RingOwnStressPa / 1e6, safety.MinMaxRpmMargin),
             hoverRotors.Select(r => r.Assessment.ToString()).Distinct().ToList(),
             safety.MagnetNote);
-        var limits = review.Findings.Select(f => new LimitEntry(f.Limit, f.Station, f.Message)).ToList();
+        var limits = review.Findings.Select(f => new LimitEntry(f.Limit, f.Station + 1, f.Message)).ToList();
         bool pass = review.Pass;
         return new HoverReport(
             model.Rig.Name, h.Mode == HoverMode.Trimmed ? "trimmed" : "common_duty", h.Status.ToString(), pass,

@@ -27,14 +27,14 @@ public static class LoadCommand
         var rig = CommonOptions.RigArgument();
         var station = new Option<int?>("--station")
         {
-            Description = "Rotor station (0-based) whose rotor to use; default 0.",
+            Description = "Station whose rotor to use, counted from 1 as listed by 'check'; default 1.",
             HelpName = "N",
         };
         station.Validators.Add(r =>
         {
-            if (r.GetValueOrDefault<int?>() is < 0)
+            if (r.GetValueOrDefault<int?>() is < 1)
             {
-                r.AddError("--station must be 0 or more.");
+                r.AddError("--station counts from 1.");
             }
         });
         var rotor = new Option<string?>("--rotor")
@@ -145,14 +145,14 @@ public static class LoadCommand
         }
         else
         {
-            int index = request.Station ?? 0;
-            if (index >= rig.Stations.Count)
+            int number = request.Station ?? 1;
+            if (number > rig.Stations.Count)
             {
-                error.WriteLine($"rotordrive load: error: --station {index}: the rig has {rig.Stations.Count} station(s), numbered 0 to {rig.Stations.Count - 1}.");
+                error.WriteLine($"rotordrive load: error: --station {number}: the rig has {rig.Stations.Count} station(s), numbered 1 to {rig.Stations.Count}.");
                 return ExitCodes.BadInput;
             }
-            stationIndex = index;
-            design = rig.Stations[index].Rotor;
+            stationIndex = number;
+            design = rig.Stations[number - 1].Rotor;
         }
 
         double gapM = (request.GapMm ?? rig.DesignGapM * 1000.0) / 1000.0;

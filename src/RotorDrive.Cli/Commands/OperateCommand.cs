@@ -27,9 +27,9 @@ public static class OperateCommand
         var json = CommonOptions.Json();
         var station = new Option<int>("--station")
         {
-            Description = "Station index, 0-based as listed by 'check'.",
+            Description = "Station number, counted from 1 as listed by 'check'.",
             HelpName = "N",
-            DefaultValueFactory = _ => 0,
+            DefaultValueFactory = _ => 1,
         };
         var motor = new Option<string?>("--motor") { Description = "Motor id from the motors catalog, instead of the station's.", HelpName = "ID" };
         var controller = new Option<string?>("--controller") { Description = "Controller id from the controllers catalog, instead of the station's.", HelpName = "ID" };
@@ -47,7 +47,7 @@ public static class OperateCommand
         var force = CommonOptions.Force();
         var sweep = new Option<bool>("--sweep") { Description = "Table of the point reached from rest over duty 0 to 1 in steps of 0.05." };
 
-        station.Validators.Add(r => Check(r, r.GetValueOrDefault<int>() >= 0, $"--station must be 0 or more; got {r.GetValueOrDefault<int>()}."));
+        station.Validators.Add(r => Check(r, r.GetValueOrDefault<int>() >= 1, $"--station counts from 1; got {r.GetValueOrDefault<int>()}."));
         duty.Validators.Add(r => Check(r, r.GetValueOrDefault<double?>() is not { } d || (d >= 0 && d <= 1), $"--duty must lie in [0, 1]; got {Show(r.GetValueOrDefault<double?>())}."));
         hold.Validators.Add(r => Check(r, r.GetValueOrDefault<double?>() is not { } h || (double.IsFinite(h) && h > 0), $"--hold-rpm must be a number greater than 0; got {Show(r.GetValueOrDefault<double?>())}."));
         gap.Validators.Add(r => Check(r, r.GetValueOrDefault<double?>() is not { } g || (g > 0 && g <= 200), $"--gap-mm must lie in (0, 200] mm; got {Show(r.GetValueOrDefault<double?>())}."));
@@ -192,12 +192,12 @@ public static class OperateCommand
     private static bool TryResolve(OperateRequest request, Rig rig, PartsCatalog catalog, TextWriter error, out Setup setup)
     {
         setup = null!;
-        if (request.Station >= rig.Stations.Count)
+        if (request.Station > rig.Stations.Count)
         {
-            error.WriteLine($"rotordrive: error: --station {request.Station}: the rig has {rig.Stations.Count} station(s), numbered 0 to {rig.Stations.Count - 1}");
+            error.WriteLine($"rotordrive: error: --station {request.Station}: the rig has {rig.Stations.Count} station(s), numbered 1 to {rig.Stations.Count}");
             return false;
         }
-        var station = rig.Stations[request.Station];
+        var station = rig.Stations[request.Station - 1];
         var motor = request.MotorId is { } mid ? Find(catalog.Motors, m => m.Id, mid) : station.Motor;
         var controller = request.ControllerId is { } cid ? Find(catalog.Controllers, c => c.Id, cid) : station.Controller;
         bool ok = true;

@@ -133,7 +133,7 @@ public static class SpinupCommand
         var spin = study.Spinup;
         double controllerMaxV = study.ControllerMaxVoltageV;
         var stations = spin.Stations.Select(s => new StationEntry(
-            s.Index,
+            s.Index + 1,
             rig.Stations[s.Index].Spin == SpinDirection.Clockwise ? "cw" : "ccw",
             s.FinalSpeedRpm,
             s.Motor.PeakA,
@@ -171,7 +171,7 @@ public static class SpinupCommand
             spin.LiftoffTimeS,
             rig.Limits.LiftoffTimeS,
             spin.HoverTimeS,
-            spin.StalledStations,
+            spin.StalledStations.Select(i => i + 1).ToList(),
             spin.Stations.Max(s => s.Motor.PeakA),
             spin.Pack.PeakA,
             spin.Pack.ContinuousA,

@@ -309,7 +309,7 @@ public static class StressCommand
     private static IReadOnlyList<string> Failed(StressOutcome o) => StressCriteria.All.Where(c => !o.Passed(c)).Select(c => c.Key()).ToList();
 
     private static PartsEntry Parts(StressParts p) => new(
-        p.Stations.Select((s, i) => new StationEntry(i, Units.RadPerSToRpm(s.KvRadPerSPerV), s.ResistanceOhm, s.NoLoadCurrentA, s.CurrentLimitA, s.RemanenceT, s.GapOffsetM * 1000)).ToList(),
+        p.Stations.Select((s, i) => new StationEntry(i + 1, Units.RadPerSToRpm(s.KvRadPerSPerV), s.ResistanceOhm, s.NoLoadCurrentA, s.CurrentLimitA, s.RemanenceT, s.GapOffsetM * 1000)).ToList(),
         p.PlateThicknessM * 1000,
         p.PlateConductivitySPerM / 1e6,
         p.AmbientC,
@@ -325,7 +325,7 @@ public static class StressCommand
         var o = s.Outcome;
         var margins = StressCriteria.All.ToDictionary(c => c.Key(), c => o.Margins[(int)c]);
         var trace = (o.Trace ?? []).Select(t => new TraceEntry(t.TimeS, t.Duty, t.SpeedRadPerS.Select(Units.RadPerSToRpm).ToList(), t.MotorCurrentA, t.BusVoltageV, t.PackCurrentA, t.LiftN)).ToList();
-        return new SampleEntry(s.Index, seed, o.PassedAll, Failed(o), margins, o.LiftoffTimeS, o.StalledStations, o.PeakMotorCurrentA, o.PeakPackCurrentA,
+        return new SampleEntry(s.Index, seed, o.PassedAll, Failed(o), margins, o.LiftoffTimeS, o.StalledStations.Select(i => i + 1).ToList(), o.PeakMotorCurrentA, o.PeakPackCurrentA,
             o.MinPackVoltageV, o.HoverSpeedRpm, o.HoverCurrentA, o.HoverPackVoltageV, o.YawResidualNm, o.YawAuthorityNm, o.TrimLimit, Parts(s.Parts), trace);
     }
 

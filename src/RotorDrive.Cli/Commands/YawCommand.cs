@@ -35,7 +35,7 @@ public static class YawCommand
             model.DesignGapM * 1000,
             new YawEntry(y.EqualDuty, y.ResidualTorqueNm, y.YawAccelerationRadPerS2, y.TrimDeltaDuty, y.ClockwiseDuty, y.CounterClockwiseDuty,
                 y.AuthorityNm, y.AuthorityPositiveNm, y.AuthorityNegativeNm, y.AuthorityMarginFraction, y.AuthorityLimitedBy, y.LimitNm, y.Pass),
-            y.Sensitivity is { } s ? new SensitivityEntry(s.StationA, s.StationB, s.KvMismatchNm, s.GapDifferenceNm, s.PlateTempDifferenceNm) : null,
+            y.Sensitivity is { } s ? new SensitivityEntry(s.StationA + 1, s.StationB + 1, s.KvMismatchNm, s.GapDifferenceNm, s.PlateTempDifferenceNm) : null,
             y.Findings);
         if (json)
         {

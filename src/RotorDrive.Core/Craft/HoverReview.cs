@@ -74,7 +74,7 @@ public sealed record HoverReview(HoverResult Hover, HoverSafetyReport Safety, IR
             if (r.MarginFraction is < 0)
             {
                 findings.Add(new HoverFinding(RetainerStressKey, turning[k].Index, Invariant(
-                    $"station {turning[k].Index}: the retaining ring of rotor {r.RotorId} carries {r.HoopStressPa!.Value / 1e6:0.0} MPa at {Units.RadPerSToRpm(r.SpeedRadPerS):0} rpm, above its allowable {r.AllowablePa!.Value / 1e6:0.0} MPa")));
+                    $"station {turning[k].Index + 1}: the retaining ring of rotor {r.RotorId} carries {r.HoopStressPa!.Value / 1e6:0.0} MPa at {Units.RadPerSToRpm(r.SpeedRadPerS):0} rpm, above its allowable {r.AllowablePa!.Value / 1e6:0.0} MPa")));
             }
         }
         double? maxPayload = hover.Mode == HoverMode.Trimmed && hover.Status is HoverStatus.LimitExceeded or HoverStatus.NoBalance or HoverStatus.BeyondDrivetrain

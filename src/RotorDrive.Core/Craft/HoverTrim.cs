@@ -500,7 +500,7 @@ public static class HoverTrim
             {
                 continue;
             }
-            string needs = Invariant($"station {i}: the balance needs {Units.RadPerSToRpm(speeds[i]):0} rpm with {required[i]:0.0} A of motor current");
+            string needs = Invariant($"station {i + 1}: the balance needs {Units.RadPerSToRpm(speeds[i]):0} rpm with {required[i]:0.0} A of motor current");
             findings.Add(required[i] > dt.CurrentLimitA
                 ? new HoverFinding("controller_current_limit", i, Invariant($"{needs}, above the controller's limit of {dt.CurrentLimitA:0.0} A"))
                 : new HoverFinding(DriveLimit.DutyHeadroom.Key(), i, duty > dt.MaxDuty
@@ -582,13 +582,13 @@ public static class HoverTrim
                 if (m.Exceeded)
                 {
                     findings.Add(new HoverFinding(m.Limit.Key(), i,
-                        $"station {i}: {m.Limit.Describe()} {m.ValueSi:0.###} {m.Limit.Unit()} exceeds the allowed {m.AllowedSi:0.###} {m.Limit.Unit()}"));
+                        $"station {i + 1}: {m.Limit.Describe()} {m.ValueSi:0.###} {m.Limit.Unit()} exceeds the allowed {m.AllowedSi:0.###} {m.Limit.Unit()}"));
                 }
             }
             if (!stable)
             {
                 findings.Add(new HoverFinding("stability", i,
-                    $"station {i}: {Units.RadPerSToRpm(speeds[i]):0} rpm is not a stable equilibrium at duty {requiredDuty:0.000} (load torque rises faster than the motor's)"));
+                    $"station {i + 1}: {Units.RadPerSToRpm(speeds[i]):0} rpm is not a stable equilibrium at duty {requiredDuty:0.000} (load torque rises faster than the motor's)"));
             }
         }
         double packCurrent = 0;

@@ -92,11 +92,11 @@ public sealed class RigModel
             var s = rig.Stations[i];
             if (s.Motor is null)
             {
-                problems.Add($"station {i} has no motor assigned (stations[{i}].motor)");
+                problems.Add($"station {i + 1} has no motor assigned (stations[{i}].motor)");
             }
             if (s.Controller is null)
             {
-                problems.Add($"station {i} has no controller assigned (stations[{i}].controller)");
+                problems.Add($"station {i + 1} has no controller assigned (stations[{i}].controller)");
             }
         }
         if (rig.Packs is null)

@@ -399,12 +399,12 @@ public static class EnduranceSimulator
                 EnduranceLimit.PackCutoff => $"pack cutoff voltage ({At(packs.CellsSeries * _r.Limits.CellCutoffV, "V")}: {packs.CellsSeries} cells x {At(_r.Limits.CellCutoffV, "V")})",
                 EnduranceLimit.UsableCapacity => $"usable pack capacity ({At(100 * _r.Limits.UsableCapacityFraction, "%")} of {At(packs.CapacityAh, "A h")})",
                 EnduranceLimit.TrimLost => "the hover trim no longer exists (the rotors or controllers can no longer hold the design gap)",
-                EnduranceLimit.WindingTemperature => $"winding temperature of station {station} ({At(_rig.Drivetrains[station!.Value].Motor.MaxWindingTempC ?? 0, "C")})",
-                EnduranceLimit.MotorCurrent => $"motor current of station {station} above its continuous {At(_rig.Drivetrains[station!.Value].Motor.MaxCurrentA, "A")}",
-                EnduranceLimit.ControllerCurrent => $"controller current of station {station} above its continuous {At(_rig.Drivetrains[station!.Value].Controller.ContinuousCurrentA, "A")}",
+                EnduranceLimit.WindingTemperature => $"winding temperature of station {station + 1} ({At(_rig.Drivetrains[station!.Value].Motor.MaxWindingTempC ?? 0, "C")})",
+                EnduranceLimit.MotorCurrent => $"motor current of station {station + 1} above its continuous {At(_rig.Drivetrains[station!.Value].Motor.MaxCurrentA, "A")}",
+                EnduranceLimit.ControllerCurrent => $"controller current of station {station + 1} above its continuous {At(_rig.Drivetrains[station!.Value].Controller.ContinuousCurrentA, "A")}",
                 EnduranceLimit.PackCurrent => $"pack current above its continuous {At(packs.ContinuousCurrentA, "A")}",
                 EnduranceLimit.PlateTemperature => $"plate temperature ({At(_r.Limits.PlateTempC, "C")} limit) at x {At(hot.XM * 1000, "mm")}, y {At(hot.YM * 1000, "mm")}"
-                    + (station is { } j ? $", nearest station {j}" : string.Empty),
+                    + (station is { } j ? $", nearest station {j + 1}" : string.Empty),
                 _ => limit.ToString(),
             };
         }

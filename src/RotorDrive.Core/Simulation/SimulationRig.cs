@@ -78,7 +78,7 @@ public sealed class SimulationRig
             if (!(landed > 0) || !(design > 0))
             {
                 throw new ArgumentOutOfRangeException(nameof(model), s.Conditions.GapOffsetM,
-                    $"station {j}: the gap offset {s.Conditions.GapOffsetM * 1000:0.###} mm leaves no air gap on the gear or at the design gap.");
+                    $"station {j + 1}: the gap offset {s.Conditions.GapOffsetM * 1000:0.###} mm leaves no air gap on the gear or at the design gap.");
             }
             _loads[j] = s.Load;
             _drives[j] = s.Drivetrain;

@@ -68,13 +68,13 @@ public static class SpinupStudy
         {
             if (s.Stalled)
             {
-                list.Add(new SpinupFinding("stall", s.Index, $"station {s.Index} stalls below its drag peak ({F(Units.RadPerSToRpm(s.DragPeakSpeedRadPerS), 0)} rpm, "
+                list.Add(new SpinupFinding("stall", s.Index, $"station {s.Index + 1} stalls below its drag peak ({F(Units.RadPerSToRpm(s.DragPeakSpeedRadPerS), 0)} rpm, "
                     + $"{F(s.DragPeakTorqueNm, 2)} N m at its landed gap): its controller limits the current to {F(s.CurrentLimitA, 0)} A; "
                     + $"{F(s.PassingCurrentA, 0)} A just balances the peak, a limit of {F(s.SuggestedCurrentLimitA, 0)} A would pass it"));
             }
             if (s.Controller.Exceeded)
             {
-                list.Add(new SpinupFinding("controller_current", s.Index, $"station {s.Index}: controller above its continuous {F(s.Controller.ContinuousA, 0)} A for "
+                list.Add(new SpinupFinding("controller_current", s.Index, $"station {s.Index + 1}: controller above its continuous {F(s.Controller.ContinuousA, 0)} A for "
                     + $"{F(s.Controller.TimeAboveContinuousS, 2)} s (burst allowance {F(s.Controller.BurstAllowanceS ?? 0, 1)} s)"));
             }
         }

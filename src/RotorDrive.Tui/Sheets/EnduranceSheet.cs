@@ -105,7 +105,7 @@ public sealed class EnduranceSheet : ChartSheet
     {
         string verdict = r.Passes() ? "the pack ends it" : $"{Over} not the pack";
         return $"runtime {Runtime(r.RuntimeS)}; {verdict}\n"
-            + $"ended by {StationNumbers.Renumber(r.FirstLimitText, r.LimitStation)}\n"
+            + $"ended by {r.FirstLimitText}\n"
             + $"hottest winding {F(r.PeakWindingTempC, 1)} C, plate {F(r.PeakPlateTempC, 1)} C (limit {F(sim.Rig.Limits.PlateTempC, 0)} C)";
     }
 
@@ -147,7 +147,7 @@ public sealed class EnduranceSheet : ChartSheet
         var sb = new StringBuilder();
         sb.AppendLine($"ENDURANCE  trimmed hover at the {F(sim.Rig.DesignGapM * 1000, 1)} mm design gap, {F(sim.MassKg, 1)} kg");
         sb.AppendLine($"  runtime {Runtime(r.RuntimeS)}, {r.Steps} steps");
-        sb.AppendLine($"  {(r.Passes() ? "" : Over + " ")}ended by {StationNumbers.Renumber(r.FirstLimitText, r.LimitStation)}");
+        sb.AppendLine($"  {(r.Passes() ? "" : Over + " ")}ended by {r.FirstLimitText}");
         sb.AppendLine(r.Passes()
             ? "  RESULT passes: the pack ends the hover (no thermal, current or trim limit first)"
             : $"  RESULT {Over} fails: a limit other than the pack ends the hover");

@@ -216,7 +216,7 @@ public sealed class HoverYawSheet : Sheet
             sb.AppendLine("LIMITS THAT FAIL");
             foreach (var finding in review.Findings)
             {
-                sb.AppendLine($"  {Over} {StationNumbers.Renumber(finding.Message, finding.Station)}");
+                sb.AppendLine($"  {Over} {finding.Message}");
             }
         }
         sb.AppendLine();

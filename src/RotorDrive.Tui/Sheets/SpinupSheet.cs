@@ -133,7 +133,7 @@ public sealed class SpinupSheet : ChartSheet
         string currents = $"peak motor {F(worst.Motor.PeakA, 1)} A (limit {F(worst.CurrentLimitA, 0)} A); pack {(spin.Pack.Exceeded ? Over : "")}{F(spin.Pack.PeakA, 0)} A, low {(spin.BelowCutoff ? Over : "")}{F(spin.MinBusVoltageV, 1)} V";
         string verdict = study.Passes
             ? "passes: lift-off in time, no stall, currents in allowance"
-            : $"{Over} fails ({study.Findings.Count}, F7 figures): " + StationNumbers.Renumber(study.Findings[0].Message, study.Findings[0].Station);
+            : $"{Over} fails ({study.Findings.Count}, F7 figures): " + study.Findings[0].Message;
         string landing = study.Cautions.Count > 0
             ? $"caution: landing regen lifts bus to {F(study.Landings.Max(l => l.MaxBusVoltageV), 1)} V (rated {F(study.ControllerMaxVoltageV, 1)} V)"
             : $"landing: bus stays within the controllers' {F(study.ControllerMaxVoltageV, 1)} V";
@@ -222,7 +222,7 @@ public sealed class SpinupSheet : ChartSheet
             sb.AppendLine("RESULT  fails:");
             foreach (var f in study.Findings)
             {
-                sb.AppendLine($"  {Over} {StationNumbers.Renumber(f.Message, f.Station)}");
+                sb.AppendLine($"  {Over} {f.Message}");
             }
         }
         sb.AppendLine();

@@ -100,7 +100,7 @@ public sealed class CommonDutyAndYawTests
         var rig = CraftRigs.Circle(4);
         rig = rig with { Stations = rig.Stations.Select((s, i) => i == 2 ? s with { Motor = null } : s).ToArray(), Packs = null };
         var missing = RigModel.MissingParts(rig);
-        Assert.Contains(missing, m => m.Contains("station 2 has no motor", StringComparison.Ordinal));
+        Assert.Contains(missing, m => m.Contains("station 3 has no motor", StringComparison.Ordinal)); // stations count from 1 (index 2)
         Assert.Contains(missing, m => m.Contains("no pack", StringComparison.Ordinal));
         Assert.Throws<ArgumentException>(() => RigModel.Build(rig));
     }

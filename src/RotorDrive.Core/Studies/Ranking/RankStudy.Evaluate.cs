@@ -67,7 +67,7 @@ public sealed partial class RankStudy
         {
             findings.Add(string.Format(ci,
                 "station {0} stalls below its drag peak ({1:0} rpm, {2:0.00} N m at the landed gap) under controller {3}'s {4:0} A limit at the hover duty; {5:0} A would pass it",
-                s.Index, Units.RadPerSToRpm(s.DragPeakSpeedRadPerS), s.DragPeakTorqueNm, controller.Id, s.CurrentLimitA, s.SuggestedCurrentLimitA));
+                s.Index + 1, Units.RadPerSToRpm(s.DragPeakSpeedRadPerS), s.DragPeakTorqueNm, controller.Id, s.CurrentLimitA, s.SuggestedCurrentLimitA));
         }
         if (spin.LiftoffTimeS is not { } liftoff)
         {
@@ -81,7 +81,7 @@ public sealed partial class RankStudy
         foreach (var s in spin.Stations.Where(s => s.Controller.Exceeded))
         {
             findings.Add(string.Format(ci, "station {0}: controller above its continuous {1:0} A for {2:0.00} s, longer than its burst allowance",
-                s.Index, s.Controller.ContinuousA, s.Controller.TimeAboveContinuousS));
+                s.Index + 1, s.Controller.ContinuousA, s.Controller.TimeAboveContinuousS));
         }
         if (spin.Pack.Exceeded)
         {
@@ -132,7 +132,7 @@ public sealed partial class RankStudy
             }
             reasons.Add(new RankRejection(RankRejectionKind.RotorSpeed, worst >= 0 && over > 1
                 ? string.Format(ci, "to lift {0:0.0} kg at the design gap station {1} must spin at {2:0} rpm, above its rotor's rated {3:0} rpm",
-                    o.MassKg, worst, Units.RadPerSToRpm(o.Speeds[worst]), Units.RadPerSToRpm(_maxSpeed[worst]))
+                    o.MassKg, worst + 1, Units.RadPerSToRpm(o.Speeds[worst]), Units.RadPerSToRpm(_maxSpeed[worst]))
                 : string.Format(ci, "the rotors cannot lift {0:0.0} kg at the design gap within {1:0.#} x their rated speed (no trim)", o.MassKg, _hoverOptions.SpeedSearchFactor)));
         }
         Add(RankRejectionKind.ControllerErpm, string.Format(ci,

@@ -5,8 +5,8 @@ namespace RotorDrive.Core.Studies.Stress;
 /// <param name="Station">The station index for a per-station quantity, or null for a rig-wide one.</param>
 public sealed record StressInput(StressQuantity Quantity, int? Station)
 {
-    /// <summary>A stable name, e.g. "motor_kv[2]" or "payload".</summary>
-    public string Name => Station is { } s ? $"{Quantity.Key()}[{s}]" : Quantity.Key();
+    /// <summary>A stable name, e.g. "motor_kv[2]" (stations counted from 1) or "payload".</summary>
+    public string Name => Station is { } s ? $"{Quantity.Key()}[{s + 1}]" : Quantity.Key();
 
     /// <summary>The input's value in a sample, in SI units.</summary>
     /// <param name="parts">The sample's parts.</param>
