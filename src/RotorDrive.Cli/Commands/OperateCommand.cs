@@ -222,7 +222,7 @@ public static class OperateCommand
             MinGapM = Math.Min(range.MinGapM, 0.5 * gapM),
             MaxGapM = Math.Max(range.MaxGapM, 1.5 * gapM),
         };
-        return RotorLoadTable.Build(rotor, rig.Plate, range);
+        return RotorLoadTable.Build(rotor, rig.Plate, range, rig.LoadOptions());
     }
 
     private static OperateReport Report(OperateRequest request, Setup setup, double gapM, OperatingPointResult result, IReadOnlyList<OperatingPointResult>? sweep)

@@ -34,6 +34,15 @@ public sealed record Rig(
     /// by the lumped plate node of the time simulations.</summary>
     public double PlateSpreadingFactor { get; init; } = 1.0;
 
+    /// <summary>The eddy-current load model the analyses use for this rig (rig file <c>load_model</c>: "3d", the default, or
+    /// "2d" for the first-generation model, e.g. to compare).</summary>
+    public Loads.LoadModelKind LoadModel { get; init; } = Loads.LoadModelKind.ThreeDimensional;
+
+    /// <summary>Load model settings for this rig: the given settings (or the defaults) with the rig's load model.</summary>
+    /// <param name="options">Settings to start from, or null for the defaults.</param>
+    public Loads.LoadModelOptions LoadOptions(Loads.LoadModelOptions? options = null)
+        => (options ?? Loads.LoadModelOptions.Default) with { Model = LoadModel };
+
     /// <summary>Total mass: structure, payload, rotors, assigned motors and controllers, and packs, kg.</summary>
     public double TotalMassKg =>
         Body.EmptyMassKg + Body.PayloadKg

@@ -126,7 +126,7 @@ public sealed class RigModel
             var rotor = rig.Stations[i].Rotor;
             if (!tables.TryGetValue(rotor, out var table))
             {
-                table = RotorLoadTable.Build(rotor, rig.Plate, LoadTableRange.ForRig(rig, rotor), options.Load);
+                table = RotorLoadTable.Build(rotor, rig.Plate, LoadTableRange.ForRig(rig, rotor), rig.LoadOptions(options.Load));
                 tables.Add(rotor, table);
             }
             loads[i] = table;

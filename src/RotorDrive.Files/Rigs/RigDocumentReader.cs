@@ -34,6 +34,7 @@ public static class RigDocumentReader
             Name = top.String("name"),
             AmbientC = top.Number("ambient_c"),
             GearYawFrictionNm = top.Number("gear_yaw_friction_nm"),
+            LoadModel = top.String("load_model"),
         };
 
         if (JsonObjectScope.Open(top.Take("catalogs"), "$.catalogs", file, problems) is { } c)
@@ -59,6 +60,7 @@ public static class RigDocumentReader
                 TemperatureC = p.Number("temperature_c"),
                 ConvectionWPerM2K = p.Number("convection_w_per_m2k"),
                 SpreadingFactor = p.Number("spreading_factor"),
+                BackIronMm = p.Number("back_iron_mm"),
             };
             p.ReportUnknownKeys();
         }

@@ -34,6 +34,7 @@ public static class RigDocumentWriter
                 Num(w, "temperature_c", p.TemperatureC);
                 Num(w, "convection_w_per_m2k", p.ConvectionWPerM2K);
                 Num(w, "spreading_factor", p.SpreadingFactor);
+                Num(w, "back_iron_mm", p.BackIronMm);
                 w.WriteEndObject();
             }
             if (document.Craft is { } k)
@@ -56,6 +57,7 @@ public static class RigDocumentWriter
             }
             Num(w, "ambient_c", document.AmbientC);
             Num(w, "gear_yaw_friction_nm", document.GearYawFrictionNm);
+            Str(w, "load_model", document.LoadModel);
             if (document.Stations is { } stations)
             {
                 w.WriteStartArray("stations");

@@ -5,13 +5,13 @@ public static class RigKeys
 {
     /// <summary>Top-level keys.</summary>
     public static IReadOnlyList<string> Top { get; } =
-        ["name", "catalogs", "plate", "craft", "gap", "ambient_c", "gear_yaw_friction_nm", "stations", "pack", "limits", "tolerances"];
+        ["name", "catalogs", "plate", "craft", "gap", "ambient_c", "gear_yaw_friction_nm", "load_model", "stations", "pack", "limits", "tolerances"];
 
     /// <summary>Keys of "catalogs".</summary>
     public static IReadOnlyList<string> Catalogs { get; } = ["motors", "controllers", "packs", "cell_curves", "rotors", "plates"];
 
     /// <summary>Keys of "plate".</summary>
-    public static IReadOnlyList<string> Plate { get; } = ["material", "thickness_mm", "temperature_c", "convection_w_per_m2k", "spreading_factor"];
+    public static IReadOnlyList<string> Plate { get; } = ["material", "thickness_mm", "temperature_c", "convection_w_per_m2k", "spreading_factor", "back_iron_mm"];
 
     /// <summary>Keys of "craft".</summary>
     public static IReadOnlyList<string> Craft { get; } =

@@ -18,4 +18,7 @@ public sealed class RigPlateSection
     /// <summary>"spreading_factor": plate patch area that takes a rotor's eddy heat / the magnet annulus area, at least 1
     /// (optional; default 1, the heat kept under the annulus: the hottest assumption).</summary>
     public double? SpreadingFactor { get; set; }
+
+    /// <summary>"back_iron_mm": thickness of a steel layer directly under the plate, mm (optional; default 0, none).</summary>
+    public double? BackIronMm { get; set; }
 }

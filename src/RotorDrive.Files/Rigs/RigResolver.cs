@@ -1,6 +1,7 @@
 using RotorDrive.Core;
 using RotorDrive.Core.Craft;
 using RotorDrive.Core.Drive;
+using RotorDrive.Core.Loads;
 using RotorDrive.Core.Magnetics;
 using RotorDrive.Core.Studies;
 using RotorDrive.Core.Studies.Stress;
@@ -85,7 +86,7 @@ public static class RigResolver
 
         // Plate.
         PlateMaterial? material = null;
-        double? thickness = null, plateTemp = null, convection = null, spreading = null;
+        double? thickness = null, plateTemp = null, convection = null, spreading = null, backIron = null;
         if (document.Plate is not { } plate)
         {
             ctx.Missing("$.plate");
@@ -97,6 +98,7 @@ public static class RigResolver
             plateTemp = ctx.Required(plate.TemperatureC, "$.plate.temperature_c", ValueRule.Between(PlateTempRangeC.Min, PlateTempRangeC.Max));
             convection = ctx.Optional(plate.ConvectionWPerM2K, "$.plate.convection_w_per_m2k", ValueRule.Between(0.1, 1000), RigDefaults.ConvectionWPerM2K);
             spreading = ctx.Optional(plate.SpreadingFactor, "$.plate.spreading_factor", ValueRule.Between(1, 100), RigDefaults.PlateSpreadingFactor);
+            backIron = ctx.Optional(plate.BackIronMm, "$.plate.back_iron_mm", ValueRule.Between(0, 1000), 0.0);
         }
 
         // Craft.
@@ -136,6 +138,20 @@ public static class RigResolver
             }
         }
         var ambient = ctx.Required(document.AmbientC, "$.ambient_c", ValueRule.Between(AmbientRangeC.Min, AmbientRangeC.Max));
+        LoadModelKind? loadModel = LoadModelKind.ThreeDimensional;
+        if (document.LoadModel is { } modelText)
+        {
+            loadModel = modelText.Trim().ToLowerInvariant() switch
+            {
+                "3d" => LoadModelKind.ThreeDimensional,
+                "2d" => LoadModelKind.TwoDimensional,
+                _ => null,
+            };
+            if (loadModel is null)
+            {
+                ctx.Report("$.load_model", Messages.BadLoadModel(modelText));
+            }
+        }
         var gearFriction = ctx.Optional(document.GearYawFrictionNm, "$.gear_yaw_friction_nm", ValueRule.NonNegative, RigDefaults.GearYawFrictionNm);
 
         // Stations.
@@ -278,13 +294,13 @@ public static class RigResolver
         var ordered = problems.OrderBy(p => p.Line).ThenBy(p => p.Column).ToList();
         if (ordered.Count > 0 || !partsOk || !stationsOk || !packOk || name is null || material is null || thickness is null
             || plateTemp is null || convection is null || spreading is null || body is null || design is null || landed is null || ambient is null
-            || gearFriction is null || limits is null)
+            || gearFriction is null || limits is null || loadModel is null || backIron is null)
         {
             return new RigResolveResult(null, ordered);
         }
         var rig = new Rig(
             name.Trim(),
-            new Plate(material, thickness.Value / 1000.0),
+            new Plate(material, thickness.Value / 1000.0) { BackIronM = backIron.Value / 1000.0 },
             plateTemp.Value,
             ambient.Value,
             body,
@@ -297,6 +313,7 @@ public static class RigResolver
             convection.Value)
         {
             PlateSpreadingFactor = spreading.Value,
+            LoadModel = loadModel.Value,
         };
         return new RigResolveResult(rig, ordered) { Tolerances = tolerances ?? StressTolerances.None };
     }

@@ -55,7 +55,7 @@ public sealed class RunningPointsSheet : ChartSheet
         {
             return null;
         }
-        var table = RotorLoadTable.Build(s.Rotor, rig.Plate, LoadTableRange.ForRig(rig, s.Rotor));
+        var table = RotorLoadTable.Build(s.Rotor, rig.Plate, LoadTableRange.ForRig(rig, s.Rotor), rig.LoadOptions());
         return new StationDrive(new Drivetrain(s.Motor!, s.Controller!), rig.Packs!, s.Rotor, table, rig.Limits);
     }
 

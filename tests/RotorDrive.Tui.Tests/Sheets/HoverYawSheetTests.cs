@@ -79,14 +79,14 @@ public class HoverYawSheetTests
         using var bench = new Bench();
         var sheet = await OpenAsync(bench);
         double before = sheet.Shown!.Review!.Hover.Stations[0].SpeedRadPerS;
-        EditRigField(bench, "$.gap.design_mm", "12");
+        EditRigField(bench, "$.gap.design_mm", "11");
         await OpenAsync(bench);
         var hover = sheet.Shown!.Review!.Hover;
-        Assert.Equal(0.012, hover.GapM, 12);
+        Assert.Equal(0.011, hover.GapM, 12);
         var expected = HoverTrim.Solve(RigModel.Build(bench.Context.Session.Rig!));
         Assert.Equal(expected.Stations[0].SpeedRadPerS, hover.Stations[0].SpeedRadPerS, 9);
         Assert.True(hover.Stations[0].SpeedRadPerS > before, "a larger gap needs a faster rotor for the same lift");
-        Assert.Contains("at 12.00 mm", sheet.Verdict);
+        Assert.Contains("at 11.00 mm", sheet.Verdict);
     }
 
     [Fact]

@@ -83,7 +83,7 @@ public sealed class RigStressModel : IStressModel
             if (ThicknessStepM > 0 && !_thicknessTables.ContainsKey(table))
             {
                 var plate = table.Direct.Plate;
-                var load = nominal.Options.Load;
+                var load = table.Direct.Options;
                 _thicknessTables[table] = (
                     RotorLoadTable.Build(table.Direct.Rotor, plate with { ThicknessM = plate.ThicknessM - ThicknessStepM }, table.Range, load),
                     RotorLoadTable.Build(table.Direct.Rotor, plate with { ThicknessM = plate.ThicknessM + ThicknessStepM }, table.Range, load));
