@@ -75,9 +75,11 @@ public sealed class LiftDragSheet : ChartSheet
         double gapM = gapMm!.Value / 1000.0;
         double plateTempC = plateC!.Value;
         var design = rig.Stations[station!.Value].Rotor;
-        Context.Work.Request("load curve", (token, progress) => Compute(rig, design, gapM, plateTempC, token, progress), result =>
+        Context.Work.Request("load curve", (token, progress) =>
+            (Compute(rig, design, gapM, plateTempC, token, progress), Compute(rig with { LoadModel = Other(rig.LoadModel) }, design, gapM, plateTempC, token, null)), result =>
         {
-            Result = result;
+            Result = result.Item1;
+            _comparison = result.Item2;
             Show();
         }, immediately);
     }
@@ -95,7 +97,7 @@ public sealed class LiftDragSheet : ChartSheet
             MaxPlateTempC = Math.Max(rigRange.MaxPlateTempC, plateTempC),
         };
         progress?.Report(0.1);
-        var table = RotorLoadTable.Build(design, rig.Plate, range);
+        var table = RotorLoadTable.Build(design, rig.Plate, range, rig.LoadOptions());
         token.ThrowIfCancellationRequested();
         progress?.Report(0.8);
         double[] speeds = SpeedGrid.ZeroTo(Units.RadPerSToRpm(design.MaxSpeedRadPerS), Points - 1).Select(Units.RpmToRadPerS).ToArray();
@@ -103,6 +105,14 @@ public sealed class LiftDragSheet : ChartSheet
         progress?.Report(1.0);
         return result;
     }
+
+    private LoadSweepResult? _comparison;
+
+    // The load model the sheet draws for comparison: the other one of 3-D and 2-D.
+    private static LoadModelKind Other(LoadModelKind kind)
+        => kind == LoadModelKind.ThreeDimensional ? LoadModelKind.TwoDimensional : LoadModelKind.ThreeDimensional;
+
+    private static string Label(LoadModelKind kind) => kind == LoadModelKind.ThreeDimensional ? "3-D" : "2-D";
 
     private void Show()
     {
@@ -125,12 +135,20 @@ public sealed class LiftDragSheet : ChartSheet
                 new ChartLine("eddy", '.', r.Rows.Select(x => (x.SpeedRpm, x.EddyTorqueNm)).ToList()),
                 new ChartLine("total torque", '*', r.Rows.Select(x => (x.SpeedRpm, x.TotalTorqueNm)).ToList()),
                 new ChartLine("drag peak", 'X', [(peak.SpeedRpm, peak.TorqueNm)], Joined: false),
+                .. Compare(c => c.EddyTorqueNm, "eddy"),
             ]),
             new ChartData("speed, rpm", "lift, N",
             [
                 new ChartLine("lift", '*', r.Rows.Select(x => (x.SpeedRpm, x.LiftN)).ToList()),
+                .. Compare(c => c.LiftN, "lift"),
                 ChartLine.Level("weight share per station", '-', rpm[0], rpm[^1], share),
             ]),
         ]);
+
+        // The other model's curve, so both can be seen on one chart (load_model decides which one the analyses use).
+        ChartLine[] Compare(Func<LoadSweepRow, double> value, string what)
+            => _comparison is { } c
+                ? [new ChartLine($"{what} ({Label(Other(rig.LoadModel))} model)", 'o', c.Rows.Select(x => (x.SpeedRpm, value(x))).ToList())]
+                : [];
     }
 }
