@@ -176,6 +176,18 @@ public static class Messages
     /// <summary>A spin direction that is neither cw nor ccw.</summary>
     public static string BadSpin(string text) => $"'{text}' is not a spin direction; use \"cw\" or \"ccw\"";
 
+    /// <summary>An unknown load model name.</summary>
+    public static string BadLoadModel(string text) => $"'{text}' is not a load model; use \"3d\" (the default) or \"2d\"";
+
+    /// <summary>An unknown rotor array name.</summary>
+    public static string BadArray(string text) => $"'{text}' is not a rotor array; use \"halbach\" or \"alternating\"";
+
+    /// <summary>An alternating-pole rotor whose segments per wavelength is not 2.</summary>
+    public static string AlternatingNeedsTwoPerWavelength(int m) => $"an alternating-pole rotor has two magnets per wavelength; segments_per_wavelength must be 2, got {m}";
+
+    /// <summary>A magnet arc fraction given for a Halbach array.</summary>
+    public static string ArcFractionOnlyForAlternating() => "magnet_arc_fraction applies to alternating-pole rotors only (a Halbach array is full)";
+
     /// <summary>A rig with no stations.</summary>
     public static string NoStations() => "the rig needs at least one station";
 

@@ -41,7 +41,7 @@ public sealed class LoadCommandTests : IDisposable
             Assert.True(points[5].TryGetProperty(key, out _), $"point lacks {key}");
         }
 
-        var direct = new PhysicsRotorLoad(TestRigFiles.Rotor, TestRigFiles.Plate);
+        var direct = new PhysicsRotorLoad(TestRigFiles.Rotor, TestRigFiles.Plate, new LoadModelOptions { Model = LoadModelKind.TwoDimensional });
         LoadPoint expected = direct.Evaluate(Units.RpmToRadPerS(3000), 0.010, TestRigFiles.PlateTempC, TestRigFiles.AmbientC);
         JsonElement at3000 = points.Single(p => Math.Abs(p.GetProperty("speed_rpm").GetDouble() - 3000) < 1e-6);
         Assert.Equal(expected.LiftN, at3000.GetProperty("lift_n").GetDouble(), expected.LiftN * 1e-3);
@@ -78,6 +78,24 @@ public sealed class LoadCommandTests : IDisposable
         double Lift(string json) => JsonDocument.Parse(json).RootElement.GetProperty("points")[0].GetProperty("lift_n").GetDouble();
         Assert.True(Lift(off) > 1.2 * Lift(on), $"without correction {Lift(off)}, with {Lift(on)}");
         Assert.False(JsonDocument.Parse(off).RootElement.GetProperty("end_correction").GetBoolean());
+    }
+
+    // --model chooses between the 3-D model and the 2-D one for comparison; they differ (the 3-D model has no width factor
+    // and includes fringing and the array's harmonics) and the JSON names the model used.
+    [Fact]
+    public async Task Load_Model_ChoosesThreeOrTwoDimensions()
+    {
+        var (code3, three, _) = await CliRunner.RunAsync("load", _rig, "--rpm", "1500:1500:1", "--json", "--model", "3d");
+        var (code2, two, _) = await CliRunner.RunAsync("load", _rig, "--rpm", "1500:1500:1", "--json", "--model", "2d");
+        Assert.Equal(ExitCodes.Ok, code3);
+        Assert.Equal(ExitCodes.Ok, code2);
+        double Lift(string json) => JsonDocument.Parse(json).RootElement.GetProperty("points")[0].GetProperty("lift_n").GetDouble();
+        Assert.Equal("3d", JsonDocument.Parse(three).RootElement.GetProperty("model").GetString());
+        Assert.Equal("2d", JsonDocument.Parse(two).RootElement.GetProperty("model").GetString());
+        Assert.True(Math.Abs(Lift(three) / Lift(two) - 1) > 0.01, $"3-D {Lift(three)}, 2-D {Lift(two)}");
+        var (bad, _, error) = await CliRunner.RunAsync("load", _rig, "--model", "3d", "--no-end-correction");
+        Assert.Equal(ExitCodes.BadInput, bad);
+        Assert.Contains("--model 2d", error);
     }
 
     [Fact]
@@ -177,6 +195,7 @@ public sealed class LoadCommandTests : IDisposable
                   "craft": { "empty_mass_kg": 20, "payload_kg": 5, "cg_x_mm": 0, "cg_y_mm": 0, "yaw_inertia_kg_m2": 2 },
                   "gap": { "design_mm": 10, "landed_mm": 4 },
                   "ambient_c": {{AmbientC}},
+                  "load_model": "2d",
                   "stations": [
                     { "x_mm": 200, "y_mm": 0, "spin": "cw", "rotor": "{{RotorId}}" },
                     { "x_mm": -200, "y_mm": 0, "spin": "ccw", "rotor": "{{RotorId}}" }

@@ -184,7 +184,7 @@ public sealed class OperateCommandTests : IDisposable
             double free = drivetrain.FreeSpeedRadPerS(packs.OpenCircuitVoltageAt(1.0), 1.0, AmbientC);
             var range = rig.LoadTableRangeFor(Rotor);
             range = range with { MaxSpeedRadPerS = Math.Max(range.MaxSpeedRadPerS, 1.1 * free), MinGapM = Math.Min(range.MinGapM, 0.005), MaxGapM = Math.Max(range.MaxGapM, 0.015) };
-            var drive = new StationDrive(drivetrain, packs, Rotor, RotorLoadTable.Build(Rotor, Plate, range), rig.Limits.Station);
+            var drive = new StationDrive(drivetrain, packs, Rotor, RotorLoadTable.Build(Rotor, Plate, range, new LoadModelOptions { Model = LoadModelKind.TwoDimensional }), rig.Limits.Station);
             var conditions = new OperatingConditions(0.010, AmbientC, AmbientC, AmbientC, AmbientC, socFraction);
             return OperatingPointFinder.Find(drive, ThrottleCommand.Duty(1), conditions);
         }
@@ -217,6 +217,7 @@ public sealed class OperateCommandTests : IDisposable
                   "craft": { "empty_mass_kg": 20, "payload_kg": 5, "cg_x_mm": 0, "cg_y_mm": 0, "yaw_inertia_kg_m2": 2 },
                   "gap": { "design_mm": 10, "landed_mm": 4 },
                   "ambient_c": {{AmbientC}},
+                  "load_model": "2d",
                   "stations": [
                     { "x_mm": 200, "y_mm": 0, "spin": "cw", "rotor": "r120", "motor": "m-110", "controller": "c-152" },
                     { "x_mm": -200, "y_mm": 0, "spin": "ccw", "rotor": "r120", "motor": "m-110", "controller": "c-152" }

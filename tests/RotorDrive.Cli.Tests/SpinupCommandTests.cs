@@ -49,12 +49,13 @@ public sealed class SpinupCommandTests : IDisposable
         Assert.Equal(code == ExitCodes.Ok, root.GetProperty("pass").GetBoolean());
     }
 
-    // A controller limit below the current that balances the drag peak (about 114 A for the demo's motor, from
-    // I = Q_peak Kv + I0, Drela 2007) leaves every rotor stuck on the gear: named, never lifting off, exit 1.
+    // A controller limit below the current that balances the drag peak (from I = Q_peak Kv + I0, Drela 2007; about 114 A
+    // for the demo's motor with the 2-D load model, less with the 3-D model, whose landed drag peak is lower) leaves every
+    // rotor stuck on the gear: named, never lifting off, exit 1.
     [Fact]
     public async Task Spinup_WithAWeakCurrentLimit_NamesStalledRotors_AndExitsOne()
     {
-        Edit("controllers.csv", "sc120-12s,120,170,5,", "sc120-12s,90,100,5,");
+        Edit("controllers.csv", "sc120-12s,120,170,5,", "sc120-12s,40,45,5,");
         var (code, output, _) = await CliRunner.RunAsync("spinup", Rig, "--json");
         Assert.Equal(ExitCodes.LimitFindings, code);
         using var doc = JsonDocument.Parse(output);

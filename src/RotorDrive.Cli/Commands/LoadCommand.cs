@@ -11,7 +11,7 @@ using RotorDrive.Files.Plots;
 namespace RotorDrive.Cli.Commands;
 
 /// <summary><c>rotordrive load RIG.json [--station N | --rotor ID] [--gap-mm G] [--rpm FROM:TO:STEP] [--plate-temp-c T]
-/// [--no-end-correction] [--json]</c>: one rotor's lift, torques and plate loss over a range of speeds, and its drag peak.</summary>
+/// [--no-end-correction] [--model 3d|2d] [--json]</c>: one rotor's lift, torques and plate loss over a range of speeds, and its drag peak.</summary>
 /// <remarks>Defaults: station 0, the rig's design gap, 0 to the rotor's max_rpm in 25 steps, the rig's plate temperature;
 /// magnets at the rig's ambient temperature. Values come from the precomputed load table analyses use
 /// (<see cref="RotorLoadTable"/>), built over the rig's range extended to cover what was asked.</remarks>
@@ -74,8 +74,14 @@ public static class LoadCommand
         });
         var noEnd = new Option<bool>("--no-end-correction")
         {
-            Description = "Use the bare 2-D strip model, without the Russell-Norsworthy finite-width correction.",
+            Description = "With the 2-D model: leave out the Russell-Norsworthy finite-width correction (implies --model 2d).",
         };
+        var model = new Option<string?>("--model")
+        {
+            Description = "Load model: 3d (three-dimensional, the default unless the rig's load_model says otherwise) or 2d (strip model with width factor), e.g. to compare.",
+            HelpName = "3d|2d",
+        };
+        model.AcceptOnlyFromAmong("3d", "2d");
         var json = CommonOptions.Json();
         var plot = CommonOptions.Plot("torque and lift against speed with the drag peak");
         var force = CommonOptions.Force();
@@ -88,6 +94,7 @@ public static class LoadCommand
         command.Options.Add(rpm);
         command.Options.Add(plateTemp);
         command.Options.Add(noEnd);
+        command.Options.Add(model);
         command.Options.Add(json);
         command.Options.Add(plot);
         command.Options.Add(force);
@@ -107,6 +114,7 @@ public static class LoadCommand
                 parse.GetValue(rpm),
                 parse.GetValue(plateTemp),
                 !parse.GetValue(noEnd),
+                parse.GetValue(model),
                 parse.GetValue(json),
                 parse.GetValue(plot),
                 parse.GetValue(force),
@@ -179,11 +187,23 @@ public static class LoadCommand
             MinPlateTempC = Math.Min(rigRange.MinPlateTempC, plateTempC),
             MaxPlateTempC = Math.Max(rigRange.MaxPlateTempC, plateTempC),
         };
-        var options = rig.LoadOptionsFor(design, new LoadModelOptions { EndEffectCorrection = request.EndCorrection });
+        LoadModelKind kind = request.Model switch
+        {
+            "3d" => LoadModelKind.ThreeDimensional,
+            "2d" => LoadModelKind.TwoDimensional,
+            _ => request.EndCorrection ? rig.LoadModel : LoadModelKind.TwoDimensional,
+        };
+        if (kind == LoadModelKind.ThreeDimensional && !request.EndCorrection)
+        {
+            error.WriteLine("rotordrive load: error: --no-end-correction applies to the 2-D model only (the 3-D model needs no width factor); use --model 2d.");
+            return ExitCodes.BadInput;
+        }
+        var options = rig.LoadOptionsFor(design, new LoadModelOptions { EndEffectCorrection = request.EndCorrection }) with { Model = kind };
         TabulatedRotorLoad table = RotorLoadTable.Build(design, rig.Plate, tableRange, options);
-        LoadSweepResult result = LoadSweep.Run(table, design.Id, request.EndCorrection, gapM, plateTempC, magnetTempC, speeds, topSpeed);
+        bool endCorrection = kind == LoadModelKind.TwoDimensional && request.EndCorrection;
+        LoadSweepResult result = LoadSweep.Run(table, design.Id, endCorrection, gapM, plateTempC, magnetTempC, speeds, topSpeed);
 
-        var report = ToReport(result, stationIndex);
+        var report = ToReport(result, stationIndex, kind == LoadModelKind.ThreeDimensional ? "3d" : "2d", rig.Plate.HasBackIron);
         if (request.Json)
         {
             JsonOutput.Write(output, report);
@@ -203,9 +223,11 @@ public static class LoadCommand
         return ExitCodes.Ok;
     }
 
-    private static LoadReport ToReport(LoadSweepResult result, int? station) => new(
+    private static LoadReport ToReport(LoadSweepResult result, int? station, string model, bool steelUnderPlate) => new(
         result.RotorId,
         station,
+        model,
+        steelUnderPlate,
         result.GapM * 1000.0,
         result.PlateTempC,
         result.MagnetTempC,
@@ -220,7 +242,7 @@ public static class LoadCommand
             + $"radii {Numbers.Format(design.InnerRadiusM * 1000, 1)}-{Numbers.Format(design.OuterRadiusM * 1000, 1)} mm");
         o.WriteLine($"  plate {rig.Plate.Material.Id}, {Numbers.Format(rig.Plate.ThicknessM * 1000, 1)} mm at {Numbers.Format(report.PlateTempC, 1)} C; "
             + $"air gap {Numbers.Format(report.GapMm, 2)} mm; magnets at {Numbers.Format(report.MagnetTempC, 1)} C; "
-            + $"end correction {(report.EndCorrection ? "on" : "off")}");
+            + (report.Model == "3d" ? "3-D load model" : $"2-D load model, end correction {(report.EndCorrection ? "on" : "off")}"));
         o.WriteLine();
         var table = new TextTable(
             new TableColumn("speed_rpm", Alignment.Right), new TableColumn("lift_n", Alignment.Right),
@@ -244,8 +266,22 @@ public static class LoadCommand
             _ => "Drag peak: none (no eddy torque).",
         });
         o.WriteLine();
-        o.WriteLine("Model: 2-D strip layer model per radius" + (report.EndCorrection ? " with the Russell-Norsworthy finite-width correction" : " without width correction")
-            + ". It over-predicts lift at low speed and can under-predict drag above the drag peak; calibrate against bench data.");
+        if (report.Model == "3d")
+        {
+            o.WriteLine("Model: 3-D (radial strips, each a finite-width band solved by a double Fourier series, with the array's harmonics): "
+                + "fringing at the magnets' edges and current closure in the plate come out of the solution. Plate assumed much wider than the rotor; calibrate against bench data.");
+        }
+        else
+        {
+            o.WriteLine("Model: 2-D strip layer model per radius" + (report.EndCorrection ? " with the Russell-Norsworthy finite-width correction" : " without width correction")
+                + ". It over-predicts lift at low speed and can under-predict drag above the drag peak; calibrate against bench data.");
+        }
+        if (report.SteelUnderPlate)
+        {
+            double still = report.Points.Count > 0 ? report.Points[0].LiftN : 0;
+            o.WriteLine($"Steel under the plate: at standstill the rotor is pulled down with {Numbers.Format(-still, 1)} N (lift {Numbers.Format(still, 1)} N at {Numbers.Format(report.Points.Count > 0 ? report.Points[0].SpeedRpm : 0, 0)} rpm).");
+            o.WriteLine("Caution: never land the rig with the rotors stopped over a steel-backed floor without a mechanical stop: the magnets pull the craft down onto the plate and can trap fingers.");
+        }
         o.WriteLine("Caution: the plate takes the eddy power as heat; magnet rotors crush fingers, upset pacemakers and can burst at speed. Estimates only: defer to manufacturers' ratings.");
     }
 
@@ -287,6 +323,7 @@ public static class LoadCommand
         RpmRange? Rpm,
         double? PlateTempC,
         bool EndCorrection,
+        string? Model,
         bool Json,
         string? PlotPath,
         bool Force,
@@ -295,6 +332,8 @@ public static class LoadCommand
     private sealed record LoadReport(
         string Rotor,
         int? Station,
+        string Model,
+        bool SteelUnderPlate,
         double GapMm,
         double PlateTempC,
         double MagnetTempC,

@@ -72,12 +72,17 @@ public sealed record Rig(
     public RotorCalibration? CalibrationOf(RotorDesign rotor)
         => rotor is not null && Calibrations.TryGetValue(rotor.Id, out var c) ? c : null;
 
-    /// <summary>The load model settings for a rotor of this rig: the given settings with the rotor's calibration, if any.</summary>
+    /// <summary>The eddy-current load model the analyses use for this rig (rig file <c>load_model</c>: "3d", the default, or
+    /// "2d" for the first-generation model, e.g. to compare).</summary>
+    public LoadModelKind LoadModel { get; init; } = LoadModelKind.ThreeDimensional;
+
+    /// <summary>The load model settings for a rotor of this rig: the given settings with the rig's load model and the
+    /// rotor's calibration, if any.</summary>
     /// <param name="rotor">The rotor design.</param>
     /// <param name="options">Base settings, or null for <see cref="LoadModelOptions.Default"/>.</param>
     public LoadModelOptions LoadOptionsFor(RotorDesign rotor, LoadModelOptions? options = null)
     {
-        options ??= LoadModelOptions.Default;
+        options = (options ?? LoadModelOptions.Default) with { Model = LoadModel };
         return CalibrationOf(rotor) is { } c ? options with { Calibration = c.Factors } : options;
     }
 

@@ -10,6 +10,9 @@ public sealed record CatalogColumn(string Name, ColumnKind Kind, bool Required, 
     /// <summary>A required text column.</summary>
     public static CatalogColumn Text(string name) => new(name, ColumnKind.Text, true, ValueRule.Any);
 
+    /// <summary>An optional text column.</summary>
+    public static CatalogColumn OptionalText(string name) => new(name, ColumnKind.Text, false, ValueRule.Any);
+
     /// <summary>A required real-number column.</summary>
     public static CatalogColumn Real(string name, ValueRule rule) => new(name, ColumnKind.Real, true, rule);
 

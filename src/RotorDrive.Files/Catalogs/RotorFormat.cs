@@ -1,6 +1,6 @@
 namespace RotorDrive.Files.Catalogs;
 
-/// <summary>rotors.csv: Halbach magnet rotor designs.</summary>
+/// <summary>rotors.csv: magnet rotor designs (Halbach arrays, or alternating poles on a steel disc).</summary>
 public sealed class RotorFormat : CatalogFormat<RotorRow>
 {
     /// <summary>Creates the format.</summary>
@@ -23,6 +23,9 @@ public sealed class RotorFormat : CatalogFormat<RotorRow>
             CatalogColumn.OptionalReal("bearing_damping_nm_per_krpm", ValueRule.NonNegativeAtMost(1000)),
             CatalogColumn.OptionalReal("retainer_thickness_mm", ValueRule.PositiveAtMost(200)),
             CatalogColumn.OptionalReal("retainer_allowable_mpa", ValueRule.PositiveAtMost(10000)),
+            CatalogColumn.OptionalText("array"),
+            CatalogColumn.OptionalReal("magnet_arc_fraction", ValueRule.Between(0.3, 1)),
+            CatalogColumn.OptionalReal("back_iron_mm", ValueRule.NonNegativeAtMost(200)),
         ])
     {
     }
@@ -50,7 +53,26 @@ public sealed class RotorFormat : CatalogFormat<RotorRow>
         var damping = row.Real("bearing_damping_nm_per_krpm");
         var retainer = row.Real("retainer_thickness_mm");
         var allowable = row.Real("retainer_allowable_mpa");
+        var array = row.Text("array")?.Trim();
+        var arc = row.Real("magnet_arc_fraction");
+        var backIron = row.Real("back_iron_mm");
         bool ok = true;
+        bool alternating = string.Equals(array, "alternating", StringComparison.OrdinalIgnoreCase);
+        if (array is not null && !alternating && !string.Equals(array, "halbach", StringComparison.OrdinalIgnoreCase))
+        {
+            row.Report("array", Messages.BadArray(array));
+            ok = false;
+        }
+        if (alternating && m is { } perWavelength && perWavelength != 2)
+        {
+            row.Report("segments_per_wavelength", Messages.AlternatingNeedsTwoPerWavelength(perWavelength));
+            ok = false;
+        }
+        if (!alternating && arc is { } fraction && fraction != 1.0)
+        {
+            row.Report("magnet_arc_fraction", Messages.ArcFractionOnlyForAlternating());
+            ok = false;
+        }
         if (n is { } segments && m is { } perWave && segments % perWave != 0)
         {
             row.Report("segments", Messages.SegmentsNotMultiple(segments, perWave));
@@ -77,7 +99,12 @@ public sealed class RotorFormat : CatalogFormat<RotorRow>
             return null;
         }
         return new RotorRow(id, n.Value, m.Value, ri.Value, ro.Value, h.Value, br.Value, beta.Value, density, mass.Value,
-            inertia.Value, maxRpm.Value, bearing, damping, retainer, allowable);
+            inertia.Value, maxRpm.Value, bearing, damping, retainer, allowable)
+        {
+            Array = array is null ? null : array.ToLowerInvariant(),
+            MagnetArcFraction = arc,
+            BackIronMm = backIron,
+        };
     }
 
     private protected override string?[] FormatRow(RotorRow r) =>
@@ -85,5 +112,6 @@ public sealed class RotorFormat : CatalogFormat<RotorRow>
         r.Id, F(r.Segments), F(r.SegmentsPerWavelength), F(r.InnerRadiusMm), F(r.OuterRadiusMm), F(r.MagnetThicknessMm),
         F(r.RemanenceT), F(r.RemanenceTempCoeffPctPerK), F(r.MagnetDensityKgM3), F(r.RotorMassG), F(r.InertiaKgM2),
         F(r.MaxRpm), F(r.BearingDragNm), F(r.BearingDampingNmPerKrpm), F(r.RetainerThicknessMm), F(r.RetainerAllowableMpa),
+        r.Array, F(r.MagnetArcFraction), F(r.BackIronMm),
     ];
 }

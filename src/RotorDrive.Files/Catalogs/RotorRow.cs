@@ -43,5 +43,19 @@ public sealed record RotorRow(
         BearingDragNm ?? 0.0,
         DampingToSi(BearingDampingNmPerKrpm ?? 0.0),
         RetainerThicknessMm / 1000.0,
-        RetainerAllowableMpa * 1e6);
+        RetainerAllowableMpa * 1e6)
+    {
+        Array = string.Equals(Array, "alternating", StringComparison.OrdinalIgnoreCase) ? RotorArray.Alternating : RotorArray.Halbach,
+        MagnetArcFraction = MagnetArcFraction ?? 1.0,
+        BackIronM = (BackIronMm ?? 0.0) / 1000.0,
+    };
+
+    /// <summary>"array": "halbach" (default when absent) or "alternating".</summary>
+    public string? Array { get; init; }
+
+    /// <summary>"magnet_arc_fraction": fraction of each pole pitch covered by magnet (alternating poles), or null for 1.</summary>
+    public double? MagnetArcFraction { get; init; }
+
+    /// <summary>"back_iron_mm": steel back disc behind the magnets, mm, or null for none.</summary>
+    public double? BackIronMm { get; init; }
 }

@@ -27,6 +27,10 @@ public sealed class RigDocument
     /// <summary>"gear_yaw_friction_nm": yaw torque the landing gear holds before lift-off, N m.</summary>
     public double? GearYawFrictionNm { get; set; }
 
+    /// <summary>"load_model": "3d" (default) for the three-dimensional eddy-current model or "2d" for the first-generation
+    /// strip model with the width factor.</summary>
+    public string? LoadModel { get; set; }
+
     /// <summary>"stations": the rotor stations.</summary>
     public List<RigStationSection>? Stations { get; set; }
 

@@ -34,6 +34,7 @@ public static class RigDocumentReader
             Name = top.String("name"),
             AmbientC = top.Number("ambient_c"),
             GearYawFrictionNm = top.Number("gear_yaw_friction_nm"),
+            LoadModel = top.String("load_model"),
         };
 
         if (JsonObjectScope.Open(top.Take("catalogs"), "$.catalogs", file, problems) is { } c)
@@ -62,6 +63,7 @@ public static class RigDocumentReader
                 ConvectionTopWPerM2K = p.Number("convection_top_w_per_m2k"),
                 ConvectionBottomWPerM2K = p.Number("convection_bottom_w_per_m2k"),
                 Emissivity = p.Number("emissivity"),
+                BackIronMm = p.Number("back_iron_mm"),
             };
             p.ReportUnknownKeys();
         }

@@ -37,6 +37,7 @@ public static class RigDocumentWriter
                 Num(w, "convection_top_w_per_m2k", p.ConvectionTopWPerM2K);
                 Num(w, "convection_bottom_w_per_m2k", p.ConvectionBottomWPerM2K);
                 Num(w, "emissivity", p.Emissivity);
+                Num(w, "back_iron_mm", p.BackIronMm);
                 w.WriteEndObject();
             }
             if (document.Craft is { } k)
@@ -59,6 +60,7 @@ public static class RigDocumentWriter
             }
             Num(w, "ambient_c", document.AmbientC);
             Num(w, "gear_yaw_friction_nm", document.GearYawFrictionNm);
+            Str(w, "load_model", document.LoadModel);
             if (document.Stations is { } stations)
             {
                 w.WriteStartArray("stations");

@@ -5,14 +5,14 @@ public static class RigKeys
 {
     /// <summary>Top-level keys.</summary>
     public static IReadOnlyList<string> Top { get; } =
-        ["name", "catalogs", "plate", "craft", "gap", "ambient_c", "gear_yaw_friction_nm", "stations", "pack", "limits", "tolerances", "route", "calibrations"];
+        ["name", "catalogs", "plate", "craft", "gap", "ambient_c", "gear_yaw_friction_nm", "load_model", "stations", "pack", "limits", "tolerances", "route", "calibrations"];
 
     /// <summary>Keys of "catalogs".</summary>
     public static IReadOnlyList<string> Catalogs { get; } = ["motors", "controllers", "packs", "cell_curves", "rotors", "plates"];
 
     /// <summary>Keys of "plate".</summary>
     public static IReadOnlyList<string> Plate { get; } = ["material", "thickness_mm", "temperature_c", "convection_w_per_m2k", "spreading_factor",
-        "convection_top_w_per_m2k", "convection_bottom_w_per_m2k", "emissivity"];
+        "convection_top_w_per_m2k", "convection_bottom_w_per_m2k", "emissivity", "back_iron_mm"];
 
     /// <summary>Keys of each element of "route".</summary>
     public static IReadOnlyList<string> RouteLeg { get; } = ["x_mm", "y_mm", "speed_m_per_s", "dwell_s"];

@@ -29,4 +29,7 @@ public sealed class RigPlateSection
 
     /// <summary>"emissivity": emissivity of the top face for radiation, 0..1 (optional; default 0, no radiation).</summary>
     public double? Emissivity { get; set; }
+
+    /// <summary>"back_iron_mm": thickness of a steel layer directly under the plate, mm (optional; default 0, none).</summary>
+    public double? BackIronMm { get; set; }
 }

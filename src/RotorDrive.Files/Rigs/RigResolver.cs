@@ -90,7 +90,7 @@ public static class RigResolver
 
         // Plate.
         PlateMaterial? material = null;
-        double? thickness = null, plateTemp = null, convection = null, spreading = null, top = null, bottom = null, emissivity = null;
+        double? thickness = null, plateTemp = null, convection = null, spreading = null, top = null, bottom = null, emissivity = null, backIron = null;
         if (document.Plate is not { } plate)
         {
             ctx.Missing("$.plate");
@@ -108,6 +108,7 @@ public static class RigResolver
                 bottom = ctx.Optional(plate.ConvectionBottomWPerM2K, "$.plate.convection_bottom_w_per_m2k", ValueRule.Between(0, 100_000), both);
             }
             emissivity = ctx.Optional(plate.Emissivity, "$.plate.emissivity", ValueRule.Between(0, 1), RigDefaults.PlateEmissivity);
+            backIron = ctx.Optional(plate.BackIronMm, "$.plate.back_iron_mm", ValueRule.Between(0, 200), 0.0);
         }
 
         // Craft.
@@ -147,6 +148,20 @@ public static class RigResolver
             }
         }
         var ambient = ctx.Required(document.AmbientC, "$.ambient_c", ValueRule.Between(AmbientRangeC.Min, AmbientRangeC.Max));
+        LoadModelKind? loadModel = LoadModelKind.ThreeDimensional;
+        if (document.LoadModel is { } modelText)
+        {
+            loadModel = modelText.Trim().ToLowerInvariant() switch
+            {
+                "3d" => LoadModelKind.ThreeDimensional,
+                "2d" => LoadModelKind.TwoDimensional,
+                _ => null,
+            };
+            if (loadModel is null)
+            {
+                ctx.Report("$.load_model", Messages.BadLoadModel(modelText));
+            }
+        }
         var gearFriction = ctx.Optional(document.GearYawFrictionNm, "$.gear_yaw_friction_nm", ValueRule.NonNegativeAtMost(10000), RigDefaults.GearYawFrictionNm);
 
         // Stations.
@@ -296,13 +311,13 @@ public static class RigResolver
         var ordered = problems.OrderBy(p => p.Line).ThenBy(p => p.Column).ToList();
         if (ordered.Count > 0 || !partsOk || !stationsOk || !packOk || name is null || material is null || thickness is null
             || plateTemp is null || convection is null || spreading is null || body is null || design is null || landed is null || ambient is null
-            || gearFriction is null || limits is null || top is null || bottom is null || emissivity is null || !routeOk)
+            || gearFriction is null || limits is null || top is null || bottom is null || emissivity is null || !routeOk || loadModel is null || backIron is null)
         {
             return new RigResolveResult(null, ordered);
         }
         var rig = new Rig(
             name.Trim(),
-            new Plate(material, thickness.Value / 1000.0),
+            new Plate(material, thickness.Value / 1000.0) { BackIronM = backIron.Value / 1000.0 },
             plateTemp.Value,
             ambient.Value,
             body,
@@ -318,6 +333,7 @@ public static class RigResolver
             PlateCooling = new PlateCooling(top.Value, bottom.Value, emissivity.Value),
             Route = route,
             Calibrations = calibrations,
+            LoadModel = loadModel.Value,
         };
         return new RigResolveResult(rig, ordered) { Tolerances = tolerances ?? StressTolerances.None };
     }

@@ -75,9 +75,11 @@ public sealed class LiftDragSheet : ChartSheet
         double gapM = gapMm!.Value / 1000.0;
         double plateTempC = plateC!.Value;
         var design = rig.Stations[station!.Value].Rotor;
-        Context.Work.Request("load curve", (token, progress) => Compute(rig, design, gapM, plateTempC, token, progress), result =>
+        Context.Work.Request("load curve", (token, progress) =>
+            (Compute(rig, design, gapM, plateTempC, token, progress), Compute(rig with { LoadModel = Other(rig.LoadModel) }, design, gapM, plateTempC, token, null)), result =>
         {
-            Result = result;
+            Result = result.Item1;
+            _comparison = result.Item2;
             Show();
         }, immediately);
     }
@@ -103,6 +105,14 @@ public sealed class LiftDragSheet : ChartSheet
         progress?.Report(1.0);
         return result;
     }
+
+    private LoadSweepResult? _comparison;
+
+    // The load model the sheet draws for comparison: the other one of 3-D and 2-D.
+    private static LoadModelKind Other(LoadModelKind kind)
+        => kind == LoadModelKind.ThreeDimensional ? LoadModelKind.TwoDimensional : LoadModelKind.ThreeDimensional;
+
+    private static string Label(LoadModelKind kind) => kind == LoadModelKind.ThreeDimensional ? "3-D" : "2-D";
 
     private void Show()
     {
@@ -150,8 +160,14 @@ public sealed class LiftDragSheet : ChartSheet
         }
         Panel.ShowPages(
         [
-            new ChartData("speed, rpm", "torque, N m", torqueLines),
-            new ChartData("speed, rpm", "lift, N", liftLines),
+            new ChartData("speed, rpm", "torque, N m", [.. torqueLines, .. Compare(c => c.EddyTorqueNm, "eddy")]),
+            new ChartData("speed, rpm", "lift, N", [.. liftLines, .. Compare(c => c.LiftN, "lift")]),
         ]);
+
+        // The other model's curve, so both can be seen on one chart (load_model decides which one the analyses use).
+        ChartLine[] Compare(Func<LoadSweepRow, double> value, string what)
+            => _comparison is { } c
+                ? [new ChartLine($"{what} ({Label(Other(rig.LoadModel))} model)", 'o', c.Rows.Select(x => (x.SpeedRpm, value(x))).ToList())]
+                : [];
     }
 }

@@ -140,11 +140,12 @@ public class RigLoaderTests
         {
             Name = "n",
             Catalogs = new RigCatalogsSection { Motors = "a", Controllers = "b", Packs = "c", CellCurves = "d", Rotors = "e", Plates = "f" },
-            Plate = new RigPlateSection { Material = "m", ThicknessMm = 1, TemperatureC = 2, ConvectionWPerM2K = 3, SpreadingFactor = 1.5 },
+            Plate = new RigPlateSection { Material = "m", ThicknessMm = 1, TemperatureC = 2, ConvectionWPerM2K = 3, SpreadingFactor = 1.5, BackIronMm = 2 },
             Craft = new RigCraftSection { EmptyMassKg = 1, PayloadKg = 2, CgXMm = 3, CgYMm = 4, YawInertiaKgM2 = 5, HeaveDampingRatio = 0.1 },
             Gap = new RigGapSection { DesignMm = 10, LandedMm = 5 },
             AmbientC = 20,
             GearYawFrictionNm = 1,
+            LoadModel = "3d",
             Stations = [new RigStationSection { XMm = 1, YMm = 2, Spin = "cw", Rotor = "r", Motor = "m", Controller = "c" }],
             Pack = new RigPackSection { Id = "p", Count = 2 },
             Limits = new RigLimitsSection { YawTorqueNm = 1, PlateTempC = 2, CellCutoffV = 3, UsableCapacityPct = 4, MaxDuty = 0.5, LiftoffTimeS = 6 },
