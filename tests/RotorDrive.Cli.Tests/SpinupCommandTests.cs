@@ -142,31 +142,60 @@ public sealed class SpinupCommandTests : IDisposable
         Assert.Equal("", error);
     }
 
-    // The endurance says which plate patch it assumed. A patch k times the annulus has k times the heat capacity and
-    // k times the cooled area; the lumped node (Incropera et al., "Fundamentals of Heat and Mass Transfer", 5.2) then
-    // needs at least k times as long to reach the same rise -ln(1 - k x) >= -k ln(1 - x) for the same heat input, so
-    // the plate limit comes later.
+    // The endurance models the plate as a sheet field and says so; its JSON trace has the plate's hottest point and the
+    // mean under every annulus at each step (the hottest point is never below a mean), and the hot spot at the end. A
+    // bottom face that sheds more heat (a plate on a cooled floor) lets the rig hover longer: the face loss H enters the
+    // sheet equation as -H (T - T_a) (Carslaw & Jaeger 1959, plate with surface loss), so more loss means a lower field.
     [Fact]
-    public async Task Endurance_StatesThePlatePatch_AndAWiderPatchHoversLonger()
+    public async Task Endurance_StatesThePlateModel_TracesThePlate_AndACooledFloorHoversLonger()
     {
         var (_, text, _) = await CliRunner.RunAsync("endurance", Rig);
-        Assert.Contains("spreading factor 1, the hottest assumption", text);
-        var (_, narrow, _) = await CliRunner.RunAsync("endurance", Rig, "--json");
-        Edit("demo-rig.json", "\"temperature_c\": 22 }", "\"temperature_c\": 22, \"spreading_factor\": 3 }");
-        var (code, wide, error) = await CliRunner.RunAsync("endurance", Rig, "--json");
-        Assert.True(code is ExitCodes.Ok or ExitCodes.LimitFindings, error);
-        using var a = JsonDocument.Parse(narrow);
-        using var b = JsonDocument.Parse(wide);
-        Assert.Equal(1.0, a.RootElement.GetProperty("plate_spreading_factor").GetDouble());
-        Assert.Equal(3.0, b.RootElement.GetProperty("plate_spreading_factor").GetDouble());
-        Assert.Contains("plate temperature", a.RootElement.GetProperty("first_limit").GetString());
-        Assert.True(b.RootElement.GetProperty("runtime_s").GetDouble() > 2.5 * a.RootElement.GetProperty("runtime_s").GetDouble());
+        Assert.Contains("2-D sheet with lateral conduction", text);
+        Assert.Contains("plate hot spot at the end", text);
+        var (_, warm, _) = await CliRunner.RunAsync("endurance", Rig, "--json");
+        using var a = JsonDocument.Parse(warm);
+        var root = a.RootElement;
+        Assert.Contains("plate temperature", root.GetProperty("first_limit").GetString());
+        var trace = root.GetProperty("trace");
+        Assert.Equal(root.GetProperty("steps").GetInt32() + 1, trace.GetArrayLength());
+        foreach (var entry in trace.EnumerateArray())
+        {
+            double peak = entry.GetProperty("plate_peak_c").GetDouble();
+            Assert.Equal(6, entry.GetProperty("plate_under_station_c").GetArrayLength());
+            Assert.All(entry.GetProperty("plate_under_station_c").EnumerateArray(), m => Assert.True(m.GetDouble() <= peak + 1e-9));
+        }
+        var hot = root.GetProperty("plate_hotspot");
+        Assert.Equal(60.0, hot.GetProperty("temperature_c").GetDouble(), 3);
+        Assert.True(Math.Abs(hot.GetProperty("x_mm").GetDouble()) < 700 && Math.Abs(hot.GetProperty("y_mm").GetDouble()) < 700);
 
-        Edit("demo-rig.json", "\"spreading_factor\": 3 }", "\"spreading_factor\": 0.5 }");
+        Edit("demo-rig.json", "\"temperature_c\": 22 }", "\"temperature_c\": 22, \"convection_bottom_w_per_m2k\": 300 }");
+        var (code, cooled, error) = await CliRunner.RunAsync("endurance", Rig, "--json");
+        Assert.True(code is ExitCodes.Ok or ExitCodes.LimitFindings, error);
+        using var b = JsonDocument.Parse(cooled);
+        Assert.True(b.RootElement.GetProperty("runtime_s").GetDouble() > 1.2 * root.GetProperty("runtime_s").GetDouble());
+
+        Edit("demo-rig.json", "\"convection_bottom_w_per_m2k\": 300 }", "\"spreading_factor\": 0.5 }");
         var (badCode, _, badError) = await CliRunner.RunAsync("endurance", Rig);
         Assert.Equal(ExitCodes.BadInput, badCode);
         Assert.Contains("$.plate.spreading_factor", badError);
         Assert.Contains("demo-rig.json:", badError);
+    }
+
+    // --plate-map writes the final field (x_mm, y_mm, temperature_c; its hottest row is the reported hot spot's
+    // temperature within the grid's resolution) and refuses to replace a file without --force.
+    [Fact]
+    public async Task Endurance_PlateMap_WritesTheField_AndRefusesToOverwrite()
+    {
+        string map = Path.Combine(Path.GetDirectoryName(Rig)!, "plate.csv");
+        var (code, _, error) = await CliRunner.RunAsync("endurance", Rig, "--plate-map", map);
+        Assert.True(code is ExitCodes.Ok or ExitCodes.LimitFindings, error);
+        var lines = File.ReadAllLines(map);
+        Assert.Equal("x_mm,y_mm,temperature_c", lines[0]);
+        double hottest = lines.Skip(1).Select(l => double.Parse(l.Split(',')[2], System.Globalization.CultureInfo.InvariantCulture)).Max();
+        Assert.InRange(hottest, 55, 60.001);
+        var (again, _, refused) = await CliRunner.RunAsync("endurance", Rig, "--plate-map", map);
+        Assert.Equal(ExitCodes.BadInput, again);
+        Assert.Contains("--force", refused);
     }
 
     [Fact]

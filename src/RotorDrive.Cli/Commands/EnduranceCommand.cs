@@ -262,7 +262,7 @@ public static class EnduranceCommand
             error.WriteLine();
         }
         var report = new SweepReport(model.Rig.Name, model.Rig.Limits.PlateTempC, rows.Select(r => new SweepRow(
-            r.MaterialId, r.ThicknessM * 1000, r.HoverExists, r.HoverPowerW, r.PlatePowerW, r.PlateLimitTimeS, r.RuntimeS, r.EndedBy.ToString(), r.HoverTimeS, r.PlateCutsHover)).ToArray());
+            r.MaterialId, r.ThicknessM * 1000, r.HoverExists, r.HoverPowerW, r.PlatePowerW, r.PlateLimitTimeS, r.RuntimeS, r.EndedBy.ToString(), r.HoverTimeS, r.PlateCutsHover, r.HoverExists && r.EndedBy.Passes() && !r.PlateCutsHover)).ToArray());
         if (json)
         {
             JsonOutput.Write(output, report);
@@ -286,7 +286,7 @@ public static class EnduranceCommand
                 r.PlateLimitTimeS is { } t ? Numbers.Format(t, 0) : "never",
                 r.HoverExists ? Numbers.Format(r.RuntimeS, 0) : "-",
                 Numbers.Format(r.HoverTimeS, 0),
-                !r.HoverExists ? "no trimmed hover" : r.PlateCutsHover ? "plate cuts the hover short" : $"ok ({r.EndedBy})");
+                !r.HoverExists ? "no trimmed hover" : r.PlateCutsHover ? "plate cuts the hover short" : r.PackEndsHover ? "ok: the pack ends the hover" : $"{r.EndedBy} ends the hover first");
         }
         table.Write(output);
         output.WriteLine("Caution: plates get hot enough to burn. Estimates only: defer to manufacturers' ratings and local codes.");
@@ -320,7 +320,8 @@ public static class EnduranceCommand
         double RuntimeS,
         string EndedBy,
         double HoverTimeS,
-        bool PlateCutsHover);
+        bool PlateCutsHover,
+        bool PackEndsHover);
 
     private sealed record SweepReport(string Rig, double PlateLimitC, IReadOnlyList<SweepRow> Floors);
 }

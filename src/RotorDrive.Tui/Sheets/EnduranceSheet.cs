@@ -1,5 +1,6 @@
 using System.Text;
 using Terminal.Gui.Input;
+using Terminal.Gui.ViewBase;
 using Terminal.Gui.Views;
 using RotorDrive.Core.Craft;
 using RotorDrive.Core.Safety;
@@ -13,21 +14,29 @@ using static RotorDrive.Tui.Text.Figures;
 namespace RotorDrive.Tui.Sheets;
 
 /// <summary>How long the rig hovers (Core's <see cref="EnduranceSimulator"/>, as the <c>endurance</c> command runs it):
-/// the runtime, the limit that ends it in words, and time traces of the state of charge, the pack voltage and every
-/// station's winding and plate temperature. The starting charge is the sheet's own what-if value.</summary>
+/// the runtime, the limit that ends it in words, time traces of the state of charge, the pack voltage and every
+/// station's winding and plate temperature (mean under its annulus), and beside them the plate's field at the end as a
+/// colour heat map with the rotors and the route. The starting charge is the sheet's own what-if value.</summary>
 public sealed class EnduranceSheet : ChartSheet
 {
     /// <summary>Runs at least this long are charted in minutes, shorter ones in seconds.</summary>
     public const double MinutesFromS = 120;
 
     private readonly TextField _soc;
+    private readonly PlateHeatMapView _heat;
 
     /// <summary>Creates the sheet.</summary>
     public EnduranceSheet(WorkbenchContext context)
         : base(context, "Endurance", readoutLines: 3, "the endurance run needs")
     {
         _soc = Panel.AddInput("charge %", 5, "100");
+        Panel.Width = Dim.Percent(62);
+        _heat = new PlateHeatMapView { X = Pos.Right(Panel), Y = 0, Width = Dim.Fill(), Height = Dim.Fill() };
+        Add(_heat);
     }
+
+    /// <summary>The plate heat map beside the charts.</summary>
+    internal PlateHeatMapView HeatMap => _heat;
 
     /// <inheritdoc/>
     public override string KeyHints => "F7 next chart";
@@ -79,6 +88,7 @@ public sealed class EnduranceSheet : ChartSheet
     private void Stopped()
     {
         Shown = null;
+        _heat.Show(null, [], []);
         Panel.Readout = "Stopped before it finished: the figures are not current. F5 runs the endurance run again.";
         Panel.ShowPages(null);
     }
@@ -90,10 +100,25 @@ public sealed class EnduranceSheet : ChartSheet
         {
             Panel.Readout = "! The endurance run needs a motor and controller on every station and a pack:\n" + string.Join("\n", figures.Missing);
             Panel.ShowPages(null);
+            _heat.Show(null, [], []);
             return;
         }
+        var (rotors, route) = PlateMarks(sim.Rig, result);
+        _heat.Show(result.PlateMap, rotors, route);
         Panel.Readout = DescribeReadout(sim, result);
         Panel.ShowPages(Charts(sim, result), Compose(sim, result));
+    }
+
+    /// <summary>Where the rotors are on the plate at the end of the run (axis, inner and outer magnet radius) and the
+    /// corners of the route (the start and every move's target), m.</summary>
+    internal static ((double XM, double YM, double InnerM, double OuterM)[] Rotors, (double XM, double YM)[] Route) PlateMarks(Rig rig, EnduranceResult r)
+    {
+        var (cx, cy) = r.CraftPositionTraceM is { Count: > 0 } p ? p[^1] : (0.0, 0.0);
+        var rotors = rig.Stations.Select(s => (cx + s.XM, cy + s.YM, s.Rotor.InnerRadiusM, s.Rotor.OuterRadiusM)).ToArray();
+        var route = rig.Route is { } path
+            ? path.Legs.Where(l => l.Kind == RouteLegKind.Move).Select(l => (l.XM, l.YM)).Prepend((0.0, 0.0)).ToArray()
+            : [];
+        return (rotors, route);
     }
 
     /// <summary>The runtime in the unit the charts use: "37 s" or "12.4 min".</summary>
@@ -158,7 +183,11 @@ public sealed class EnduranceSheet : ChartSheet
             sb.AppendLine($"  station {StationNumbers.Of(s.Index)}: {F(s.SpeedRpm, 0)} rpm, duty {F(s.Duty, 3)}, motor {F(s.MotorCurrentA, 1)} A");
         }
         sb.AppendLine($"AT THE END  charge {F(r.FinalSocFraction * 100, 1)} %, bus {F(r.FinalBusVoltageV, 1)} V, pack current {F(r.FinalPackCurrentA, 1)} A");
-        sb.AppendLine($"  hottest winding {F(r.PeakWindingTempC, 1)} C, hottest plate patch {F(r.PeakPlateTempC, 1)} C (limit {F(sim.Rig.Limits.PlateTempC, 0)} C)");
+        sb.AppendLine($"  hottest winding {F(r.PeakWindingTempC, 1)} C, hottest point of the plate {F(r.PeakPlateTempC, 1)} C (limit {F(sim.Rig.Limits.PlateTempC, 0)} C)");
+        if (r.PlateHotspot is { } hot)
+        {
+            sb.AppendLine($"  plate hot spot at the end: x {F(hot.XM * 1000, 0)} mm, y {F(hot.YM * 1000, 0)} mm, {F(hot.TemperatureC, 1)} C");
+        }
         sb.AppendLine();
         sb.Append(CautionText.Compose(Cautions.For(new CautionFindings(true, [], r.PeakPlateTempC, r.PeakWindingTempC))));
         return sb.ToString();

@@ -140,7 +140,8 @@ public class RigLoaderTests
         {
             Name = "n",
             Catalogs = new RigCatalogsSection { Motors = "a", Controllers = "b", Packs = "c", CellCurves = "d", Rotors = "e", Plates = "f" },
-            Plate = new RigPlateSection { Material = "m", ThicknessMm = 1, TemperatureC = 2, ConvectionWPerM2K = 3, SpreadingFactor = 1.5, BackIronMm = 2 },
+            Plate = new RigPlateSection { Material = "m", ThicknessMm = 1, TemperatureC = 2, ConvectionWPerM2K = 3, SpreadingFactor = 1.5, BackIronMm = 2,
+                ConvectionTopWPerM2K = 4, ConvectionBottomWPerM2K = 5, Emissivity = 0.1 },
             Craft = new RigCraftSection { EmptyMassKg = 1, PayloadKg = 2, CgXMm = 3, CgYMm = 4, YawInertiaKgM2 = 5, HeaveDampingRatio = 0.1 },
             Gap = new RigGapSection { DesignMm = 10, LandedMm = 5 },
             AmbientC = 20,
@@ -151,13 +152,14 @@ public class RigLoaderTests
             Limits = new RigLimitsSection { YawTorqueNm = 1, PlateTempC = 2, CellCutoffV = 3, UsableCapacityPct = 4, MaxDuty = 0.5, LiftoffTimeS = 6 },
             Tolerances = new RigTolerancesSection(),
             Calibrations = new Dictionary<string, string> { ["r"] = "r-calibration.csv" },
+            Route = [new RigRouteLegSection { XMm = 1000, YMm = 0, SpeedMPerS = 0.2 }, new RigRouteLegSection { DwellS = 10 }],
         };
         doc.Tolerances.Entries["motor_kv_rpm_per_v"] = RigToleranceEntry.NormalPercent(2);
         doc.Tolerances.Entries["gap_offset_mm"] = RigToleranceEntry.NormalAbsolute(0.5);
         doc.Tolerances.Entries["motor_resistance_ohm"] = RigToleranceEntry.UniformPercent(-5, 5);
         doc.Tolerances.Entries["ambient_c"] = RigToleranceEntry.UniformAbsolute(-5, 5);
         var expected = RigKeys.Top.Concat(RigKeys.Catalogs).Concat(RigKeys.Plate).Concat(RigKeys.Craft).Concat(RigKeys.Gap)
-            .Concat(RigKeys.Station).Concat(RigKeys.Pack).Concat(RigKeys.Limits)
+            .Concat(RigKeys.Station).Concat(RigKeys.Pack).Concat(RigKeys.Limits).Concat(RigKeys.RouteLeg)
             .Concat(["motor_kv_rpm_per_v", "gap_offset_mm", "motor_resistance_ohm", "ambient_c", "r"]).Concat(RigToleranceKeys.EntryKeys).Order().ToList();
         string written = RigDocumentWriter.Write(doc);
         Assert.Equal(expected, KeysOf(written));
