@@ -10,5 +10,5 @@ public sealed record RotorCalibration(string RotorId, LoadCalibration Factors, d
 {
     /// <summary>The steady bench points the calibration was fitted to, when they were found with it (for showing measured
     /// points over the fitted curve); empty for a spin-down or when the data file is not at hand.</summary>
-    public IReadOnlyList<Studies.Calibration.BenchPoint> BenchPoints { get; init; } = [];
+    public IReadOnlyList<BenchPoint> BenchPoints { get; init; } = [];
 }

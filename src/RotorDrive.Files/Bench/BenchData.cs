@@ -1,3 +1,4 @@
+using RotorDrive.Core.Loads;
 using RotorDrive.Core;
 using RotorDrive.Core.Studies.Calibration;
 

@@ -63,7 +63,7 @@ public static class CalibrationFile
             writer.WriteRecord(Meta("data_file", Path.GetFileName(dataFile)));
             writer.WriteRecord(Meta("data_sha256", dataSha256));
             writer.WriteRecord(Meta("rotor_row_sha256", RotorRowHash(rotor)));
-            writer.WriteRecord(Meta("confidence_level", R(result.ConfidenceLevel)));
+            writer.WriteRecord(Meta("confidence_level", R(result.ConfidenceLevelFraction)));
             for (int k = 0; k < 4; k++)
             {
                 var e = result.Estimates[k];

@@ -436,7 +436,7 @@ public static class RigResolver
 
     // The steady points a calibration was fitted to, when its data file lies beside it unchanged (same SHA-256); otherwise
     // none: they are only shown over the fitted curve, never used for a result.
-    private static IReadOnlyList<Core.Studies.Calibration.BenchPoint> BenchPointsBeside(string calibrationPath, string? dataFile, string? dataSha256,
+    private static IReadOnlyList<Core.Loads.BenchPoint> BenchPointsBeside(string calibrationPath, string? dataFile, string? dataSha256,
         Func<string, List<InputProblem>, string?> readText)
     {
         if (dataFile is null || dataSha256 is null)

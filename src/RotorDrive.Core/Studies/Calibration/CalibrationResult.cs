@@ -11,7 +11,7 @@ namespace RotorDrive.Core.Studies.Calibration;
 /// <param name="Quality">Fit quality.</param>
 /// <param name="Refusal">Why the fit was refused, or <see cref="CalibrationRefusal.None"/>.</param>
 /// <param name="RefusalDetail">The refusal in words, naming the likely cause and what to check; null when not refused.</param>
-/// <param name="ConfidenceLevel">Two-sided confidence level of the intervals.</param>
+/// <param name="ConfidenceLevelFraction">Two-sided confidence level of the intervals.</param>
 public sealed record CalibrationResult(
     CalibrationKind Kind,
     string RotorId,
@@ -21,7 +21,7 @@ public sealed record CalibrationResult(
     CalibrationQuality Quality,
     CalibrationRefusal Refusal,
     string? RefusalDetail,
-    double ConfidenceLevel)
+    double ConfidenceLevelFraction)
 {
     /// <summary>True when the fit is usable.</summary>
     public bool Accepted => Refusal == CalibrationRefusal.None;

@@ -1,4 +1,4 @@
-namespace RotorDrive.Core.Studies.Calibration;
+namespace RotorDrive.Core.Loads;
 
 /// <summary>One steady bench point: a rotor held at a speed and gap on a load cell, with the shaft torque it needed and,
 /// when measured, the lift.</summary>
