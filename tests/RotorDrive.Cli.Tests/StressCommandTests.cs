@@ -181,7 +181,7 @@ public sealed class StressCommandTests : IDisposable
     [Fact]
     public async Task Stress_LeavesFailedTrimsOutOfTheHoverFigures_AndSaysHowMany()
     {
-        string rig = CopyDemo(t => t.Replace("\"payload_kg\": 25,", "\"payload_kg\": 37,", StringComparison.Ordinal));
+        string rig = CopyDemo(t => t.Replace("\"payload_kg\": 25,", "\"payload_kg\": 28,", StringComparison.Ordinal));
         var (_, output, error) = await CliRunner.RunAsync("stress", rig, "--samples", "16", "--seed", "3", "--json");
         using var doc = JsonDocument.Parse(output);
         var root = doc.RootElement;
