@@ -34,7 +34,7 @@ public static class EnduranceCommand
         };
         var sweep = new Option<bool>("--plate-sweep")
         {
-            Description = "Hover in place over every plate material of the catalog at thicknesses from 3 to 25 mm: time to the plate limit, hover power and pack-limited time per floor.",
+            Description = "Hover in place over every plate material of the catalog at thicknesses from 3 to 25 mm: time to the plate limit, hover power and the hover time with the plate limit set aside, per floor.",
         };
         var command = new Command("endurance", "Hover time from a full pack until the first limit, with traces of charge, voltage, currents and temperatures.");
         command.Arguments.Add(rig);
@@ -255,11 +255,13 @@ public static class EnduranceCommand
             return ExitCodes.BadInput;
         }
         var materials = loaded.Catalog!.Plates;
+        // Progress only on an interactive terminal: a carriage-return counter would pile up in a redirected log.
+        bool showProgress = !json && ReferenceEquals(error, Console.Error) && !Console.IsErrorRedirected;
         var progress = new Progress<int>(done => error.Write($"\rplate sweep: {done} / {materials.Count * PlateSweepStudy.DefaultThicknessesM.Count} floors"));
-        var rows = PlateSweepStudy.Run(model, materials, null, null, json ? null : progress);
-        if (!json)
+        var rows = PlateSweepStudy.Run(model, materials, null, null, showProgress ? progress : null);
+        if (showProgress)
         {
-            error.WriteLine();
+            error.Write("\r" + new string(' ', 40) + "\r");
         }
         var report = new SweepReport(model.Rig.Name, model.Rig.Limits.PlateTempC, rows.Select(r => new SweepRow(
             r.MaterialId, r.ThicknessM * 1000, r.HoverExists, r.HoverPowerW, r.PlatePowerW, r.PlateLimitTimeS, r.RuntimeS, r.EndedBy.ToString(), r.HoverTimeS, r.PlateCutsHover, r.HoverExists && r.EndedBy.Passes() && !r.PlateCutsHover)).ToArray());
@@ -274,10 +276,10 @@ public static class EnduranceCommand
             new TableColumn("mm", Alignment.Right),
             new TableColumn("hover W", Alignment.Right),
             new TableColumn("to plate limit s", Alignment.Right),
-            new TableColumn("pack-limited s", Alignment.Right),
+            new TableColumn("no plate limit s", Alignment.Right),
             new TableColumn("hover s", Alignment.Right),
             new TableColumn("verdict"));
-        foreach (var r in report.Floors)
+        foreach (var (r, floor) in report.Floors.Zip(rows))
         {
             table.AddRow(
                 r.Material,
@@ -286,7 +288,7 @@ public static class EnduranceCommand
                 r.PlateLimitTimeS is { } t ? Numbers.Format(t, 0) : "never",
                 r.HoverExists ? Numbers.Format(r.RuntimeS, 0) : "-",
                 Numbers.Format(r.HoverTimeS, 0),
-                !r.HoverExists ? "no trimmed hover" : r.PlateCutsHover ? "plate cuts the hover short" : r.PackEndsHover ? "ok: the pack ends the hover" : $"{r.EndedBy} ends the hover first");
+                !r.HoverExists ? "no trimmed hover" : r.PlateCutsHover ? "plate cuts the hover short" : r.PackEndsHover ? "ok: the pack ends the hover" : $"{floor.EndedBy.Words()} ends the hover first");
         }
         table.Write(output);
         output.WriteLine("Caution: plates get hot enough to burn. Estimates only: defer to manufacturers' ratings and local codes.");

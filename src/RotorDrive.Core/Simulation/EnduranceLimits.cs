@@ -16,4 +16,21 @@ public static class EnduranceLimits
     /// <exception cref="ArgumentNullException"><paramref name="result"/> is null.</exception>
     public static bool Passes(this EnduranceResult result)
         => Preconditions.NotNull(result, nameof(result)).RuntimeS > 0 && result.FirstLimit.Passes();
+
+    /// <summary>What ended a run, in one or two words for tables and verdicts ("pack empty", "plate temp"); the full
+    /// sentence with the limit's value is <see cref="EnduranceResult.FirstLimitText"/>.</summary>
+    /// <param name="limit">The limit that ended the run.</param>
+    public static string Words(this EnduranceLimit limit) => limit switch
+    {
+        EnduranceLimit.TimeLimit => "time limit",
+        EnduranceLimit.PackCutoff => "pack cutoff",
+        EnduranceLimit.UsableCapacity => "pack empty",
+        EnduranceLimit.TrimLost => "lost trim",
+        EnduranceLimit.WindingTemperature => "winding temp",
+        EnduranceLimit.MotorCurrent => "motor current",
+        EnduranceLimit.ControllerCurrent => "ctrl current",
+        EnduranceLimit.PackCurrent => "pack current",
+        EnduranceLimit.PlateTemperature => "plate temp",
+        _ => limit.ToString().ToLowerInvariant(),
+    };
 }

@@ -365,7 +365,7 @@ public sealed class ShortlistSheet : Sheet
                 // The hover time is the endurance run's (pack, windings and plate together), with what ends it; the quick
                 // check's pack-only figure is labelled so.
                 t.Rank.ToString(CultureInfo.InvariantCulture), t.InParetoSet ? "P" : "",
-                e.Simulation is { } sim ? F(sim.EnduranceRuntimeS / 60, 1) : "-", e.Simulation is { } ending ? Ending(ending.EnduranceLimit) : "-",
+                e.Simulation is { } sim ? F(sim.EnduranceRuntimeS / 60, 1) : "-", e.Simulation is { } ending ? ending.EnduranceLimit.Words() : "-",
                 F(f.RuntimeS / 60, 1), F(f.TotalMassKg, 1),
                 f.CurrentMarginFraction is { } m ? F(m * 100, 0) : "-", e.MotorId, e.ControllerId, $"{e.Candidate.PackCount} x {e.PackId}",
                 t.LiftoffTimeS is { } s ? F(s, 2) : "none", F(t.Score, 3),
@@ -378,20 +378,6 @@ public sealed class ShortlistSheet : Sheet
         }
     }
 
-    /// <summary>What ended an endurance run, in one or two words for the table.</summary>
-    internal static string Ending(EnduranceLimit limit) => limit switch
-    {
-        EnduranceLimit.TimeLimit => "time limit",
-        EnduranceLimit.PackCutoff => "pack cutoff",
-        EnduranceLimit.UsableCapacity => "pack empty",
-        EnduranceLimit.TrimLost => "lost trim",
-        EnduranceLimit.WindingTemperature => "winding temp",
-        EnduranceLimit.MotorCurrent => "motor current",
-        EnduranceLimit.ControllerCurrent => "ctrl current",
-        EnduranceLimit.PackCurrent => "pack current",
-        EnduranceLimit.PlateTemperature => "plate temp",
-        _ => limit.ToString().ToLowerInvariant(),
-    };
 
     private void ShowAssigned()
     {

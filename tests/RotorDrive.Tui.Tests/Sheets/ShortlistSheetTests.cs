@@ -2,6 +2,7 @@ using System.Drawing;
 using System.Globalization;
 using Terminal.Gui.Input;
 using Terminal.Gui.Views;
+using RotorDrive.Core.Simulation;
 using RotorDrive.Core.Studies.Ranking;
 using RotorDrive.Tui.Sheets;
 using RotorDrive.Tui.Tests.Support;
@@ -49,7 +50,7 @@ public class ShortlistSheetTests
                 // The hover time is the endurance run's, with its ending; the quick pack-only figure is labelled so.
                 var sim = entry.Evaluation.Simulation!;
                 Assert.Equal((sim.EnduranceRuntimeS / 60).ToString("F1", CultureInfo.InvariantCulture), row[2]);
-                Assert.Equal(ShortlistSheet.Ending(sim.EnduranceLimit), row[3]);
+                Assert.Equal(sim.EnduranceLimit.Words(), row[3]);
                 Assert.Equal((entry.Evaluation.Figures!.RuntimeS / 60).ToString("F1", CultureInfo.InvariantCulture), row[4]);
                 Assert.Equal(entry.Evaluation.MotorId, row[7]);
                 Assert.Equal(entry.Evaluation.ControllerId, row[8]);
