@@ -6,6 +6,7 @@ using RotorDrive.Core;
 using RotorDrive.Core.Craft;
 using RotorDrive.Core.Loads;
 using RotorDrive.Core.Magnetics;
+using RotorDrive.Core.Safety;
 using RotorDrive.Files.Plots;
 
 namespace RotorDrive.Cli.Commands;
@@ -203,7 +204,8 @@ public static class LoadCommand
         bool endCorrection = kind == LoadModelKind.TwoDimensional && request.EndCorrection;
         LoadSweepResult result = LoadSweep.Run(table, design.Id, endCorrection, gapM, plateTempC, magnetTempC, speeds, topSpeed);
 
-        var report = ToReport(result, stationIndex, kind == LoadModelKind.ThreeDimensional ? "3d" : "2d", rig.Plate.HasBackIron);
+        double? standstillPull = rig.Plate.HasBackIron ? -table.Evaluate(0.0, gapM, plateTempC, magnetTempC).LiftN : null;
+        var report = ToReport(result, stationIndex, kind == LoadModelKind.ThreeDimensional ? "3d" : "2d", standstillPull);
         if (request.Json)
         {
             JsonOutput.Write(output, report);
@@ -223,11 +225,12 @@ public static class LoadCommand
         return ExitCodes.Ok;
     }
 
-    private static LoadReport ToReport(LoadSweepResult result, int? station, string model, bool steelUnderPlate) => new(
+    private static LoadReport ToReport(LoadSweepResult result, int? station, string model, double? standstillPullN) => new(
         result.RotorId,
         station,
         model,
-        steelUnderPlate,
+        standstillPullN is not null,
+        standstillPullN,
         result.GapM * 1000.0,
         result.PlateTempC,
         result.MagnetTempC,
@@ -276,11 +279,10 @@ public static class LoadCommand
             o.WriteLine("Model: 2-D strip layer model per radius" + (report.EndCorrection ? " with the Russell-Norsworthy finite-width correction" : " without width correction")
                 + ". It over-predicts lift at low speed and can under-predict drag above the drag peak; calibrate against bench data.");
         }
-        if (report.SteelUnderPlate)
+        if (report.StandstillPullN is { } pull)
         {
-            double still = report.Points.Count > 0 ? report.Points[0].LiftN : 0;
-            o.WriteLine($"Steel under the plate: at standstill the rotor is pulled down with {Numbers.Format(-still, 1)} N (lift {Numbers.Format(still, 1)} N at {Numbers.Format(report.Points.Count > 0 ? report.Points[0].SpeedRpm : 0, 0)} rpm).");
-            o.WriteLine("Caution: never land the rig with the rotors stopped over a steel-backed floor without a mechanical stop: the magnets pull the craft down onto the plate and can trap fingers.");
+            var steel = Cautions.SteelUnderPlate(new SteelAttraction(pull, report.GapMm / 1000.0, null));
+            o.WriteLine($"Warning, {steel.Title.ToLowerInvariant()}: {steel.Reason}. {steel.Text}");
         }
         o.WriteLine("Caution: the plate takes the eddy power as heat; magnet rotors crush fingers, upset pacemakers and can burst at speed. Estimates only: defer to manufacturers' ratings.");
     }
@@ -334,6 +336,7 @@ public static class LoadCommand
         int? Station,
         string Model,
         bool SteelUnderPlate,
+        double? StandstillPullN,
         double GapMm,
         double PlateTempC,
         double MagnetTempC,

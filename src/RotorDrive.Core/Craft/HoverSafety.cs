@@ -34,7 +34,7 @@ public static class HoverSafety
         }
         var atMax = AtRatedSpeed(model.Stations.Select(s => s.Rotor), safety);
         double plate = model.Stations.Max(s => s.Conditions.PlateTempC);
-        var cautions = Cautions.For(new CautionFindings(true, [.. atHover, .. atMax], plate), thresholds);
+        var cautions = Cautions.For(new CautionFindings(true, [.. atHover, .. atMax], plate, SteelUnderPlate: PlateAttraction.AtStandstill(model)), thresholds);
         return new HoverSafetyReport(atHover, atMax, NdFeBNote, cautions);
     }
 

@@ -15,6 +15,9 @@ public enum CautionTopic
     /// <summary>Hot plate and motor windings.</summary>
     HotSurfaces,
 
+    /// <summary>A plate laid on steel: stopped rotors are pulled down onto it.</summary>
+    SteelUnderPlate,
+
     /// <summary>The figures are estimates that defer to codes, ratings and licensed practice.</summary>
     EstimatesOnly,
 }

@@ -7,7 +7,8 @@ namespace RotorDrive.Core.Safety;
 /// caution when the rig carries a pack. A caution becomes a <see cref="CautionLevel.Warning"/> when the results put
 /// its hazard in play: a retainer margin below <see cref="CautionThresholds.BurstMargin"/>, a rotor whose retainer
 /// could not be assessed, or a speed above a rotor's rating (burst); a plate or winding temperature above
-/// <see cref="CautionThresholds.HotSurfaceC"/> (hot surfaces). Warnings come first; the estimates caution is always
+/// <see cref="CautionThresholds.HotSurfaceC"/> (hot surfaces). A plate on steel always adds the steel-under-plate warning
+/// with its standstill pull (<see cref="SteelUnderPlate"/>). Warnings come first; the estimates caution is always
 /// last.</remarks>
 public static class Cautions
 {
@@ -31,13 +32,19 @@ public static class Cautions
         "Eddy currents heat the plate under the rotors and load heats the motor windings; both can burn skin. Let them "
         + "cool before touching, and keep flammable material off the plate.", null);
 
+    private static readonly Caution Steel = new(CautionTopic.SteelUnderPlate, CautionLevel.Warning, "Steel under the plate",
+        "The plate lies on steel: with the rotors stopped or slow, the magnets' attraction to the steel pulls the craft down "
+        + "onto the plate (the eddy currents screen it only as the rotors speed up). Never land the rig with the rotors "
+        + "stopped over a steel-backed floor without a mechanical stop that holds the gap, and keep fingers and feet out "
+        + "from under the craft.", null);
+
     private static readonly Caution Estimates = new(CautionTopic.EstimatesOnly, CautionLevel.Notice, "Estimates only",
         "RotorDrive's figures are engineering estimates from simplified models. They do not replace local codes and "
         + "regulations, the ratings of your parts' manufacturers, or review by qualified, licensed practitioners; where "
         + "they differ, those take precedence.", null);
 
-    /// <summary>Every caution at notice level, in topic order.</summary>
-    public static IReadOnlyList<Caution> All { get; } = [Magnets, Burst, Packs, Hot, Estimates];
+    /// <summary>Every caution at notice level, in topic order (the steel-under-plate one as the general advice, without figures).</summary>
+    public static IReadOnlyList<Caution> All { get; } = [Magnets, Burst, Packs, Hot, Steel with { Level = CautionLevel.Notice }, Estimates];
 
     /// <summary>The cautions that apply to a set of results, raised to warnings where the results call for it.</summary>
     /// <param name="findings">The analysis figures.</param>
@@ -54,12 +61,30 @@ public static class Cautions
             chosen.Add(Packs);
         }
         chosen.Add(Raise(Hot, HotReason(findings, limits)));
+        if (findings.SteelUnderPlate is { } steel)
+        {
+            chosen.Add(SteelUnderPlate(steel));
+        }
         return
         [
             .. chosen.Where(c => c.Level == CautionLevel.Warning),
             .. chosen.Where(c => c.Level == CautionLevel.Notice),
             Estimates,
         ];
+    }
+
+    /// <summary>The steel-under-plate warning with the standstill pull as its reason.</summary>
+    /// <param name="attraction">The pull (for a rig, <see cref="Craft.PlateAttraction.AtStandstill"/>).</param>
+    /// <exception cref="ArgumentNullException"><paramref name="attraction"/> is null.</exception>
+    public static Caution SteelUnderPlate(SteelAttraction attraction)
+    {
+        Preconditions.NotNull(attraction, nameof(attraction));
+        string gap = (attraction.GapM * 1000.0).ToString("0.#", CultureInfo.InvariantCulture);
+        string pull = attraction.PullDownN.ToString("0", CultureInfo.InvariantCulture);
+        string reason = attraction.WeightN is { } weight && weight > 0
+            ? $"at standstill the rotors pull the craft down with {pull} N at the landed gap of {gap} mm ({(attraction.PullDownN / weight).ToString("0.00", CultureInfo.InvariantCulture)} times its weight)"
+            : $"at standstill the rotor is pulled down with {pull} N at a {gap} mm gap";
+        return Steel with { Reason = reason };
     }
 
     private static Caution Raise(Caution caution, string? reason)

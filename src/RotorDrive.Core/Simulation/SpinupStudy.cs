@@ -44,7 +44,7 @@ public static class SpinupStudy
 
         double controllerMaxV = rig.Drivetrains.Min(d => d.Controller.MaxCells) * request.FullCellV;
         return new SpinupStudyResult(request, soc, targets, spin, landBraking, landCoasting, controllerMaxV,
-            Findings(rig, spin), Cautions(landBraking, landCoasting, controllerMaxV, request.FullCellV));
+            Findings(rig, spin), Cautions(rig, landBraking, landCoasting, controllerMaxV, request.FullCellV));
     }
 
     private static List<SpinupFinding> Findings(SimulationRig rig, SpinupResult spin)
@@ -93,9 +93,15 @@ public static class SpinupStudy
         return list;
     }
 
-    private static List<string> Cautions(SpinupResult braking, SpinupResult coasting, double controllerMaxV, double fullCellV)
+    private static List<string> Cautions(SimulationRig rig, SpinupResult braking, SpinupResult coasting, double controllerMaxV, double fullCellV)
     {
         var list = new List<string>();
+        // The rig starts and ends on its gear: a plate on steel pulls the stopped rotors down (the one rule, PlateAttraction).
+        if (Craft.PlateAttraction.AtStandstill(rig.Model) is { } steel)
+        {
+            var caution = Safety.Cautions.SteelUnderPlate(steel);
+            list.Add($"{caution.Title.ToLowerInvariant()}: {caution.Reason}. {caution.Text}");
+        }
         foreach (var (l, name) in new[] { (braking, "with braking"), (coasting, "without braking") })
         {
             if (l.MaxBusVoltageV > controllerMaxV)

@@ -2,6 +2,7 @@ using System.Globalization;
 using System.Net;
 using System.Text;
 using RotorDrive.Core;
+using RotorDrive.Core.Craft;
 using RotorDrive.Core.Drive;
 using RotorDrive.Core.Safety;
 using RotorDrive.Core.Simulation;
@@ -292,7 +293,8 @@ public static class RigReportHtml
 
     private static void CautionSection(StringBuilder s, RigReport report)
     {
-        var cautions = Cautions.For(new CautionFindings(true, report.Hover.Safety.AtHover, report.Endurance.PeakPlateTempC, report.Endurance.PeakWindingTempC));
+        var cautions = Cautions.For(new CautionFindings(true, report.Hover.Safety.AtHover, report.Endurance.PeakPlateTempC, report.Endurance.PeakWindingTempC,
+            PlateAttraction.AtStandstill(report.Model)));
         foreach (var c in cautions)
         {
             s.Append("<p><strong>").Append(E(c.Title)).Append(c.Level == CautionLevel.Warning ? " (warning)" : "").Append(".</strong> ").Append(E(c.Text));

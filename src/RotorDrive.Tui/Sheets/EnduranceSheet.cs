@@ -189,7 +189,7 @@ public sealed class EnduranceSheet : ChartSheet
             sb.AppendLine($"  plate hot spot at the end: x {F(hot.XM * 1000, 0)} mm, y {F(hot.YM * 1000, 0)} mm, {F(hot.TemperatureC, 1)} C");
         }
         sb.AppendLine();
-        sb.Append(CautionText.Compose(Cautions.For(new CautionFindings(true, [], r.PeakPlateTempC, r.PeakWindingTempC))));
+        sb.Append(CautionText.Compose(Cautions.For(new CautionFindings(true, [], r.PeakPlateTempC, r.PeakWindingTempC, PlateAttraction.AtStandstill(sim.Model)))));
         return sb.ToString();
     }
 
