@@ -231,7 +231,8 @@ public static class YawBalance
         return new YawSensitivity(a, b, Yaw(kv), Yaw(gapped), Yaw(warm));
     }
 
-    // Largest |yaw torque| in one direction for which the trim hovers within every limit (bisection).
+    // Largest |yaw torque| in one direction for which the trim hovers within every limit (doubling, then bisection), and
+    // the limit that bounds it: the first finding of the failed trim just beyond the edge.
     private static double Authority(RigModel model, double gap, int sign, double limit, HoverOptions options, out string? limitedBy)
     {
         HoverResult? last = null;
@@ -262,7 +263,6 @@ public static class YawBalance
                 return lo;
             }
         }
-        limitedBy = last?.Findings.FirstOrDefault()?.Limit;
         for (int k = 0; k < 40 && hi - lo > 1e-4 * Math.Max(limit, hi); k++)
         {
             double mid = 0.5 * (lo + hi);
@@ -275,6 +275,10 @@ public static class YawBalance
                 hi = mid;
             }
         }
+        // The limit met at the edge: every failed probe becomes the new hi, so `last` is the trim just beyond the
+        // authority found (within the bisection's tolerance). The doubling's first failure can lie far beyond the edge,
+        // where other limits have failed too (issue 14 item 4).
+        limitedBy = last?.Findings.FirstOrDefault()?.Limit;
         return lo;
     }
 }

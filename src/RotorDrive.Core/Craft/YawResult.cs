@@ -14,7 +14,8 @@ namespace RotorDrive.Core.Craft;
 /// limit, N m.</param>
 /// <param name="AuthorityNegativeNm">Largest clockwise yaw torque (as a positive number), N m.</param>
 /// <param name="LimitNm">The rig's yaw tolerance limits.yaw_torque_nm, N m.</param>
-/// <param name="AuthorityLimitedBy">The limit key that bounds the authority in the weaker direction, or null.</param>
+/// <param name="AuthorityLimitedBy">The limit key that bounds the authority in the weaker direction: the first finding of
+/// the trim just beyond the authority found, or null.</param>
 /// <param name="Sensitivity">Yaw torque from small pair mismatches, or null when the rig has no counter-rotating pair
 /// or no equal duty.</param>
 /// <param name="Findings">Why a part of the analysis could not be done, or what fails.</param>
