@@ -188,9 +188,13 @@ public static class RankCommand
             o.WriteLine("  torque over load torque at the landed drag peak, minus 1 (the quick spin-up check every combination gets). The shortlist");
             o.WriteLine("  shown is simulated in full: liftoff_s from the spin-up simulation (duty ramped to the hover duty, current limits, pack sag),");
             o.WriteLine("  endur_min and ends_by from the endurance simulation (pack, windings and plate evolving) and the limit that ends it.");
-            foreach (var entry in result.Top.Where(t => t.Evaluation.Simulation is { SpinupFindings.Count: > 0 }))
+            // Cautions that do not reject (the spin-up study's and the hover review's, and the quick checks'), each once with
+            // the ranks it applies to.
+            foreach (var caution in result.Top.SelectMany(t => t.Evaluation.Cautions.Select(c => (c.Message, t.Rank))).GroupBy(x => x.Message))
             {
-                o.WriteLine($"  rank {entry.Rank} spin-up: {string.Join("; ", entry.Evaluation.Simulation!.SpinupFindings)}");
+                var ranks = caution.Select(x => x.Rank).Distinct().ToList();
+                string which = ranks.Count == result.Top.Count && ranks.Count > 1 ? "every rank" : "rank " + string.Join(", ", ranks);
+                o.WriteLine($"  Caution ({which}): {caution.Key}");
             }
             if (NotThePack(result.Top) is { } notPack)
             {
@@ -207,7 +211,7 @@ public static class RankCommand
         }
         if (result.SimulationRejections.Count > 0)
         {
-            o.WriteLine("Shortlisted but rejected by the full spin-up simulation (the next ones moved up):");
+            o.WriteLine("Shortlisted but rejected by the spin-up or hover checks (the next ones moved up):");
             foreach (var e in result.SimulationRejections)
             {
                 o.WriteLine($"  - {e.Label}: {e.Rejections[^1].Message}");
@@ -352,7 +356,7 @@ public static class RankCommand
             f?.TotalMassKg, f?.MaxSpeedRpm, f?.MaxMotorCurrentA, f is { StationDuties.Count: > 0 } ? f.MaxDuty : null,
             f?.PackCurrentA, f?.BusVoltageV, f?.ElectricalPowerW, f?.LiftSpecificPowerWPerN, f?.EddyPowerW, f?.RuntimeS, f?.RuntimeLimit,
             f?.CurrentMarginFraction * 100, f?.DragPeakTorqueMarginFraction * 100, liftoff,
-            e.Simulation is { } sim ? new SimulationReport(sim.LiftoffTimeS, sim.StalledStations, sim.SpinupFindings, sim.MinBusVoltageV, sim.PeakPackCurrentA,
+            e.Simulation is { } sim ? new SimulationReport(sim.LiftoffTimeS, sim.StalledStations, sim.SpinupFindings, sim.HoverFindings, sim.MinBusVoltageV, sim.PeakPackCurrentA,
                 sim.EnduranceRuntimeS, sim.EnduranceLimit, sim.EnduranceLimitText, sim.PeakWindingTempC, sim.PeakPlateTempC) : null,
             f is null ? [] : f.StationSpeedsRadPerS.Select((w, i) => new StationReport(i, Units.RadPerSToRpm(w), f.StationMotorCurrentsA[i],
                 i < f.StationDuties.Count ? f.StationDuties[i] : null)).ToList(),
@@ -436,7 +440,8 @@ public static class RankCommand
         IReadOnlyList<string> Cautions);
 
     private sealed record SimulationReport(
-        double? LiftoffTimeS, IReadOnlyList<int> StalledStations, IReadOnlyList<string> SpinupFindings, double MinBusVoltageV, double PeakPackCurrentA,
+        double? LiftoffTimeS, IReadOnlyList<int> StalledStations, IReadOnlyList<string> SpinupFindings, IReadOnlyList<string> HoverFindings,
+        double MinBusVoltageV, double PeakPackCurrentA,
         double EnduranceRuntimeS, EnduranceLimit EnduranceLimit, string EnduranceLimitText, double PeakWindingTempC, double PeakPlateTempC);
 
     private sealed record StationReport(int Index, double SpeedRpm, double MotorCurrentA, double? Duty);

@@ -21,19 +21,11 @@ public static class SpinupStudy
     /// <exception cref="ArgumentOutOfRangeException">A request value is out of range.</exception>
     public static SpinupStudyResult Run(SimulationRig rig, SpinupStudyRequest? request = null)
     {
-        Preconditions.NotNull(rig, nameof(rig));
         request ??= SpinupStudyRequest.Default;
-        Preconditions.NonNegative(request.RampS, nameof(request.RampS));
-        Preconditions.Positive(request.SettleS, nameof(request.SettleS));
-        Preconditions.NonNegative(request.StopRampS, nameof(request.StopRampS));
-        Preconditions.Positive(request.StopDurationS, nameof(request.StopDurationS));
-        Preconditions.Positive(request.FullCellV, nameof(request.FullCellV));
-        double soc = Preconditions.InRange(request.SocFraction ?? rig.SocFraction, 0, 1, nameof(request.SocFraction));
+        var check = SpinUp(rig, request);
+        var (soc, targets, spin) = (check.SocFraction, check.TargetsSi, check.Spinup);
         var options = request.Options ?? SpinupOptions.Default;
         var mode = request.Mode;
-
-        var targets = rig.HoverThrottle(mode, soc);
-        var spin = SpinupSimulator.Run(rig, new SpinupRequest(ThrottleProfile.SpinUp(mode, targets, request.RampS), request.RampS + request.SettleS, soc), options);
         double socAfter = Math.Clamp(spin.FinalSocFraction, 0, 1);
         var running = rig.HoverThrottle(mode, socAfter);
         var quiet = options with { RecordTrace = false, StopAtLiftoff = false };
@@ -44,7 +36,30 @@ public static class SpinupStudy
 
         double controllerMaxV = rig.Drivetrains.Min(d => d.Controller.MaxCells) * request.FullCellV;
         return new SpinupStudyResult(request, soc, targets, spin, landBraking, landCoasting, controllerMaxV,
-            Findings(rig, spin), Cautions(rig, landBraking, landCoasting, controllerMaxV, request.FullCellV));
+            check.Findings, [.. check.Cautions, .. LandingCautions(landBraking, landCoasting, controllerMaxV, request.FullCellV)]);
+    }
+
+    /// <summary>The spin-up alone and its verdict: what <see cref="Run"/> finds before it simulates the landings (the
+    /// findings are the same; the cautions leave out the landings' regeneration). One simulator run: the ranking's check
+    /// of a shortlisted drivetrain.</summary>
+    /// <param name="rig">The prepared rig.</param>
+    /// <param name="request">What to run (the landing settings are not used), or null for <see cref="SpinupStudyRequest.Default"/>.</param>
+    /// <exception cref="ArgumentNullException">The rig is null.</exception>
+    /// <exception cref="ArgumentOutOfRangeException">A request value is out of range.</exception>
+    public static SpinupCheck SpinUp(SimulationRig rig, SpinupStudyRequest? request = null)
+    {
+        Preconditions.NotNull(rig, nameof(rig));
+        request ??= SpinupStudyRequest.Default;
+        Preconditions.NonNegative(request.RampS, nameof(request.RampS));
+        Preconditions.Positive(request.SettleS, nameof(request.SettleS));
+        Preconditions.NonNegative(request.StopRampS, nameof(request.StopRampS));
+        Preconditions.Positive(request.StopDurationS, nameof(request.StopDurationS));
+        Preconditions.Positive(request.FullCellV, nameof(request.FullCellV));
+        double soc = Preconditions.InRange(request.SocFraction ?? rig.SocFraction, 0, 1, nameof(request.SocFraction));
+        var options = request.Options ?? SpinupOptions.Default;
+        var targets = rig.HoverThrottle(request.Mode, soc);
+        var spin = SpinupSimulator.Run(rig, new SpinupRequest(ThrottleProfile.SpinUp(request.Mode, targets, request.RampS), request.RampS + request.SettleS, soc), options);
+        return new SpinupCheck(soc, targets, spin, Findings(rig, spin), RigCautions(rig));
     }
 
     private static List<SpinupFinding> Findings(SimulationRig rig, SpinupResult spin)
@@ -93,7 +108,7 @@ public static class SpinupStudy
         return list;
     }
 
-    private static List<string> Cautions(SimulationRig rig, SpinupResult braking, SpinupResult coasting, double controllerMaxV, double fullCellV)
+    private static List<string> RigCautions(SimulationRig rig)
     {
         var list = new List<string>();
         // The rig starts and ends on its gear: a plate on steel pulls the stopped rotors down (the one rule, PlateAttraction).
@@ -102,6 +117,12 @@ public static class SpinupStudy
             var caution = Safety.Cautions.SteelUnderPlate(steel);
             list.Add($"{caution.Title.ToLowerInvariant()}: {caution.Reason}. {caution.Text}");
         }
+        return list;
+    }
+
+    private static List<string> LandingCautions(SpinupResult braking, SpinupResult coasting, double controllerMaxV, double fullCellV)
+    {
+        var list = new List<string>();
         foreach (var (l, name) in new[] { (braking, "with braking"), (coasting, "without braking") })
         {
             if (l.MaxBusVoltageV > controllerMaxV)

@@ -37,7 +37,8 @@ public enum RankRejectionKind
     /// <summary>On the landing gear, the current-limited motor cannot push its rotor through the drag peak.</summary>
     DragPeak,
 
-    /// <summary>Shortlisted, it fails the full spin-up simulation: a rotor stalls below its drag peak or the craft never
-    /// lifts off (only the shortlist is simulated; see <see cref="RankStudy.Run"/>).</summary>
+    /// <summary>Shortlisted, it fails the spin-up study or the hover review that the <c>spinup</c> and <c>hover</c> commands
+    /// give (a stall, a late or missing lift-off, a controller or pack over its burst allowance, the pack below its cutoff,
+    /// a hover limit or retaining ring); only the shortlist is checked (see <see cref="RankStudy.Run"/>).</summary>
     SpinupSimulation,
 }

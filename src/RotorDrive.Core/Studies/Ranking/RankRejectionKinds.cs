@@ -42,7 +42,7 @@ public static class RankRejectionKinds
         RankRejectionKind.ControllerCurrent => "hover current above the controller's continuous rating",
         RankRejectionKind.PackCurrent => "pack current above its continuous C-rate rating",
         RankRejectionKind.DragPeak => "cannot pass the drag peak on the landing gear",
-        RankRejectionKind.SpinupSimulation => "shortlisted, but stalls or never lifts off in the full spin-up simulation",
+        RankRejectionKind.SpinupSimulation => "shortlisted, but fails the spin-up study or the hover review (as the spinup and hover commands give them)",
         _ => throw new ArgumentOutOfRangeException(nameof(kind), kind, "Unknown rejection kind."),
     };
 }

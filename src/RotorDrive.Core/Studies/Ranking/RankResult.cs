@@ -28,8 +28,8 @@ public sealed record RankResult(
     RankEvaluation? Assigned,
     int? AssignedRank)
 {
-    /// <summary>Combinations that passed every quick check and reached the shortlist, but failed the full spin-up
-    /// simulation, best first (each with its <see cref="RankRejectionKind.SpinupSimulation"/> reason and simulation);
+    /// <summary>Combinations that passed every quick check and reached the shortlist, but failed the full checks (spin-up
+    /// study and hover review, <see cref="RankStudy.Simulate"/>), best first (each with its <see cref="RankRejectionKind.SpinupSimulation"/> reason and simulation);
     /// they are counted under that reason in <see cref="RejectionCounts"/> and are not in <see cref="Ordered"/>.</summary>
     public IReadOnlyList<RankEvaluation> SimulationRejections { get; init; } = [];
 

@@ -1,5 +1,7 @@
 using System.Globalization;
+using RotorDrive.Core.Craft;
 using RotorDrive.Core.Drive;
+using RotorDrive.Core.Safety;
 using RotorDrive.Core.Simulation;
 
 namespace RotorDrive.Core.Studies.Ranking;
@@ -43,56 +45,30 @@ public sealed partial class RankStudy
         return list;
     }
 
-    /// <summary>Runs the full simulations of one combination on its rig model variant (<see cref="ModelFor"/>, prepared by
-    /// <see cref="SimulationRig.FromModel"/>): the spin-up from rest on the landing gear, every controller's duty ramped
-    /// to its trimmed-hover duty (the ramp and settle times of <see cref="SpinupStudyRequest.Default"/>) under its current
-    /// limit, through the drag peak at the landed gap to lift-off (<see cref="SpinupSimulator"/>, no traces), and the
-    /// endurance run from the model's state of charge (<see cref="EnduranceSimulator"/>).</summary>
+    /// <summary>Runs the full checks of one combination on its rig model variant (<see cref="ModelFor"/>, prepared by
+    /// <see cref="SimulationRig.FromModel"/>): the spin-up study's verdict with the <c>spinup</c> command's defaults
+    /// (<see cref="SpinupStudy.SpinUp"/>, no traces; the landings, which only add cautions, are left to <c>spinup</c>), the hover review the <c>hover</c> command gives
+    /// (<see cref="HoverReview.Of"/> of the trimmed hover at the design gap), and the endurance run from the model's state
+    /// of charge (<see cref="EnduranceSimulator"/>). One rule: a combination the ranking keeps passes the same checks
+    /// those commands apply to that drivetrain on that rig.</summary>
     /// <remarks>Tens of milliseconds on the demo rig: the ranking runs it for its shortlist only. Thread-safe.</remarks>
     /// <param name="candidate">The combination.</param>
-    /// <returns>Lift-off time, stalled stations, spin-up findings, endurance runtime and its first limit.</returns>
+    /// <returns>Lift-off time, stalled stations, the spin-up and hover findings and cautions, endurance runtime and its
+    /// first limit.</returns>
     /// <exception cref="ArgumentOutOfRangeException">An index is out of range.</exception>
     public RankSimulation Simulate(RankCandidate candidate)
     {
         var sim = SimulationRig.FromModel(ModelFor(candidate));
-        var request = SpinupStudyRequest.Default;
-        var quiet = SpinupOptions.Default with { RecordTrace = false };
-        var targets = sim.HoverThrottle(request.Mode, sim.SocFraction);
-        var spin = SpinupSimulator.Run(sim, new SpinupRequest(ThrottleProfile.SpinUp(request.Mode, targets, request.RampS),
-            request.RampS + request.SettleS, sim.SocFraction), quiet);
-        var ci = CultureInfo.InvariantCulture;
-        var controller = _catalog.Controllers[candidate.ControllerIndex];
-        var findings = new List<string>();
-        foreach (var s in spin.Stations.Where(s => s.Stalled))
-        {
-            findings.Add(string.Format(ci,
-                "station {0} stalls below its drag peak ({1:0} rpm, {2:0.00} N m at the landed gap) under controller {3}'s {4:0} A limit at the hover duty; {5:0} A would pass it",
-                s.Index + 1, Units.RadPerSToRpm(s.DragPeakSpeedRadPerS), s.DragPeakTorqueNm, controller.Id, s.CurrentLimitA, s.SuggestedCurrentLimitA));
-        }
-        if (spin.LiftoffTimeS is not { } liftoff)
-        {
-            findings.Add(string.Format(ci, "the craft never lifts off in {0:0.#} s (duty ramped to the hover duty over {1:0.#} s)",
-                request.RampS + request.SettleS, request.RampS));
-        }
-        else if (liftoff > _rig.Limits.LiftoffTimeS)
-        {
-            findings.Add(string.Format(ci, "lift-off at {0:0.00} s is later than the limit of {1:0.#} s", liftoff, _rig.Limits.LiftoffTimeS));
-        }
-        foreach (var s in spin.Stations.Where(s => s.Controller.Exceeded))
-        {
-            findings.Add(string.Format(ci, "station {0}: controller above its continuous {1:0} A for {2:0.00} s, longer than its burst allowance",
-                s.Index + 1, s.Controller.ContinuousA, s.Controller.TimeAboveContinuousS));
-        }
-        if (spin.Pack.Exceeded)
-        {
-            findings.Add(string.Format(ci, "pack current {0:0} A during the spin-up exceeds its burst rating", spin.Pack.PeakA));
-        }
-        if (spin.BelowCutoff)
-        {
-            findings.Add(string.Format(ci, "the pack sags to {0:0.0} V during the spin-up, below its cutoff {1:0.0} V", spin.MinBusVoltageV, spin.CutoffVoltageV));
-        }
+        // The spin-up study's verdict (SpinUp: the same findings as SpinupStudy.Run, without its two landing simulations,
+        // which only add regeneration cautions and cost ten times the spin-up).
+        var study = SpinupStudy.SpinUp(sim, SpinupStudyRequest.Default with { Options = SpinupOptions.Default with { RecordTrace = false } });
+        var review = HoverReview.Of(sim.Model, sim.Hover);
+        var cautions = new List<string>(study.Cautions);
+        cautions.AddRange(review.Safety.Cautions.Where(c => c.Level == CautionLevel.Warning).Select(c => $"{c.Title.ToLowerInvariant()}: {c.Reason}"));
         var endurance = EnduranceSimulator.Run(sim, null, EnduranceOptions.Default with { RecordTrace = false });
-        return new RankSimulation(spin.LiftoffTimeS, spin.StalledStations, findings, spin.MinBusVoltageV, spin.Pack.PeakA,
+        var spin = study.Spinup;
+        return new RankSimulation(spin.LiftoffTimeS, spin.StalledStations, study.Findings.Select(f => f.Message).ToList(),
+            review.Pass ? [] : review.Findings.Select(f => f.Message).ToList(), cautions, spin.MinBusVoltageV, spin.Pack.PeakA,
             endurance.RuntimeS, endurance.FirstLimit, endurance.FirstLimitText, endurance.PeakWindingTempC, endurance.PeakPlateTempC);
     }
 

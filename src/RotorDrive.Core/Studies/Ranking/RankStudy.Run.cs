@@ -97,8 +97,8 @@ public sealed partial class RankStudy
             rejectionCounts[r] = new RankRejectionCount(RankRejectionKinds.All[r], sum);
         }
 
-        // The shortlist: the best Top by the quick checks get the full spin-up and endurance simulations. One that stalls
-        // or never lifts off is rejected with that reason and the ranking is redone without it (scores and Pareto set over
+        // The shortlist: the best Top by the quick checks get the full checks (Simulate: the spin-up study and hover review
+        // of the spinup and hover commands, and the endurance run). One that fails them is rejected with those reasons and the ranking is redone without it (scores and Pareto set over
         // the remaining), until the best Top have all been simulated and pass: the next one enters deterministically.
         var simulated = new Dictionary<long, RankSimulation>();
         var failed = new List<RankEvaluation>();
@@ -125,7 +125,7 @@ public sealed partial class RankStudy
             for (int k = 0; k < pending.Count; k++)
             {
                 simulated[pending[k]] = runs[k];
-                if (!runs[k].PassesSpinup)
+                if (!runs[k].Passes)
                 {
                     dropped.Add(pending[k]);
                 }
@@ -190,16 +190,17 @@ public sealed partial class RankStudy
         };
     }
 
-    // The evaluation with its simulation attached and, when it failed the spin-up, that reason added.
+    // The evaluation with its simulation and its cautions attached and, when it failed the full checks, that reason added.
     private RankEvaluation WithSimulation(RankEvaluation evaluation, RankSimulation simulation, bool reject)
     {
+        var cautions = evaluation.Cautions.Concat(simulation.Cautions.Select(c => new RankRejection(RankRejectionKind.SpinupSimulation, c))).ToList();
         if (!reject)
         {
-            return evaluation with { Simulation = simulation };
+            return evaluation with { Simulation = simulation, Cautions = cautions };
         }
         var reasons = evaluation.Rejections.ToList();
-        reasons.Add(new RankRejection(RankRejectionKind.SpinupSimulation, "full spin-up simulation: " + simulation.FailureText));
-        return evaluation with { Simulation = simulation, Rejections = reasons };
+        reasons.Add(new RankRejection(RankRejectionKind.SpinupSimulation, "full spin-up and hover checks: " + simulation.FailureText));
+        return evaluation with { Simulation = simulation, Rejections = reasons, Cautions = cautions };
     }
 
     private long TieKey(RankCandidate c)

@@ -1,6 +1,7 @@
 using RotorDrive.Core.Craft;
 using RotorDrive.Core.Drive;
 using RotorDrive.Core.Loads;
+using RotorDrive.Core.Simulation;
 using RotorDrive.Core.Studies.Ranking;
 using RotorDrive.Core.Tests.Magnetics;
 using Xunit;
@@ -115,14 +116,47 @@ public class RankStudyTests
         var rejected = Assert.Single(result.SimulationRejections);
         Assert.Equal("lean", rejected.MotorId);
         Assert.Equal(RankRejectionKind.SpinupSimulation, rejected.Rejections[^1].Kind);
-        Assert.False(rejected.Simulation!.PassesSpinup);
+        Assert.False(rejected.Simulation!.Passes);
         Assert.Null(rejected.Simulation.LiftoffTimeS);
         Assert.Contains("never lifts off", rejected.Rejections[^1].Message);
         Assert.Equal(1, result.RejectionCounts.Single(c => c.Kind == RankRejectionKind.SpinupSimulation).Count);
         var winner = result.Top.Single();
-        Assert.True(winner.Evaluation.Simulation!.PassesSpinup);
+        Assert.True(winner.Evaluation.Simulation!.Passes);
         Assert.NotNull(winner.LiftoffTimeS);
         Assert.True(winner.Evaluation.Simulation.EnduranceRuntimeS > 0);
+    }
+
+    // Issue 14 item 3: a shortlisted combination passes the same spin-up study and hover review that the spinup and hover
+    // commands give for that drivetrain on that rig (SpinupStudy.Run, HoverReview), not only "no stall, lifts off". The
+    // controller "brief" (lighter, so it ranks first by mass) allows its 80 A burst for 0.2 s only; passing the landed
+    // drag peak at the current limit takes longer, so its spin-up fails on the controller's burst allowance although the
+    // rotors pass the peak and the craft lifts off. It is rejected with that finding and "long" (10 s burst) ranks first.
+    [Fact]
+    public void ShortlistedCombination_PassesTheSpinupStudyAndHoverReview_OfThoseCommands()
+    {
+        var brief = new SpeedController("brief", 30, 80, 0.2, 6, 14, 0.002, 0.05, 200000, 0.01, true);
+        var catalog = Catalog([Motor("A", 100, 40)], [brief, Controller("long", 30, 80)], [Pack("flat-12s", "flat")]);
+        var study = RankStudy.Create(SquareRig(20, 0), catalog, new RankOptions(Objective: RankObjective.Mass, Top: 1, MaxPackCount: 1), FourOf(HandLoad));
+        var result = study.Run();
+
+        Assert.Equal(["long"], result.Ordered.Select(c => catalog.Controllers[c.ControllerIndex].Id));
+        var rejected = Assert.Single(result.SimulationRejections);
+        Assert.Equal("brief", rejected.ControllerId);
+        Assert.NotNull(rejected.Simulation!.LiftoffTimeS);
+        Assert.Empty(rejected.Simulation.StalledStations);
+        Assert.Contains("controller above its continuous", rejected.Rejections[^1].Message);
+
+        // The same verdicts, computed the way the commands compute them, for the rejected and the kept combination.
+        foreach (var (evaluation, passes) in new[] { (rejected, false), (result.Top.Single().Evaluation, true) })
+        {
+            var model = study.ModelFor(evaluation.Candidate);
+            var spinup = SpinupStudy.Run(SimulationRig.FromModel(model));
+            var hover = HoverReview.Trimmed(model, model.DesignGapM);
+            Assert.Equal(passes, spinup.Passes && hover.Pass);
+            Assert.Equal(spinup.Findings.Select(f => f.Message), evaluation.Simulation!.SpinupFindings);
+            Assert.Equal(passes, evaluation.Simulation.Passes);
+            Assert.Equal(SpinupStudy.SpinUp(SimulationRig.FromModel(model)).Findings, spinup.Findings);
+        }
     }
 
     [Fact]
