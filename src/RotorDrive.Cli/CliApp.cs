@@ -29,6 +29,7 @@ public static class CliApp
         root.Subcommands.Add(CalibrateCommand.Create());
         root.Subcommands.Add(ReportCommand.Create(clock));
         root.Subcommands.Add(DemoCommand.Create());
+        root.Subcommands.Add(SchemaCommand.Create());
         NumericOptions.Apply(root);
         return root;
     }
