@@ -5,6 +5,7 @@ using RotorDrive.Core;
 using RotorDrive.Core.Craft;
 using RotorDrive.Core.Drive;
 using RotorDrive.Core.Safety;
+using RotorDrive.Files.Rigs;
 
 namespace RotorDrive.Cli.Commands;
 
@@ -18,18 +19,7 @@ public static class HoverCommand
     public static Command Create()
     {
         var rig = CommonOptions.RigArgument();
-        var gap = new Option<double?>("--gap-mm")
-        {
-            Description = "Trim at this air gap, mm; default the rig's design gap.",
-            HelpName = "G",
-        };
-        gap.Validators.Add(r =>
-        {
-            if (r.GetValueOrDefault<double?>() is { } g && !(g > 0 && g <= 200))
-            {
-                r.AddError($"--gap-mm must lie in (0, 200] mm; got {g.ToString(CultureInfo.InvariantCulture)}.");
-            }
-        });
+        var gap = RigKeyOption.Create("--gap-mm", RigSchema.GapDesignMm, "Trim at this air gap", "G");
         var duty = new Option<double?>("--common-duty")
         {
             Description = "Give every station this duty (0..1, no trim) and find the gap where the craft hovers.",
@@ -42,18 +32,7 @@ public static class HoverCommand
                 r.AddError($"--common-duty must lie in (0, 1]; got {d.ToString(CultureInfo.InvariantCulture)}.");
             }
         });
-        var payload = new Option<double?>("--payload-kg")
-        {
-            Description = "Payload, kg, instead of the rig's craft.payload_kg.",
-            HelpName = "P",
-        };
-        payload.Validators.Add(r =>
-        {
-            if (r.GetValueOrDefault<double?>() is { } p && !(p >= 0 && p <= 1e5))
-            {
-                r.AddError($"--payload-kg must lie in [0, 100000] kg; got {p.ToString(CultureInfo.InvariantCulture)}.");
-            }
-        });
+        var payload = RigKeyOption.Create("--payload-kg", RigSchema.CraftPayloadKg, "Payload", "P");
         var json = CommonOptions.Json();
         var command = new Command("hover", "Trimmed hover of the whole rig: duties, speeds, lift, currents, margins, heave, rotor safety.");
         command.Arguments.Add(rig);

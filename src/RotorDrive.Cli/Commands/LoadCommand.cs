@@ -6,6 +6,7 @@ using RotorDrive.Core;
 using RotorDrive.Core.Craft;
 using RotorDrive.Core.Loads;
 using RotorDrive.Core.Magnetics;
+using RotorDrive.Files.Rigs;
 using RotorDrive.Files.Plots;
 
 namespace RotorDrive.Cli.Commands;
@@ -42,36 +43,14 @@ public static class LoadCommand
             Description = "Rotor design id from the rotors catalog (instead of a station's rotor).",
             HelpName = "ID",
         };
-        var gap = new Option<double?>("--gap-mm")
-        {
-            Description = "Air gap between magnet face and plate, mm; default the rig's design gap.",
-            HelpName = "G",
-        };
-        gap.Validators.Add(r =>
-        {
-            if (r.GetValueOrDefault<double?>() is { } g && !(g > 0 && g <= 200))
-            {
-                r.AddError($"--gap-mm must lie in (0, 200] mm; got {g.ToString(CultureInfo.InvariantCulture)}.");
-            }
-        });
+        var gap = RigKeyOption.Create("--gap-mm", RigSchema.GapDesignMm, "Air gap between magnet face and plate", "G");
         var rpm = new Option<RpmRange?>("--rpm")
         {
             Description = "Speeds FROM:TO:STEP in rpm (both ends included); default 0 to the rotor's max_rpm in 25 steps.",
             HelpName = "FROM:TO:STEP",
             CustomParser = ParseRpm,
         };
-        var plateTemp = new Option<double?>("--plate-temp-c")
-        {
-            Description = "Plate temperature, C; default the rig's plate temperature.",
-            HelpName = "T",
-        };
-        plateTemp.Validators.Add(r =>
-        {
-            if (r.GetValueOrDefault<double?>() is { } t && !(t >= -40 && t <= 400))
-            {
-                r.AddError($"--plate-temp-c must lie in [-40, 400] C; got {t.ToString(CultureInfo.InvariantCulture)}.");
-            }
-        });
+        var plateTemp = RigKeyOption.Create("--plate-temp-c", RigSchema.PlateTemperatureC, "Plate temperature", "T");
         var noEnd = new Option<bool>("--no-end-correction")
         {
             Description = "With the 2-D model: leave out the Russell-Norsworthy finite-width correction (implies --model 2d).",

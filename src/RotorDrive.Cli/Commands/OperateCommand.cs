@@ -6,6 +6,7 @@ using RotorDrive.Core;
 using RotorDrive.Core.Craft;
 using RotorDrive.Core.Drive;
 using RotorDrive.Core.Loads;
+using RotorDrive.Files.Rigs;
 using RotorDrive.Files.Plots;
 using RotorDrive.Files;
 
@@ -36,7 +37,7 @@ public static class OperateCommand
         var pack = new Option<string?>("--pack") { Description = "Pack id from the packs catalog, instead of the rig's (same pack count).", HelpName = "ID" };
         var duty = new Option<double?>("--duty") { Description = "Open-loop duty, 0 to 1. Default: the rig's limits.max_duty (the highest duty it allows), unless --hold-rpm is given.", HelpName = "D" };
         var hold = new Option<double?>("--hold-rpm") { Description = "Speed to hold, rpm (> 0): the controller sets the duty within its limits.", HelpName = "R" };
-        var gap = new Option<double?>("--gap-mm") { Description = "Air gap, mm, in (0, 200]. Default: the rig's design gap.", HelpName = "G" };
+        var gap = RigKeyOption.Create("--gap-mm", RigSchema.GapDesignMm, "Air gap", "G");
         var soc = new Option<double>("--soc-pct")
         {
             Description = "Pack state of charge, % (0 to 100).",
@@ -50,7 +51,6 @@ public static class OperateCommand
         station.Validators.Add(r => Check(r, r.GetValueOrDefault<int>() >= 1, $"--station counts from 1; got {r.GetValueOrDefault<int>()}."));
         duty.Validators.Add(r => Check(r, r.GetValueOrDefault<double?>() is not { } d || (d >= 0 && d <= 1), $"--duty must lie in [0, 1]; got {Show(r.GetValueOrDefault<double?>())}."));
         hold.Validators.Add(r => Check(r, r.GetValueOrDefault<double?>() is not { } h || (double.IsFinite(h) && h > 0), $"--hold-rpm must be a number greater than 0; got {Show(r.GetValueOrDefault<double?>())}."));
-        gap.Validators.Add(r => Check(r, r.GetValueOrDefault<double?>() is not { } g || (g > 0 && g <= 200), $"--gap-mm must lie in (0, 200] mm; got {Show(r.GetValueOrDefault<double?>())}."));
         soc.Validators.Add(r => Check(r, r.GetValueOrDefault<double>() is >= 0 and <= 100, $"--soc-pct must lie in [0, 100] %; got {Show(r.GetValueOrDefault<double>())}."));
 
         var command = new Command("operate", "Find every steady operating point of one rotor on its motor, controller and pack, with stability and limit margins.");
