@@ -118,7 +118,7 @@ public static class CalibrateCommand
         }).ToList();
         return new CalibrateReport(r.RotorId, r.Kind == CalibrationKind.SpinDown ? "spin_down" : "steady_points", benchPath, data.Sha256,
             r.Kind == CalibrationKind.SpinDown ? defaultGapM * 1000 : double.NaN, r.Accepted,
-            r.Refusal == CalibrationRefusal.None ? null : r.Refusal.ToString(), r.RefusalDetail, r.ConfidenceLevelFraction, estimates, covariance, quality, residuals);
+            r.Refusal == CalibrationRefusal.None ? null : JsonNames.Of(r.Refusal), r.RefusalDetail, r.ConfidenceLevelFraction, estimates, covariance, quality, residuals);
     }
 
     private static void WriteText(CalibrateReport r, TextWriter o)

@@ -84,7 +84,7 @@ public static class HoverCommand
         var safety = review.Safety;
         var stations = h.Stations.Select(s => new StationEntry(
             s.Index + 1, s.Spin == SpinDirection.Clockwise ? "cw" : "ccw", s.Duty, s.SpeedRpm, s.LiftN, s.ShaftTorqueNm, s.ReactionTorqueNm,
-            s.MotorCurrentA, s.BusCurrentA, s.EddyPowerW, s.ElectricalPowerW, s.LiftSpecificPowerWPerN, s.Regime.ToString(), s.Stable,
+            s.MotorCurrentA, s.BusCurrentA, s.EddyPowerW, s.ElectricalPowerW, s.LiftSpecificPowerWPerN, JsonNames.Of(s.Regime), s.Stable,
             s.Margins.Select(Margin).ToList())).ToList();
         var hoverRotors = safety.AtHover;
         var worst = hoverRotors.Where(r => r.HoopStressPa is not null).OrderByDescending(r => r.HoopStressPa).FirstOrDefault();
@@ -96,17 +96,17 @@ public static class HoverCommand
                 worstMax is null ? safety.AtMaxRpm.Select(r => Units.RadPerSToRpm(r.SpeedRadPerS)).DefaultIfEmpty(double.NaN).Max() : Units.RadPerSToRpm(worstMax.SpeedRadPerS),
                 safety.AtMaxRpm.Select(r => r.RimSpeedMPerS).DefaultIfEmpty(double.NaN).Max(),
                 worstMax?.HoopStressPa / 1e6, worstMax?.RingOwnStressPa / 1e6, safety.MinMaxRpmMargin),
-            hoverRotors.Select(r => r.Assessment.ToString()).Distinct().ToList(),
+            hoverRotors.Select(r => JsonNames.Of(r.Assessment)).Distinct().ToList(),
             safety.MagnetNote);
         var limits = review.Findings.Select(f => new LimitEntry(f.Limit, f.Station + 1, f.Message)).ToList();
         bool pass = review.Pass;
         return new HoverReport(
-            model.Rig.Name, h.Mode == HoverMode.Trimmed ? "trimmed" : "common_duty", h.Status.ToString(), pass,
+            model.Rig.Name, h.Mode == HoverMode.Trimmed ? "trimmed" : "common_duty", JsonNames.Of(h.Status), pass,
             h.GapM * 1000, h.MassKg, model.PayloadKg, h.WeightN, h.BusVoltageV, h.PackCurrentA, h.ElectricalPowerW, h.PlatePowerW,
             h.Balanced ? h.LiftSpecificPowerWPerN : double.NaN, h.HeaveStiffnessNPerM / 1000, h.Balanced ? h.HeaveFrequencyHz : double.NaN,
             new ResidualEntry(h.ForceResidualRatio, h.PitchResidualRatio, h.RollResidualRatio), h.YawTorqueNm,
             stations, h.PackMargins.Select(Margin).ToList(), limits, review.MaxPayloadKg, safetyEntry,
-            safety.Cautions.Select(c => new CautionEntry(c.Topic.ToString(), c.Level.ToString(), c.Title, c.Text, c.Reason)).ToList(),
+            safety.Cautions.Select(c => new CautionEntry(JsonNames.Of(c.Topic), JsonNames.Of(c.Level), c.Title, c.Text, c.Reason)).ToList(),
             h.Iterations);
     }
 

@@ -297,7 +297,7 @@ public static class OperateCommand
             sweep is null ? new ThrottleEntry(result.Throttle.Kind == ThrottleKind.Duty ? "duty" : "hold", result.Throttle.Kind == ThrottleKind.Duty ? result.Throttle.Value : null, result.Throttle.Kind == ThrottleKind.HoldSpeed ? request.HoldRpm : null) : null,
             result.HoldMet,
             result.HoldStoppedBy is { } by ? LimitWords(by) : null,
-            result.Findings.Select(f => new FindingEntry(Snake(f.Kind.ToString()), f.Severity == FindingSeverity.Error ? "error" : "warning", f.Message)).ToList(),
+            result.Findings.Select(f => new FindingEntry(JsonNames.Of(f.Kind), f.Severity == FindingSeverity.Error ? "error" : "warning", f.Message)).ToList(),
             sweep is null ? equilibria : [],
             reached is null || sweep is not null ? null : result.Equilibria.ToList().IndexOf(reached) + 1,
             sweep?.Select(r => new SweepEntry(r.Throttle.Value, r.Equilibria.Count, r.ReachedFromRest is { } p ? Entry(r.Equilibria.ToList().IndexOf(p) + 1, p) : null)).ToList(),
@@ -306,11 +306,11 @@ public static class OperateCommand
 
     private static EquilibriumEntry Entry(int index, OperatingPoint e) => new(
         index,
-        Snake(e.Kind.ToString()),
+        JsonNames.Of(e.Kind),
         e.SpeedRpm,
         e.Stable,
         e.StabilitySlopeNmPerRadPerS,
-        Snake(e.Drive.Regime.ToString()),
+        JsonNames.Of(e.Drive.Regime),
         e.Duty,
         e.MotorCurrentA,
         e.MotorVoltageV,
@@ -329,11 +329,8 @@ public static class OperateCommand
     {
         DriveRegime.CurrentLimit => "controller current limit",
         DriveRegime.MaxDuty => "max duty (pack voltage)",
-        _ => Snake(regime.ToString()).Replace('_', ' '),
+        _ => JsonNames.Of(regime).Replace('_', ' '),
     };
-
-    private static string Snake(string pascal)
-        => string.Concat(pascal.Select((c, i) => char.IsUpper(c) && i > 0 ? "_" + char.ToLowerInvariant(c) : char.ToLowerInvariant(c).ToString()));
 
     private static void Write(OperateRequest request, OperateReport report, TextWriter o)
     {

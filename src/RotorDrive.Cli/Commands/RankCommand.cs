@@ -8,6 +8,7 @@ using RotorDrive.Core.Craft;
 using RotorDrive.Core.Simulation;
 using RotorDrive.Core.Studies.Ranking;
 using RotorDrive.Files;
+using RotorDrive.Files.Exports;
 using RotorDrive.Files.Plots;
 
 namespace RotorDrive.Cli.Commands;
@@ -287,7 +288,7 @@ public static class RankCommand
         return (LimitKey(limit).Replace('_', ' '), sims.Min(s => s!.EnduranceRuntimeS), sims.Max(s => s!.EnduranceRuntimeS));
     }
 
-    private static string LimitKey(EnduranceLimit limit) => JsonNamingPolicy.SnakeCaseLower.ConvertName(limit.ToString());
+    private static string LimitKey(EnduranceLimit limit) => JsonNames.Of(limit);
 
     private static string Csv(RankStudy study, RankResult result, HashSet<int> pareto)
     {
@@ -301,13 +302,13 @@ public static class RankCommand
             var f = e.Figures!;
             sb.Append(string.Join(",",
                 (i + 1).ToString(ci), pareto.Contains(i + 1) ? "yes" : "no", CsvText(e.MotorId), CsvText(e.ControllerId), CsvText(e.PackId),
-                e.Candidate.PackCount.ToString(ci), result.Scores[i].ToString("R", ci), f.TotalMassKg.ToString("R", ci),
-                f.MaxSpeedRpm.ToString("0.###", ci), f.MaxMotorCurrentA.ToString("0.####", ci), f.MaxDuty.ToString("0.#####", ci),
-                f.PackCurrentA.ToString("0.####", ci), f.RuntimeS.ToString("0.###", ci), CsvText(f.RuntimeLimit),
-                f.CurrentMarginFraction is { } m ? (m * 100).ToString("0.####", ci) : "",
-                f.DragPeakTorqueMarginFraction is { } d ? (d * 100).ToString("0.###", ci) : "",
-                shortlist.GetValueOrDefault(i + 1) is { LiftoffTimeS: { } lift } ? lift.ToString("0.###", ci) : "",
-                shortlist.GetValueOrDefault(i + 1) is { } sim ? sim.EnduranceRuntimeS.ToString("0.###", ci) : "",
+                e.Candidate.PackCount.ToString(ci), CsvNumber.Format(result.Scores[i]), CsvNumber.Format(f.TotalMassKg),
+                CsvNumber.Format(f.MaxSpeedRpm), CsvNumber.Format(f.MaxMotorCurrentA), CsvNumber.Format(f.MaxDuty),
+                CsvNumber.Format(f.PackCurrentA), CsvNumber.Format(f.RuntimeS), CsvText(JsonNames.Of(f.RuntimeLimit)),
+                CsvNumber.Format(f.CurrentMarginFraction * 100),
+                CsvNumber.Format(f.DragPeakTorqueMarginFraction * 100),
+                CsvNumber.Format(shortlist.GetValueOrDefault(i + 1)?.LiftoffTimeS),
+                CsvNumber.Format(shortlist.GetValueOrDefault(i + 1)?.EnduranceRuntimeS),
                 shortlist.GetValueOrDefault(i + 1) is { } sim2 ? LimitKey(sim2.EnduranceLimit) : ""));
             sb.Append('\n');
         }
@@ -350,7 +351,7 @@ public static class RankCommand
         return new EntryReport(
             rank, e.MotorId, e.ControllerId, e.PackId, e.Candidate.PackCount, e.Accepted, pareto, score,
             f?.TotalMassKg, f?.MaxSpeedRpm, f?.MaxMotorCurrentA, f is { StationDuties.Count: > 0 } ? f.MaxDuty : null,
-            f?.PackCurrentA, f?.BusVoltageV, f?.ElectricalPowerW, f?.LiftSpecificPowerWPerN, f?.EddyPowerW, f?.RuntimeS, f?.RuntimeLimit,
+            f?.PackCurrentA, f?.BusVoltageV, f?.ElectricalPowerW, f?.LiftSpecificPowerWPerN, f?.EddyPowerW, f?.RuntimeS, f?.RuntimeLimit is { } why ? JsonNames.Of(why) : null,
             f?.CurrentMarginFraction * 100, f?.DragPeakTorqueMarginFraction * 100, liftoff,
             e.Simulation is { } sim ? new SimulationReport(sim.LiftoffTimeS, sim.StalledStations, sim.SpinupFindings, sim.MinBusVoltageV, sim.PeakPackCurrentA,
                 sim.EnduranceRuntimeS, sim.EnduranceLimit, sim.EnduranceLimitText, sim.PeakWindingTempC, sim.PeakPlateTempC) : null,

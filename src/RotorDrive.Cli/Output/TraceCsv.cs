@@ -56,6 +56,5 @@ public static class TraceCsv
         return sb.ToString();
     }
 
-    // Finite values with 7 significant digits; a non-finite value (never expected) is written empty, never as NaN.
-    private static string F(double v) => double.IsFinite(v) ? v.ToString("G7", CultureInfo.InvariantCulture) : "";
+    private static string F(double v) => Files.Exports.CsvNumber.Format(v);
 }

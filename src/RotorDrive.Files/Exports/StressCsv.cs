@@ -65,6 +65,5 @@ public static class StressCsv
         var u => u.ToLowerInvariant(),
     };
 
-    private static string F(double? value)
-        => value is { } v && double.IsFinite(v) ? v.ToString("R", CultureInfo.InvariantCulture) : "";
+    private static string F(double? value) => CsvNumber.Format(value);
 }
