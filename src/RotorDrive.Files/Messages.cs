@@ -200,8 +200,19 @@ public static class Messages
         => $"landed gap {N(landedMm)} mm must not exceed the design gap {N(designMm)} mm";
 
     /// <summary>Two stations whose rotors overlap.</summary>
-    public static string StationsOverlap(int other, double distanceMm, double neededMm)
-        => $"this rotor overlaps the rotor of station {other}: axes {N(distanceMm)} mm apart, at least {N(neededMm)} mm needed";
+    /// <param name="other">The other station as outputs name it ("station 2 (front left)").</param>
+    /// <param name="distanceMm">Distance between the axes, mm.</param>
+    /// <param name="neededMm">The sum of the two outer radii, mm.</param>
+    public static string StationsOverlap(string other, double distanceMm, double neededMm)
+        => $"this rotor overlaps the rotor of {other}: axes {N(distanceMm)} mm apart, at least {N(neededMm)} mm needed";
+
+    /// <summary>A station name that is empty or a number (which --station would read as a station number).</summary>
+    public static string BadStationName(string name)
+        => $"'{name}' cannot name a station: use words (e.g. \"front left\"), not an empty text or a number";
+
+    /// <summary>Two stations with the same name.</summary>
+    public static string DuplicateStationName(string name, int firstNumber)
+        => $"station name '{name}' is already used by station {firstNumber} (names must differ, ignoring case)";
 
     /// <summary>A whole-number JSON value that has a fraction.</summary>
     public static string JsonNotAnInteger(double value) => $"must be a whole number; got {N(value)}";

@@ -83,7 +83,7 @@ public static class HoverCommand
         var h = review.Hover;
         var safety = review.Safety;
         var stations = h.Stations.Select(s => new StationEntry(
-            s.Index + 1, s.Spin == SpinDirection.Clockwise ? "cw" : "ccw", s.Duty, s.SpeedRpm, s.LiftN, s.ShaftTorqueNm, s.ReactionTorqueNm,
+            s.Index + 1, model.Rig.Stations[s.Index].Name, s.Spin == SpinDirection.Clockwise ? "cw" : "ccw", s.Duty, s.SpeedRpm, s.LiftN, s.ShaftTorqueNm, s.ReactionTorqueNm,
             s.MotorCurrentA, s.BusCurrentA, s.EddyPowerW, s.ElectricalPowerW, s.LiftSpecificPowerWPerN, JsonNames.Of(s.Regime), s.Stable,
             s.Margins.Select(Margin).ToList())).ToList();
         var hoverRotors = safety.AtHover;
@@ -133,7 +133,7 @@ public static class HoverCommand
             foreach (var s in r.Stations)
             {
                 var least = s.Margins.OrderBy(m => m.Margin).First();
-                table.AddRow(s.Index.ToString(CultureInfo.InvariantCulture), s.Spin, Numbers.Format(s.Duty, 3), Numbers.Format(s.SpeedRpm, 0),
+                table.AddRow(StationText.Cell(s.Station, s.Name), s.Spin, Numbers.Format(s.Duty, 3), Numbers.Format(s.SpeedRpm, 0),
                     Numbers.Format(s.LiftN, 1), Numbers.Format(s.ShaftTorqueNm, 2), Numbers.Format(s.MotorCurrentA, 1), Numbers.Format(s.BusCurrentA, 1),
                     Numbers.Format(s.EddyPowerW, 0), Numbers.Format(s.LiftSpecificPowerWPerN, 2), s.Stable ? "yes" : "NO",
                     $"{least.Limit} {Numbers.Format(least.Margin * 100, 0)} %");
@@ -189,7 +189,7 @@ public static class HoverCommand
     private sealed record ResidualEntry(double Force, double Pitch, double Roll);
 
     private sealed record StationEntry(
-        int Index, string Spin, double Duty, double SpeedRpm, double LiftN, double ShaftTorqueNm, double ReactionTorqueNm,
+        int Station, string? Name, string Spin, double Duty, double SpeedRpm, double LiftN, double ShaftTorqueNm, double ReactionTorqueNm,
         double MotorCurrentA, double BusCurrentA, double EddyPowerW, double ElectricalPowerW, double LiftSpecificPowerWPerN,
         string Regime, bool Stable, IReadOnlyList<MarginEntry> Margins);
 

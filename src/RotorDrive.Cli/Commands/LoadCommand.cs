@@ -26,18 +26,7 @@ public static class LoadCommand
     public static Command Create(TimeProvider? clock = null)
     {
         var rig = CommonOptions.RigArgument();
-        var station = new Option<int?>("--station")
-        {
-            Description = "Station whose rotor to use, counted from 1 as listed by 'check'; default 1.",
-            HelpName = "N",
-        };
-        station.Validators.Add(r =>
-        {
-            if (r.GetValueOrDefault<int?>() is < 1)
-            {
-                r.AddError("--station counts from 1.");
-            }
-        });
+        var station = StationOption.Create("Station whose rotor to use");
         var rotor = new Option<string?>("--rotor")
         {
             Description = "Rotor design id from the rotors catalog (instead of a station's rotor).",
@@ -132,10 +121,8 @@ public static class LoadCommand
         }
         else
         {
-            int number = request.Station ?? 1;
-            if (number > rig.Stations.Count)
+            if (StationOption.Find(rig, request.Station, "load", error) is not { } number)
             {
-                error.WriteLine($"rotordrive load: error: --station {number}: the rig has {rig.Stations.Count} station(s), numbered 1 to {rig.Stations.Count}.");
                 return ExitCodes.BadInput;
             }
             stationIndex = number;
@@ -182,7 +169,7 @@ public static class LoadCommand
         bool endCorrection = kind == LoadModelKind.TwoDimensional && request.EndCorrection;
         LoadSweepResult result = LoadSweep.Run(table, design.Id, endCorrection, gapM, plateTempC, magnetTempC, speeds, topSpeed);
 
-        var report = ToReport(result, stationIndex, kind == LoadModelKind.ThreeDimensional ? "3d" : "2d", rig.Plate.HasBackIron);
+        var report = ToReport(result, stationIndex, stationIndex is { } n ? rig.Stations[n - 1].Name : null, kind == LoadModelKind.ThreeDimensional ? "3d" : "2d", rig.Plate.HasBackIron);
         if (request.Json)
         {
             JsonOutput.Write(output, report);
@@ -202,9 +189,10 @@ public static class LoadCommand
         return ExitCodes.Ok;
     }
 
-    private static LoadReport ToReport(LoadSweepResult result, int? station, string model, bool steelUnderPlate) => new(
+    private static LoadReport ToReport(LoadSweepResult result, int? station, string? stationName, string model, bool steelUnderPlate) => new(
         result.RotorId,
         station,
+        stationName,
         model,
         steelUnderPlate,
         result.GapM * 1000.0,
@@ -216,7 +204,7 @@ public static class LoadCommand
 
     private static void WriteText(LoadReport report, Rig rig, RotorDesign design, TextWriter o)
     {
-        string where = report.Station is { } s ? $" (station {s})" : "";
+        string where = report.Station is { } s ? $" (station {s}{(report.StationName is { } name ? $", {name}" : "")})" : "";
         o.WriteLine($"Rotor load: {report.Rotor}{where}, {design.Segments} segments, M = {design.SegmentsPerWavelength}, "
             + $"radii {Numbers.Format(design.InnerRadiusM * 1000, 1)}-{Numbers.Format(design.OuterRadiusM * 1000, 1)} mm");
         o.WriteLine($"  plate {rig.Plate.Material.Id}, {Numbers.Format(rig.Plate.ThicknessM * 1000, 1)} mm at {Numbers.Format(report.PlateTempC, 1)} C; "
@@ -296,7 +284,7 @@ public static class LoadCommand
     // Everything the load command was asked for.
     private sealed record LoadRequest(
         string RigPath,
-        int? Station,
+        string? Station,
         string? RotorId,
         double? GapMm,
         RpmRange? Rpm,
@@ -311,6 +299,7 @@ public static class LoadCommand
     private sealed record LoadReport(
         string Rotor,
         int? Station,
+        string? StationName,
         string Model,
         bool SteelUnderPlate,
         double GapMm,

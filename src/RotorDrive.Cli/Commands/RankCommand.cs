@@ -353,9 +353,9 @@ public static class RankCommand
             f?.TotalMassKg, f?.MaxSpeedRpm, f?.MaxMotorCurrentA, f is { StationDuties.Count: > 0 } ? f.MaxDuty : null,
             f?.PackCurrentA, f?.BusVoltageV, f?.ElectricalPowerW, f?.LiftSpecificPowerWPerN, f?.EddyPowerW, f?.RuntimeS, f?.RuntimeLimit is { } why ? JsonNames.Of(why) : null,
             f?.CurrentMarginFraction * 100, f?.DragPeakTorqueMarginFraction * 100, liftoff,
-            e.Simulation is { } sim ? new SimulationReport(sim.LiftoffTimeS, sim.StalledStations, sim.SpinupFindings, sim.MinBusVoltageV, sim.PeakPackCurrentA,
+            e.Simulation is { } sim ? new SimulationReport(sim.LiftoffTimeS, sim.StalledStations.Select(i => i + 1).ToList(), sim.SpinupFindings, sim.MinBusVoltageV, sim.PeakPackCurrentA,
                 sim.EnduranceRuntimeS, sim.EnduranceLimit, sim.EnduranceLimitText, sim.PeakWindingTempC, sim.PeakPlateTempC) : null,
-            f is null ? [] : f.StationSpeedsRadPerS.Select((w, i) => new StationReport(i, Units.RadPerSToRpm(w), f.StationMotorCurrentsA[i],
+            f is null ? [] : f.StationSpeedsRadPerS.Select((w, i) => new StationReport(i + 1, Units.RadPerSToRpm(w), f.StationMotorCurrentsA[i],
                 i < f.StationDuties.Count ? f.StationDuties[i] : null)).ToList(),
             e.Rejections.Select(x => new ReasonReport(x.Kind.Key(), x.Message)).ToList(),
             e.Cautions.Select(x => x.Message).ToList());
@@ -440,7 +440,7 @@ public static class RankCommand
         double? LiftoffTimeS, IReadOnlyList<int> StalledStations, IReadOnlyList<string> SpinupFindings, double MinBusVoltageV, double PeakPackCurrentA,
         double EnduranceRuntimeS, EnduranceLimit EnduranceLimit, string EnduranceLimitText, double PeakWindingTempC, double PeakPlateTempC);
 
-    private sealed record StationReport(int Index, double SpeedRpm, double MotorCurrentA, double? Duty);
+    private sealed record StationReport(int Station, double SpeedRpm, double MotorCurrentA, double? Duty);
 
     private sealed record WhyNotReport(string Motor, IReadOnlyList<WhyNotEntry> Combinations);
 

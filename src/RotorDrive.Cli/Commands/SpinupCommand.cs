@@ -134,6 +134,7 @@ public static class SpinupCommand
         double controllerMaxV = study.ControllerMaxVoltageV;
         var stations = spin.Stations.Select(s => new StationEntry(
             s.Index + 1,
+            rig.Stations[s.Index].Name,
             rig.Stations[s.Index].Spin == SpinDirection.Clockwise ? "cw" : "ccw",
             s.FinalSpeedRpm,
             s.Motor.PeakA,
@@ -207,7 +208,7 @@ public static class SpinupCommand
             new TableColumn("passing_a", Alignment.Right), new TableColumn("stalled", Alignment.Left));
         foreach (var s in r.Stations)
         {
-            table.AddRow(s.Station.ToString(CultureInfo.InvariantCulture), s.Spin, Numbers.Format(s.FinalSpeedRpm, 0), Numbers.Format(s.PeakMotorCurrentA, 1),
+            table.AddRow(StationText.Cell(s.Station, s.Name), s.Spin, Numbers.Format(s.FinalSpeedRpm, 0), Numbers.Format(s.PeakMotorCurrentA, 1),
                 Numbers.Format(s.CurrentLimitA, 0), Numbers.Format(s.ControllerTimeAboveContinuousS, 2), Numbers.Format(s.ControllerBurstAllowanceS, 1),
                 Numbers.Format(s.DragPeakSpeedRpm, 0), Numbers.Format(s.DragPeakTorqueNm, 2), Numbers.Format(s.PassingCurrentA, 0), s.Stalled ? "STALLED" : "no");
         }
@@ -270,6 +271,7 @@ public static class SpinupCommand
 
     private sealed record StationEntry(
         int Station,
+        string? Name,
         string Spin,
         double FinalSpeedRpm,
         double PeakMotorCurrentA,

@@ -233,7 +233,41 @@ public static class RigResolver
                 ok = false;
             }
         }
-        return (stations, ok && NoOverlap(stations, ctx));
+        return (stations, ok && NoOverlap(stations, ctx) && UniqueNames(stationDocs, ctx));
+    }
+
+    // "name" (optional): not empty and not a number, so `--station` can take either without doubt.
+    private static string? StationName(RigStationSection s, int i, Context ctx)
+    {
+        if (s.Name is null)
+        {
+            return null;
+        }
+        string name = s.Name.Trim();
+        if (name.Length == 0 || double.TryParse(name, System.Globalization.NumberStyles.Float, System.Globalization.CultureInfo.InvariantCulture, out _))
+        {
+            ctx.Report(RigSchema.StationName.JsonPath(i), Messages.BadStationName(s.Name));
+        }
+        return name;
+    }
+
+    private static bool UniqueNames(List<RigStationSection> stations, Context ctx)
+    {
+        bool ok = true;
+        for (int i = 0; i < stations.Count; i++)
+        {
+            if (stations[i].Name?.Trim() is not { Length: > 0 } name)
+            {
+                continue;
+            }
+            int first = stations.FindIndex(s => string.Equals(s.Name?.Trim(), name, StringComparison.OrdinalIgnoreCase));
+            if (first < i)
+            {
+                ctx.Report(RigSchema.StationName.JsonPath(i), Messages.DuplicateStationName(name, first + 1));
+                ok = false;
+            }
+        }
+        return ok;
     }
 
     private static Station? ResolveStation(RigStationSection s, int i, CatalogLoadResult? catalogs, Context ctx)
@@ -257,7 +291,7 @@ public static class RigResolver
         {
             return null;
         }
-        return new Station(x.Value / 1000.0, y.Value / 1000.0, spin.Value, rotor, motor, controller);
+        return new Station(x.Value / 1000.0, y.Value / 1000.0, spin.Value, rotor, motor, controller) { Name = StationName(s, i, ctx) };
     }
 
     // Rotors must not overlap: axes at least the two outer radii apart.
@@ -272,7 +306,7 @@ public static class RigResolver
                 double needed = stations[i].Rotor.OuterRadiusM + stations[j].Rotor.OuterRadiusM;
                 if (distance < needed)
                 {
-                    ctx.Report($"$.stations[{i}]", Messages.StationsOverlap(j, distance * 1000.0, needed * 1000.0));
+                    ctx.Report($"$.stations[{i}]", Messages.StationsOverlap(stations[j].Label(j), distance * 1000.0, needed * 1000.0));
                     ok = false;
                 }
             }

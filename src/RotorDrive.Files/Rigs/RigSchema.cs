@@ -154,6 +154,11 @@ public static class RigSchema
     public static readonly RigKey Stations = List<RigStationSection>("stations", true, 1, "the rotor stations; rotors must not overlap",
         d => d.Stations, (d, v) => d.Stations = v);
 
+    /// <summary>"stations[].name".</summary>
+    public static readonly RigKey StationName = Text<RigStationSection>("stations[].name", false, "name",
+        "what people call the station (\"front left\"); every output shows it beside the station's number, and `--station` accepts it",
+        s => s.Name, (s, v) => s.Name = v, rangeNote: "unique, not a number");
+
     /// <summary>"stations[].x_mm".</summary>
     public static readonly RigKey StationXMm = Num<RigStationSection>("stations[].x_mm", "mm", ValueRule.Between(-100_000, 100_000), null,
         "x forward", "rotor axis position, x (forward)", s => s.XMm, (s, v) => s.XMm = v);
@@ -269,7 +274,7 @@ public static class RigSchema
         Craft, CraftEmptyMassKg, CraftPayloadKg, CraftCgXMm, CraftCgYMm, CraftYawInertia, CraftHeaveDamping,
         Gap, GapDesignMm, GapLandedMm,
         AmbientC, GearYawFrictionNm, LoadModel,
-        Stations, StationXMm, StationYMm, StationSpin, StationRotor, StationMotor, StationController,
+        Stations, StationName, StationXMm, StationYMm, StationSpin, StationRotor, StationMotor, StationController,
         Pack, PackId, PackCount,
         Limits, LimitYawTorqueNm, LimitPlateTempC, LimitCellCutoffV, LimitUsableCapacityPct, LimitMaxDuty, LimitLiftoffTimeS,
         Tolerances,
@@ -299,8 +304,9 @@ public static class RigSchema
             RangeNote = rangeNote,
         };
 
-    private static RigKey Text<T>(string path, bool required, string label, string help, Func<T, string?> get, Action<T, string?> set)
-        => new(path, RigValueKind.Text, "", required, label, help, s => get((T)s), (s, v) => set((T)s, (string?)v));
+    private static RigKey Text<T>(string path, bool required, string label, string help, Func<T, string?> get, Action<T, string?> set,
+        string? rangeNote = null)
+        => new(path, RigValueKind.Text, "", required, label, help, s => get((T)s), (s, v) => set((T)s, (string?)v)) { RangeNote = rangeNote };
 
     private static RigKey FilePath(string key, Func<RigCatalogsSection, string?> get, Action<RigCatalogsSection, string?> set)
         => new("catalogs." + key, RigValueKind.FilePath, "", true, key, $"the {key.Replace('_', ' ')} catalog file",
