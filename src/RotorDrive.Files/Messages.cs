@@ -160,6 +160,18 @@ public static class Messages
     /// <summary>The rig file is not valid JSON.</summary>
     public static string JsonSyntax(string detail) => $"not valid JSON: {detail}";
 
+    /// <summary>A number in the rig file written with a decimal comma.</summary>
+    /// <param name="number">The number as written ("12,5").</param>
+    public static string JsonDecimalComma(string number)
+        => $"'{number}' has a decimal comma; JSON numbers take a dot as decimal separator: write {number.Replace(',', '.')}";
+
+    /// <summary>A catalog exported with semicolons between fields (a spreadsheet in a locale with decimal commas).</summary>
+    /// <param name="separator">The separator found, in words ("semicolons").</param>
+    public static string CsvWrongSeparator(string separator)
+        => $"this file has {separator} between its fields (a spreadsheet export in a locale that writes decimal commas); catalogs are "
+            + "comma-separated with a dot as decimal separator: export again as CSV with commas (for example with the spreadsheet's "
+            + "language set to English, or \"CSV (comma delimited)\" with a dot as decimal separator), or replace the separators";
+
     /// <summary>A key the rig file format does not have.</summary>
     public static string UnknownKey(string key, string? suggestion)
         => suggestion is null ? $"unknown key '{key}'" : $"unknown key '{key}' (did you mean '{suggestion}'?)";
