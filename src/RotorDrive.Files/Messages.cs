@@ -19,6 +19,9 @@ public static class Messages
     /// <summary>The file would be overwritten without permission.</summary>
     public static string FileExists() => "the file already exists; pass --force to overwrite it";
 
+    /// <summary>An output path that names a folder.</summary>
+    public static string PathIsFolder() => "this is a folder, not a file; give a file name inside it (e.g. FOLDER/result.csv)";
+
     /// <summary>Writing a file failed.</summary>
     public static string FileNotWritten(string reason) => $"cannot write the file: {reason}";
 

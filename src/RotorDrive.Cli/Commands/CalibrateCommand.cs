@@ -42,9 +42,8 @@ public static class CalibrateCommand
 
     private static int Run(string rigPath, string rotorId, string benchPath, string? outPath, bool force, bool json, TextWriter output, TextWriter error)
     {
-        if (outPath is not null && !force && File.Exists(outPath))
+        if (CommonOptions.RefusesExistingCsv("calibrate", outPath, force, error))
         {
-            error.WriteLine(new InputProblem(outPath, 0, 0, "", Messages.FileExists()).ToString());
             return ExitCodes.BadInput;
         }
         var loaded = RigInput.LoadOrReport(rigPath, error);

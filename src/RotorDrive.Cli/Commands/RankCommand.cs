@@ -25,15 +25,12 @@ public static class RankCommand
     public static Command Create(TimeProvider? clock = null)
     {
         var rig = CommonOptions.RigArgument();
-        var by = new Option<RankObjective>("--by")
-        {
-            Description = "What to rank by: runtime (longest hover), mass (lightest craft), margin (largest worst-case current margin) or score (weighted).",
-            HelpName = "runtime|mass|margin|score",
-            DefaultValueFactory = _ => RankObjective.Runtime,
-        };
+        var by = WordOption.Create("--by",
+            "What to rank by: runtime (longest hover), mass (lightest craft), margin (largest worst-case current margin) or score (weighted).",
+            RankObjective.Runtime);
         var top = new Option<int>("--top")
         {
-            Description = "How many of the best combinations to show (1 to 1000); default 10.",
+            Description = "How many of the best combinations to show (1 to 1000).",
             HelpName = "N",
             DefaultValueFactory = _ => 10,
         };
@@ -64,7 +61,7 @@ public static class RankCommand
         command.Options.Add(json);
         command.Options.Add(plot);
         command.SetAction(parse => Run(
-            new RankRequest(parse.GetValue(rig)!, parse.GetValue(by), parse.GetValue(top), parse.GetValue(whyNot), parse.GetValue(csv), parse.GetValue(force), parse.GetValue(json),
+            new RankRequest(parse.GetValue(rig)!, WordOption.Parse<RankObjective>(parse.GetValue(by)!), parse.GetValue(top), parse.GetValue(whyNot), parse.GetValue(csv), parse.GetValue(force), parse.GetValue(json),
                 new PlotRequest(parse.GetValue(plot), CommonOptions.Today(clock))),
             parse.InvocationConfiguration.Output,
             parse.InvocationConfiguration.Error));

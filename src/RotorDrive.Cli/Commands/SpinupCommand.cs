@@ -25,7 +25,7 @@ public static class SpinupCommand
         var rig = CommonOptions.RigArgument();
         var ramp = new Option<double>("--ramp-s")
         {
-            Description = "Throttle ramp time from 0 to the hover throttle, s; default 2.",
+            Description = "Throttle ramp time from 0 to the hover throttle, s (0 to 120).",
             HelpName = "T",
             DefaultValueFactory = _ => 2.0,
         };
@@ -39,14 +39,14 @@ public static class SpinupCommand
         });
         var mode = new Option<string>("--mode")
         {
-            Description = "Controller mode: duty (open-loop PWM duty) or hold (speed hold at the hover speed); default duty.",
+            Description = "Controller mode: duty (open-loop PWM duty) or hold (speed hold at the hover speed).",
             HelpName = "duty|hold",
             DefaultValueFactory = _ => "duty",
         };
         mode.AcceptOnlyFromAmong("duty", "hold");
         var soc = new Option<double>("--soc-pct")
         {
-            Description = "Pack state of charge at the start, %; default 100.",
+            Description = "Pack state of charge at the start, % (0 to 100).",
             HelpName = "S",
             DefaultValueFactory = _ => 100.0,
         };
