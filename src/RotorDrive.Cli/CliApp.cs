@@ -1,6 +1,7 @@
 using System.CommandLine;
 using System.Text.Json;
 using RotorDrive.Cli.Commands;
+using RotorDrive.Cli.Output;
 using RotorDrive.Files;
 
 namespace RotorDrive.Cli;
@@ -29,6 +30,7 @@ public static class CliApp
         root.Subcommands.Add(CalibrateCommand.Create());
         root.Subcommands.Add(ReportCommand.Create(clock));
         root.Subcommands.Add(DemoCommand.Create());
+        root.Subcommands.Add(SchemaCommand.Create());
         NumericOptions.Apply(root);
         return root;
     }
@@ -40,8 +42,29 @@ public static class CliApp
     /// <param name="clock">The clock for the date stamped on plots and reports; the system clock when null.</param>
     public static async Task<int> RunAsync(string[] args, TextWriter? output = null, TextWriter? error = null, TimeProvider? clock = null)
     {
+        ArgumentNullException.ThrowIfNull(args);
         output ??= Console.Out;
         error ??= Console.Error;
+        if (!args.Contains("--json", StringComparer.Ordinal))
+        {
+            return await RunCoreAsync(args, output, error, clock);
+        }
+        // With --json, bad input still gives a JSON document on stdout (unless the command wrote its own).
+        var probe = new OutputProbe(output);
+        var collector = new ProblemCollector(error);
+        int code = await RunCoreAsync(args, probe, collector, clock);
+        if (code == ExitCodes.BadInput && !probe.Written)
+        {
+            string command = args.FirstOrDefault(a => !a.StartsWith('-')) is { } first && BuildRoot(clock).Subcommands.Any(c => c.Name == first)
+                ? first : "rotordrive";
+            var problems = collector.Problems.Select(p => new ProblemEntry(p.File, p.Line, p.Column, p.Field, p.Message)).ToList();
+            JsonOutput.Write(output, new FailureReport(command, false, code, problems));
+        }
+        return code;
+    }
+
+    private static async Task<int> RunCoreAsync(string[] args, TextWriter output, TextWriter error, TimeProvider? clock)
+    {
         try
         {
             var parse = BuildRoot(clock).Parse(args);
@@ -49,6 +72,10 @@ public static class CliApp
             {
                 foreach (var e in parse.Errors)
                 {
+                    if (error is ProblemCollector collector)
+                    {
+                        collector.Record([ProblemCollector.OfMessage(e.Message)]);
+                    }
                     error.WriteLine($"rotordrive: {e.Message}");
                 }
                 error.WriteLine("Run 'rotordrive --help' (or 'rotordrive COMMAND --help') for usage.");
@@ -78,4 +105,9 @@ public static class CliApp
         => e is IOException or UnauthorizedAccessException or JsonException or FormatException or InvalidDataException;
 
     private static string OneLine(string message) => message.ReplaceLineEndings(" ").Trim();
+
+    /// <summary>The <c>--json</c> document of a run refused for bad input.</summary>
+    private sealed record FailureReport(string Command, bool Ok, int ExitCode, IReadOnlyList<ProblemEntry> Problems);
+
+    private sealed record ProblemEntry(string File, int Line, int Column, string Field, string Message);
 }

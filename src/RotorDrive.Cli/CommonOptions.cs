@@ -41,6 +41,11 @@ public static class CommonOptions
     /// <returns>True when the command must stop (exit code 2).</returns>
     public static bool RefusesExistingCsv(string command, string? csvPath, bool force, TextWriter error)
     {
+        if (csvPath is not null && Directory.Exists(csvPath))
+        {
+            error.WriteLine($"rotordrive {command}: error: {csvPath}: {Files.Messages.PathIsFolder()}");
+            return true;
+        }
         if (csvPath is null || force || !File.Exists(csvPath))
         {
             return false;
@@ -70,7 +75,7 @@ public static class CommonOptions
         {
             return false;
         }
-        if (Files.Plots.PlotWriter.FormatOf(plotPath) is null)
+        if (!Directory.Exists(plotPath) && Files.Plots.PlotWriter.FormatOf(plotPath) is null)
         {
             error.WriteLine($"rotordrive {command}: error: {plotPath}: {Files.Messages.PlotExtension()}");
             return true;

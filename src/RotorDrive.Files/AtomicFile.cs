@@ -32,6 +32,10 @@ public static class AtomicFile
         string? temp = null;
         try
         {
+            if (Directory.Exists(path))
+            {
+                return new InputProblem(path, 0, 0, "", Messages.PathIsFolder());
+            }
             if (!overwrite && File.Exists(path))
             {
                 return new InputProblem(path, 0, 0, "", Messages.FileExists());

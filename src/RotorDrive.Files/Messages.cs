@@ -19,6 +19,9 @@ public static class Messages
     /// <summary>The file would be overwritten without permission.</summary>
     public static string FileExists() => "the file already exists; pass --force to overwrite it";
 
+    /// <summary>An output path that names a folder.</summary>
+    public static string PathIsFolder() => "this is a folder, not a file; give a file name inside it (e.g. FOLDER/result.csv)";
+
     /// <summary>Writing a file failed.</summary>
     public static string FileNotWritten(string reason) => $"cannot write the file: {reason}";
 
@@ -160,6 +163,18 @@ public static class Messages
     /// <summary>The rig file is not valid JSON.</summary>
     public static string JsonSyntax(string detail) => $"not valid JSON: {detail}";
 
+    /// <summary>A number in the rig file written with a decimal comma.</summary>
+    /// <param name="number">The number as written ("12,5").</param>
+    public static string JsonDecimalComma(string number)
+        => $"'{number}' has a decimal comma; JSON numbers take a dot as decimal separator: write {number.Replace(',', '.')}";
+
+    /// <summary>A catalog exported with semicolons between fields (a spreadsheet in a locale with decimal commas).</summary>
+    /// <param name="separator">The separator found, in words ("semicolons").</param>
+    public static string CsvWrongSeparator(string separator)
+        => $"this file has {separator} between its fields (a spreadsheet export in a locale that writes decimal commas); catalogs are "
+            + "comma-separated with a dot as decimal separator: export again as CSV with commas (for example with the spreadsheet's "
+            + "language set to English, or \"CSV (comma delimited)\" with a dot as decimal separator), or replace the separators";
+
     /// <summary>A key the rig file format does not have.</summary>
     public static string UnknownKey(string key, string? suggestion)
         => suggestion is null ? $"unknown key '{key}'" : $"unknown key '{key}' (did you mean '{suggestion}'?)";
@@ -200,8 +215,19 @@ public static class Messages
         => $"landed gap {N(landedMm)} mm must not exceed the design gap {N(designMm)} mm";
 
     /// <summary>Two stations whose rotors overlap.</summary>
-    public static string StationsOverlap(int other, double distanceMm, double neededMm)
-        => $"this rotor overlaps the rotor of station {other}: axes {N(distanceMm)} mm apart, at least {N(neededMm)} mm needed";
+    /// <param name="other">The other station as outputs name it ("station 2 (front left)").</param>
+    /// <param name="distanceMm">Distance between the axes, mm.</param>
+    /// <param name="neededMm">The sum of the two outer radii, mm.</param>
+    public static string StationsOverlap(string other, double distanceMm, double neededMm)
+        => $"this rotor overlaps the rotor of {other}: axes {N(distanceMm)} mm apart, at least {N(neededMm)} mm needed";
+
+    /// <summary>A station name that is empty or a number (which --station would read as a station number).</summary>
+    public static string BadStationName(string name)
+        => $"'{name}' cannot name a station: use words (e.g. \"front left\"), not an empty text or a number";
+
+    /// <summary>Two stations with the same name.</summary>
+    public static string DuplicateStationName(string name, int firstNumber)
+        => $"station name '{name}' is already used by station {firstNumber} (names must differ, ignoring case)";
 
     /// <summary>A whole-number JSON value that has a fraction.</summary>
     public static string JsonNotAnInteger(double value) => $"must be a whole number; got {N(value)}";

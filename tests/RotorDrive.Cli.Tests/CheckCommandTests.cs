@@ -96,9 +96,9 @@ public sealed class CheckCommandTests : IDisposable
         string rig = PathOf("demo-rig.json");
         var (code, _, error) = await CliRunner.RunAsync("check", rig, "--json");
         Assert.Equal(ExitCodes.BadInput, code);
-        Assert.Contains($"{rig}:16:5: $.craft.payload_kgs: {Messages.UnknownKey("payload_kgs", "payload_kg")}", error);
-        Assert.Contains($"{rig}:22:16: $.ambient_c: {Messages.WrongType("a number", "a string")}", error);
-        Assert.Contains($"{rig}:14:12: $.craft.payload_kg: {Messages.MissingKey("payload_kg")}", error);
+        Assert.Contains($"{rig}:17:5: $.craft.payload_kgs: {Messages.UnknownKey("payload_kgs", "payload_kg")}", error);
+        Assert.Contains($"{rig}:23:16: $.ambient_c: {Messages.WrongType("a number", "a string")}", error);
+        Assert.Contains($"{rig}:15:12: $.craft.payload_kg: {Messages.MissingKey("payload_kg")}", error);
     }
 
     [Fact]

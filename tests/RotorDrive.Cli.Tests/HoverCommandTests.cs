@@ -44,7 +44,7 @@ public sealed class HoverCommandTests : IDisposable
         Assert.True(Math.Abs(lift - weight) <= 1e-6 * weight, $"lift {lift} vs weight {weight}");
         Assert.Empty(root.GetProperty("limits").EnumerateArray());
         Assert.True(root.GetProperty("safety").GetProperty("retainer_stress_mpa").GetDouble() > 0);
-        Assert.Contains(root.GetProperty("cautions").EnumerateArray(), c => c.GetProperty("topic").GetString() == "StrongMagnets");
+        Assert.Contains(root.GetProperty("cautions").EnumerateArray(), c => c.GetProperty("topic").GetString() == "strong_magnets");
     }
 
     [Fact]

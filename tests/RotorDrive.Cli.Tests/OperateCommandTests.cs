@@ -246,6 +246,6 @@ public sealed class OperateCommandTests : IDisposable
         Assert.Contains("--station counts from 1", zeroError);
         var (_, hover, _) = await CliRunner.RunAsync("hover", RepoPaths.DemoRig, "--json");
         using var h = System.Text.Json.JsonDocument.Parse(hover);
-        Assert.Equal([1, 2, 3, 4, 5, 6], h.RootElement.GetProperty("stations").EnumerateArray().Select(s => s.GetProperty("index").GetInt32()));
+        Assert.Equal([1, 2, 3, 4, 5, 6], h.RootElement.GetProperty("stations").EnumerateArray().Select(s => s.GetProperty("station").GetInt32()));
     }
 }

@@ -89,7 +89,7 @@ public sealed class SpinupCommandTests : IDisposable
         (code, _, _) = await CliRunner.RunAsync("spinup", Rig, "--csv", csv, "--force");
         Assert.True(code is ExitCodes.Ok or ExitCodes.LimitFindings);
         string[] lines = File.ReadAllLines(csv);
-        Assert.StartsWith("time_s,speed_rpm_0,current_a_0,", lines[0]);
+        Assert.StartsWith("time_s,speed_rpm_1,current_a_1,", lines[0]);
         foreach (string key in new[] { "gap_mm", "pack_voltage_v", "pack_current_a", "soc_pct", "winding_temp_c_5", "plate_temp_c_5" })
         {
             Assert.Contains(key, lines[0]);

@@ -42,9 +42,8 @@ public static class CalibrateCommand
 
     private static int Run(string rigPath, string rotorId, string benchPath, string? outPath, bool force, bool json, TextWriter output, TextWriter error)
     {
-        if (outPath is not null && !force && File.Exists(outPath))
+        if (CommonOptions.RefusesExistingCsv("calibrate", outPath, force, error))
         {
-            error.WriteLine(new InputProblem(outPath, 0, 0, "", Messages.FileExists()).ToString());
             return ExitCodes.BadInput;
         }
         var loaded = RigInput.LoadOrReport(rigPath, error);
@@ -118,7 +117,7 @@ public static class CalibrateCommand
         }).ToList();
         return new CalibrateReport(r.RotorId, r.Kind == CalibrationKind.SpinDown ? "spin_down" : "steady_points", benchPath, data.Sha256,
             r.Kind == CalibrationKind.SpinDown ? defaultGapM * 1000 : double.NaN, r.Accepted,
-            r.Refusal == CalibrationRefusal.None ? null : r.Refusal.ToString(), r.RefusalDetail, r.ConfidenceLevelFraction, estimates, covariance, quality, residuals);
+            r.Refusal == CalibrationRefusal.None ? null : JsonNames.Of(r.Refusal), r.RefusalDetail, r.ConfidenceLevelFraction, estimates, covariance, quality, residuals);
     }
 
     private static void WriteText(CalibrateReport r, TextWriter o)

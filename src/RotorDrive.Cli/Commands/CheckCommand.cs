@@ -62,7 +62,7 @@ public static class CheckCommand
     private static RigSummary Summarise(Rig rig)
     {
         var stations = rig.Stations.Select((s, i) => new StationEntry(
-            i, s.XM * 1000.0, s.YM * 1000.0, s.Spin == SpinDirection.Clockwise ? "cw" : "ccw",
+            i + 1, s.Name, s.XM * 1000.0, s.YM * 1000.0, s.Spin == SpinDirection.Clockwise ? "cw" : "ccw",
             s.Rotor.Id, s.Motor?.Id, s.Controller?.Id)).ToList();
         int cw = rig.Stations.Count(s => s.Spin == SpinDirection.Clockwise);
         int ccw = rig.Stations.Count - cw;
@@ -130,7 +130,7 @@ public static class CheckCommand
                 new TableColumn("spin"), new TableColumn("rotor"), new TableColumn("motor"), new TableColumn("controller"));
             foreach (var s in r.Stations)
             {
-                table.AddRow((s.Index + 1).ToString(System.Globalization.CultureInfo.InvariantCulture), Numbers.Format(s.XMm, 0), Numbers.Format(s.YMm, 0),
+                table.AddRow(StationText.Cell(s.Station, s.Name), Numbers.Format(s.XMm, 0), Numbers.Format(s.YMm, 0),
                     s.Spin, s.Rotor, s.Motor ?? "-", s.Controller ?? "-");
             }
             table.Write(o, 2);
@@ -149,7 +149,7 @@ public static class CheckCommand
 
     private sealed record PackEntry(string Id, int Count, int CellsSeries, double CapacityAh);
 
-    private sealed record StationEntry(int Index, double XMm, double YMm, string Spin, string Rotor, string? Motor, string? Controller);
+    private sealed record StationEntry(int Station, string? Name, double XMm, double YMm, string Spin, string Rotor, string? Motor, string? Controller);
 
     private sealed record RigSummary(
         string Name,

@@ -6,6 +6,7 @@ using RotorDrive.Core.Craft;
 using RotorDrive.Core.Simulation;
 using RotorDrive.Core.Thermal;
 using RotorDrive.Files;
+using RotorDrive.Files.Exports;
 using RotorDrive.Files.Plots;
 
 namespace RotorDrive.Cli.Commands;
@@ -233,14 +234,13 @@ public static class EnduranceCommand
     private static string PlateMapCsv(PlateTemperatureMap map)
     {
         var sb = new System.Text.StringBuilder("x_mm,y_mm,temperature_c\n");
-        var inv = CultureInfo.InvariantCulture;
         for (int row = 0; row < map.Count; row++)
         {
             for (int column = 0; column < map.Count; column++)
             {
-                sb.Append((map.XM(column) * 1000).ToString("0.###", inv)).Append(',')
-                    .Append((map.YM(row) * 1000).ToString("0.###", inv)).Append(',')
-                    .Append(map.At(column, row).ToString("0.####", inv)).Append('\n');
+                sb.Append(CsvNumber.Format(map.XM(column) * 1000)).Append(',')
+                    .Append(CsvNumber.Format(map.YM(row) * 1000)).Append(',')
+                    .Append(CsvNumber.Format(map.At(column, row))).Append('\n');
             }
         }
         return sb.ToString();
@@ -264,7 +264,7 @@ public static class EnduranceCommand
             error.Write("\r" + new string(' ', 40) + "\r");
         }
         var report = new SweepReport(model.Rig.Name, model.Rig.Limits.PlateTempC, rows.Select(r => new SweepRow(
-            r.MaterialId, r.ThicknessM * 1000, r.HoverExists, r.HoverPowerW, r.PlatePowerW, r.PlateLimitTimeS, r.RuntimeS, r.EndedBy.ToString(), r.HoverTimeS, r.PlateCutsHover, r.HoverExists && r.EndedBy.Passes() && !r.PlateCutsHover)).ToArray());
+            r.MaterialId, r.ThicknessM * 1000, r.HoverExists, r.HoverPowerW, r.PlatePowerW, r.PlateLimitTimeS, r.RuntimeS, JsonNames.Of(r.EndedBy), r.HoverTimeS, r.PlateCutsHover, r.HoverExists && r.EndedBy.Passes() && !r.PlateCutsHover)).ToArray());
         if (json)
         {
             JsonOutput.Write(output, report);

@@ -5,6 +5,7 @@ using RotorDrive.Core;
 using RotorDrive.Core.Craft;
 using RotorDrive.Core.Drive;
 using RotorDrive.Core.Safety;
+using RotorDrive.Files.Rigs;
 
 namespace RotorDrive.Cli.Commands;
 
@@ -18,18 +19,7 @@ public static class HoverCommand
     public static Command Create()
     {
         var rig = CommonOptions.RigArgument();
-        var gap = new Option<double?>("--gap-mm")
-        {
-            Description = "Trim at this air gap, mm; default the rig's design gap.",
-            HelpName = "G",
-        };
-        gap.Validators.Add(r =>
-        {
-            if (r.GetValueOrDefault<double?>() is { } g && !(g > 0 && g <= 200))
-            {
-                r.AddError($"--gap-mm must lie in (0, 200] mm; got {g.ToString(CultureInfo.InvariantCulture)}.");
-            }
-        });
+        var gap = RigKeyOption.Create("--gap-mm", RigSchema.GapDesignMm, "Trim at this air gap", "G");
         var duty = new Option<double?>("--common-duty")
         {
             Description = "Give every station this duty (0..1, no trim) and find the gap where the craft hovers.",
@@ -42,18 +32,7 @@ public static class HoverCommand
                 r.AddError($"--common-duty must lie in (0, 1]; got {d.ToString(CultureInfo.InvariantCulture)}.");
             }
         });
-        var payload = new Option<double?>("--payload-kg")
-        {
-            Description = "Payload, kg, instead of the rig's craft.payload_kg.",
-            HelpName = "P",
-        };
-        payload.Validators.Add(r =>
-        {
-            if (r.GetValueOrDefault<double?>() is { } p && !(p >= 0 && p <= 1e5))
-            {
-                r.AddError($"--payload-kg must lie in [0, 100000] kg; got {p.ToString(CultureInfo.InvariantCulture)}.");
-            }
-        });
+        var payload = RigKeyOption.Create("--payload-kg", RigSchema.CraftPayloadKg, "Payload", "P");
         var json = CommonOptions.Json();
         var command = new Command("hover", "Trimmed hover of the whole rig: duties, speeds, lift, currents, margins, heave, rotor safety.");
         command.Arguments.Add(rig);
@@ -104,8 +83,8 @@ public static class HoverCommand
         var h = review.Hover;
         var safety = review.Safety;
         var stations = h.Stations.Select(s => new StationEntry(
-            s.Index + 1, s.Spin == SpinDirection.Clockwise ? "cw" : "ccw", s.Duty, s.SpeedRpm, s.LiftN, s.ShaftTorqueNm, s.ReactionTorqueNm,
-            s.MotorCurrentA, s.BusCurrentA, s.EddyPowerW, s.ElectricalPowerW, s.LiftSpecificPowerWPerN, s.Regime.ToString(), s.Stable,
+            s.Index + 1, model.Rig.Stations[s.Index].Name, s.Spin == SpinDirection.Clockwise ? "cw" : "ccw", s.Duty, s.SpeedRpm, s.LiftN, s.ShaftTorqueNm, s.ReactionTorqueNm,
+            s.MotorCurrentA, s.BusCurrentA, s.EddyPowerW, s.ElectricalPowerW, s.LiftSpecificPowerWPerN, JsonNames.Of(s.Regime), s.Stable,
             s.Margins.Select(Margin).ToList())).ToList();
         var hoverRotors = safety.AtHover;
         var worst = hoverRotors.Where(r => r.HoopStressPa is not null).OrderByDescending(r => r.HoopStressPa).FirstOrDefault();
@@ -117,17 +96,17 @@ public static class HoverCommand
                 worstMax is null ? safety.AtMaxRpm.Select(r => Units.RadPerSToRpm(r.SpeedRadPerS)).DefaultIfEmpty(double.NaN).Max() : Units.RadPerSToRpm(worstMax.SpeedRadPerS),
                 safety.AtMaxRpm.Select(r => r.RimSpeedMPerS).DefaultIfEmpty(double.NaN).Max(),
                 worstMax?.HoopStressPa / 1e6, worstMax?.RingOwnStressPa / 1e6, safety.MinMaxRpmMargin),
-            hoverRotors.Select(r => r.Assessment.ToString()).Distinct().ToList(),
+            hoverRotors.Select(r => JsonNames.Of(r.Assessment)).Distinct().ToList(),
             safety.MagnetNote);
         var limits = review.Findings.Select(f => new LimitEntry(f.Limit, f.Station + 1, f.Message)).ToList();
         bool pass = review.Pass;
         return new HoverReport(
-            model.Rig.Name, h.Mode == HoverMode.Trimmed ? "trimmed" : "common_duty", h.Status.ToString(), pass,
+            model.Rig.Name, h.Mode == HoverMode.Trimmed ? "trimmed" : "common_duty", JsonNames.Of(h.Status), pass,
             h.GapM * 1000, h.MassKg, model.PayloadKg, h.WeightN, h.BusVoltageV, h.PackCurrentA, h.ElectricalPowerW, h.PlatePowerW,
             h.Balanced ? h.LiftSpecificPowerWPerN : double.NaN, h.HeaveStiffnessNPerM / 1000, h.Balanced ? h.HeaveFrequencyHz : double.NaN,
             new ResidualEntry(h.ForceResidualRatio, h.PitchResidualRatio, h.RollResidualRatio), h.YawTorqueNm,
             stations, h.PackMargins.Select(Margin).ToList(), limits, review.MaxPayloadKg, safetyEntry,
-            safety.Cautions.Select(c => new CautionEntry(c.Topic.ToString(), c.Level.ToString(), c.Title, c.Text, c.Reason)).ToList(),
+            safety.Cautions.Select(c => new CautionEntry(JsonNames.Of(c.Topic), JsonNames.Of(c.Level), c.Title, c.Text, c.Reason)).ToList(),
             h.Iterations);
     }
 
@@ -154,7 +133,7 @@ public static class HoverCommand
             foreach (var s in r.Stations)
             {
                 var least = s.Margins.OrderBy(m => m.Margin).First();
-                table.AddRow(s.Index.ToString(CultureInfo.InvariantCulture), s.Spin, Numbers.Format(s.Duty, 3), Numbers.Format(s.SpeedRpm, 0),
+                table.AddRow(StationText.Cell(s.Station, s.Name), s.Spin, Numbers.Format(s.Duty, 3), Numbers.Format(s.SpeedRpm, 0),
                     Numbers.Format(s.LiftN, 1), Numbers.Format(s.ShaftTorqueNm, 2), Numbers.Format(s.MotorCurrentA, 1), Numbers.Format(s.BusCurrentA, 1),
                     Numbers.Format(s.EddyPowerW, 0), Numbers.Format(s.LiftSpecificPowerWPerN, 2), s.Stable ? "yes" : "NO",
                     $"{least.Limit} {Numbers.Format(least.Margin * 100, 0)} %");
@@ -210,7 +189,7 @@ public static class HoverCommand
     private sealed record ResidualEntry(double Force, double Pitch, double Roll);
 
     private sealed record StationEntry(
-        int Index, string Spin, double Duty, double SpeedRpm, double LiftN, double ShaftTorqueNm, double ReactionTorqueNm,
+        int Station, string? Name, string Spin, double Duty, double SpeedRpm, double LiftN, double ShaftTorqueNm, double ReactionTorqueNm,
         double MotorCurrentA, double BusCurrentA, double EddyPowerW, double ElectricalPowerW, double LiftSpecificPowerWPerN,
         string Regime, bool Stable, IReadOnlyList<MarginEntry> Margins);
 

@@ -7,6 +7,7 @@ using RotorDrive.Core.Craft;
 using RotorDrive.Core.Loads;
 using RotorDrive.Core.Magnetics;
 using RotorDrive.Core.Safety;
+using RotorDrive.Files.Rigs;
 using RotorDrive.Files.Plots;
 
 namespace RotorDrive.Cli.Commands;
@@ -26,53 +27,20 @@ public static class LoadCommand
     public static Command Create(TimeProvider? clock = null)
     {
         var rig = CommonOptions.RigArgument();
-        var station = new Option<int?>("--station")
-        {
-            Description = "Station whose rotor to use, counted from 1 as listed by 'check'; default 1.",
-            HelpName = "N",
-        };
-        station.Validators.Add(r =>
-        {
-            if (r.GetValueOrDefault<int?>() is < 1)
-            {
-                r.AddError("--station counts from 1.");
-            }
-        });
+        var station = StationOption.Create("Station whose rotor to use");
         var rotor = new Option<string?>("--rotor")
         {
             Description = "Rotor design id from the rotors catalog (instead of a station's rotor).",
             HelpName = "ID",
         };
-        var gap = new Option<double?>("--gap-mm")
-        {
-            Description = "Air gap between magnet face and plate, mm; default the rig's design gap.",
-            HelpName = "G",
-        };
-        gap.Validators.Add(r =>
-        {
-            if (r.GetValueOrDefault<double?>() is { } g && !(g > 0 && g <= 200))
-            {
-                r.AddError($"--gap-mm must lie in (0, 200] mm; got {g.ToString(CultureInfo.InvariantCulture)}.");
-            }
-        });
+        var gap = RigKeyOption.Create("--gap-mm", RigSchema.GapDesignMm, "Air gap between magnet face and plate", "G");
         var rpm = new Option<RpmRange?>("--rpm")
         {
             Description = "Speeds FROM:TO:STEP in rpm (both ends included); default 0 to the rotor's max_rpm in 25 steps.",
             HelpName = "FROM:TO:STEP",
             CustomParser = ParseRpm,
         };
-        var plateTemp = new Option<double?>("--plate-temp-c")
-        {
-            Description = "Plate temperature, C; default the rig's plate temperature.",
-            HelpName = "T",
-        };
-        plateTemp.Validators.Add(r =>
-        {
-            if (r.GetValueOrDefault<double?>() is { } t && !(t >= -40 && t <= 400))
-            {
-                r.AddError($"--plate-temp-c must lie in [-40, 400] C; got {t.ToString(CultureInfo.InvariantCulture)}.");
-            }
-        });
+        var plateTemp = RigKeyOption.Create("--plate-temp-c", RigSchema.PlateTemperatureC, "Plate temperature", "T");
         var noEnd = new Option<bool>("--no-end-correction")
         {
             Description = "With the 2-D model: leave out the Russell-Norsworthy finite-width correction (implies --model 2d).",
@@ -154,10 +122,8 @@ public static class LoadCommand
         }
         else
         {
-            int number = request.Station ?? 1;
-            if (number > rig.Stations.Count)
+            if (StationOption.Find(rig, request.Station, "load", error) is not { } number)
             {
-                error.WriteLine($"rotordrive load: error: --station {number}: the rig has {rig.Stations.Count} station(s), numbered 1 to {rig.Stations.Count}.");
                 return ExitCodes.BadInput;
             }
             stationIndex = number;
@@ -205,7 +171,7 @@ public static class LoadCommand
         LoadSweepResult result = LoadSweep.Run(table, design.Id, endCorrection, gapM, plateTempC, magnetTempC, speeds, topSpeed);
 
         double? standstillPull = rig.Plate.HasBackIron ? -table.Evaluate(0.0, gapM, plateTempC, magnetTempC).LiftN : null;
-        var report = ToReport(result, stationIndex, kind == LoadModelKind.ThreeDimensional ? "3d" : "2d", standstillPull);
+        var report = ToReport(result, stationIndex, stationIndex is { } n ? rig.Stations[n - 1].Name : null, kind == LoadModelKind.ThreeDimensional ? "3d" : "2d", standstillPull);
         if (request.Json)
         {
             JsonOutput.Write(output, report);
@@ -225,9 +191,10 @@ public static class LoadCommand
         return ExitCodes.Ok;
     }
 
-    private static LoadReport ToReport(LoadSweepResult result, int? station, string model, double? standstillPullN) => new(
+    private static LoadReport ToReport(LoadSweepResult result, int? station, string? stationName, string model, double? standstillPullN) => new(
         result.RotorId,
         station,
+        stationName,
         model,
         standstillPullN is not null,
         standstillPullN,
@@ -240,7 +207,7 @@ public static class LoadCommand
 
     private static void WriteText(LoadReport report, Rig rig, RotorDesign design, TextWriter o)
     {
-        string where = report.Station is { } s ? $" (station {s})" : "";
+        string where = report.Station is { } s ? $" (station {s}{(report.StationName is { } name ? $", {name}" : "")})" : "";
         o.WriteLine($"Rotor load: {report.Rotor}{where}, {design.Segments} segments, M = {design.SegmentsPerWavelength}, "
             + $"radii {Numbers.Format(design.InnerRadiusM * 1000, 1)}-{Numbers.Format(design.OuterRadiusM * 1000, 1)} mm");
         o.WriteLine($"  plate {rig.Plate.Material.Id}, {Numbers.Format(rig.Plate.ThicknessM * 1000, 1)} mm at {Numbers.Format(report.PlateTempC, 1)} C; "
@@ -319,7 +286,7 @@ public static class LoadCommand
     // Everything the load command was asked for.
     private sealed record LoadRequest(
         string RigPath,
-        int? Station,
+        string? Station,
         string? RotorId,
         double? GapMm,
         RpmRange? Rpm,
@@ -334,6 +301,7 @@ public static class LoadCommand
     private sealed record LoadReport(
         string Rotor,
         int? Station,
+        string? StationName,
         string Model,
         bool SteelUnderPlate,
         double? StandstillPullN,

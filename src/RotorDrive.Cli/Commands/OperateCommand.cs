@@ -6,6 +6,7 @@ using RotorDrive.Core;
 using RotorDrive.Core.Craft;
 using RotorDrive.Core.Drive;
 using RotorDrive.Core.Loads;
+using RotorDrive.Files.Rigs;
 using RotorDrive.Files.Plots;
 using RotorDrive.Files;
 
@@ -25,18 +26,13 @@ public static class OperateCommand
     {
         var rig = CommonOptions.RigArgument();
         var json = CommonOptions.Json();
-        var station = new Option<int>("--station")
-        {
-            Description = "Station number, counted from 1 as listed by 'check'.",
-            HelpName = "N",
-            DefaultValueFactory = _ => 1,
-        };
+        var station = StationOption.Create("The station");
         var motor = new Option<string?>("--motor") { Description = "Motor id from the motors catalog, instead of the station's.", HelpName = "ID" };
         var controller = new Option<string?>("--controller") { Description = "Controller id from the controllers catalog, instead of the station's.", HelpName = "ID" };
         var pack = new Option<string?>("--pack") { Description = "Pack id from the packs catalog, instead of the rig's (same pack count).", HelpName = "ID" };
         var duty = new Option<double?>("--duty") { Description = "Open-loop duty, 0 to 1. Default: the rig's limits.max_duty (the highest duty it allows), unless --hold-rpm is given.", HelpName = "D" };
         var hold = new Option<double?>("--hold-rpm") { Description = "Speed to hold, rpm (> 0): the controller sets the duty within its limits.", HelpName = "R" };
-        var gap = new Option<double?>("--gap-mm") { Description = "Air gap, mm, in (0, 200]. Default: the rig's design gap.", HelpName = "G" };
+        var gap = RigKeyOption.Create("--gap-mm", RigSchema.GapDesignMm, "Air gap", "G");
         var soc = new Option<double>("--soc-pct")
         {
             Description = "Pack state of charge, % (0 to 100).",
@@ -47,10 +43,8 @@ public static class OperateCommand
         var force = CommonOptions.Force();
         var sweep = new Option<bool>("--sweep") { Description = "Table of the point reached from rest over duty 0 to 1 in steps of 0.05." };
 
-        station.Validators.Add(r => Check(r, r.GetValueOrDefault<int>() >= 1, $"--station counts from 1; got {r.GetValueOrDefault<int>()}."));
         duty.Validators.Add(r => Check(r, r.GetValueOrDefault<double?>() is not { } d || (d >= 0 && d <= 1), $"--duty must lie in [0, 1]; got {Show(r.GetValueOrDefault<double?>())}."));
         hold.Validators.Add(r => Check(r, r.GetValueOrDefault<double?>() is not { } h || (double.IsFinite(h) && h > 0), $"--hold-rpm must be a number greater than 0; got {Show(r.GetValueOrDefault<double?>())}."));
-        gap.Validators.Add(r => Check(r, r.GetValueOrDefault<double?>() is not { } g || (g > 0 && g <= 200), $"--gap-mm must lie in (0, 200] mm; got {Show(r.GetValueOrDefault<double?>())}."));
         soc.Validators.Add(r => Check(r, r.GetValueOrDefault<double>() is >= 0 and <= 100, $"--soc-pct must lie in [0, 100] %; got {Show(r.GetValueOrDefault<double>())}."));
 
         var command = new Command("operate", "Find every steady operating point of one rotor on its motor, controller and pack, with stability and limit margins.");
@@ -96,7 +90,7 @@ public static class OperateCommand
     /// <summary>What the user asked for.</summary>
     public sealed record OperateRequest(
         string RigPath,
-        int Station,
+        string? Station,
         string? MotorId,
         string? ControllerId,
         string? PackId,
@@ -143,7 +137,7 @@ public static class OperateCommand
             {
                 var map = TorqueSpeedMap.Compute(drive, conditions, PlotDuties);
                 var crossings = map.Curves.SelectMany(c => c.Equilibria).ToList();
-                var figure = OperatePlot.Build(map, crossings, $"station {request.Station}, duty swept", rig.Name, request.Today);
+                var figure = OperatePlot.Build(map, crossings, $"{setup.Station.Label(setup.Index - 1)}, duty swept", rig.Name, request.Today);
                 if (!CommonOptions.WritePlot("operate", figure, sweepPlot, request.Force, error))
                 {
                     return ExitCodes.BadInput;
@@ -164,8 +158,8 @@ public static class OperateCommand
                 : result.Equilibria.Select(e => e.Duty).Where(d => d > 0).Distinct().DefaultIfEmpty(rig.Limits.MaxDuty).ToArray();
             var map = TorqueSpeedMap.Compute(drive, conditions, duties);
             string what = throttle.Kind == ThrottleKind.Duty
-                ? $"station {request.Station} at duty {throttle.Value.ToString("0.###", Ci)}"
-                : $"station {request.Station} holding {Units.RadPerSToRpm(throttle.Value).ToString("0", Ci)} rpm";
+                ? $"{setup.Station.Label(setup.Index - 1)} at duty {throttle.Value.ToString("0.###", Ci)}"
+                : $"{setup.Station.Label(setup.Index - 1)} holding {Units.RadPerSToRpm(throttle.Value).ToString("0", Ci)} rpm";
             if (!CommonOptions.WritePlot("operate", OperatePlot.Build(map, result.Equilibria, what, rig.Name, request.Today), plotPath, request.Force, error))
             {
                 return ExitCodes.BadInput;
@@ -192,26 +186,25 @@ public static class OperateCommand
     private static bool TryResolve(OperateRequest request, Rig rig, PartsCatalog catalog, TextWriter error, out Setup setup)
     {
         setup = null!;
-        if (request.Station > rig.Stations.Count)
+        if (StationOption.Find(rig, request.Station, "operate", error) is not { } number)
         {
-            error.WriteLine($"rotordrive: error: --station {request.Station}: the rig has {rig.Stations.Count} station(s), numbered 1 to {rig.Stations.Count}");
             return false;
         }
-        var station = rig.Stations[request.Station - 1];
+        var station = rig.Stations[number - 1];
         var motor = request.MotorId is { } mid ? Find(catalog.Motors, m => m.Id, mid) : station.Motor;
         var controller = request.ControllerId is { } cid ? Find(catalog.Controllers, c => c.Id, cid) : station.Controller;
         bool ok = true;
         if (motor is null)
         {
             error.WriteLine(request.MotorId is null
-                ? $"rotordrive: error: station {request.Station} has no motor assigned; name one with --motor ID"
+                ? $"rotordrive: error: {station.Label(number - 1)} has no motor assigned; name one with --motor ID"
                 : $"rotordrive: error: --motor {request.MotorId}: no such id in the motors catalog");
             ok = false;
         }
         if (controller is null)
         {
             error.WriteLine(request.ControllerId is null
-                ? $"rotordrive: error: station {request.Station} has no controller assigned; name one with --controller ID"
+                ? $"rotordrive: error: {station.Label(number - 1)} has no controller assigned; name one with --controller ID"
                 : $"rotordrive: error: --controller {request.ControllerId}: no such id in the controllers catalog");
             ok = false;
         }
@@ -244,7 +237,7 @@ public static class OperateCommand
         {
             return false;
         }
-        setup = new Setup(request.Station, station, new Drivetrain(motor!, controller!), packs!);
+        setup = new Setup(number, station, new Drivetrain(motor!, controller!), packs!);
         return true;
     }
 
@@ -283,6 +276,7 @@ public static class OperateCommand
         return new OperateReport(
             request.RigPath,
             setup.Index,
+            setup.Station.Name,
             setup.Station.Spin == SpinDirection.Clockwise ? "cw" : "ccw",
             setup.Station.Rotor.Id,
             motor.Id,
@@ -297,7 +291,7 @@ public static class OperateCommand
             sweep is null ? new ThrottleEntry(result.Throttle.Kind == ThrottleKind.Duty ? "duty" : "hold", result.Throttle.Kind == ThrottleKind.Duty ? result.Throttle.Value : null, result.Throttle.Kind == ThrottleKind.HoldSpeed ? request.HoldRpm : null) : null,
             result.HoldMet,
             result.HoldStoppedBy is { } by ? LimitWords(by) : null,
-            result.Findings.Select(f => new FindingEntry(Snake(f.Kind.ToString()), f.Severity == FindingSeverity.Error ? "error" : "warning", f.Message)).ToList(),
+            result.Findings.Select(f => new FindingEntry(JsonNames.Of(f.Kind), f.Severity == FindingSeverity.Error ? "error" : "warning", f.Message)).ToList(),
             sweep is null ? equilibria : [],
             reached is null || sweep is not null ? null : result.Equilibria.ToList().IndexOf(reached) + 1,
             sweep?.Select(r => new SweepEntry(r.Throttle.Value, r.Equilibria.Count, r.ReachedFromRest is { } p ? Entry(r.Equilibria.ToList().IndexOf(p) + 1, p) : null)).ToList(),
@@ -306,11 +300,11 @@ public static class OperateCommand
 
     private static EquilibriumEntry Entry(int index, OperatingPoint e) => new(
         index,
-        Snake(e.Kind.ToString()),
+        JsonNames.Of(e.Kind),
         e.SpeedRpm,
         e.Stable,
         e.StabilitySlopeNmPerRadPerS,
-        Snake(e.Drive.Regime.ToString()),
+        JsonNames.Of(e.Drive.Regime),
         e.Duty,
         e.MotorCurrentA,
         e.MotorVoltageV,
@@ -329,11 +323,8 @@ public static class OperateCommand
     {
         DriveRegime.CurrentLimit => "controller current limit",
         DriveRegime.MaxDuty => "max duty (pack voltage)",
-        _ => Snake(regime.ToString()).Replace('_', ' '),
+        _ => JsonNames.Of(regime).Replace('_', ' '),
     };
-
-    private static string Snake(string pascal)
-        => string.Concat(pascal.Select((c, i) => char.IsUpper(c) && i > 0 ? "_" + char.ToLowerInvariant(c) : char.ToLowerInvariant(c).ToString()));
 
     private static void Write(OperateRequest request, OperateReport report, TextWriter o)
     {
@@ -343,7 +334,7 @@ public static class OperateCommand
             return;
         }
         o.WriteLine($"Rig file: {report.RigFile}");
-        o.WriteLine($"Station {report.Station} ({report.Spin}), rotor {report.Rotor}: motor {report.Motor}, controller {report.Controller} "
+        o.WriteLine($"Station {report.Station}{(report.StationName is { } name ? $" ({name})" : "")} ({report.Spin}), rotor {report.Rotor}: motor {report.Motor}, controller {report.Controller} "
             + $"(current limit {Numbers.Format(report.CurrentLimitA, 1)} A), packs {report.PackCount} x {report.Pack} ({report.CellsSeries}S)");
         o.WriteLine($"Gap {Numbers.Format(report.GapMm, 1)} mm, state of charge {Numbers.Format(report.SocPct, 0)} %, "
             + $"open-circuit {Numbers.Format(report.OpenCircuitVoltageV, 2)} V; windings and magnets at ambient, braking off");
@@ -468,6 +459,7 @@ public static class OperateCommand
     private sealed record OperateReport(
         string RigFile,
         int Station,
+        string? StationName,
         string Spin,
         string Rotor,
         string Motor,

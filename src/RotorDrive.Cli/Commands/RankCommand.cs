@@ -8,6 +8,7 @@ using RotorDrive.Core.Craft;
 using RotorDrive.Core.Simulation;
 using RotorDrive.Core.Studies.Ranking;
 using RotorDrive.Files;
+using RotorDrive.Files.Exports;
 using RotorDrive.Files.Plots;
 
 namespace RotorDrive.Cli.Commands;
@@ -24,15 +25,12 @@ public static class RankCommand
     public static Command Create(TimeProvider? clock = null)
     {
         var rig = CommonOptions.RigArgument();
-        var by = new Option<RankObjective>("--by")
-        {
-            Description = "What to rank by: runtime (longest hover), mass (lightest craft), margin (largest worst-case current margin) or score (weighted).",
-            HelpName = "runtime|mass|margin|score",
-            DefaultValueFactory = _ => RankObjective.Runtime,
-        };
+        var by = WordOption.Create("--by",
+            "What to rank by: runtime (longest hover), mass (lightest craft), margin (largest worst-case current margin) or score (weighted).",
+            RankObjective.Runtime);
         var top = new Option<int>("--top")
         {
-            Description = "How many of the best combinations to show (1 to 1000); default 10.",
+            Description = "How many of the best combinations to show (1 to 1000).",
             HelpName = "N",
             DefaultValueFactory = _ => 10,
         };
@@ -63,7 +61,7 @@ public static class RankCommand
         command.Options.Add(json);
         command.Options.Add(plot);
         command.SetAction(parse => Run(
-            new RankRequest(parse.GetValue(rig)!, parse.GetValue(by), parse.GetValue(top), parse.GetValue(whyNot), parse.GetValue(csv), parse.GetValue(force), parse.GetValue(json),
+            new RankRequest(parse.GetValue(rig)!, WordOption.Parse<RankObjective>(parse.GetValue(by)!), parse.GetValue(top), parse.GetValue(whyNot), parse.GetValue(csv), parse.GetValue(force), parse.GetValue(json),
                 new PlotRequest(parse.GetValue(plot), CommonOptions.Today(clock))),
             parse.InvocationConfiguration.Output,
             parse.InvocationConfiguration.Error));
@@ -291,7 +289,7 @@ public static class RankCommand
         return (LimitKey(limit).Replace('_', ' '), sims.Min(s => s!.EnduranceRuntimeS), sims.Max(s => s!.EnduranceRuntimeS));
     }
 
-    private static string LimitKey(EnduranceLimit limit) => JsonNamingPolicy.SnakeCaseLower.ConvertName(limit.ToString());
+    private static string LimitKey(EnduranceLimit limit) => JsonNames.Of(limit);
 
     private static string Csv(RankStudy study, RankResult result, HashSet<int> pareto)
     {
@@ -305,13 +303,13 @@ public static class RankCommand
             var f = e.Figures!;
             sb.Append(string.Join(",",
                 (i + 1).ToString(ci), pareto.Contains(i + 1) ? "yes" : "no", CsvText(e.MotorId), CsvText(e.ControllerId), CsvText(e.PackId),
-                e.Candidate.PackCount.ToString(ci), result.Scores[i].ToString("R", ci), f.TotalMassKg.ToString("R", ci),
-                f.MaxSpeedRpm.ToString("0.###", ci), f.MaxMotorCurrentA.ToString("0.####", ci), f.MaxDuty.ToString("0.#####", ci),
-                f.PackCurrentA.ToString("0.####", ci), f.RuntimeS.ToString("0.###", ci), CsvText(f.RuntimeLimit),
-                f.CurrentMarginFraction is { } m ? (m * 100).ToString("0.####", ci) : "",
-                f.DragPeakTorqueMarginFraction is { } d ? (d * 100).ToString("0.###", ci) : "",
-                shortlist.GetValueOrDefault(i + 1) is { LiftoffTimeS: { } lift } ? lift.ToString("0.###", ci) : "",
-                shortlist.GetValueOrDefault(i + 1) is { } sim ? sim.EnduranceRuntimeS.ToString("0.###", ci) : "",
+                e.Candidate.PackCount.ToString(ci), CsvNumber.Format(result.Scores[i]), CsvNumber.Format(f.TotalMassKg),
+                CsvNumber.Format(f.MaxSpeedRpm), CsvNumber.Format(f.MaxMotorCurrentA), CsvNumber.Format(f.MaxDuty),
+                CsvNumber.Format(f.PackCurrentA), CsvNumber.Format(f.RuntimeS), CsvText(JsonNames.Of(f.RuntimeLimit)),
+                CsvNumber.Format(f.CurrentMarginFraction * 100),
+                CsvNumber.Format(f.DragPeakTorqueMarginFraction * 100),
+                CsvNumber.Format(shortlist.GetValueOrDefault(i + 1)?.LiftoffTimeS),
+                CsvNumber.Format(shortlist.GetValueOrDefault(i + 1)?.EnduranceRuntimeS),
                 shortlist.GetValueOrDefault(i + 1) is { } sim2 ? LimitKey(sim2.EnduranceLimit) : ""));
             sb.Append('\n');
         }
@@ -354,11 +352,11 @@ public static class RankCommand
         return new EntryReport(
             rank, e.MotorId, e.ControllerId, e.PackId, e.Candidate.PackCount, e.Accepted, pareto, score,
             f?.TotalMassKg, f?.MaxSpeedRpm, f?.MaxMotorCurrentA, f is { StationDuties.Count: > 0 } ? f.MaxDuty : null,
-            f?.PackCurrentA, f?.BusVoltageV, f?.ElectricalPowerW, f?.LiftSpecificPowerWPerN, f?.EddyPowerW, f?.RuntimeS, f?.RuntimeLimit,
+            f?.PackCurrentA, f?.BusVoltageV, f?.ElectricalPowerW, f?.LiftSpecificPowerWPerN, f?.EddyPowerW, f?.RuntimeS, f?.RuntimeLimit is { } why ? JsonNames.Of(why) : null,
             f?.CurrentMarginFraction * 100, f?.DragPeakTorqueMarginFraction * 100, liftoff,
-            e.Simulation is { } sim ? new SimulationReport(sim.LiftoffTimeS, sim.StalledStations, sim.SpinupFindings, sim.HoverFindings, sim.MinBusVoltageV, sim.PeakPackCurrentA,
+            e.Simulation is { } sim ? new SimulationReport(sim.LiftoffTimeS, sim.StalledStations.Select(i => i + 1).ToList(), sim.SpinupFindings, sim.HoverFindings, sim.MinBusVoltageV, sim.PeakPackCurrentA,
                 sim.EnduranceRuntimeS, sim.EnduranceLimit, sim.EnduranceLimitText, sim.PeakWindingTempC, sim.PeakPlateTempC) : null,
-            f is null ? [] : f.StationSpeedsRadPerS.Select((w, i) => new StationReport(i, Units.RadPerSToRpm(w), f.StationMotorCurrentsA[i],
+            f is null ? [] : f.StationSpeedsRadPerS.Select((w, i) => new StationReport(i + 1, Units.RadPerSToRpm(w), f.StationMotorCurrentsA[i],
                 i < f.StationDuties.Count ? f.StationDuties[i] : null)).ToList(),
             e.Rejections.Select(x => new ReasonReport(x.Kind.Key(), x.Message)).ToList(),
             e.Cautions.Select(x => x.Message).ToList());
@@ -444,7 +442,7 @@ public static class RankCommand
         double MinBusVoltageV, double PeakPackCurrentA,
         double EnduranceRuntimeS, EnduranceLimit EnduranceLimit, string EnduranceLimitText, double PeakWindingTempC, double PeakPlateTempC);
 
-    private sealed record StationReport(int Index, double SpeedRpm, double MotorCurrentA, double? Duty);
+    private sealed record StationReport(int Station, double SpeedRpm, double MotorCurrentA, double? Duty);
 
     private sealed record WhyNotReport(string Motor, IReadOnlyList<WhyNotEntry> Combinations);
 

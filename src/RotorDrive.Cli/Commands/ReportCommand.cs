@@ -68,9 +68,8 @@ public static class ReportCommand
     private static async Task<int> RunAsync(string rigPath, string outputPath, int? stressSamples, bool force, string commandLine, DateOnly today,
         TextWriter error, CancellationToken cancellationToken)
     {
-        if (!force && File.Exists(outputPath))
+        if (CommonOptions.RefusesExistingCsv("report", outputPath, force, error))
         {
-            error.WriteLine($"rotordrive report: error: {outputPath}: {Messages.FileExists()}");
             return ExitCodes.BadInput;
         }
         var loaded = RigInput.LoadOrReport(rigPath, error);

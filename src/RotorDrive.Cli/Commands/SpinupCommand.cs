@@ -25,7 +25,7 @@ public static class SpinupCommand
         var rig = CommonOptions.RigArgument();
         var ramp = new Option<double>("--ramp-s")
         {
-            Description = "Throttle ramp time from 0 to the hover throttle, s; default 2.",
+            Description = "Throttle ramp time from 0 to the hover throttle, s (0 to 120).",
             HelpName = "T",
             DefaultValueFactory = _ => 2.0,
         };
@@ -39,14 +39,14 @@ public static class SpinupCommand
         });
         var mode = new Option<string>("--mode")
         {
-            Description = "Controller mode: duty (open-loop PWM duty) or hold (speed hold at the hover speed); default duty.",
+            Description = "Controller mode: duty (open-loop PWM duty) or hold (speed hold at the hover speed).",
             HelpName = "duty|hold",
             DefaultValueFactory = _ => "duty",
         };
         mode.AcceptOnlyFromAmong("duty", "hold");
         var soc = new Option<double>("--soc-pct")
         {
-            Description = "Pack state of charge at the start, %; default 100.",
+            Description = "Pack state of charge at the start, % (0 to 100).",
             HelpName = "S",
             DefaultValueFactory = _ => 100.0,
         };
@@ -134,6 +134,7 @@ public static class SpinupCommand
         double controllerMaxV = study.ControllerMaxVoltageV;
         var stations = spin.Stations.Select(s => new StationEntry(
             s.Index + 1,
+            rig.Stations[s.Index].Name,
             rig.Stations[s.Index].Spin == SpinDirection.Clockwise ? "cw" : "ccw",
             s.FinalSpeedRpm,
             s.Motor.PeakA,
@@ -207,7 +208,7 @@ public static class SpinupCommand
             new TableColumn("passing_a", Alignment.Right), new TableColumn("stalled", Alignment.Left));
         foreach (var s in r.Stations)
         {
-            table.AddRow(s.Station.ToString(CultureInfo.InvariantCulture), s.Spin, Numbers.Format(s.FinalSpeedRpm, 0), Numbers.Format(s.PeakMotorCurrentA, 1),
+            table.AddRow(StationText.Cell(s.Station, s.Name), s.Spin, Numbers.Format(s.FinalSpeedRpm, 0), Numbers.Format(s.PeakMotorCurrentA, 1),
                 Numbers.Format(s.CurrentLimitA, 0), Numbers.Format(s.ControllerTimeAboveContinuousS, 2), Numbers.Format(s.ControllerBurstAllowanceS, 1),
                 Numbers.Format(s.DragPeakSpeedRpm, 0), Numbers.Format(s.DragPeakTorqueNm, 2), Numbers.Format(s.PassingCurrentA, 0), s.Stalled ? "STALLED" : "no");
         }
@@ -270,6 +271,7 @@ public static class SpinupCommand
 
     private sealed record StationEntry(
         int Station,
+        string? Name,
         string Spin,
         double FinalSpeedRpm,
         double PeakMotorCurrentA,

@@ -30,7 +30,7 @@ public static class StressCommand
     public static Command Create(TimeProvider? clock = null)
     {
         var rig = CommonOptions.RigArgument();
-        var samples = new Option<int>("--samples") { Description = "Number of samples; default 2000.", HelpName = "N", DefaultValueFactory = _ => DefaultSamples };
+        var samples = new Option<int>("--samples") { Description = "Number of samples.", HelpName = "N", DefaultValueFactory = _ => DefaultSamples };
         samples.Validators.Add(r =>
         {
             if (r.GetValueOrDefault<int>() is < 1 or > 10_000_000)
@@ -38,7 +38,7 @@ public static class StressCommand
                 r.AddError("--samples must lie in 1..10000000.");
             }
         });
-        var seed = new Option<int>("--seed") { Description = "The study's seed; default 1. The same seed gives the same samples.", HelpName = "S", DefaultValueFactory = _ => 1 };
+        var seed = new Option<int>("--seed") { Description = "The study's seed: the same seed gives the same samples.", HelpName = "S", DefaultValueFactory = _ => 1 };
         var sample = new Option<int?>("--sample") { Description = "Reproduce one sample K in full: its parts, margins and spin-up trace.", HelpName = "K" };
         sample.Validators.Add(r =>
         {
@@ -57,7 +57,7 @@ public static class StressCommand
         });
         var accept = new Option<double>("--accept-pct")
         {
-            Description = "Accepted overall failure rate, %; exit 1 unless the 95 % interval's upper end is below it. Default 1.",
+            Description = "Accepted overall failure rate, %; exit 1 unless the 95 % interval's upper end is below it.",
             HelpName = "P",
             DefaultValueFactory = _ => DefaultAcceptPct,
         };

@@ -11,7 +11,7 @@ public static class UiCommand
     {
         var rig = new Argument<string?>("rig")
         {
-            Description = "The rig file to open (default: catalogs/demo-rig.json, from the current folder or the program's repository).",
+            Description = "Optional: the rig file to open; without it, catalogs/demo-rig.json from the current folder or the program's repository.",
             Arity = ArgumentArity.ZeroOrOne,
         };
         var ascii = new Option<bool>("--ascii")

@@ -10,6 +10,10 @@ public static class ProblemReport
     {
         ArgumentNullException.ThrowIfNull(problems);
         ArgumentNullException.ThrowIfNull(error);
+        if (error is ProblemCollector collector)
+        {
+            error = collector.Record(problems);
+        }
         foreach (var problem in problems)
         {
             error.WriteLine(problem.ToString());

@@ -7,7 +7,7 @@ namespace RotorDrive.Cli.Output;
 
 /// <summary>Formats time traces as CSV: time_s, per-station speed_rpm_J and current_a_J, gap_mm, pack_voltage_v,
 /// pack_current_a, soc_pct, per-station winding_temp_c_J and plate_temp_c_J, yaw_torque_nm, yaw_rate_deg_per_s,
-/// yaw_angle_deg (J = station index, 0-based).</summary>
+/// yaw_angle_deg (J = station number, counted from 1 as every output counts stations).</summary>
 public static class TraceCsv
 {
     /// <summary>The CSV text of a trace (header row, then one row per sample; invariant culture, '.' decimals).</summary>
@@ -20,14 +20,14 @@ public static class TraceCsv
         var header = new List<string> { "time_s" };
         for (int j = 0; j < n; j++)
         {
-            header.Add($"speed_rpm_{j}");
-            header.Add($"current_a_{j}");
+            header.Add($"speed_rpm_{j + 1}");
+            header.Add($"current_a_{j + 1}");
         }
         header.AddRange(["gap_mm", "pack_voltage_v", "pack_current_a", "soc_pct"]);
         for (int j = 0; j < n; j++)
         {
-            header.Add($"winding_temp_c_{j}");
-            header.Add($"plate_temp_c_{j}");
+            header.Add($"winding_temp_c_{j + 1}");
+            header.Add($"plate_temp_c_{j + 1}");
         }
         header.AddRange(["yaw_torque_nm", "yaw_rate_deg_per_s", "yaw_angle_deg"]);
         sb.Append(string.Join(',', header)).Append('\n');
@@ -56,6 +56,5 @@ public static class TraceCsv
         return sb.ToString();
     }
 
-    // Finite values with 7 significant digits; a non-finite value (never expected) is written empty, never as NaN.
-    private static string F(double v) => double.IsFinite(v) ? v.ToString("G7", CultureInfo.InvariantCulture) : "";
+    private static string F(double v) => Files.Exports.CsvNumber.Format(v);
 }

@@ -16,4 +16,14 @@ public sealed record Station(
     SpinDirection Spin,
     RotorDesign Rotor,
     Motor? Motor,
-    SpeedController? Controller);
+    SpeedController? Controller)
+{
+    /// <summary>The name people call the station by ("front left"), or null when the rig gives none (rig file
+    /// <c>stations[].name</c>).</summary>
+    public string? Name { get; init; }
+
+    /// <summary>The station as every output names it: "station 3", or "station 3 (front left)" when it has a name.</summary>
+    /// <param name="index">The station's index in the rig, 0-based; shown counted from 1.</param>
+    public string Label(int index)
+        => Name is { } name ? $"station {index + 1} ({name})" : $"station {index + 1}";
+}

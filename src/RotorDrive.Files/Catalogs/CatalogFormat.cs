@@ -83,6 +83,13 @@ public abstract class CatalogFormat<TRow> where TRow : notnull
                 return Result(kept, problems, rejected, columnIndex);
             }
             int headerLine = (int)reader.LineNumber;
+            // A semicolon or tab export reads as one long header column: one message that says so, not one per column.
+            if (headers.Count == 1 && (headers[0].Contains(';', StringComparison.Ordinal) || headers[0].Contains('\t', StringComparison.Ordinal)))
+            {
+                string separator = headers[0].Contains(';', StringComparison.Ordinal) ? "semicolons" : "tabs";
+                problems.Add(new InputProblem(file, headerLine, 0, "", Messages.CsvWrongSeparator(separator)));
+                return Result(kept, problems, rejected, columnIndex);
+            }
             if (malformed.TryGetValue(headerLine, out string? headerReason))
             {
                 problems.Add(new InputProblem(file, headerLine, 0, "", Messages.MalformedRow(headerReason)));

@@ -18,6 +18,7 @@ public static class CatalogLoader
         var unreadable = problems.Select(p => p.File).ToHashSet(StringComparer.Ordinal);
         var result = FromTexts(texts, paths, skip: unreadable);
         var kinds = Enum.GetValues<PartKind>().Where(k => unreadable.Contains(paths.For(k))).ToHashSet();
+        kinds.UnionWith(result.Unreadable);
         return result with { Problems = problems.Concat(result.Problems).ToList(), Unreadable = kinds };
     }
 
@@ -30,6 +31,7 @@ public static class CatalogLoader
         ArgumentNullException.ThrowIfNull(paths);
         var problems = new List<InputProblem>();
         var rejected = new Dictionary<PartKind, IReadOnlySet<string>>();
+        var unusable = new HashSet<PartKind>();
 
         CatalogReadResult<T> Read<T>(CatalogFormat<T> format, string text, string path, PartKind kind) where T : notnull
         {
@@ -38,6 +40,12 @@ public static class CatalogLoader
                 : format.Read(text, path);
             problems.AddRange(r.Problems);
             rejected[kind] = r.RejectedIds;
+            // A file with problems and no usable row (a wrong separator, a broken header) is reported once; the rig's
+            // references into it are not reported again.
+            if (r.Rows.Count == 0 && r.Problems.Count > 0)
+            {
+                unusable.Add(kind);
+            }
             return r;
         }
 
@@ -78,6 +86,6 @@ public static class CatalogLoader
             curveList,
             rotors.Rows.Select(r => r.ToRotor()).ToList(),
             plates.Rows.Select(r => r.ToMaterial()).ToList());
-        return new CatalogLoadResult(catalog, paths, problems, rejected);
+        return new CatalogLoadResult(catalog, paths, problems, rejected) { Unreadable = unusable };
     }
 }

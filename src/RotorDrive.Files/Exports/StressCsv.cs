@@ -42,8 +42,8 @@ public static class StressCsv
         int n = trace.Count > 0 ? trace[0].SpeedRadPerS.Count : 0;
         var sb = new StringBuilder();
         var header = new List<string> { "time_s", "duty" };
-        header.AddRange(Enumerable.Range(0, n).Select(i => $"speed_rpm_{i}"));
-        header.AddRange(Enumerable.Range(0, n).Select(i => $"current_a_{i}"));
+        header.AddRange(Enumerable.Range(0, n).Select(i => $"speed_rpm_{i + 1}"));
+        header.AddRange(Enumerable.Range(0, n).Select(i => $"current_a_{i + 1}"));
         header.AddRange(["pack_voltage_v", "pack_current_a", "lift_n"]);
         sb.Append(string.Join(',', header)).Append('\n');
         foreach (var p in trace)
@@ -65,6 +65,5 @@ public static class StressCsv
         var u => u.ToLowerInvariant(),
     };
 
-    private static string F(double? value)
-        => value is { } v && double.IsFinite(v) ? v.ToString("R", CultureInfo.InvariantCulture) : "";
+    private static string F(double? value) => CsvNumber.Format(value);
 }

@@ -65,10 +65,51 @@ internal sealed class JsonTreeParser
         catch (JsonException e)
         {
             int line = (int)(e.LineNumber ?? 0) + 1;
-            int column = CharacterColumn(line, (int)(e.BytePositionInLine ?? 0));
-            _problems.Add(new InputProblem(_file, line, column, _lastPath, Messages.JsonSyntax(Detail(e.Message))));
+            int byteInLine = (int)(e.BytePositionInLine ?? 0);
+            if (DecimalCommaAt(line, byteInLine) is { } comma)
+            {
+                // Placed at the number itself, which is what needs fixing.
+                _problems.Add(new InputProblem(_file, line, CharacterColumn(line, comma.StartInLine), _lastPath, Messages.JsonDecimalComma(comma.Number)));
+                return null;
+            }
+            _problems.Add(new InputProblem(_file, line, CharacterColumn(line, byteInLine), _lastPath, Messages.JsonSyntax(Detail(e.Message))));
             return null;
         }
+    }
+
+    // A number written with a decimal comma ("12,5") reads as 12 and then a stray 5 where a key should start: when the
+    // error sits on a digit after "digits," the number is named, as the rest of the file reads fine.
+    private (string Number, int StartInLine)? DecimalCommaAt(int line, int byteInLine)
+    {
+        if (line < 1 || line > _lineStarts.Count)
+        {
+            return null;
+        }
+        int at = _lineStarts[line - 1] + byteInLine;
+        if (at >= _utf8.Length || !char.IsAsciiDigit((char)_utf8[at]))
+        {
+            return null;
+        }
+        int comma = at - 1;
+        while (comma >= 0 && _utf8[comma] == (byte)' ')
+        {
+            comma--;
+        }
+        if (comma < 1 || _utf8[comma] != (byte)',' || !char.IsAsciiDigit((char)_utf8[comma - 1]))
+        {
+            return null;
+        }
+        int start = comma - 1;
+        while (start > 0 && (char.IsAsciiDigit((char)_utf8[start - 1]) || _utf8[start - 1] is (byte)'-' or (byte)'.'))
+        {
+            start--;
+        }
+        int end = at;
+        while (end < _utf8.Length && char.IsAsciiDigit((char)_utf8[end]))
+        {
+            end++;
+        }
+        return (Encoding.UTF8.GetString(_utf8, start, comma - start) + "," + Encoding.UTF8.GetString(_utf8, at, end - at), start - _lineStarts[line - 1]);
     }
 
     // True when the text holds nothing but whitespace and comments.

@@ -26,7 +26,7 @@ public static class EndurancePlot
         var temperatures = new List<PlotSeries>();
         for (int j = 0; j < t.WindingTempC.Count; j++)
         {
-            temperatures.Add(PlotSeries.Line($"winding, station {j}", minutes, t.WindingTempC[j]));
+            temperatures.Add(PlotSeries.Line($"winding, station {j + 1}", minutes, t.WindingTempC[j]));
         }
         if (t.PlateTempC.Count > 0)
         {

@@ -43,7 +43,7 @@ public static class SpinupPlot
         ]);
     }
 
-    /// <summary>One line per station, named "station J" (0-based, as the command line numbers them).</summary>
+    /// <summary>One line per station, named "station J" (counted from 1, as every output counts stations).</summary>
     internal static List<PlotSeries> PerStation(IReadOnlyList<double> time, IReadOnlyList<IReadOnlyList<double>> values, Func<double, double> scale)
-        => values.Select((v, j) => PlotSeries.Line($"station {j}", time, v.Select(scale).ToArray())).ToList();
+        => values.Select((v, j) => PlotSeries.Line($"station {j + 1}", time, v.Select(scale).ToArray())).ToList();
 }

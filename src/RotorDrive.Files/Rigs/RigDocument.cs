@@ -1,11 +1,14 @@
 namespace RotorDrive.Files.Rigs;
 
-/// <summary>The content of a rig file as plain, editable data, with the file's own keys and units.</summary>
+/// <summary>The content of a rig file as plain, editable data, with the file's own keys and units (listed in <see cref="RigSchema"/>).</summary>
 /// <remarks>Every value is nullable: null means the key is absent (optional keys then take their default from
 /// <see cref="RigDefaults"/>; required ones are reported by <see cref="RigResolver"/>). <see cref="RigDocumentWriter"/>
 /// writes it back with the same keys, leaving absent ones out (comments in the original file are not kept).</remarks>
 public sealed class RigDocument
 {
+    /// <summary>"$schema": the JSON Schema an editor checks the file against; kept, never used.</summary>
+    public string? Schema { get; set; }
+
     /// <summary>"name": the rig's name.</summary>
     public string? Name { get; set; }
 

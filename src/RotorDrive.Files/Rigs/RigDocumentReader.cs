@@ -29,173 +29,100 @@ public static class RigDocumentReader
             return new RigDocumentReadResult(null, map, problems);
         }
 
-        var doc = new RigDocument
-        {
-            Name = top.String("name"),
-            AmbientC = top.Number("ambient_c"),
-            GearYawFrictionNm = top.Number("gear_yaw_friction_nm"),
-            LoadModel = top.String("load_model"),
-        };
+        var doc = new RigDocument();
+        ReadSection(top, "", doc, file, problems);
+        var ordered = problems.OrderBy(x => x.Line).ThenBy(x => x.Column).ToList();
+        return new RigDocumentReadResult(doc, map, ordered);
+    }
 
-        if (JsonObjectScope.Open(top.Take("catalogs"), "$.catalogs", file, problems) is { } c)
+    // Reads the keys the schema lists for one section into its document object, then reports the keys it does not list.
+    private static void ReadSection(JsonObjectScope scope, string section, object target, string file, List<InputProblem> problems)
+    {
+        foreach (var key in RigSchema.In(section))
         {
-            doc.Catalogs = new RigCatalogsSection
+            switch (key.Kind)
             {
-                Motors = c.String("motors"),
-                Controllers = c.String("controllers"),
-                Packs = c.String("packs"),
-                CellCurves = c.String("cell_curves"),
-                Rotors = c.String("rotors"),
-                Plates = c.String("plates"),
-            };
-            c.ReportUnknownKeys();
-        }
-
-        if (JsonObjectScope.Open(top.Take("plate"), "$.plate", file, problems) is { } p)
-        {
-            doc.Plate = new RigPlateSection
-            {
-                Material = p.String("material"),
-                ThicknessMm = p.Number("thickness_mm"),
-                TemperatureC = p.Number("temperature_c"),
-                ConvectionWPerM2K = p.Number("convection_w_per_m2k"),
-                SpreadingFactor = p.Number("spreading_factor"),
-                ConvectionTopWPerM2K = p.Number("convection_top_w_per_m2k"),
-                ConvectionBottomWPerM2K = p.Number("convection_bottom_w_per_m2k"),
-                Emissivity = p.Number("emissivity"),
-                BackIronMm = p.Number("back_iron_mm"),
-            };
-            p.ReportUnknownKeys();
-        }
-
-        if (JsonObjectScope.Open(top.Take("craft"), "$.craft", file, problems) is { } k)
-        {
-            doc.Craft = new RigCraftSection
-            {
-                EmptyMassKg = k.Number("empty_mass_kg"),
-                PayloadKg = k.Number("payload_kg"),
-                CgXMm = k.Number("cg_x_mm"),
-                CgYMm = k.Number("cg_y_mm"),
-                YawInertiaKgM2 = k.Number("yaw_inertia_kg_m2"),
-                HeaveDampingRatio = k.Number("heave_damping_ratio"),
-            };
-            k.ReportUnknownKeys();
-        }
-
-        if (JsonObjectScope.Open(top.Take("gap"), "$.gap", file, problems) is { } g)
-        {
-            doc.Gap = new RigGapSection { DesignMm = g.Number("design_mm"), LandedMm = g.Number("landed_mm") };
-            g.ReportUnknownKeys();
-        }
-
-        var stationsNode = top.Take("stations");
-        if (stationsNode is JsonArrayNode array)
-        {
-            doc.Stations = [];
-            for (int i = 0; i < array.Items.Count; i++)
-            {
-                string path = $"$.stations[{i}]";
-                var s = JsonObjectScope.Open(array.Items[i], path, file, problems);
-                if (s is null)
-                {
-                    doc.Stations.Add(new RigStationSection());
-                    continue;
-                }
-                doc.Stations.Add(new RigStationSection
-                {
-                    XMm = s.Number("x_mm"),
-                    YMm = s.Number("y_mm"),
-                    Spin = s.String("spin"),
-                    Rotor = s.String("rotor"),
-                    Motor = s.String("motor"),
-                    Controller = s.String("controller"),
-                });
-                s.ReportUnknownKeys();
+                case RigValueKind.Number:
+                    key.Set(target, scope.Number(key.Key));
+                    break;
+                case RigValueKind.Integer:
+                    key.Set(target, scope.Integer(key.Key));
+                    break;
+                case RigValueKind.Section:
+                    if (JsonObjectScope.Open(scope.Take(key.Key), scope.PathOf(key.Key), file, problems) is { } inner)
+                    {
+                        object value = key.CreateSection();
+                        ReadSection(inner, key.Name, value, file, problems);
+                        key.Set(target, value);
+                    }
+                    break;
+                case RigValueKind.SectionList:
+                    key.Set(target, ReadList(scope.Take(key.Key), key, scope.PathOf(key.Key), file, problems));
+                    break;
+                case RigValueKind.Tolerances:
+                    key.Set(target, ReadTolerances(scope.Take(key.Key), file, problems));
+                    break;
+                case RigValueKind.FileMap:
+                    key.Set(target, ReadCalibrations(scope.Take(key.Key), file, problems));
+                    break;
+                default:
+                    key.Set(target, scope.String(key.Key));
+                    break;
             }
         }
-        else if (stationsNode is not null)
-        {
-            problems.Add(new InputProblem(file, stationsNode.Line, stationsNode.Column, "$.stations",
-                Messages.WrongType("an array", stationsNode.Describe())));
-        }
+        scope.ReportUnknownKeys();
+    }
 
-        if (JsonObjectScope.Open(top.Take("pack"), "$.pack", file, problems) is { } pk)
+    private static System.Collections.IList? ReadList(JsonNode? node, RigKey key, string path, string file, List<InputProblem> problems)
+    {
+        if (node is null)
         {
-            doc.Pack = new RigPackSection { Id = pk.String("id"), Count = pk.Integer("count") };
-            pk.ReportUnknownKeys();
+            return null;
         }
-
-        if (JsonObjectScope.Open(top.Take("limits"), "$.limits", file, problems) is { } l)
+        if (node is not JsonArrayNode array)
         {
-            doc.Limits = new RigLimitsSection
+            problems.Add(new InputProblem(file, node.Line, node.Column, path, Messages.WrongType("an array", node.Describe())));
+            return null;
+        }
+        var list = (System.Collections.IList)key.CreateSection();
+        for (int i = 0; i < array.Items.Count; i++)
+        {
+            object item = key.CreateItem();
+            if (JsonObjectScope.Open(array.Items[i], $"{path}[{i}]", file, problems) is { } scope)
             {
-                YawTorqueNm = l.Number("yaw_torque_nm"),
-                PlateTempC = l.Number("plate_temp_c"),
-                CellCutoffV = l.Number("cell_cutoff_v"),
-                UsableCapacityPct = l.Number("usable_capacity_pct"),
-                MaxDuty = l.Number("max_duty"),
-                LiftoffTimeS = l.Number("liftoff_time_s"),
-            };
-            l.ReportUnknownKeys();
-        }
-
-        doc.Tolerances = ReadTolerances(top.Take("tolerances"), file, problems);
-
-        var routeNode = top.Take("route");
-        if (routeNode is JsonArrayNode legs)
-        {
-            doc.Route = [];
-            for (int i = 0; i < legs.Items.Count; i++)
-            {
-                var r = JsonObjectScope.Open(legs.Items[i], $"$.route[{i}]", file, problems);
-                if (r is null)
-                {
-                    doc.Route.Add(new RigRouteLegSection());
-                    continue;
-                }
-                doc.Route.Add(new RigRouteLegSection
-                {
-                    XMm = r.Number("x_mm"),
-                    YMm = r.Number("y_mm"),
-                    SpeedMPerS = r.Number("speed_m_per_s"),
-                    DwellS = r.Number("dwell_s"),
-                });
-                r.ReportUnknownKeys();
+                ReadSection(scope, RigSchema.ItemsOf(key), item, file, problems);
             }
+            list.Add(item);
         }
-        else if (routeNode is not null)
-        {
-            problems.Add(new InputProblem(file, routeNode.Line, routeNode.Column, "$.route", Messages.WrongType("an array", routeNode.Describe())));
-        }
+        return list;
+    }
 
-        if (top.Take("calibrations") is { } calibrationsNode)
+    private static Dictionary<string, string>? ReadCalibrations(JsonNode? node, string file, List<InputProblem> problems)
+    {
+        if (node is null)
         {
-            if (calibrationsNode is JsonObjectNode calibrations)
+            return null;
+        }
+        if (node is not JsonObjectNode calibrations)
+        {
+            problems.Add(new InputProblem(file, node.Line, node.Column, "$.calibrations",
+                Messages.WrongType("an object {rotor id: calibration file}", node.Describe())));
+            return null;
+        }
+        var result = new Dictionary<string, string>(StringComparer.Ordinal);
+        foreach (var member in calibrations.Members)
+        {
+            if (member.Value is JsonScalarNode { Kind: JsonScalarKind.String, Text: { } fileName })
             {
-                doc.Calibrations = new Dictionary<string, string>(StringComparer.Ordinal);
-                foreach (var member in calibrations.Members)
-                {
-                    if (member.Value is JsonScalarNode { Kind: JsonScalarKind.String, Text: { } fileName })
-                    {
-                        doc.Calibrations[member.Key] = fileName;
-                    }
-                    else
-                    {
-                        problems.Add(new InputProblem(file, member.Value.Line, member.Value.Column, "$.calibrations." + member.Key,
-                            Messages.WrongType("a file name (string)", member.Value.Describe())));
-                    }
-                }
+                result[member.Key] = fileName;
             }
             else
             {
-                problems.Add(new InputProblem(file, calibrationsNode.Line, calibrationsNode.Column, "$.calibrations",
-                    Messages.WrongType("an object {rotor id: calibration file}", calibrationsNode.Describe())));
+                problems.Add(new InputProblem(file, member.Value.Line, member.Value.Column, "$.calibrations." + member.Key,
+                    Messages.WrongType("a file name (string)", member.Value.Describe())));
             }
         }
-
-        top.ReportUnknownKeys();
-        var ordered = problems.OrderBy(x => x.Line).ThenBy(x => x.Column).ToList();
-        return new RigDocumentReadResult(doc, map, ordered);
+        return result;
     }
 
     /// <summary>Reads a rig file from disk; a missing or unreadable file is a problem, not an exception.</summary>

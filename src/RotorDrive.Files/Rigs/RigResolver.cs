@@ -15,10 +15,10 @@ namespace RotorDrive.Files.Rigs;
 public static class RigResolver
 {
     /// <summary>Ambient temperatures the rig file accepts (ambient_c, and the reach of its tolerance), C.</summary>
-    public static readonly (double Min, double Max) AmbientRangeC = (-40, 60);
+    public static (double Min, double Max) AmbientRangeC => (RigSchema.AmbientC.Rule!.Min, RigSchema.AmbientC.Rule!.Max);
 
     /// <summary>Plate temperatures the rig file accepts (plate.temperature_c, and the reach of its tolerance), C.</summary>
-    public static readonly (double Min, double Max) PlateTempRangeC = (-40, 400);
+    public static (double Min, double Max) PlateTempRangeC => (RigSchema.PlateTemperatureC.Rule!.Min, RigSchema.PlateTemperatureC.Rule!.Max);
 
     /// <summary>The catalog paths the document names, resolved against the rig file's folder; null (after reporting
     /// the missing keys) when the "catalogs" section is incomplete.</summary>
@@ -80,262 +80,279 @@ public static class RigResolver
         ArgumentNullException.ThrowIfNull(rigFile);
         var problems = new List<InputProblem>();
         var ctx = new Context(rigFile, locations ?? RigSourceMap.Empty, problems);
-        bool partsOk = catalogs is not null;
-
         string? name = document.Name;
         if (string.IsNullOrWhiteSpace(name))
         {
-            ctx.Missing("$.name");
+            ctx.Missing(RigSchema.Name.JsonPath());
         }
-
-        // Plate.
-        PlateMaterial? material = null;
-        double? thickness = null, plateTemp = null, convection = null, spreading = null, top = null, bottom = null, emissivity = null, backIron = null;
-        if (document.Plate is not { } plate)
-        {
-            ctx.Missing("$.plate");
-        }
-        else
-        {
-            material = ctx.Lookup(plate.Material, "$.plate.material", PartKind.Plate, "plate material", catalogs, c => c.Plates, m => m.Id);
-            thickness = ctx.Required(plate.ThicknessMm, "$.plate.thickness_mm", ValueRule.Between(0.01, 200));
-            plateTemp = ctx.Required(plate.TemperatureC, "$.plate.temperature_c", ValueRule.Between(PlateTempRangeC.Min, PlateTempRangeC.Max));
-            convection = ctx.Optional(plate.ConvectionWPerM2K, "$.plate.convection_w_per_m2k", ValueRule.Between(0.1, 1000), RigDefaults.ConvectionWPerM2K);
-            spreading = ctx.Optional(plate.SpreadingFactor, "$.plate.spreading_factor", ValueRule.Between(1, 100), RigDefaults.PlateSpreadingFactor);
-            if (convection is { } both)
-            {
-                top = ctx.Optional(plate.ConvectionTopWPerM2K, "$.plate.convection_top_w_per_m2k", ValueRule.Between(0, 1000), both);
-                bottom = ctx.Optional(plate.ConvectionBottomWPerM2K, "$.plate.convection_bottom_w_per_m2k", ValueRule.Between(0, 100_000), both);
-            }
-            emissivity = ctx.Optional(plate.Emissivity, "$.plate.emissivity", ValueRule.Between(0, 1), RigDefaults.PlateEmissivity);
-            backIron = ctx.Optional(plate.BackIronMm, "$.plate.back_iron_mm", ValueRule.Between(0, 200), 0.0);
-        }
-
-        // Craft.
-        CraftBody? body = null;
-        if (document.Craft is not { } craft)
-        {
-            ctx.Missing("$.craft");
-        }
-        else
-        {
-            var empty = ctx.Required(craft.EmptyMassKg, "$.craft.empty_mass_kg", ValueRule.PositiveAtMost(10000));
-            var payload = ctx.Required(craft.PayloadKg, "$.craft.payload_kg", ValueRule.NonNegativeAtMost(10000));
-            var cgx = ctx.Required(craft.CgXMm, "$.craft.cg_x_mm", ValueRule.Between(-10000, 10000));
-            var cgy = ctx.Required(craft.CgYMm, "$.craft.cg_y_mm", ValueRule.Between(-10000, 10000));
-            var inertia = ctx.Required(craft.YawInertiaKgM2, "$.craft.yaw_inertia_kg_m2", ValueRule.PositiveAtMost(100000));
-            var damping = ctx.Optional(craft.HeaveDampingRatio, "$.craft.heave_damping_ratio", ValueRule.Between(0, 2), RigDefaults.HeaveDampingRatio);
-            if (empty is not null && payload is not null && cgx is not null && cgy is not null && inertia is not null && damping is not null)
-            {
-                body = new CraftBody(empty.Value, payload.Value, cgx.Value / 1000.0, cgy.Value / 1000.0, inertia.Value, damping.Value);
-            }
-        }
-
-        // Gaps and environment.
-        double? design = null, landed = null;
-        if (document.Gap is not { } gap)
-        {
-            ctx.Missing("$.gap");
-        }
-        else
-        {
-            design = ctx.Required(gap.DesignMm, "$.gap.design_mm", ValueRule.Between(0.1, 200));
-            landed = ctx.Required(gap.LandedMm, "$.gap.landed_mm", ValueRule.Between(0.1, 200));
-            if (design is { } d && landed is { } l && l > d)
-            {
-                ctx.Report("$.gap.landed_mm", Messages.LandedAboveDesign(l, d));
-                landed = null;
-            }
-        }
-        var ambient = ctx.Required(document.AmbientC, "$.ambient_c", ValueRule.Between(AmbientRangeC.Min, AmbientRangeC.Max));
-        LoadModelKind? loadModel = LoadModelKind.ThreeDimensional;
-        if (document.LoadModel is { } modelText)
-        {
-            loadModel = modelText.Trim().ToLowerInvariant() switch
-            {
-                "3d" => LoadModelKind.ThreeDimensional,
-                "2d" => LoadModelKind.TwoDimensional,
-                _ => null,
-            };
-            if (loadModel is null)
-            {
-                ctx.Report("$.load_model", Messages.BadLoadModel(modelText));
-            }
-        }
-        var gearFriction = ctx.Optional(document.GearYawFrictionNm, "$.gear_yaw_friction_nm", ValueRule.NonNegativeAtMost(10000), RigDefaults.GearYawFrictionNm);
-
-        // Stations.
-        var stations = new List<Station>();
-        bool stationsOk = true;
-        if (document.Stations is not { } stationDocs)
-        {
-            ctx.Missing("$.stations");
-            stationsOk = false;
-        }
-        else if (stationDocs.Count == 0)
-        {
-            ctx.Report("$.stations", Messages.NoStations());
-            stationsOk = false;
-        }
-        else
-        {
-            for (int i = 0; i < stationDocs.Count; i++)
-            {
-                var s = stationDocs[i];
-                string path = $"$.stations[{i}]";
-                var x = ctx.Required(s.XMm, path + ".x_mm", ValueRule.Between(-100_000, 100_000));
-                var y = ctx.Required(s.YMm, path + ".y_mm", ValueRule.Between(-100_000, 100_000));
-                SpinDirection? spin = null;
-                if (s.Spin is null)
-                {
-                    ctx.Missing(path + ".spin");
-                }
-                else if (string.Equals(s.Spin.Trim(), "cw", StringComparison.OrdinalIgnoreCase))
-                {
-                    spin = SpinDirection.Clockwise;
-                }
-                else if (string.Equals(s.Spin.Trim(), "ccw", StringComparison.OrdinalIgnoreCase))
-                {
-                    spin = SpinDirection.CounterClockwise;
-                }
-                else
-                {
-                    ctx.Report(path + ".spin", Messages.BadSpin(s.Spin));
-                }
-                var rotor = ctx.Lookup(s.Rotor, path + ".rotor", PartKind.Rotor, "rotor", catalogs, c => c.Rotors, r => r.Id);
-                Motor? motor = s.Motor is null ? null
-                    : ctx.Lookup(s.Motor, path + ".motor", PartKind.Motor, "motor", catalogs, c => c.Motors, m => m.Id);
-                SpeedController? controller = s.Controller is null ? null
-                    : ctx.Lookup(s.Controller, path + ".controller", PartKind.Controller, "controller", catalogs, c => c.Controllers, c => c.Id);
-                bool motorOk = s.Motor is null || motor is not null;
-                bool controllerOk = s.Controller is null || controller is not null;
-                if (x is null || y is null || spin is null || rotor is null || !motorOk || !controllerOk)
-                {
-                    stationsOk = false;
-                    continue;
-                }
-                stations.Add(new Station(x.Value / 1000.0, y.Value / 1000.0, spin.Value, rotor, motor, controller));
-            }
-            if (stationsOk)
-            {
-                for (int i = 0; i < stations.Count; i++)
-                {
-                    for (int j = 0; j < i; j++)
-                    {
-                        double distance = Math.Sqrt(Math.Pow(stations[i].XM - stations[j].XM, 2) + Math.Pow(stations[i].YM - stations[j].YM, 2));
-                        double needed = stations[i].Rotor.OuterRadiusM + stations[j].Rotor.OuterRadiusM;
-                        if (distance < needed)
-                        {
-                            ctx.Report($"$.stations[{i}]", Messages.StationsOverlap(j, distance * 1000.0, needed * 1000.0));
-                            stationsOk = false;
-                        }
-                    }
-                }
-            }
-        }
-
-        // Pack.
-        PackBank? bank = null;
-        bool packOk = true;
-        if (document.Pack is { } packDoc)
-        {
-            var pack = ctx.Lookup(packDoc.Id, "$.pack.id", PartKind.Pack, "pack", catalogs, c => c.Packs, p => p.Id);
-            int? count = null;
-            if (packDoc.Count is null)
-            {
-                ctx.Missing("$.pack.count");
-            }
-            else if (packDoc.Count < 1)
-            {
-                ctx.Report("$.pack.count", Messages.MustBeAtLeast(1, packDoc.Count.Value));
-            }
-            else if (packDoc.Count > 1000)
-            {
-                ctx.Report("$.pack.count", Messages.MustBeAtMost(1000, packDoc.Count.Value));
-            }
-            else
-            {
-                count = packDoc.Count;
-            }
-            CellCurve? curve = null;
-            if (pack is not null && catalogs is not null)
-            {
-                curve = catalogs.Catalog.CurveFor(pack.Chemistry);
-                if (curve is null)
-                {
-                    ctx.Report("$.pack.id", Messages.NoCurveForChemistry(pack.Chemistry, catalogs.Paths.CellCurves));
-                }
-            }
-            if (pack is not null && count is not null && curve is not null)
-            {
-                bank = new PackBank(pack, count.Value, curve);
-            }
-            else
-            {
-                packOk = false;
-            }
-        }
-
-        // Limits.
-        RigLimits? limits = null;
-        if (document.Limits is not { } lim)
-        {
-            ctx.Missing("$.limits");
-        }
-        else
-        {
-            var yaw = ctx.Required(lim.YawTorqueNm, "$.limits.yaw_torque_nm", ValueRule.PositiveAtMost(10000));
-            var plateMax = ctx.Required(lim.PlateTempC, "$.limits.plate_temp_c", ValueRule.Between(-40, 400));
-            var cutoff = ctx.Optional(lim.CellCutoffV, "$.limits.cell_cutoff_v", ValueRule.Between(1.5, 4.5), RigDefaults.CellCutoffV);
-            var usable = ctx.Optional(lim.UsableCapacityPct, "$.limits.usable_capacity_pct", ValueRule.Between(1, 100), RigDefaults.UsableCapacityPct);
-            var duty = ctx.Optional(lim.MaxDuty, "$.limits.max_duty", ValueRule.Between(0.05, 1), RigDefaults.MaxDuty);
-            var liftoff = ctx.Optional(lim.LiftoffTimeS, "$.limits.liftoff_time_s", ValueRule.PositiveAtMost(3600), RigDefaults.LiftoffTimeS);
-            if (yaw is not null && plateMax is not null && cutoff is not null && usable is not null && duty is not null && liftoff is not null)
-            {
-                limits = new RigLimits(yaw.Value, plateMax.Value, cutoff.Value, usable.Value / 100.0, duty.Value, liftoff.Value);
-            }
-        }
-
+        var plate = ResolvePlate(document, catalogs, ctx);
+        var body = ResolveCraft(document, ctx);
+        var gaps = ResolveGaps(document, ctx);
+        var ambient = ctx.Value(RigSchema.AmbientC, document);
+        var loadModel = ResolveLoadModel(document, ctx);
+        var gearFriction = ctx.Value(RigSchema.GearYawFrictionNm, document);
+        var (stations, stationsOk) = ResolveStations(document, catalogs, ctx);
+        var (bank, packOk) = ResolvePack(document, catalogs, ctx);
+        var limits = ResolveLimits(document, ctx);
         var (route, routeOk) = ResolveRoute(document, ctx);
         var tolerances = ResolveTolerances(document, ctx);
-        if (tolerances is not null && limits is not null && body is not null && material is not null && thickness is not null
-            && plateTemp is not null && ambient is not null && design is not null && landed is not null && partsOk && stationsOk)
+        bool partsOk = catalogs is not null;
+        if (tolerances is not null && limits is not null && body is not null && plate is not null && ambient is not null && gaps is not null
+            && partsOk && stationsOk)
         {
-            var nominal = new Rig("tolerance check", new Plate(material, thickness.Value / 1000.0), plateTemp.Value, ambient.Value, body,
-                design.Value / 1000.0, landed.Value / 1000.0, stations, bank, limits, 0, 1);
+            var nominal = new Rig("tolerance check", new Plate(plate.Material, plate.ThicknessMm / 1000.0), plate.TemperatureC, ambient.Value, body,
+                gaps.Value.DesignMm / 1000.0, gaps.Value.LandedMm / 1000.0, stations, bank, limits, 0, 1);
             CheckSpreads(nominal, tolerances, ctx);
         }
-
         var calibrations = ResolveCalibrations(document, rigFile, stations, stationsOk, ctx, readText ?? TextFiles.TryRead);
 
         var ordered = problems.OrderBy(p => p.Line).ThenBy(p => p.Column).ToList();
-        if (ordered.Count > 0 || !partsOk || !stationsOk || !packOk || name is null || material is null || thickness is null
-            || plateTemp is null || convection is null || spreading is null || body is null || design is null || landed is null || ambient is null
-            || gearFriction is null || limits is null || top is null || bottom is null || emissivity is null || !routeOk || loadModel is null || backIron is null)
+        if (ordered.Count > 0 || !partsOk || !stationsOk || !packOk || !routeOk || name is null || plate is null || body is null || gaps is null
+            || ambient is null || gearFriction is null || limits is null || loadModel is null)
         {
             return new RigResolveResult(null, ordered);
         }
-        var rig = new Rig(
-            name.Trim(),
-            new Plate(material, thickness.Value / 1000.0) { BackIronM = backIron.Value / 1000.0 },
-            plateTemp.Value,
-            ambient.Value,
-            body,
-            design.Value / 1000.0,
-            landed.Value / 1000.0,
-            stations,
-            bank,
-            limits,
-            gearFriction.Value,
-            convection.Value)
+        var rig = new Rig(name.Trim(), new Plate(plate.Material, plate.ThicknessMm / 1000.0) { BackIronM = plate.BackIronMm / 1000.0 },
+            plate.TemperatureC, ambient.Value, body, gaps.Value.DesignMm / 1000.0, gaps.Value.LandedMm / 1000.0, stations, bank, limits,
+            gearFriction.Value, plate.ConvectionWPerM2K)
         {
-            PlateSpreadingFactor = spreading.Value,
-            PlateCooling = new PlateCooling(top.Value, bottom.Value, emissivity.Value),
+            PlateSpreadingFactor = plate.SpreadingFactor,
+            PlateCooling = plate.Cooling,
             Route = route,
             Calibrations = calibrations,
             LoadModel = loadModel.Value,
         };
         return new RigResolveResult(rig, ordered) { Tolerances = tolerances ?? StressTolerances.None };
+    }
+
+    // "plate": the material from the catalog and the plate's values, or null (after reporting) when any is missing or bad.
+    private static PlateValues? ResolvePlate(RigDocument document, CatalogLoadResult? catalogs, Context ctx)
+    {
+        if (document.Plate is not { } plate)
+        {
+            ctx.Missing(RigSchema.Plate.JsonPath());
+            return null;
+        }
+        var material = ctx.Lookup(plate.Material, RigSchema.PlateMaterial.JsonPath(), PartKind.Plate, "plate material", catalogs, c => c.Plates, m => m.Id);
+        var thickness = ctx.Value(RigSchema.PlateThicknessMm, plate);
+        var temperature = ctx.Value(RigSchema.PlateTemperatureC, plate);
+        var convection = ctx.Value(RigSchema.PlateConvection, plate);
+        var spreading = ctx.Value(RigSchema.PlateSpreadingFactor, plate);
+        // Each face defaults to the convection coefficient of both faces.
+        double? top = null, bottom = null;
+        if (convection is { } both)
+        {
+            top = ctx.Value(RigSchema.PlateConvectionTop, plate, fallback: both);
+            bottom = ctx.Value(RigSchema.PlateConvectionBottom, plate, fallback: both);
+        }
+        var emissivity = ctx.Value(RigSchema.PlateEmissivity, plate);
+        var backIron = ctx.Value(RigSchema.PlateBackIronMm, plate);
+        if (material is null || thickness is null || temperature is null || convection is null || spreading is null || top is null || bottom is null
+            || emissivity is null || backIron is null)
+        {
+            return null;
+        }
+        return new PlateValues(material, thickness.Value, temperature.Value, convection.Value, spreading.Value,
+            new PlateCooling(top.Value, bottom.Value, emissivity.Value), backIron.Value);
+    }
+
+    // "craft": the body in SI units, or null.
+    private static CraftBody? ResolveCraft(RigDocument document, Context ctx)
+    {
+        if (document.Craft is not { } craft)
+        {
+            ctx.Missing(RigSchema.Craft.JsonPath());
+            return null;
+        }
+        var empty = ctx.Value(RigSchema.CraftEmptyMassKg, craft);
+        var payload = ctx.Value(RigSchema.CraftPayloadKg, craft);
+        var cgx = ctx.Value(RigSchema.CraftCgXMm, craft);
+        var cgy = ctx.Value(RigSchema.CraftCgYMm, craft);
+        var inertia = ctx.Value(RigSchema.CraftYawInertia, craft);
+        var damping = ctx.Value(RigSchema.CraftHeaveDamping, craft);
+        if (empty is null || payload is null || cgx is null || cgy is null || inertia is null || damping is null)
+        {
+            return null;
+        }
+        return new CraftBody(empty.Value, payload.Value, cgx.Value / 1000.0, cgy.Value / 1000.0, inertia.Value, damping.Value);
+    }
+
+    // "gap": design and landed gap in mm, the landed one no larger than the design one.
+    private static (double DesignMm, double LandedMm)? ResolveGaps(RigDocument document, Context ctx)
+    {
+        if (document.Gap is not { } gap)
+        {
+            ctx.Missing(RigSchema.Gap.JsonPath());
+            return null;
+        }
+        var design = ctx.Value(RigSchema.GapDesignMm, gap);
+        var landed = ctx.Value(RigSchema.GapLandedMm, gap);
+        if (design is not { } d || landed is not { } l)
+        {
+            return null;
+        }
+        if (l > d)
+        {
+            ctx.Report(RigSchema.GapLandedMm.JsonPath(), Messages.LandedAboveDesign(l, d));
+            return null;
+        }
+        return (d, l);
+    }
+
+    private static LoadModelKind? ResolveLoadModel(RigDocument document, Context ctx)
+        => ctx.Choice(RigSchema.LoadModel, document, 0, Messages.BadLoadModel) switch
+        {
+            null => null,
+            "2d" => LoadModelKind.TwoDimensional,
+            _ => LoadModelKind.ThreeDimensional,
+        };
+
+    // "stations": every station with its parts from the catalogs; not ok when any has a problem or two rotors overlap.
+    private static (List<Station> Stations, bool Ok) ResolveStations(RigDocument document, CatalogLoadResult? catalogs, Context ctx)
+    {
+        var stations = new List<Station>();
+        if (document.Stations is not { } stationDocs)
+        {
+            ctx.Missing(RigSchema.Stations.JsonPath());
+            return (stations, false);
+        }
+        if (stationDocs.Count == 0)
+        {
+            ctx.Report(RigSchema.Stations.JsonPath(), Messages.NoStations());
+            return (stations, false);
+        }
+        bool ok = true;
+        for (int i = 0; i < stationDocs.Count; i++)
+        {
+            if (ResolveStation(stationDocs[i], i, catalogs, ctx) is { } station)
+            {
+                stations.Add(station);
+            }
+            else
+            {
+                ok = false;
+            }
+        }
+        return (stations, ok && NoOverlap(stations, ctx) && UniqueNames(stationDocs, ctx));
+    }
+
+    // "name" (optional): not empty and not a number, so `--station` can take either without doubt.
+    private static string? StationName(RigStationSection s, int i, Context ctx)
+    {
+        if (s.Name is null)
+        {
+            return null;
+        }
+        string name = s.Name.Trim();
+        if (name.Length == 0 || double.TryParse(name, System.Globalization.NumberStyles.Float, System.Globalization.CultureInfo.InvariantCulture, out _))
+        {
+            ctx.Report(RigSchema.StationName.JsonPath(i), Messages.BadStationName(s.Name));
+        }
+        return name;
+    }
+
+    private static bool UniqueNames(List<RigStationSection> stations, Context ctx)
+    {
+        bool ok = true;
+        for (int i = 0; i < stations.Count; i++)
+        {
+            if (stations[i].Name?.Trim() is not { Length: > 0 } name)
+            {
+                continue;
+            }
+            int first = stations.FindIndex(s => string.Equals(s.Name?.Trim(), name, StringComparison.OrdinalIgnoreCase));
+            if (first < i)
+            {
+                ctx.Report(RigSchema.StationName.JsonPath(i), Messages.DuplicateStationName(name, first + 1));
+                ok = false;
+            }
+        }
+        return ok;
+    }
+
+    private static Station? ResolveStation(RigStationSection s, int i, CatalogLoadResult? catalogs, Context ctx)
+    {
+        var x = ctx.Value(RigSchema.StationXMm, s, i);
+        var y = ctx.Value(RigSchema.StationYMm, s, i);
+        var spin = ctx.Choice(RigSchema.StationSpin, s, i, Messages.BadSpin) switch
+        {
+            null => (SpinDirection?)null,
+            "cw" => SpinDirection.Clockwise,
+            _ => SpinDirection.CounterClockwise,
+        };
+        var rotor = ctx.Lookup(s.Rotor, RigSchema.StationRotor.JsonPath(i), PartKind.Rotor, "rotor", catalogs, c => c.Rotors, r => r.Id);
+        Motor? motor = s.Motor is null ? null
+            : ctx.Lookup(s.Motor, RigSchema.StationMotor.JsonPath(i), PartKind.Motor, "motor", catalogs, c => c.Motors, m => m.Id);
+        SpeedController? controller = s.Controller is null ? null
+            : ctx.Lookup(s.Controller, RigSchema.StationController.JsonPath(i), PartKind.Controller, "controller", catalogs, c => c.Controllers, c => c.Id);
+        bool motorOk = s.Motor is null || motor is not null;
+        bool controllerOk = s.Controller is null || controller is not null;
+        if (x is null || y is null || spin is null || rotor is null || !motorOk || !controllerOk)
+        {
+            return null;
+        }
+        return new Station(x.Value / 1000.0, y.Value / 1000.0, spin.Value, rotor, motor, controller) { Name = StationName(s, i, ctx) };
+    }
+
+    // Rotors must not overlap: axes at least the two outer radii apart.
+    private static bool NoOverlap(List<Station> stations, Context ctx)
+    {
+        bool ok = true;
+        for (int i = 0; i < stations.Count; i++)
+        {
+            for (int j = 0; j < i; j++)
+            {
+                double distance = Math.Sqrt(Math.Pow(stations[i].XM - stations[j].XM, 2) + Math.Pow(stations[i].YM - stations[j].YM, 2));
+                double needed = stations[i].Rotor.OuterRadiusM + stations[j].Rotor.OuterRadiusM;
+                if (distance < needed)
+                {
+                    ctx.Report($"$.stations[{i}]", Messages.StationsOverlap(stations[j].Label(j), distance * 1000.0, needed * 1000.0));
+                    ok = false;
+                }
+            }
+        }
+        return ok;
+    }
+
+    // "pack" (optional): the bank with its chemistry's cell curve; not ok when the section is there but has a problem.
+    private static (PackBank? Bank, bool Ok) ResolvePack(RigDocument document, CatalogLoadResult? catalogs, Context ctx)
+    {
+        if (document.Pack is not { } packDoc)
+        {
+            return (null, true);
+        }
+        var pack = ctx.Lookup(packDoc.Id, RigSchema.PackId.JsonPath(), PartKind.Pack, "pack", catalogs, c => c.Packs, p => p.Id);
+        var count = ctx.Value(RigSchema.PackCount, packDoc);
+        CellCurve? curve = null;
+        if (pack is not null && catalogs is not null)
+        {
+            curve = catalogs.Catalog.CurveFor(pack.Chemistry);
+            if (curve is null)
+            {
+                ctx.Report(RigSchema.PackId.JsonPath(), Messages.NoCurveForChemistry(pack.Chemistry, catalogs.Paths.CellCurves));
+            }
+        }
+        return pack is not null && count is not null && curve is not null ? (new PackBank(pack, (int)count.Value, curve), true) : (null, false);
+    }
+
+    private static RigLimits? ResolveLimits(RigDocument document, Context ctx)
+    {
+        if (document.Limits is not { } lim)
+        {
+            ctx.Missing(RigSchema.Limits.JsonPath());
+            return null;
+        }
+        var yaw = ctx.Value(RigSchema.LimitYawTorqueNm, lim);
+        var plateMax = ctx.Value(RigSchema.LimitPlateTempC, lim);
+        var cutoff = ctx.Value(RigSchema.LimitCellCutoffV, lim);
+        var usable = ctx.Value(RigSchema.LimitUsableCapacityPct, lim);
+        var duty = ctx.Value(RigSchema.LimitMaxDuty, lim);
+        var liftoff = ctx.Value(RigSchema.LimitLiftoffTimeS, lim);
+        if (yaw is null || plateMax is null || cutoff is null || usable is null || duty is null || liftoff is null)
+        {
+            return null;
+        }
+        return new RigLimits(yaw.Value, plateMax.Value, cutoff.Value, usable.Value / 100.0, duty.Value, liftoff.Value);
     }
 
     // "route": each leg a dwell (dwell_s > 0) or a move (x_mm, y_mm, speed_m_per_s > 0), never a mix.
@@ -359,7 +376,7 @@ public static class RigResolver
             bool move = leg.XMm is not null || leg.YMm is not null || leg.SpeedMPerS is not null;
             if (leg.DwellS is not null && !move)
             {
-                if (ctx.Required(leg.DwellS, path + ".dwell_s", ValueRule.Positive) is { } dwell)
+                if (ctx.Value(RigSchema.RouteDwellS, leg, i) is { } dwell)
                 {
                     result.Add(RouteLeg.Dwell(dwell));
                     continue;
@@ -367,9 +384,9 @@ public static class RigResolver
             }
             else if (leg.DwellS is null && move)
             {
-                var x = ctx.Required(leg.XMm, path + ".x_mm", ValueRule.Between(-100_000, 100_000));
-                var y = ctx.Required(leg.YMm, path + ".y_mm", ValueRule.Between(-100_000, 100_000));
-                var speed = ctx.Required(leg.SpeedMPerS, path + ".speed_m_per_s", ValueRule.Between(0.001, 20));
+                var x = ctx.Value(RigSchema.RouteXMm, leg, i, needed: true);
+                var y = ctx.Value(RigSchema.RouteYMm, leg, i, needed: true);
+                var speed = ctx.Value(RigSchema.RouteSpeed, leg, i, needed: true);
                 if (x is not null && y is not null && speed is not null)
                 {
                     result.Add(RouteLeg.Move(x.Value / 1000.0, y.Value / 1000.0, speed.Value));
@@ -594,6 +611,9 @@ public static class RigResolver
             : Tolerance.Uniform(low.Value * toSi, high.Value * toSi, ToleranceScale.Absolute, positive);
     }
 
+    private sealed record PlateValues(PlateMaterial Material, double ThicknessMm, double TemperatureC, double ConvectionWPerM2K,
+        double SpreadingFactor, PlateCooling Cooling, double BackIronMm);
+
     /// <summary>Collects problems for one resolve, placing each at its JSON path's position.</summary>
     private sealed class Context(string file, RigSourceMap map, List<InputProblem> problems)
     {
@@ -617,8 +637,50 @@ public static class RigResolver
             return Check(value.Value, path, rule);
         }
 
-        public double? Optional(double? value, string path, ValueRule rule, double defaultValue)
-            => value is null ? defaultValue : Check(value.Value, path, rule);
+        /// <summary>A number or whole number of the schema, checked against its range; a missing key is reported when the
+        /// schema (or <paramref name="needed"/>) requires it, and otherwise takes its default or <paramref name="fallback"/>.</summary>
+        public double? Value(RigKey key, object section, int index = 0, double? fallback = null, bool needed = false)
+        {
+            double? value = key.Get(section) switch
+            {
+                double d => d,
+                int n => n,
+                _ => null,
+            };
+            string path = key.JsonPath(index);
+            if (value is null)
+            {
+                if (key.Required || needed)
+                {
+                    Missing(path);
+                    return null;
+                }
+                return key.Default ?? fallback;
+            }
+            return Check(value.Value, path, key.Rule ?? ValueRule.Any);
+        }
+
+        /// <summary>One of the schema's words for a choice key (lower case), its default when absent and optional, or null
+        /// after reporting a missing key or a word not in the list.</summary>
+        public string? Choice(RigKey key, object section, int index, Func<string, string> message)
+        {
+            string path = key.JsonPath(index);
+            if (key.Get(section) is not string text)
+            {
+                if (key.Required)
+                {
+                    Missing(path);
+                }
+                return key.DefaultNote;
+            }
+            string word = text.Trim().ToLowerInvariant();
+            if (key.Choices.Contains(word))
+            {
+                return word;
+            }
+            Report(path, message(text));
+            return null;
+        }
 
         private double? Check(double value, string path, ValueRule rule)
         {

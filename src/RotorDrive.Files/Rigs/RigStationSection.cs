@@ -3,6 +3,9 @@ namespace RotorDrive.Files.Rigs;
 /// <summary>One element of "stations": a rotor's position, spin and parts.</summary>
 public sealed class RigStationSection
 {
+    /// <summary>"name": what people call the station ("front left"), shown beside its number (optional).</summary>
+    public string? Name { get; set; }
+
     /// <summary>"x_mm": rotor axis, forward, mm.</summary>
     public double? XMm { get; set; }
 

@@ -21,6 +21,28 @@ public sealed record FieldSpec(
     Func<RigDocument, string, string?> Store,
     Func<PartsCatalog, IReadOnlyList<string>>? Choices = null)
 {
+    /// <summary>The value an empty field stands for, in words ("3.3"), or null when the key has no default.</summary>
+    public string? DefaultText { get; init; }
+
+    /// <summary>The field for one key of the rig file's schema: its label, unit, JSON path and default come from the
+    /// schema, so the sheet and the file agree.</summary>
+    /// <param name="key">The schema key (a number, whole number, catalog id or choice).</param>
+    /// <param name="choices">For an id or a choice: the words to pick from.</param>
+    /// <param name="index">The station (0-based) for a key of a station.</param>
+    public static FieldSpec Of(RigKey key, Func<PartsCatalog, IReadOnlyList<string>>? choices = null, int index = 0)
+    {
+        ArgumentNullException.ThrowIfNull(key);
+        string unit = key.Unit == "1" ? "" : key.Unit;
+        string path = key.JsonPath(index);
+        var spec = key.Kind switch
+        {
+            RigValueKind.Number => Number(key.Label, unit, path, d => key.ValueIn(d, index) as double?, (d, v) => key.StoreIn(d, v, index)),
+            RigValueKind.Integer => Whole(key.Label, unit, path, d => key.ValueIn(d, index) as int?, (d, v) => key.StoreIn(d, v, index)),
+            _ => Id(key.Label, path, d => key.ValueIn(d, index) as string, (d, v) => key.StoreIn(d, v, index), choices ?? (_ => key.Choices)),
+        };
+        return spec with { DefaultText = key.Required ? null : key.DefaultText() };
+    }
+
     /// <summary>A number field; empty text stores "absent" (optional keys fall back to their documented default).</summary>
     public static FieldSpec Number(string label, string unit, string jsonPath, Func<RigDocument, double?> get, Action<RigDocument, double?> set)
         => new(label, unit, jsonPath,

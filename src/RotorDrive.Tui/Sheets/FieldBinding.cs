@@ -72,7 +72,9 @@ internal sealed class FieldBinding
         }
         string? message = session.MessageFor(Spec.JsonPath);
         CurrentMessage = message ?? "";
-        Message.Text = message is null ? "" : "! " + message;
+        // An empty optional field says what it stands for (the schema's default).
+        Message.Text = message is not null ? "! " + message
+            : Field.Text.Length == 0 && Spec.DefaultText is { } d ? "default " + d + (Spec.Unit.Length > 0 ? " " + Spec.Unit : "") : "";
         // Colour as well as the "!" mark, never colour alone.
         Message.SchemeName = message is null ? null : "Error";
     }

@@ -158,8 +158,7 @@ public class RigLoaderTests
         doc.Tolerances.Entries["gap_offset_mm"] = RigToleranceEntry.NormalAbsolute(0.5);
         doc.Tolerances.Entries["motor_resistance_ohm"] = RigToleranceEntry.UniformPercent(-5, 5);
         doc.Tolerances.Entries["ambient_c"] = RigToleranceEntry.UniformAbsolute(-5, 5);
-        var expected = RigKeys.Top.Concat(RigKeys.Catalogs).Concat(RigKeys.Plate).Concat(RigKeys.Craft).Concat(RigKeys.Gap)
-            .Concat(RigKeys.Station).Concat(RigKeys.Pack).Concat(RigKeys.Limits).Concat(RigKeys.RouteLeg)
+        var expected = RigSchema.All.Where(k => k != RigSchema.SchemaRef).Select(k => k.Key)
             .Concat(["motor_kv_rpm_per_v", "gap_offset_mm", "motor_resistance_ohm", "ambient_c", "r"]).Concat(RigToleranceKeys.EntryKeys).Order().ToList();
         string written = RigDocumentWriter.Write(doc);
         Assert.Equal(expected, KeysOf(written));

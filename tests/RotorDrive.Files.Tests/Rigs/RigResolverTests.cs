@@ -196,10 +196,44 @@ public class RigResolverTests
     [Fact]
     public void Resolve_ReportsOverlappingRotors()
     {
-        // Station 1 moved to 200 mm from station 0: two 130 mm rotors need 260 mm between axes.
+        // Station 2 moved to 200 mm from station 1: two 130 mm rotors need 260 mm between axes. Stations are counted from 1.
         var result = Resolve("\"x_mm\": 225, \"y_mm\": 389.7", "\"x_mm\": 450, \"y_mm\": 200");
         var problem = Assert.Single(result.Problems);
-        Assert.Equal(("$.stations[1]", Messages.StationsOverlap(0, 200, 260)), (problem.Field, problem.Message));
+        Assert.Equal(("$.stations[1]", Messages.StationsOverlap("station 1", 200, 260)), (problem.Field, problem.Message));
+        Assert.Contains("station 1:", problem.Message);
+    }
+
+    [Fact]
+    public void Resolve_GivesEachStationItsName_AndNamesItInMessages()
+    {
+        var named = Resolve("\"x_mm\": 450, \"y_mm\": 0,", "\"name\": \"front\", \"x_mm\": 450, \"y_mm\": 0,");
+        Assert.Empty(named.Problems);
+        Assert.Equal("front", named.Rig!.Stations[0].Name);
+        Assert.Null(named.Rig.Stations[1].Name);
+        Assert.Equal("station 1 (front)", named.Rig.Stations[0].Label(0));
+        Assert.Equal("station 2", named.Rig.Stations[1].Label(1));
+    }
+
+    [Theory]
+    [InlineData("\"\"")]
+    [InlineData("\"3\"")]
+    [InlineData("\" 2.5 \"")]
+    public void Resolve_RejectsAStationNameThatIsEmptyOrANumber(string name)
+    {
+        var result = Resolve("\"x_mm\": 450, \"y_mm\": 0,", $"\"name\": {name}, \"x_mm\": 450, \"y_mm\": 0,");
+        var problem = Assert.Single(result.Problems);
+        Assert.Equal(("$.stations[0].name", Messages.BadStationName(name.Trim('"'))), (problem.Field, problem.Message));
+    }
+
+    [Fact]
+    public void Resolve_RejectsTwoStationsWithTheSameName()
+    {
+        string once = ReplaceFirst(Demo, "\"x_mm\": 450, \"y_mm\": 0,", "\"name\": \"Front\", \"x_mm\": 450, \"y_mm\": 0,");
+        string twice = ReplaceFirst(once, "\"x_mm\": 225, \"y_mm\": 389.7", "\"name\": \"front\", \"x_mm\": 225, \"y_mm\": 389.7");
+        var read = RigDocumentReader.Read(twice, File);
+        var result = RigResolver.Resolve(read.Document!, Catalogs, File, read.Locations);
+        var problem = Assert.Single(result.Problems);
+        Assert.Equal(("$.stations[1].name", Messages.DuplicateStationName("front", 1)), (problem.Field, problem.Message));
     }
 
     [Fact]
