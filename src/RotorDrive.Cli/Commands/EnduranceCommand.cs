@@ -72,7 +72,8 @@ public static class EnduranceCommand
         }
         Rig rig = model.Rig;
         var sim = SimulationRig.FromModel(model);
-        var result = EnduranceSimulator.Run(sim);
+        var study = EnduranceStudy.Run(sim);
+        var result = study.Run;
         if (csvPath is not null && result.Trace is { } trace)
         {
             var problem = AtomicFile.WriteAllText(csvPath, TraceCsv.Format(trace), force);
@@ -91,7 +92,7 @@ public static class EnduranceCommand
                 return ExitCodes.BadInput;
             }
         }
-        bool pass = result.Passes();
+        bool pass = study.Passes;
         var report = new EnduranceReport(
             rig.Name,
             result.RuntimeS,
@@ -117,6 +118,8 @@ public static class EnduranceCommand
             PlateConductivityWPerMK = result.PlateSetup?.ConductivityWPerMK,
             PlateLossWPerM2K = result.PlateSetup?.LossWPerM2K,
             Trace = result.Trace is { } tr ? TraceEntries(tr, result) : null,
+            FailedCriteria = study.FailedCriteria,
+            LimitingConstraint = study.LimitingConstraint,
         };
         if (json)
         {
@@ -144,8 +147,7 @@ public static class EnduranceCommand
         }
         if (plot.Path is { } plotPath)
         {
-            double? maxWinding = sim.Drivetrains.Select(d => d.Motor.MaxWindingTempC).Where(m => m is not null).Min();
-            var figure = EndurancePlot.Build(result, rig.Limits, sim.Packs.CellsSeries, maxWinding, rig.Name, plot.Today);
+            var figure = EndurancePlot.Build(result, rig.Limits, sim.Packs.CellsSeries, study.MaxWindingTempC, rig.Name, plot.Today);
             if (!CommonOptions.WritePlot("endurance", figure, plotPath, force, error))
             {
                 return ExitCodes.BadInput;
@@ -181,6 +183,10 @@ public static class EnduranceCommand
         public double? PlateConductivityWPerMK { get; init; }
 
         public double? PlateLossWPerM2K { get; init; }
+
+        public IReadOnlyList<string> FailedCriteria { get; init; } = [];
+
+        public string? LimitingConstraint { get; init; }
 
         public IReadOnlyList<TraceEntry>? Trace { get; init; }
 
