@@ -333,8 +333,7 @@ public static class EnduranceSimulator
                 p.Speed[j] = h.SpeedRadPerS;
                 p.Current[j] = h.MotorCurrentA;
                 // Winding heat: copper loss I^2 R(T) and the no-load loss I0 E (Drela 2007), as the drive model books them.
-                p.WindingHeat[j] = h.MotorCurrentA * h.MotorCurrentA * motor.ResistanceAt(station.Conditions.WindingTempC)
-                    + motor.NoLoadCurrentA * station.FluxFactor * h.SpeedRadPerS / motor.KvRadPerSPerV;
+                p.WindingHeat[j] = WindingThermalNode.HeatW(motor, h.MotorCurrentA, h.SpeedRadPerS, station.Conditions.WindingTempC, station.FluxFactor);
                 p.PlateHeat[j] = h.EddyPowerW;
             }
             p.BusVoltage = hover.BusVoltageV;
