@@ -7,6 +7,7 @@ using RotorDrive.Core.Craft;
 using RotorDrive.Core.Loads;
 using RotorDrive.Core.Magnetics;
 using RotorDrive.Core.Studies;
+using RotorDrive.Files;
 using RotorDrive.Files.Plots;
 
 namespace RotorDrive.Cli.Commands;
@@ -140,28 +141,9 @@ public static class LoadCommand
         }
         Rig rig = loaded.Rig!;
 
-        RotorDesign design;
-        int? stationIndex = null;
-        if (request.RotorId is { } id)
+        if (!TryResolveRotor(request, loaded, error, out var design, out int? stationIndex))
         {
-            RotorDesign? found = loaded.Catalog!.Rotors.FirstOrDefault(r => string.Equals(r.Id, id, StringComparison.Ordinal));
-            if (found is null)
-            {
-                error.WriteLine($"rotordrive load: error: --rotor: no rotor '{id}' in {loaded.CatalogPaths!.Rotors}; known ids: {string.Join(", ", loaded.Catalog.Rotors.Select(r => r.Id))}.");
-                return ExitCodes.BadInput;
-            }
-            design = found;
-        }
-        else
-        {
-            int number = request.Station ?? 1;
-            if (number > rig.Stations.Count)
-            {
-                error.WriteLine($"rotordrive load: error: --station {number}: the rig has {rig.Stations.Count} station(s), numbered 1 to {rig.Stations.Count}.");
-                return ExitCodes.BadInput;
-            }
-            stationIndex = number;
-            design = rig.Stations[number - 1].Rotor;
+            return ExitCodes.BadInput;
         }
 
         LoadModelKind? kind = request.Model switch
@@ -209,6 +191,36 @@ public static class LoadCommand
             error.WriteLine($"Caution: speeds above rotor '{design.Id}''s rated {Numbers.Format(Units.RadPerSToRpm(design.MaxSpeedRadPerS), 0)} rpm were asked for; a rotor run past its rating can burst.");
         }
         return ExitCodes.Ok;
+    }
+
+    // The rotor asked for: a catalog rotor by --rotor, else the rotor of --station (default 1).
+    private static bool TryResolveRotor(LoadRequest request, RigLoadResult loaded, TextWriter error, out RotorDesign design, out int? stationIndex)
+    {
+        design = null!;
+        stationIndex = null;
+        Rig rig = loaded.Rig!;
+        if (request.RotorId is { } id)
+        {
+            RotorDesign? found = loaded.Catalog!.Rotors.FirstOrDefault(r => string.Equals(r.Id, id, StringComparison.Ordinal));
+            if (found is null)
+            {
+                error.WriteLine($"rotordrive load: error: --rotor: no rotor '{id}' in {loaded.CatalogPaths!.Rotors}; known ids: {string.Join(", ", loaded.Catalog.Rotors.Select(r => r.Id))}.");
+                return false;
+            }
+            design = found;
+        }
+        else
+        {
+            int number = request.Station ?? 1;
+            if (number > rig.Stations.Count)
+            {
+                error.WriteLine($"rotordrive load: error: --station {number}: the rig has {rig.Stations.Count} station(s), numbered 1 to {rig.Stations.Count}.");
+                return false;
+            }
+            stationIndex = number;
+            design = rig.Stations[number - 1].Rotor;
+        }
+        return true;
     }
 
     private static LoadReport ToReport(LoadSweepResult result, int? station, string model, bool steelUnderPlate) => new(
