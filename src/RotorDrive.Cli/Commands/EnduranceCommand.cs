@@ -276,7 +276,7 @@ public static class EnduranceCommand
             error.Write("\r" + new string(' ', 40) + "\r");
         }
         var report = new SweepReport(model.Rig.Name, model.Rig.Limits.PlateTempC, rows.Select(r => new SweepRow(
-            r.MaterialId, r.ThicknessM * 1000, r.HoverExists, r.HoverPowerW, r.PlatePowerW, r.PlateLimitTimeS, r.RuntimeS, r.EndedBy.ToString(), r.HoverTimeS, r.PlateCutsHover, r.HoverExists && r.EndedBy.Passes() && !r.PlateCutsHover)).ToArray());
+            r.MaterialId, r.ThicknessM * 1000, r.HoverExists, r.HoverPowerW, r.PlatePowerW, r.PlateLimitTimeS, r.RuntimeS, r.EndedBy.ToString(), r.HoverTimeS, r.PlateCutsHover, r.Passes)).ToArray());
         if (json)
         {
             JsonOutput.Write(output, report);
