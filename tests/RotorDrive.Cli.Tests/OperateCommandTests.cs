@@ -61,6 +61,12 @@ public sealed class OperateCommandTests : IDisposable
         var limits = equilibria[0].GetProperty("limits").EnumerateArray().ToArray();
         Assert.Contains(limits, l => l.GetProperty("limit").GetString() == "controller_continuous_current" && l.GetProperty("exceeded").GetBoolean());
         Assert.Equal(1, doc.RootElement.GetProperty("reached_from_rest").GetInt32());
+        // The verdict names each failed criterion and the binding limit (the reached point's smallest margin); duty 1 runs
+        // at the rig's max_duty cap.
+        var failed = doc.RootElement.GetProperty("failed_criteria").EnumerateArray().Select(e => e.GetString()).ToList();
+        Assert.Contains("controller_continuous_current", failed);
+        Assert.Equal(expected.ReachedFromRest!.Margins.MinBy(m => m.MarginFraction)!.Limit.Key(), doc.RootElement.GetProperty("limiting_constraint").GetString());
+        Assert.All(equilibria, e => Assert.True(e.GetProperty("duty").GetDouble() <= 0.95 + 1e-12));
     }
 
     // The table for people names the stall below the drag peak.
@@ -96,7 +102,7 @@ public sealed class OperateCommandTests : IDisposable
         Assert.Equal(ExitCodes.LimitFindings, code);
     }
 
-    // --sweep: 21 duties from 0 to 1; zero duty leaves the rotor at rest.
+    // --sweep: 21 duties from 0 to the rig's max_duty (0.95); zero duty leaves the rotor at rest.
     [Fact]
     public async Task Operate_Sweep_TabulatesThePointReachedFromRest()
     {
@@ -107,7 +113,7 @@ public sealed class OperateCommandTests : IDisposable
         Assert.Equal(21, rows.Length);
         Assert.Equal(0.0, rows[0].GetProperty("duty").GetDouble());
         Assert.Equal("at_rest", rows[0].GetProperty("reached_from_rest").GetProperty("kind").GetString());
-        Assert.Equal(1.0, rows[^1].GetProperty("duty").GetDouble(), 12);
+        Assert.Equal(0.95, rows[^1].GetProperty("duty").GetDouble(), 12);
     }
 
     // At duty 0.0005 the stalled motor draws d V / R_t = 0.0005 x ~46 V / 0.022 ohm = ~1 A, below its 2 A no-load
@@ -180,8 +186,9 @@ public sealed class OperateCommandTests : IDisposable
                 new CellCurve("lipo", [0.0, 0.5, 1.0], [3.3, 3.8, 4.2]));
             var rig = new Rig("t", Plate, AmbientC, AmbientC, new CraftBody(20, 5, 0, 0, 2, 0.2), 0.010, 0.004, [], packs,
                 new RigLimits(0.5, 90, 3.3, 0.8, 0.95, 6), 5, 12);
-            var drivetrain = new Drivetrain(motor, controller);
-            double free = drivetrain.FreeSpeedRadPerS(packs.OpenCircuitVoltageAt(1.0), 1.0, AmbientC);
+            // The drivetrain capped at the rig's max_duty (0.95), as every analysis builds it; duty 1 runs at the cap.
+            var drivetrain = new Drivetrain(motor, controller, DriveOptions.Default with { MaxDuty = rig.Limits.MaxDuty });
+            double free = drivetrain.FreeSpeedRadPerS(packs.OpenCircuitVoltageAt(1.0), drivetrain.MaxDuty, AmbientC);
             var range = rig.LoadTableRangeFor(Rotor);
             range = range with { MaxSpeedRadPerS = Math.Max(range.MaxSpeedRadPerS, 1.1 * free), MinGapM = Math.Min(range.MinGapM, 0.005), MaxGapM = Math.Max(range.MaxGapM, 0.015) };
             var drive = new StationDrive(drivetrain, packs, Rotor, RotorLoadTable.Build(Rotor, Plate, range, new LoadModelOptions { Model = LoadModelKind.TwoDimensional }), rig.Limits.Station);

@@ -1,6 +1,7 @@
 using System.Text.Json;
 using RotorDrive.Core;
 using RotorDrive.Core.Studies.Ranking;
+using RotorDrive.Core.Tests.Support;
 using RotorDrive.Files;
 using Xunit;
 
@@ -70,19 +71,19 @@ public sealed class RankCommandTests : IDisposable
         var h = hovered.RootElement;
         Assert.Equal("trimmed", h.GetProperty("mode").GetString());
 
-        Close(h.GetProperty("mass_kg").GetDouble(), winner.GetProperty("total_mass_kg").GetDouble(), 1e-14);
-        Close(h.GetProperty("pack_current_a").GetDouble(), winner.GetProperty("pack_current_a").GetDouble(), Agreement);
-        Close(h.GetProperty("pack_voltage_v").GetDouble(), winner.GetProperty("bus_voltage_v").GetDouble(), Agreement);
-        Close(h.GetProperty("lift_specific_power_w_per_n").GetDouble(), winner.GetProperty("lift_specific_power_w_per_n").GetDouble(), Agreement);
+        RelAssert.Close(h.GetProperty("mass_kg").GetDouble(), winner.GetProperty("total_mass_kg").GetDouble(), 1e-14);
+        RelAssert.Close(h.GetProperty("pack_current_a").GetDouble(), winner.GetProperty("pack_current_a").GetDouble(), Agreement);
+        RelAssert.Close(h.GetProperty("pack_voltage_v").GetDouble(), winner.GetProperty("bus_voltage_v").GetDouble(), Agreement);
+        RelAssert.Close(h.GetProperty("lift_specific_power_w_per_n").GetDouble(), winner.GetProperty("lift_specific_power_w_per_n").GetDouble(), Agreement);
         var hs = h.GetProperty("stations").EnumerateArray().ToArray();
         var rs = winner.GetProperty("stations").EnumerateArray().ToArray();
         Assert.Equal(6, rs.Length);
         Assert.Equal(hs.Length, rs.Length);
         for (int i = 0; i < hs.Length; i++)
         {
-            Close(hs[i].GetProperty("speed_rpm").GetDouble(), rs[i].GetProperty("speed_rpm").GetDouble(), Agreement);
-            Close(hs[i].GetProperty("motor_current_a").GetDouble(), rs[i].GetProperty("motor_current_a").GetDouble(), Agreement);
-            Close(hs[i].GetProperty("duty").GetDouble(), rs[i].GetProperty("duty").GetDouble(), Agreement);
+            RelAssert.Close(hs[i].GetProperty("speed_rpm").GetDouble(), rs[i].GetProperty("speed_rpm").GetDouble(), Agreement);
+            RelAssert.Close(hs[i].GetProperty("motor_current_a").GetDouble(), rs[i].GetProperty("motor_current_a").GetDouble(), Agreement);
+            RelAssert.Close(hs[i].GetProperty("duty").GetDouble(), rs[i].GetProperty("duty").GetDouble(), Agreement);
         }
     }
 
@@ -193,11 +194,11 @@ public sealed class RankCommandTests : IDisposable
             if (d.Accepted)
             {
                 direct.Add(d);
-                Close(d.Figures!.RuntimeS, f.Figures!.RuntimeS, 1e-7);
-                Close(d.Figures.TotalMassKg, f.Figures.TotalMassKg, 1e-12);
-                Close(d.Figures.CurrentMarginFraction!.Value, f.Figures.CurrentMarginFraction!.Value, 1e-6);
-                Close(d.Figures.MaxSpeedRpm, f.Figures.MaxSpeedRpm, 1e-8);
-                Close(d.Figures.PackCurrentA, f.Figures.PackCurrentA, 1e-7);
+                RelAssert.Close(d.Figures!.RuntimeS, f.Figures!.RuntimeS, 1e-7);
+                RelAssert.Close(d.Figures.TotalMassKg, f.Figures.TotalMassKg, 1e-12);
+                RelAssert.Close(d.Figures.CurrentMarginFraction!.Value, f.Figures.CurrentMarginFraction!.Value, 1e-6);
+                RelAssert.Close(d.Figures.MaxSpeedRpm, f.Figures.MaxSpeedRpm, 1e-8);
+                RelAssert.Close(d.Figures.PackCurrentA, f.Figures.PackCurrentA, 1e-7);
             }
         }
         // Same order as sorting the straightforward results by runtime, ties by ids.
@@ -206,7 +207,4 @@ public sealed class RankCommandTests : IDisposable
             .Select(e => e.Candidate).ToList();
         Assert.Equal(expected, a.Ordered);
     }
-
-    private static void Close(double expected, double actual, double relative)
-        => Assert.True(Math.Abs(actual - expected) <= relative * Math.Abs(expected), $"expected {expected:R}, got {actual:R}");
 }

@@ -73,26 +73,13 @@ public static class EnduranceCommand
         }
         Rig rig = model.Rig;
         var sim = SimulationRig.FromModel(model);
-        var result = EnduranceSimulator.Run(sim);
-        if (csvPath is not null && result.Trace is { } trace)
+        var study = EnduranceStudy.Run(sim);
+        var result = study.Run;
+        if (!WriteExports(result, csvPath, mapPath, force, error))
         {
-            var problem = AtomicFile.WriteAllText(csvPath, TraceCsv.Format(trace), force);
-            if (problem is not null)
-            {
-                ProblemReport.Print([problem], error);
-                return ExitCodes.BadInput;
-            }
+            return ExitCodes.BadInput;
         }
-        if (mapPath is not null && result.PlateMap is { } map)
-        {
-            var problem = AtomicFile.WriteAllText(mapPath, PlateMapCsv(map), force);
-            if (problem is not null)
-            {
-                ProblemReport.Print([problem], error);
-                return ExitCodes.BadInput;
-            }
-        }
-        bool pass = result.Passes();
+        bool pass = study.Passes;
         var report = new EnduranceReport(
             rig.Name,
             result.RuntimeS,
@@ -118,6 +105,8 @@ public static class EnduranceCommand
             PlateConductivityWPerMK = result.PlateSetup?.ConductivityWPerMK,
             PlateLossWPerM2K = result.PlateSetup?.LossWPerM2K,
             Trace = result.Trace is { } tr ? TraceEntries(tr, result) : null,
+            FailedCriteria = study.FailedCriteria,
+            LimitingConstraint = study.LimitingConstraint,
         };
         if (json)
         {
@@ -125,34 +114,53 @@ public static class EnduranceCommand
         }
         else
         {
-            output.WriteLine($"Endurance: {report.Rig}, trimmed hover at the {Numbers.Format(rig.DesignGapM * 1000, 1)} mm design gap from a full pack");
-            output.WriteLine($"  runtime: {Numbers.Format(report.RuntimeS, 0)} s ({Numbers.Format(report.RuntimeMin, 1)} min)");
-            output.WriteLine($"  ended by: {report.FirstLimit}");
-            output.WriteLine(report.StartSpeedsRpm.Count == 0
-                ? "  at the start: no trimmed hover exists"
-                : $"  at the start: {string.Join(" / ", report.StartSpeedsRpm.Select(r => Numbers.Format(r, 0)))} rpm (stations 1..{report.StartSpeedsRpm.Count}), pack current {Numbers.Format(report.StartPackCurrentA, 1)} A");
-            output.WriteLine($"  at the end: state of charge {Numbers.Format(report.FinalSocPct, 1)} %, bus {Numbers.Format(report.FinalBusVoltageV, 1)} V, pack current {Numbers.Format(report.FinalPackCurrentA, 1)} A");
-            output.WriteLine($"  hottest winding {Numbers.Format(report.PeakWindingTempC, 1)} C, hottest point of the plate {Numbers.Format(report.PeakPlateTempC, 1)} C (limit {Numbers.Format(report.PlateLimitC, 0)} C)");
-            if (report.PlateHotspot is { } h)
-            {
-                output.WriteLine($"  plate hot spot at the end: x {Numbers.Format(h.XMm, 0)} mm, y {Numbers.Format(h.YMm, 0)} mm, {Numbers.Format(h.TemperatureC, 1)} C"
-                    + (report.PlateLimitTimeS is { } tl ? $"; the plate limit is reached at {Numbers.Format(tl, 0)} s" : string.Empty));
-            }
-            output.WriteLine($"  plate model: {report.PlatePatch}");
-            output.WriteLine();
-            output.WriteLine(pass ? "Result: the pack ends the hover (no thermal or current limit first)." : "Result: FAILS: a limit other than the pack ends the hover.");
-            output.WriteLine("Caution: plates and windings get hot enough to burn; lithium packs can burn when over-discharged. Estimates only: defer to manufacturers' ratings.");
+            WriteText(report, rig, pass, output);
         }
         if (plot.Path is { } plotPath)
         {
-            double? maxWinding = sim.Drivetrains.Select(d => d.Motor.MaxWindingTempC).Where(m => m is not null).Min();
-            var figure = EndurancePlot.Build(result, rig.Limits, sim.Packs.CellsSeries, maxWinding, rig.Name, plot.Today);
+            var figure = EndurancePlot.Build(result, rig.Limits, sim.Packs.CellsSeries, study.MaxWindingTempC, rig.Name, plot.Today);
             if (!CommonOptions.WritePlot("endurance", figure, plotPath, force, error))
             {
                 return ExitCodes.BadInput;
             }
         }
         return pass ? ExitCodes.Ok : ExitCodes.LimitFindings;
+    }
+
+    private static void WriteText(EnduranceReport report, Rig rig, bool pass, TextWriter output)
+    {
+        output.WriteLine($"Endurance: {report.Rig}, trimmed hover at the {Numbers.Format(rig.DesignGapM * 1000, 1)} mm design gap from a full pack");
+        output.WriteLine($"  runtime: {Numbers.Format(report.RuntimeS, 0)} s ({Numbers.Format(report.RuntimeMin, 1)} min)");
+        output.WriteLine($"  ended by: {report.FirstLimit}");
+        output.WriteLine(report.StartSpeedsRpm.Count == 0
+            ? "  at the start: no trimmed hover exists"
+            : $"  at the start: {string.Join(" / ", report.StartSpeedsRpm.Select(r => Numbers.Format(r, 0)))} rpm (stations 1..{report.StartSpeedsRpm.Count}), pack current {Numbers.Format(report.StartPackCurrentA, 1)} A");
+        output.WriteLine($"  at the end: state of charge {Numbers.Format(report.FinalSocPct, 1)} %, bus {Numbers.Format(report.FinalBusVoltageV, 1)} V, pack current {Numbers.Format(report.FinalPackCurrentA, 1)} A");
+        output.WriteLine($"  hottest winding {Numbers.Format(report.PeakWindingTempC, 1)} C, hottest point of the plate {Numbers.Format(report.PeakPlateTempC, 1)} C (limit {Numbers.Format(report.PlateLimitC, 0)} C)");
+        if (report.PlateHotspot is { } h)
+        {
+            output.WriteLine($"  plate hot spot at the end: x {Numbers.Format(h.XMm, 0)} mm, y {Numbers.Format(h.YMm, 0)} mm, {Numbers.Format(h.TemperatureC, 1)} C"
+                + (report.PlateLimitTimeS is { } tl ? $"; the plate limit is reached at {Numbers.Format(tl, 0)} s" : string.Empty));
+        }
+        output.WriteLine($"  plate model: {report.PlatePatch}");
+        output.WriteLine();
+        output.WriteLine(pass ? "Result: the pack ends the hover (no thermal or current limit first)." : "Result: FAILS: a limit other than the pack ends the hover.");
+        output.WriteLine("Caution: plates and windings get hot enough to burn; lithium packs can burn when over-discharged. Estimates only: defer to manufacturers' ratings.");
+    }
+
+    private static bool WriteExports(EnduranceResult result, string? csvPath, string? mapPath, bool force, TextWriter error)
+    {
+        if (csvPath is not null && result.Trace is { } trace && AtomicFile.WriteAllText(csvPath, TraceCsv.Format(trace), force) is { } traceProblem)
+        {
+            ProblemReport.Print([traceProblem], error);
+            return false;
+        }
+        if (mapPath is not null && result.PlateMap is { } map && AtomicFile.WriteAllText(mapPath, PlateMapCsv(map), force) is { } mapProblem)
+        {
+            ProblemReport.Print([mapProblem], error);
+            return false;
+        }
+        return true;
     }
 
     private sealed record EnduranceReport(
@@ -182,6 +190,10 @@ public static class EnduranceCommand
         public double? PlateConductivityWPerMK { get; init; }
 
         public double? PlateLossWPerM2K { get; init; }
+
+        public IReadOnlyList<string> FailedCriteria { get; init; } = [];
+
+        public string? LimitingConstraint { get; init; }
 
         public IReadOnlyList<TraceEntry>? Trace { get; init; }
 
@@ -264,7 +276,7 @@ public static class EnduranceCommand
             error.Write("\r" + new string(' ', 40) + "\r");
         }
         var report = new SweepReport(model.Rig.Name, model.Rig.Limits.PlateTempC, rows.Select(r => new SweepRow(
-            r.MaterialId, r.ThicknessM * 1000, r.HoverExists, r.HoverPowerW, r.PlatePowerW, r.PlateLimitTimeS, r.RuntimeS, JsonNames.Of(r.EndedBy), r.HoverTimeS, r.PlateCutsHover, r.HoverExists && r.EndedBy.Passes() && !r.PlateCutsHover)).ToArray());
+            r.MaterialId, r.ThicknessM * 1000, r.HoverExists, r.HoverPowerW, r.PlatePowerW, r.PlateLimitTimeS, r.RuntimeS, JsonNames.Of(r.EndedBy), r.HoverTimeS, r.PlateCutsHover, r.Passes)).ToArray());
         if (json)
         {
             JsonOutput.Write(output, report);

@@ -6,6 +6,7 @@ using RotorDrive.Core.Craft;
 using RotorDrive.Core.Drive;
 using RotorDrive.Core.Safety;
 using RotorDrive.Files.Rigs;
+using RotorDrive.Core.Studies;
 
 namespace RotorDrive.Cli.Commands;
 
@@ -60,13 +61,8 @@ public static class HoverCommand
         {
             return ExitCodes.BadInput;
         }
-        if (payloadKg is { } p)
-        {
-            model = model.WithPayload(p);
-        }
-        double gapM = (gapMm ?? model.DesignGapM * 1000) / 1000;
-        var review = commonDuty is { } d ? HoverReview.Of(model, CommonDutyHover.Solve(model, d)) : HoverReview.Trimmed(model, gapM);
-        var report = ToReport(model, review);
+        var study = HoverStudy.Run(model, new HoverStudyRequest(gapMm / 1000, commonDuty, payloadKg));
+        var report = ToReport(study);
         if (json)
         {
             JsonOutput.Write(output, report);
@@ -75,11 +71,13 @@ public static class HoverCommand
         {
             WriteText(report, output);
         }
-        return review.Pass ? ExitCodes.Ok : ExitCodes.LimitFindings;
+        return study.HoverPasses ? ExitCodes.Ok : ExitCodes.LimitFindings;
     }
 
-    private static HoverReport ToReport(RigModel model, HoverReview review)
+    private static HoverReport ToReport(HoverStudyResult study)
     {
+        var model = study.Model;
+        var review = study.Review;
         var h = review.Hover;
         var safety = review.Safety;
         var stations = h.Stations.Select(s => new StationEntry(
@@ -87,15 +85,15 @@ public static class HoverCommand
             s.MotorCurrentA, s.BusCurrentA, s.EddyPowerW, s.ElectricalPowerW, s.LiftSpecificPowerWPerN, JsonNames.Of(s.Regime), s.Stable,
             s.Margins.Select(Margin).ToList())).ToList();
         var hoverRotors = safety.AtHover;
-        var worst = hoverRotors.Where(r => r.HoopStressPa is not null).OrderByDescending(r => r.HoopStressPa).FirstOrDefault();
-        var worstMax = safety.AtMaxRpm.Where(r => r.HoopStressPa is not null).OrderByDescending(r => r.HoopStressPa).FirstOrDefault();
+        var worst = safety.WorstAtHover;
+        var worstMax = safety.WorstAtMaxRpm;
         var safetyEntry = new SafetyEntry(
             hoverRotors.Count > 0 ? hoverRotors.Max(r => r.RimSpeedMPerS) : null,
-            worst?.HoopStressPa / 1e6, worst?.RingOwnStressPa / 1e6, worst?.MagnetLoadStressPa / 1e6, worst?.AllowablePa / 1e6, safety.MinHoverMargin,
+            worst?.HoopStressPa / 1e6, worst?.RingOwnStressPa / 1e6, worst?.MagnetLoadStressPa / 1e6, worst?.AllowablePa / 1e6, worst?.MarginFraction,
             new MaxRpmEntry(
-                worstMax is null ? safety.AtMaxRpm.Select(r => Units.RadPerSToRpm(r.SpeedRadPerS)).DefaultIfEmpty(double.NaN).Max() : Units.RadPerSToRpm(worstMax.SpeedRadPerS),
+                worstMax is null ? double.NaN : Units.RadPerSToRpm(worstMax.SpeedRadPerS),
                 safety.AtMaxRpm.Select(r => r.RimSpeedMPerS).DefaultIfEmpty(double.NaN).Max(),
-                worstMax?.HoopStressPa / 1e6, worstMax?.RingOwnStressPa / 1e6, safety.MinMaxRpmMargin),
+                worstMax?.HoopStressPa / 1e6, worstMax?.RingOwnStressPa / 1e6, worstMax?.MarginFraction),
             hoverRotors.Select(r => JsonNames.Of(r.Assessment)).Distinct().ToList(),
             safety.MagnetNote);
         var limits = review.Findings.Select(f => new LimitEntry(f.Limit, f.Station + 1, f.Message)).ToList();
@@ -107,7 +105,7 @@ public static class HoverCommand
             new ResidualEntry(h.ForceResidualRatio, h.PitchResidualRatio, h.RollResidualRatio), h.YawTorqueNm,
             stations, h.PackMargins.Select(Margin).ToList(), limits, review.MaxPayloadKg, safetyEntry,
             safety.Cautions.Select(c => new CautionEntry(JsonNames.Of(c.Topic), JsonNames.Of(c.Level), c.Title, c.Text, c.Reason)).ToList(),
-            h.Iterations);
+            h.Iterations, study.FailedCriteria, study.LimitingConstraint);
     }
 
     private static MarginEntry Margin(LimitMargin m)
@@ -184,7 +182,8 @@ public static class HoverCommand
         double PackVoltageV, double PackCurrentA, double ElectricalPowerW, double PlatePowerW, double LiftSpecificPowerWPerN,
         double HeaveStiffnessNPerMm, double HeaveFrequencyHz, ResidualEntry Residuals, double YawTorqueNm,
         IReadOnlyList<StationEntry> Stations, IReadOnlyList<MarginEntry> PackMargins, IReadOnlyList<LimitEntry> Limits,
-        double? MaxPayloadKg, SafetyEntry Safety, IReadOnlyList<CautionEntry> Cautions, int Iterations);
+        double? MaxPayloadKg, SafetyEntry Safety, IReadOnlyList<CautionEntry> Cautions, int Iterations,
+        IReadOnlyList<string> FailedCriteria, string? LimitingConstraint);
 
     private sealed record ResidualEntry(double Force, double Pitch, double Roll);
 

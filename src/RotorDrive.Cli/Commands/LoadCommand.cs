@@ -7,6 +7,8 @@ using RotorDrive.Core.Craft;
 using RotorDrive.Core.Loads;
 using RotorDrive.Core.Magnetics;
 using RotorDrive.Core.Safety;
+using RotorDrive.Core.Studies;
+using RotorDrive.Files;
 using RotorDrive.Files.Rigs;
 using RotorDrive.Files.Plots;
 
@@ -108,70 +110,39 @@ public static class LoadCommand
         }
         Rig rig = loaded.Rig!;
 
-        RotorDesign design;
-        int? stationIndex = null;
-        if (request.RotorId is { } id)
+        if (!TryResolveRotor(request, loaded, error, out var design, out int? stationIndex))
         {
-            RotorDesign? found = loaded.Catalog!.Rotors.FirstOrDefault(r => string.Equals(r.Id, id, StringComparison.Ordinal));
-            if (found is null)
-            {
-                error.WriteLine($"rotordrive load: error: --rotor: no rotor '{id}' in {loaded.CatalogPaths!.Rotors}; known ids: {string.Join(", ", loaded.Catalog.Rotors.Select(r => r.Id))}.");
-                return ExitCodes.BadInput;
-            }
-            design = found;
-        }
-        else
-        {
-            if (StationOption.Find(rig, request.Station, "load", error) is not { } number)
-            {
-                return ExitCodes.BadInput;
-            }
-            stationIndex = number;
-            design = rig.Stations[number - 1].Rotor;
-        }
-
-        double gapM = (request.GapMm ?? rig.DesignGapM * 1000.0) / 1000.0;
-        double plateTempC = request.PlateTempC ?? rig.PlateTemperatureC;
-        double magnetTempC = rig.AmbientC;
-        if (!(rig.Plate.Material.ConductivityAt(plateTempC) > 0))
-        {
-            error.WriteLine($"rotordrive load: error: --plate-temp-c {plateTempC.ToString(CultureInfo.InvariantCulture)}: plate '{rig.Plate.Material.Id}' would have no conductivity there.");
             return ExitCodes.BadInput;
         }
-        double[] speedsRpm = request.Rpm is { } range
-            ? SpeedGrid.Range(range.FromRpm, range.ToRpm, range.StepRpm)
-            : SpeedGrid.ZeroTo(Units.RadPerSToRpm(design.MaxSpeedRadPerS), DefaultSteps);
-        double[] speeds = speedsRpm.Select(Units.RpmToRadPerS).ToArray();
 
-        // The table analyses use, over the rig's range widened to what was asked.
-        double topSpeed = Math.Max(design.MaxSpeedRadPerS, speeds[^1]);
-        LoadTableRange rigRange = rig.LoadTableRangeFor(design);
-        var tableRange = rigRange with
-        {
-            MaxSpeedRadPerS = topSpeed,
-            MinGapM = Math.Min(rigRange.MinGapM, gapM),
-            MaxGapM = Math.Max(rigRange.MaxGapM, gapM * 1.01),
-            MinPlateTempC = Math.Min(rigRange.MinPlateTempC, plateTempC),
-            MaxPlateTempC = Math.Max(rigRange.MaxPlateTempC, plateTempC),
-        };
-        LoadModelKind kind = request.Model switch
+        LoadModelKind? kind = request.Model switch
         {
             "3d" => LoadModelKind.ThreeDimensional,
             "2d" => LoadModelKind.TwoDimensional,
-            _ => request.EndCorrection ? rig.LoadModel : LoadModelKind.TwoDimensional,
+            _ => request.EndCorrection ? null : LoadModelKind.TwoDimensional,
         };
-        if (kind == LoadModelKind.ThreeDimensional && !request.EndCorrection)
+        if ((kind ?? rig.LoadModel) == LoadModelKind.ThreeDimensional && !request.EndCorrection)
         {
             error.WriteLine("rotordrive load: error: --no-end-correction applies to the 2-D model only (the 3-D model needs no width factor); use --model 2d.");
             return ExitCodes.BadInput;
         }
-        var options = rig.LoadOptionsFor(design, new LoadModelOptions { EndEffectCorrection = request.EndCorrection }) with { Model = kind };
-        TabulatedRotorLoad table = RotorLoadTable.Build(design, rig.Plate, tableRange, options);
-        bool endCorrection = kind == LoadModelKind.TwoDimensional && request.EndCorrection;
-        LoadSweepResult result = LoadSweep.Run(table, design.Id, endCorrection, gapM, plateTempC, magnetTempC, speeds, topSpeed);
+        var studyRequest = new LoadStudyRequest(
+            design,
+            request.GapMm is { } gapMm ? gapMm / 1000.0 : null,
+            request.PlateTempC,
+            request.Rpm is { } range ? SpeedGrid.Range(range.FromRpm, range.ToRpm, range.StepRpm).Select(Units.RpmToRadPerS).ToArray() : null,
+            DefaultSteps,
+            kind,
+            request.EndCorrection);
+        if (LoadStudy.Refusal(rig, studyRequest) is { } refusal)
+        {
+            error.WriteLine($"rotordrive load: error: --plate-temp-c: {refusal}.");
+            return ExitCodes.BadInput;
+        }
+        var study = LoadStudy.Run(rig, studyRequest);
+        var result = study.Sweep;
 
-        double? standstillPull = rig.Plate.HasBackIron ? -table.Evaluate(0.0, gapM, plateTempC, magnetTempC).LiftN : null;
-        var report = ToReport(result, stationIndex, stationIndex is { } n ? rig.Stations[n - 1].Name : null, kind == LoadModelKind.ThreeDimensional ? "3d" : "2d", standstillPull);
+        var report = ToReport(result, stationIndex, stationIndex is { } n ? rig.Stations[n - 1].Name : null, study.Model == LoadModelKind.ThreeDimensional ? "3d" : "2d", study.StandstillPullN);
         if (request.Json)
         {
             JsonOutput.Write(output, report);
@@ -184,11 +155,39 @@ public static class LoadCommand
         {
             return ExitCodes.BadInput;
         }
-        if (speedsRpm[^1] > Units.RadPerSToRpm(design.MaxSpeedRadPerS) * (1 + 1e-9))
+        if (study.AboveRatedSpeed)
         {
             error.WriteLine($"Caution: speeds above rotor '{design.Id}''s rated {Numbers.Format(Units.RadPerSToRpm(design.MaxSpeedRadPerS), 0)} rpm were asked for; a rotor run past its rating can burst.");
         }
         return ExitCodes.Ok;
+    }
+
+    // The rotor asked for: a catalog rotor by --rotor, else the rotor of --station (default 1).
+    private static bool TryResolveRotor(LoadRequest request, RigLoadResult loaded, TextWriter error, out RotorDesign design, out int? stationIndex)
+    {
+        design = null!;
+        stationIndex = null;
+        Rig rig = loaded.Rig!;
+        if (request.RotorId is { } id)
+        {
+            RotorDesign? found = loaded.Catalog!.Rotors.FirstOrDefault(r => string.Equals(r.Id, id, StringComparison.Ordinal));
+            if (found is null)
+            {
+                error.WriteLine($"rotordrive load: error: --rotor: no rotor '{id}' in {loaded.CatalogPaths!.Rotors}; known ids: {string.Join(", ", loaded.Catalog.Rotors.Select(r => r.Id))}.");
+                return false;
+            }
+            design = found;
+        }
+        else
+        {
+            if (StationOption.Find(rig, request.Station, "load", error) is not { } number)
+            {
+                return false;
+            }
+            stationIndex = number;
+            design = rig.Stations[number - 1].Rotor;
+        }
+        return true;
     }
 
     private static LoadReport ToReport(LoadSweepResult result, int? station, string? stationName, string model, double? standstillPullN) => new(

@@ -5,7 +5,7 @@ using RotorDrive.Cli.Output;
 using RotorDrive.Core;
 using RotorDrive.Core.Craft;
 using RotorDrive.Core.Drive;
-using RotorDrive.Core.Loads;
+using RotorDrive.Core.Studies;
 using RotorDrive.Files.Rigs;
 using RotorDrive.Files.Plots;
 using RotorDrive.Files;
@@ -41,7 +41,7 @@ public static class OperateCommand
         };
         var plot = CommonOptions.Plot("the motor torque lines over the load curve with every equilibrium");
         var force = CommonOptions.Force();
-        var sweep = new Option<bool>("--sweep") { Description = "Table of the point reached from rest over duty 0 to 1 in steps of 0.05." };
+        var sweep = new Option<bool>("--sweep") { Description = "Table of the point reached from rest at 21 duties from 0 to the rig's limits.max_duty." };
 
         duty.Validators.Add(r => Check(r, r.GetValueOrDefault<double?>() is not { } d || (d >= 0 && d <= 1), $"--duty must lie in [0, 1]; got {Show(r.GetValueOrDefault<double?>())}."));
         hold.Validators.Add(r => Check(r, r.GetValueOrDefault<double?>() is not { } h || (double.IsFinite(h) && h > 0), $"--hold-rpm must be a number greater than 0; got {Show(r.GetValueOrDefault<double?>())}."));
@@ -118,54 +118,56 @@ public static class OperateCommand
             return ExitCodes.BadInput;
         }
         var rig = loaded.Rig!;
-        var catalog = loaded.Catalog!;
-        if (!TryResolve(request, rig, catalog, error, out var setup))
+        if (!TryResolve(request, rig, loaded.Catalog!, error, out var setup))
         {
             return ExitCodes.BadInput;
         }
-
-        double gapM = (request.GapMm ?? rig.DesignGapM * 1000.0) / 1000.0;
-        var conditions = new OperatingConditions(gapM, rig.PlateTemperatureC, rig.AmbientC, rig.AmbientC, rig.AmbientC, request.SocPct / 100.0);
-        var drive = new StationDrive(setup.Drivetrain, setup.Packs, setup.Station.Rotor, BuildLoad(rig, setup, gapM), rig.Limits.Station);
-
-        if (request.Sweep)
+        var study = OperateStudy.Run(rig, new OperateStudyRequest(
+            setup.Number - 1,
+            setup.Motor,
+            setup.Controller,
+            setup.Packs,
+            request.Sweep ? null : request.HoldRpm is { } rpm ? ThrottleCommand.HoldRpm(rpm) : request.Duty is { } d ? ThrottleCommand.Duty(d) : null,
+            request.GapMm is { } gapMm ? gapMm / 1000.0 : null,
+            request.SocPct / 100.0,
+            request.Sweep ? SweepSteps : null));
+        Write(request, Report(request, study), output);
+        if (request.PlotPath is { } plotPath && !WritePlot(request, rig, study, plotPath, error))
         {
-            var rows = OperatingPointFinder.SweepDuty(drive, conditions, SweepSteps);
-            var sweepReport = Report(request, setup, gapM, rows[^1], sweep: rows);
-            Write(request, sweepReport, output);
-            if (request.PlotPath is { } sweepPlot)
-            {
-                var map = TorqueSpeedMap.Compute(drive, conditions, PlotDuties);
-                var crossings = map.Curves.SelectMany(c => c.Equilibria).ToList();
-                var figure = OperatePlot.Build(map, crossings, $"{setup.Station.Label(setup.Index - 1)}, duty swept", rig.Name, request.Today);
-                if (!CommonOptions.WritePlot("operate", figure, sweepPlot, request.Force, error))
-                {
-                    return ExitCodes.BadInput;
-                }
-            }
-            return rows[0].Compatible ? ExitCodes.Ok : ExitCodes.LimitFindings;
+            return ExitCodes.BadInput;
         }
+        return study.Passes ? ExitCodes.Ok : ExitCodes.LimitFindings;
+    }
 
-        var throttle = request.HoldRpm is { } rpm ? ThrottleCommand.HoldRpm(rpm) : ThrottleCommand.Duty(request.Duty ?? rig.Limits.MaxDuty);
-        var result = OperatingPointFinder.Find(drive, throttle, conditions);
-        var report = Report(request, setup, gapM, result, sweep: null);
-        Write(request, report, output);
-        if (request.PlotPath is { } plotPath)
+    private static bool WritePlot(OperateRequest request, Rig rig, OperateStudyResult study, string plotPath, TextWriter error)
+    {
+        var throttle = study.Point.Throttle;
+        string what;
+        IReadOnlyList<OperatingPoint> marked;
+        double[] duties;
+        if (study.Sweep is not null)
+        {
+            duties = PlotDuties;
+            marked = [];
+            what = $"{study.Station.Label(study.Request.Station)}, duty swept";
+        }
+        else
         {
             // The torque line at the duty asked for; holding a speed, at each duty the controller settled on.
-            double[] duties = throttle.Kind == ThrottleKind.Duty
+            duties = throttle.Kind == ThrottleKind.Duty
                 ? [throttle.Value]
-                : result.Equilibria.Select(e => e.Duty).Where(d => d > 0).Distinct().DefaultIfEmpty(rig.Limits.MaxDuty).ToArray();
-            var map = TorqueSpeedMap.Compute(drive, conditions, duties);
-            string what = throttle.Kind == ThrottleKind.Duty
-                ? $"{setup.Station.Label(setup.Index - 1)} at duty {throttle.Value.ToString("0.###", Ci)}"
-                : $"{setup.Station.Label(setup.Index - 1)} holding {Units.RadPerSToRpm(throttle.Value).ToString("0", Ci)} rpm";
-            if (!CommonOptions.WritePlot("operate", OperatePlot.Build(map, result.Equilibria, what, rig.Name, request.Today), plotPath, request.Force, error))
-            {
-                return ExitCodes.BadInput;
-            }
+                : study.Point.Equilibria.Select(e => e.Duty).Where(d => d > 0).Distinct().DefaultIfEmpty(study.Drive.Drivetrain.MaxDuty).ToArray();
+            marked = study.Point.Equilibria;
+            what = throttle.Kind == ThrottleKind.Duty
+                ? $"{study.Station.Label(study.Request.Station)} at duty {throttle.Value.ToString("0.###", Ci)}"
+                : $"{study.Station.Label(study.Request.Station)} holding {Units.RadPerSToRpm(throttle.Value).ToString("0", Ci)} rpm";
         }
-        return report.LimitsHold ? ExitCodes.Ok : ExitCodes.LimitFindings;
+        var map = study.MapAt(duties);
+        if (study.Sweep is not null)
+        {
+            marked = map.Curves.SelectMany(c => c.Equilibria).ToList();
+        }
+        return CommonOptions.WritePlot("operate", OperatePlot.Build(map, marked, what, rig.Name, request.Today), plotPath, request.Force, error);
     }
 
     // Torque lines drawn for --sweep: a few duties across the range, not all twenty.
@@ -181,7 +183,7 @@ public static class OperateCommand
         }
     }
 
-    private sealed record Setup(int Index, Station Station, Drivetrain Drivetrain, PackBank Packs);
+    private sealed record Setup(int Number, Station Station, Motor? Motor, SpeedController? Controller, PackBank? Packs);
 
     private static bool TryResolve(OperateRequest request, Rig rig, PartsCatalog catalog, TextWriter error, out Setup setup)
     {
@@ -237,65 +239,45 @@ public static class OperateCommand
         {
             return false;
         }
-        setup = new Setup(number, station, new Drivetrain(motor!, controller!), packs!);
+        setup = new Setup(number, station, request.MotorId is null ? null : motor, request.ControllerId is null ? null : controller, request.PackId is null ? null : packs);
         return true;
     }
 
     private static T? Find<T>(IReadOnlyList<T> items, Func<T, string> id, string wanted) where T : class
         => items.FirstOrDefault(x => string.Equals(id(x), wanted, StringComparison.OrdinalIgnoreCase));
 
-    // The precomputed load table, stretched to cover every speed the search can visit (the full-charge free speed)
-    // and the gap asked for.
-    private static IRotorLoad BuildLoad(Rig rig, Setup setup, double gapM)
+    private static OperateReport Report(OperateRequest request, OperateStudyResult study)
     {
-        var rotor = setup.Station.Rotor;
-        double freeSpeed = setup.Drivetrain.FreeSpeedRadPerS(setup.Packs.OpenCircuitVoltageAt(1.0), 1.0, rig.AmbientC);
-        var range = rig.LoadTableRangeFor(rotor);
-        range = range with
-        {
-            MaxSpeedRadPerS = Math.Max(range.MaxSpeedRadPerS, 1.1 * freeSpeed),
-            MinGapM = Math.Min(range.MinGapM, 0.5 * gapM),
-            MaxGapM = Math.Max(range.MaxGapM, 1.5 * gapM),
-        };
-        return RotorLoadTable.Build(rotor, rig.Plate, range, rig.LoadOptionsFor(rotor));
-    }
-
-    private static OperateReport Report(OperateRequest request, Setup setup, double gapM, OperatingPointResult result, IReadOnlyList<OperatingPointResult>? sweep)
-    {
-        var equilibria = result.Equilibria.Select((e, i) => Entry(i + 1, e)).ToList();
+        var result = study.Point;
+        var sweep = study.Sweep;
         var reached = result.ReachedFromRest;
-        // A rotor that stays at rest under a throttle that asks it to turn is a failed finding, like an exceeded limit.
-        bool asksToTurn = result.Throttle.Kind == ThrottleKind.HoldSpeed || result.Throttle.Value > 0;
-        bool limitsHold = result.Compatible
-            && result.HoldMet != false
-            && reached is not null
-            && !(reached.Kind == EquilibriumKind.AtRest && asksToTurn)
-            && !reached.ExceededLimits.Any();
-        var motor = setup.Drivetrain.Motor;
-        var controller = setup.Drivetrain.Controller;
+        var drivetrain = study.Drive.Drivetrain;
+        var packs = study.Drive.Packs;
         return new OperateReport(
             request.RigPath,
-            setup.Index,
-            setup.Station.Name,
-            setup.Station.Spin == SpinDirection.Clockwise ? "cw" : "ccw",
-            setup.Station.Rotor.Id,
-            motor.Id,
-            controller.Id,
-            setup.Packs.Pack.Id,
-            setup.Packs.Count,
-            setup.Packs.CellsSeries,
-            gapM * 1000.0,
+            study.Request.Station + 1,
+            study.Station.Name,
+            study.Station.Spin == SpinDirection.Clockwise ? "cw" : "ccw",
+            study.Station.Rotor.Id,
+            drivetrain.Motor.Id,
+            drivetrain.Controller.Id,
+            packs.Pack.Id,
+            packs.Count,
+            packs.CellsSeries,
+            study.GapM * 1000.0,
             request.SocPct,
             result.OpenCircuitVoltageV,
-            setup.Drivetrain.CurrentLimitA,
+            drivetrain.CurrentLimitA,
             sweep is null ? new ThrottleEntry(result.Throttle.Kind == ThrottleKind.Duty ? "duty" : "hold", result.Throttle.Kind == ThrottleKind.Duty ? result.Throttle.Value : null, result.Throttle.Kind == ThrottleKind.HoldSpeed ? request.HoldRpm : null) : null,
             result.HoldMet,
             result.HoldStoppedBy is { } by ? LimitWords(by) : null,
             result.Findings.Select(f => new FindingEntry(JsonNames.Of(f.Kind), f.Severity == FindingSeverity.Error ? "error" : "warning", f.Message)).ToList(),
-            sweep is null ? equilibria : [],
+            sweep is null ? result.Equilibria.Select((e, i) => Entry(i + 1, e)).ToList() : [],
             reached is null || sweep is not null ? null : result.Equilibria.ToList().IndexOf(reached) + 1,
             sweep?.Select(r => new SweepEntry(r.Throttle.Value, r.Equilibria.Count, r.ReachedFromRest is { } p ? Entry(r.Equilibria.ToList().IndexOf(p) + 1, p) : null)).ToList(),
-            sweep is null ? limitsHold : result.Compatible);
+            study.Passes,
+            study.FailedCriteria,
+            study.LimitingConstraint);
     }
 
     private static EquilibriumEntry Entry(int index, OperatingPoint e) => new(
@@ -478,7 +460,9 @@ public static class OperateCommand
         IReadOnlyList<EquilibriumEntry> Equilibria,
         int? ReachedFromRest,
         IReadOnlyList<SweepEntry>? Sweep,
-        bool LimitsHold);
+        bool LimitsHold,
+        IReadOnlyList<string> FailedCriteria,
+        string? LimitingConstraint);
 
     private sealed record ThrottleEntry(string Mode, double? Duty, double? HoldRpm);
 

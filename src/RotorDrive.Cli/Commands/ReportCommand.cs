@@ -3,6 +3,7 @@ using System.Globalization;
 using System.Reflection;
 using RotorDrive.Core.Craft;
 using RotorDrive.Core.Simulation;
+using RotorDrive.Core.Studies;
 using RotorDrive.Core.Studies.Ranking;
 using RotorDrive.Core.Studies.Stress;
 using RotorDrive.Files;
@@ -86,11 +87,12 @@ public static class ReportCommand
         var catalog = loaded.Catalog!;
 
         error.WriteLine("report: hover, yaw, spin-up, endurance...");
-        var hover = HoverReview.Trimmed(model, model.DesignGapM);
-        var yaw = YawBalance.Analyse(model);
+        var hoverStudy = HoverStudy.Run(model, new HoverStudyRequest(Yaw: true));
+        var hover = hoverStudy.Review;
+        var yaw = hoverStudy.Yaw!;
         var sim = SimulationRig.FromModel(model);
         var spinup = SpinupStudy.Run(sim, new SpinupStudyRequest(ControllerMode.Duty, 2.0, 1.0));
-        var endurance = EnduranceSimulator.Run(sim);
+        var endurance = EnduranceStudy.Run(sim);
 
         RankResult? rank = null;
         Func<RankCandidate, RankEvaluation>? evaluate = null;

@@ -306,7 +306,7 @@ public static class StressCommand
             Cautions);
     }
 
-    private static IReadOnlyList<string> Failed(StressOutcome o) => StressCriteria.All.Where(c => !o.Passed(c)).Select(c => c.Key()).ToList();
+    private static IReadOnlyList<string> Failed(StressOutcome o) => o.FailedCriteria;
 
     private static PartsEntry Parts(StressParts p) => new(
         p.Stations.Select((s, i) => new StationEntry(i + 1, Units.RadPerSToRpm(s.KvRadPerSPerV), s.ResistanceOhm, s.NoLoadCurrentA, s.CurrentLimitA, s.RemanenceT, s.GapOffsetM * 1000)).ToList(),

@@ -1,6 +1,7 @@
 using System.CommandLine;
 using RotorDrive.Cli.Output;
 using RotorDrive.Core.Craft;
+using RotorDrive.Core.Studies;
 
 namespace RotorDrive.Cli.Commands;
 
@@ -29,7 +30,7 @@ public static class YawCommand
         {
             return ExitCodes.BadInput;
         }
-        var y = YawBalance.Analyse(model);
+        var y = HoverStudy.Run(model, new HoverStudyRequest(Yaw: true)).Yaw!;
         var report = new YawReport(
             model.Rig.Name,
             model.DesignGapM * 1000,

@@ -8,7 +8,8 @@ namespace RotorDrive.Core.Craft;
 /// <param name="Hover">The hover state.</param>
 /// <param name="Safety">Rotor safety at hover and at rated speed, and the cautions.</param>
 /// <param name="Findings">The hover's own findings followed by one "retainer_stress" finding per station whose
-/// retaining ring is over its allowable stress at hover speed.</param>
+/// retaining ring is over its allowable stress at hover speed and one "cells_out_of_controller_range" finding per
+/// station whose controller is not rated for the pack's cell count.</param>
 /// <param name="MaxPayloadKg">For a trim that does not hover within every limit: the largest payload that does
 /// (<see cref="HoverTrim.MaxPayloadKg(RigModel, double, HoverOptions?)"/>), or null when even the empty craft does
 /// not; null as well when the trim hovers or the state is not a trim.</param>
@@ -17,9 +18,12 @@ public sealed record HoverReview(HoverResult Hover, HoverSafetyReport Safety, IR
     /// <summary>The finding key for a retaining ring over its allowable hoop stress.</summary>
     public const string RetainerStressKey = "retainer_stress";
 
-    /// <summary>Pass: the craft hovers with every limit holding and no retaining ring is over its allowable stress nor
-    /// any rotor above its rated speed.</summary>
-    public bool Pass => Hover.Status == HoverStatus.Hovering && !Safety.Fails;
+    /// <summary>The finding key for a pack whose cell count a station's controller is not rated for.</summary>
+    public const string CellsOutOfRangeKey = "cells_out_of_controller_range";
+
+    /// <summary>Pass: the craft hovers with every limit holding, no retaining ring is over its allowable stress nor any
+    /// rotor above its rated speed, and every controller is rated for the pack's cell count.</summary>
+    public bool Pass => Hover.Status == HoverStatus.Hovering && !Safety.Fails && !Findings.Any(f => f.Limit == CellsOutOfRangeKey);
 
     /// <summary>Trims the craft at a gap with zero net yaw torque (<see cref="HoverTrim.Solve(RigModel, double, double,
     /// HoverOptions?)"/>) and reviews the result.</summary>
@@ -75,6 +79,17 @@ public sealed record HoverReview(HoverResult Hover, HoverSafetyReport Safety, IR
             {
                 findings.Add(new HoverFinding(RetainerStressKey, turning[k].Index, Invariant(
                     $"station {turning[k].Index + 1}: the retaining ring of rotor {r.RotorId} carries {r.HoopStressPa!.Value / 1e6:0.0} MPa at {Units.RadPerSToRpm(r.SpeedRadPerS):0} rpm, above its allowable {r.AllowablePa!.Value / 1e6:0.0} MPa")));
+            }
+        }
+        // A pack the controllers are not rated for fails whatever the trim (ranking refuses it before trimming).
+        int cells = model.Packs.CellsSeries;
+        for (int i = 0; i < model.Stations.Count; i++)
+        {
+            var controller = model.Stations[i].Drivetrain.Controller;
+            if (!controller.AcceptsCells(cells))
+            {
+                findings.Add(new HoverFinding(CellsOutOfRangeKey, i, Invariant(
+                    $"station {i + 1}: pack {model.Packs.Pack.Id} has {cells} cells in series; controller {controller.Id} is rated for {controller.MinCells} to {controller.MaxCells}")));
             }
         }
         double? maxPayload = hover.Mode == HoverMode.Trimmed && hover.Status is HoverStatus.LimitExceeded or HoverStatus.NoBalance or HoverStatus.BeyondDrivetrain

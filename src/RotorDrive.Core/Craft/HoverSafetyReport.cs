@@ -22,6 +22,23 @@ public sealed record HoverSafetyReport(
     /// <summary>The smallest retainer margin at rated speed, or null when none was assessed.</summary>
     public double? MinMaxRpmMargin => AtMaxRpm.Min(r => r.MarginFraction);
 
+    /// <summary>The rotor closest to failing at hover (<see cref="Worst"/>), or null when no station turns.</summary>
+    public RotorSafetyResult? WorstAtHover => Worst(AtHover);
+
+    /// <summary>The rotor design closest to failing at its rated speed (<see cref="Worst"/>), or null when there is none.</summary>
+    public RotorSafetyResult? WorstAtMaxRpm => Worst(AtMaxRpm);
+
+    /// <summary>The one rule for the retaining ring to show: a failed check first, then the smallest margin, then one
+    /// whose margin could not be assessed (the highest stress among those first).</summary>
+    /// <param name="rotors">The checks.</param>
+    /// <returns>The worst check, or null when there is none.</returns>
+    public static RotorSafetyResult? Worst(IEnumerable<RotorSafetyResult> rotors)
+        => Preconditions.NotNull(rotors, nameof(rotors))
+            .OrderBy(x => x.Passes == false ? 0 : x.MarginFraction is null ? 2 : 1)
+            .ThenBy(x => x.MarginFraction ?? double.MaxValue)
+            .ThenByDescending(x => x.HoopStressPa ?? double.MinValue)
+            .FirstOrDefault();
+
     /// <summary>Whether a retainer is over its allowable stress at hover speed or a rotor runs above its rated speed.</summary>
     public bool Fails => AtHover.Any(r => r.Passes == false);
 }

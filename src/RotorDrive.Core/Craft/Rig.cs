@@ -92,6 +92,9 @@ public sealed record Rig(
         + Stations.Sum(s => s.Rotor.RotorMassKg + (s.Motor?.MassKg ?? 0) + (s.Controller?.MassKg ?? 0))
         + (Packs?.MassKg ?? 0);
 
+    /// <summary>Weight of the whole craft (<see cref="TotalMassKg"/> under standard gravity 9.80665 m/s^2, ISO 80000-3), N.</summary>
+    public double WeightN => TotalMassKg * Units.StandardGravity;
+
     /// <summary>Centre of gravity (x, y) of the whole craft, m: structure, payload and packs at the body's centre of
     /// gravity, each station's rotor, motor and controller on its axis.</summary>
     public (double XM, double YM) CentreOfGravity()

@@ -39,7 +39,17 @@ public sealed record YawResult(
     /// <summary>Authority / tolerance - 1 (negative when the trim cannot command the tolerated torque both ways).</summary>
     public double AuthorityMarginFraction => AuthorityNm / LimitNm - 1;
 
+    /// <summary>Whether an equal duty exists and its residual yaw torque is within the tolerance.</summary>
+    public bool ResidualWithinTolerance => ResidualTorqueNm is { } r && Math.Abs(r) <= LimitNm;
+
+    /// <summary>Whether the trim can command at least the tolerance both ways.</summary>
+    public bool AuthorityCoversTolerance => AuthorityNm >= LimitNm;
+
     /// <summary>Pass: an equal duty exists, its residual yaw torque is within the tolerance, and the trim can command
     /// at least the tolerance both ways.</summary>
-    public bool Pass => ResidualTorqueNm is { } r && Math.Abs(r) <= LimitNm && AuthorityNm >= LimitNm;
+    public bool Pass => ResidualWithinTolerance && AuthorityCoversTolerance;
+
+    /// <summary>Every failed criterion as a key: <c>yaw_residual</c> (no equal duty, or its residual above the tolerance)
+    /// and <c>yaw_authority</c>; empty when the yaw balance passes.</summary>
+    public IReadOnlyList<string> FailedCriteria => [.. ResidualWithinTolerance ? Array.Empty<string>() : ["yaw_residual"], .. AuthorityCoversTolerance ? Array.Empty<string>() : ["yaw_authority"]];
 }

@@ -36,6 +36,21 @@ public sealed record LoadTableRange(
     /// <summary>Lowest plate temperature the default range for a rig covers, C.</summary>
     public const double DefaultColdPlateC = -20.0;
 
+    /// <summary>This range widened to cover what an analysis will visit: speeds up to <paramref name="topSpeedRadPerS"/>,
+    /// gaps from half to one and a half times <paramref name="gapM"/>, and <paramref name="plateTempC"/>. The one rule
+    /// every study uses to size a table beyond the rig's own range (a what-if gap, a hot plate, a fast drivetrain).</summary>
+    /// <param name="topSpeedRadPerS">Highest speed the analysis evaluates, rad/s, or null to keep the range's.</param>
+    /// <param name="gapM">Gap the analysis evaluates at, m, or null to keep the range's gaps.</param>
+    /// <param name="plateTempC">Plate temperature the analysis evaluates at, C, or null to keep the range's.</param>
+    public LoadTableRange Covering(double? topSpeedRadPerS = null, double? gapM = null, double? plateTempC = null) => this with
+    {
+        MaxSpeedRadPerS = topSpeedRadPerS is { } v ? Math.Max(MaxSpeedRadPerS, v) : MaxSpeedRadPerS,
+        MinGapM = gapM is { } g ? Math.Min(MinGapM, 0.5 * g) : MinGapM,
+        MaxGapM = gapM is { } h ? Math.Max(MaxGapM, 1.5 * h) : MaxGapM,
+        MinPlateTempC = plateTempC is { } t ? Math.Min(MinPlateTempC, t) : MinPlateTempC,
+        MaxPlateTempC = plateTempC is { } u ? Math.Max(MaxPlateTempC, u) : MaxPlateTempC,
+    };
+
     /// <summary>Checks every member and throws on the first one out of range.</summary>
     /// <exception cref="ArgumentOutOfRangeException">A member is NaN, infinite or out of range.</exception>
     public void Validate()

@@ -29,15 +29,23 @@ namespace RotorDrive.Core.Simulation;
 /// </remarks>
 public static class EnduranceSimulator
 {
+    // Progress is reported this often, in steps (a step costs tens of microseconds).
+    private const int ProgressEverySteps = 64;
+
     /// <summary>Runs an endurance simulation from a state of charge, with each station's winding at its conditions'
     /// temperature and the plate at theirs.</summary>
     /// <param name="rig">The prepared rig.</param>
     /// <param name="socFraction">State of charge at the start, 0..1, or null for the rig model's.</param>
     /// <param name="options">Settings, or null for <see cref="EnduranceOptions.Default"/>.</param>
+    /// <param name="cancel">Checked once per step.</param>
+    /// <param name="progress">Progress 0..1 (the larger of the charge used and the time used), reported every few steps;
+    /// or null.</param>
     /// <returns>Runtime, first limit, traces and the plate field.</returns>
     /// <exception cref="ArgumentNullException">The rig is null.</exception>
     /// <exception cref="ArgumentOutOfRangeException">A value is out of range.</exception>
-    public static EnduranceResult Run(SimulationRig rig, double? socFraction = null, EnduranceOptions? options = null)
+    /// <exception cref="OperationCanceledException">Cancelled.</exception>
+    public static EnduranceResult Run(SimulationRig rig, double? socFraction = null, EnduranceOptions? options = null,
+        CancellationToken cancel = default, IProgress<double>? progress = null)
     {
         Preconditions.NotNull(rig, nameof(rig));
         double soc = Preconditions.InRange(socFraction ?? rig.SocFraction, 0, 1, nameof(socFraction));
@@ -83,6 +91,11 @@ public static class EnduranceSimulator
         }
         while (limit is null)
         {
+            cancel.ThrowIfCancellationRequested();
+            if (progress is not null && steps % ProgressEverySteps == 0)
+            {
+                progress.Report(Math.Clamp(Math.Max(t / options.MaxDurationS, soc > 0 ? 1 - march.Soc(s0) / soc : 0), 0, 1));
+            }
             double h = Math.Min(Math.Min(options.StepS, options.MaxDurationS - t), route.TimeLeftS);
             if (options.MaxDurationS - t <= 0)
             {
@@ -320,8 +333,7 @@ public static class EnduranceSimulator
                 p.Speed[j] = h.SpeedRadPerS;
                 p.Current[j] = h.MotorCurrentA;
                 // Winding heat: copper loss I^2 R(T) and the no-load loss I0 E (Drela 2007), as the drive model books them.
-                p.WindingHeat[j] = h.MotorCurrentA * h.MotorCurrentA * motor.ResistanceAt(station.Conditions.WindingTempC)
-                    + motor.NoLoadCurrentA * station.FluxFactor * h.SpeedRadPerS / motor.KvRadPerSPerV;
+                p.WindingHeat[j] = WindingThermalNode.HeatW(motor, h.MotorCurrentA, h.SpeedRadPerS, station.Conditions.WindingTempC, station.FluxFactor);
                 p.PlateHeat[j] = h.EddyPowerW;
             }
             p.BusVoltage = hover.BusVoltageV;

@@ -26,6 +26,10 @@ public sealed record PlateSweepRow(
     /// <summary>True when the plate reaches its limit before the run's end: this floor cuts the hover short.</summary>
     public bool PlateCutsHover => !HoverExists || (PlateLimitTimeS is { } t && t < RuntimeS);
 
+    /// <summary>Whether this floor passes: the craft hovers, the plate does not cut the hover short, and the pack ends it
+    /// (<see cref="EnduranceLimits.Passes(EnduranceLimit)"/>).</summary>
+    public bool Passes => HoverExists && EndedBy.Passes() && !PlateCutsHover;
+
     /// <summary>Hover time in place: the earlier of the plate limit and the run's end, s.</summary>
     public double HoverTimeS => HoverExists ? Math.Min(PlateLimitTimeS ?? double.PositiveInfinity, RuntimeS) : 0.0;
 }

@@ -35,7 +35,7 @@ public static class SpinupStudy
         var landCoasting = Land(false);
 
         double controllerMaxV = rig.Drivetrains.Min(d => d.Controller.MaxCells) * request.FullCellV;
-        return new SpinupStudyResult(request, soc, targets, spin, landBraking, landCoasting, controllerMaxV,
+        return new SpinupStudyResult(request, soc, targets, spin, landBraking, landCoasting, controllerMaxV, rig.Rig.Limits.LiftoffTimeS,
             check.Findings, [.. check.Cautions, .. LandingCautions(landBraking, landCoasting, controllerMaxV, request.FullCellV)]);
     }
 

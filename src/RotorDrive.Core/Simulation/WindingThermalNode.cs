@@ -46,21 +46,25 @@ public sealed record WindingThermalNode
             : null;
     }
 
-    /// <summary>Heat generated in the motor, W: copper loss I^2 R(T) + no-load loss I0 |omega| / Kv (Drela 2007).</summary>
+    /// <summary>Heat generated in the motor, W: copper loss I^2 R(T) + no-load loss I0 x back-EMF, the back-EMF being
+    /// flux |omega| / Kv (Drela 2007), as the drive model books it for the spin-up (DrivePoint.CopperLossW + NoLoadLossW);
+    /// the endurance run heats its windings with this.</summary>
     /// <param name="motor">The motor.</param>
     /// <param name="currentA">Motor current, A (either sign; regeneration heats too).</param>
     /// <param name="speedRadPerS">Shaft speed, rad/s.</param>
     /// <param name="windingTempC">Winding temperature, C, for R(T) = R20 (1 + 0.00393 (T - 20)).</param>
+    /// <param name="fluxFactor">The motor magnets' flux relative to their rating at the magnet temperature
+    /// (<see cref="Drive.Drivetrain.FluxFactorAt"/>), which scales the back-EMF; default 1.</param>
     /// <exception cref="ArgumentNullException"><paramref name="motor"/> is null.</exception>
     /// <exception cref="ArgumentOutOfRangeException">A value is not finite.</exception>
-    public static double HeatW(Motor motor, double currentA, double speedRadPerS, double windingTempC)
+    public static double HeatW(Motor motor, double currentA, double speedRadPerS, double windingTempC, double fluxFactor = 1.0)
     {
         Preconditions.NotNull(motor, nameof(motor));
         Preconditions.Finite(currentA, nameof(currentA));
         Preconditions.Finite(speedRadPerS, nameof(speedRadPerS));
         Preconditions.Finite(windingTempC, nameof(windingTempC));
         double copper = currentA * currentA * motor.ResistanceAt(windingTempC);
-        double noLoad = motor.NoLoadCurrentA * Math.Abs(speedRadPerS) / motor.KvRadPerSPerV;
+        double noLoad = motor.NoLoadCurrentA * fluxFactor * Math.Abs(speedRadPerS) / motor.KvRadPerSPerV;
         return copper + noLoad;
     }
 

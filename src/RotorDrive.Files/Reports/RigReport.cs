@@ -28,7 +28,7 @@ public sealed record RigReport(
     YawResult Yaw,
     SimulationRig Simulation,
     SpinupStudyResult Spinup,
-    EnduranceResult Endurance,
+    EnduranceStudyResult Endurance,
     RankResult? Rank,
     Func<RankCandidate, RankEvaluation>? RankEvaluate,
     string? RankNote,

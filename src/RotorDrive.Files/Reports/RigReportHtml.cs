@@ -116,9 +116,9 @@ public static class RigReportHtml
                 : $"Yaw: residual or trim authority outside the tolerance of {N(report.Yaw.LimitNm, 3)} N m.");
         }
         list.AddRange(report.Spinup.Findings.Select(f => $"Spin-up: {f.Message}"));
-        if (!report.Endurance.Passes())
+        if (!report.Endurance.Passes)
         {
-            list.Add($"Endurance: the hover ends by {report.Endurance.FirstLimitText}, not by the pack, after {N(report.Endurance.RuntimeS, 0)} s.");
+            list.Add($"Endurance: the hover ends by {report.Endurance.Run.FirstLimitText}, not by the pack, after {N(report.Endurance.Run.RuntimeS, 0)} s.");
         }
         if (report.Rank is { } rank && rank.Assigned is { Accepted: false } own)
         {
@@ -229,13 +229,12 @@ public static class RigReportHtml
 
     private static void EnduranceSection(StringBuilder s, RigReport report)
     {
-        var r = report.Endurance;
+        var r = report.Endurance.Run;
         var rig = report.Model.Rig;
-        s.Append("<p>").Append(Verdict(r.Passes())).Append(E($" Runtime {N(r.RuntimeS, 0)} s ({N(r.RuntimeS / 60, 1)} min), ended by {r.FirstLimitText}; "
-            + $"hottest winding {N(r.PeakWindingTempC, 1)} C, hottest plate patch {N(r.PeakPlateTempC, 1)} C (limit {N(rig.Limits.PlateTempC, 0)} C)."))
+        s.Append("<p>").Append(Verdict(report.Endurance.Passes)).Append(E($" Runtime {N(r.RuntimeS, 0)} s ({N(r.RuntimeS / 60, 1)} min), ended by {r.FirstLimitText}; "
+            + $"hottest winding {N(r.PeakWindingTempC, 1)} C, hottest plate patch {N(r.PeakPlateTempC, 1)} C (limit {N(report.Endurance.PlateLimitC, 0)} C)."))
             .Append("</p>\n");
-        double? maxWinding = report.Simulation.Drivetrains.Select(d => d.Motor.MaxWindingTempC).Where(m => m is not null).Min();
-        Figure(s, EndurancePlot.Build(r, rig.Limits, report.Simulation.Packs.CellsSeries, maxWinding, rig.Name, report.Date),
+        Figure(s, EndurancePlot.Build(r, rig.Limits, report.Simulation.Packs.CellsSeries, report.Endurance.MaxWindingTempC, rig.Name, report.Date),
             "Endurance: charge, pack voltage and temperatures against time.");
     }
 
@@ -293,7 +292,7 @@ public static class RigReportHtml
 
     private static void CautionSection(StringBuilder s, RigReport report)
     {
-        var cautions = Cautions.For(new CautionFindings(true, report.Hover.Safety.AtHover, report.Endurance.PeakPlateTempC, report.Endurance.PeakWindingTempC,
+        var cautions = Cautions.For(new CautionFindings(true, report.Hover.Safety.AtHover, report.Endurance.Run.PeakPlateTempC, report.Endurance.Run.PeakWindingTempC,
             PlateAttraction.AtStandstill(report.Model)));
         foreach (var c in cautions)
         {

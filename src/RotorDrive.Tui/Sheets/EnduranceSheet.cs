@@ -56,11 +56,8 @@ public sealed class EnduranceSheet : ChartSheet
             return new EnduranceFigures(null, null, missing);
         }
         var sim = SimulationRig.FromModel(models.For(rig));
-        progress?.Report(0.2);
         token.ThrowIfCancellationRequested();
-        var result = EnduranceSimulator.Run(sim, socFraction);
-        progress?.Report(1.0);
-        return new EnduranceFigures(sim, result, []);
+        return new EnduranceFigures(sim, EnduranceStudy.Run(sim, new EnduranceStudyRequest(socFraction), token, progress), []);
     }
 
     /// <inheritdoc/>
@@ -96,17 +93,17 @@ public sealed class EnduranceSheet : ChartSheet
     private void Show(EnduranceFigures figures)
     {
         Shown = figures;
-        if (figures.Result is not { } result || figures.Rig is not { } sim)
+        if (figures.Study is not { } study || figures.Rig is not { } sim)
         {
             Panel.Readout = "! The endurance run needs a motor and controller on every station and a pack:\n" + string.Join("\n", figures.Missing);
             Panel.ShowPages(null);
             _heat.Show(null, [], []);
             return;
         }
-        var (rotors, route) = PlateMarks(sim.Rig, result);
-        _heat.Show(result.PlateMap, rotors, route);
-        Panel.Readout = DescribeReadout(sim, result);
-        Panel.ShowPages(Charts(sim, result), Compose(sim, result));
+        var (rotors, route) = PlateMarks(sim.Rig, study.Run);
+        _heat.Show(study.Run.PlateMap, rotors, route);
+        Panel.Readout = DescribeReadout(study);
+        Panel.ShowPages(Charts(study), Compose(sim, study));
     }
 
     /// <summary>Where the rotors are on the plate at the end of the run (axis, inner and outer magnet radius) and the
@@ -126,17 +123,19 @@ public sealed class EnduranceSheet : ChartSheet
         => seconds >= MinutesFromS ? $"{F(seconds / 60, 1)} min" : $"{F(seconds, 0)} s ({F(seconds / 60, 1)} min)";
 
     /// <summary>The lines above the chart: runtime and verdict, the limit that ended the run, the hottest parts.</summary>
-    internal static string DescribeReadout(SimulationRig sim, EnduranceResult r)
+    internal static string DescribeReadout(EnduranceStudyResult study)
     {
-        string verdict = r.Passes() ? "the pack ends it" : $"{Over} not the pack";
+        var r = study.Run;
+        string verdict = study.Passes ? "the pack ends it" : $"{Over} not the pack";
         return $"runtime {Runtime(r.RuntimeS)}; {verdict}\n"
             + $"ended by {r.FirstLimitText}\n"
-            + $"hottest winding {F(r.PeakWindingTempC, 1)} C, plate {F(r.PeakPlateTempC, 1)} C (limit {F(sim.Rig.Limits.PlateTempC, 0)} C)";
+            + $"hottest winding {F(r.PeakWindingTempC, 1)} C, plate {F(r.PeakPlateTempC, 1)} C (limit {F(study.PlateLimitC, 0)} C)";
     }
 
     /// <summary>The chart pages: state of charge, pack voltage, winding and plate temperatures against time.</summary>
-    internal static IReadOnlyList<ChartData> Charts(SimulationRig sim, EnduranceResult r)
+    internal static IReadOnlyList<ChartData> Charts(EnduranceStudyResult study)
     {
+        var r = study.Run;
         if (r.Trace is not { } t || t.TimeS.Count == 0)
         {
             return [];
@@ -145,21 +144,20 @@ public sealed class EnduranceSheet : ChartSheet
         string axis = minutes ? "time, min" : "time, s";
         var time = minutes ? t.TimeS.Select(x => x / 60).ToList() : t.TimeS.ToList();
         double t0 = time[0], t1 = time[^1];
-        var limits = sim.Rig.Limits;
         var windings = ChartLine.PerStation("stations", time, t.WindingTempC).ToList();
-        if (sim.Drivetrains.Select(d => d.Motor.MaxWindingTempC).Where(m => m is not null).Min() is { } maxWinding)
+        if (study.MaxWindingTempC is { } maxWinding)
         {
             windings.Add(ChartLine.Level("winding limit", '=', t0, t1, maxWinding));
         }
         var plates = ChartLine.PerStation("stations", time, t.PlateTempC).ToList();
-        plates.Add(ChartLine.Level("plate limit", '=', t0, t1, limits.PlateTempC));
+        plates.Add(ChartLine.Level("plate limit", '=', t0, t1, study.PlateLimitC));
         return
         [
             new ChartData(axis, "state of charge, %", [ChartLine.Trace("charge", '*', time, t.SocFraction, s => s * 100)], YFromZero: false),
             new ChartData(axis, "pack voltage, V",
             [
                 ChartLine.Trace("pack", '*', time, t.BusVoltageV),
-                ChartLine.Level("cutoff", '-', t0, t1, limits.CellCutoffV * sim.Packs.CellsSeries),
+                ChartLine.Level("cutoff", '-', t0, t1, study.PackCutoffV),
             ], YFromZero: false),
             new ChartData(axis, "winding temperature, C", windings, YFromZero: false),
             new ChartData(axis, "plate temperature, C", plates, YFromZero: false),
@@ -167,13 +165,14 @@ public sealed class EnduranceSheet : ChartSheet
     }
 
     /// <summary>The figures page: start and end of the hover, the limit, the hottest parts and the cautions.</summary>
-    internal static string Compose(SimulationRig sim, EnduranceResult r)
+    internal static string Compose(SimulationRig sim, EnduranceStudyResult study)
     {
+        var r = study.Run;
         var sb = new StringBuilder();
         sb.AppendLine($"ENDURANCE  trimmed hover at the {F(sim.Rig.DesignGapM * 1000, 1)} mm design gap, {F(sim.MassKg, 1)} kg");
         sb.AppendLine($"  runtime {Runtime(r.RuntimeS)}, {r.Steps} steps");
-        sb.AppendLine($"  {(r.Passes() ? "" : Over + " ")}ended by {r.FirstLimitText}");
-        sb.AppendLine(r.Passes()
+        sb.AppendLine($"  {(study.Passes ? "" : Over + " ")}ended by {r.FirstLimitText}");
+        sb.AppendLine(study.Passes
             ? "  RESULT passes: the pack ends the hover (no thermal, current or trim limit first)"
             : $"  RESULT {Over} fails: a limit other than the pack ends the hover");
         sb.AppendLine();
@@ -183,16 +182,20 @@ public sealed class EnduranceSheet : ChartSheet
             sb.AppendLine($"  station {StationNumbers.Of(s.Index)}: {F(s.SpeedRpm, 0)} rpm, duty {F(s.Duty, 3)}, motor {F(s.MotorCurrentA, 1)} A");
         }
         sb.AppendLine($"AT THE END  charge {F(r.FinalSocFraction * 100, 1)} %, bus {F(r.FinalBusVoltageV, 1)} V, pack current {F(r.FinalPackCurrentA, 1)} A");
-        sb.AppendLine($"  hottest winding {F(r.PeakWindingTempC, 1)} C, hottest point of the plate {F(r.PeakPlateTempC, 1)} C (limit {F(sim.Rig.Limits.PlateTempC, 0)} C)");
+        sb.AppendLine($"  hottest winding {F(r.PeakWindingTempC, 1)} C, hottest point of the plate {F(r.PeakPlateTempC, 1)} C (limit {F(study.PlateLimitC, 0)} C)");
         if (r.PlateHotspot is { } hot)
         {
             sb.AppendLine($"  plate hot spot at the end: x {F(hot.XM * 1000, 0)} mm, y {F(hot.YM * 1000, 0)} mm, {F(hot.TemperatureC, 1)} C");
         }
         sb.AppendLine();
-        sb.Append(CautionText.Compose(Cautions.For(new CautionFindings(true, [], r.PeakPlateTempC, r.PeakWindingTempC, PlateAttraction.AtStandstill(sim.Model)))));
+        sb.Append(CautionText.Compose(study.Cautions));
         return sb.ToString();
     }
 
     /// <summary>What the sheet computed: the prepared rig and the run, or the parts missing before either can be.</summary>
-    internal sealed record EnduranceFigures(SimulationRig? Rig, EnduranceResult? Result, IReadOnlyList<string> Missing);
+    internal sealed record EnduranceFigures(SimulationRig? Rig, EnduranceStudyResult? Study, IReadOnlyList<string> Missing)
+    {
+        /// <summary>The run.</summary>
+        public EnduranceResult? Result => Study?.Run;
+    }
 }

@@ -8,6 +8,7 @@ using RotorDrive.Core;
 using RotorDrive.Core.Craft;
 using RotorDrive.Core.Drive;
 using RotorDrive.Core.Safety;
+using RotorDrive.Core.Studies;
 using RotorDrive.Tui.Session;
 using RotorDrive.Tui.Shell;
 using RotorDrive.Tui.Text;
@@ -81,20 +82,12 @@ public sealed class HoverYawSheet : Sheet
         var missing = RigModel.MissingParts(rig);
         if (missing.Count > 0)
         {
-            return new HoverYawFigures(null, null, null, null, missing);
+            return new HoverYawFigures(null, missing);
         }
         var model = models.For(rig);
         progress?.Report(0.15);
         token.ThrowIfCancellationRequested();
-        var review = HoverReview.Trimmed(model, model.DesignGapM);
-        progress?.Report(0.35);
-        token.ThrowIfCancellationRequested();
-        double? capacity = HoverReview.PayloadCapacityKg(model, model.DesignGapM);
-        progress?.Report(0.55);
-        token.ThrowIfCancellationRequested();
-        var yaw = YawBalance.Analyse(model);
-        progress?.Report(1.0);
-        return new HoverYawFigures(model, review, capacity, yaw, []);
+        return new HoverYawFigures(HoverStudy.Run(model, HoverStudyRequest.Complete, token, progress), []);
     }
 
     private void Recompute(Rig rig, bool immediately = false)
@@ -173,7 +166,7 @@ public sealed class HoverYawSheet : Sheet
             sb.AppendLine($"  into the plate {F(h.PlatePowerW, 0)} W; heave stiffness {F(h.HeaveStiffnessNPerM / 1000, 1)} N/mm, natural frequency {F(h.HeaveFrequencyHz, 2)} Hz");
         }
         sb.AppendLine(f.PayloadCapacityKg is { } cap
-            ? $"  {(cap + 1e-9 >= model.PayloadKg ? "" : Over + " ")}max payload within every limit {F(cap, 1)} kg (carries {F(model.PayloadKg, 1)})"
+            ? $"  {(f.Study!.CarriesPayload == true ? "" : Over + " ")}max payload within every limit {F(cap, 1)} kg (carries {F(model.PayloadKg, 1)})"
             : $"  {Over} max payload: even the empty craft does not hover within every limit");
         if (h.Balanced)
         {
@@ -223,7 +216,7 @@ public sealed class HoverYawSheet : Sheet
         sb.AppendLine("YAW   (torque positive counter-clockwise seen from above)");
         sb.AppendLine(yaw.EqualDuty is { } d
             ? $"  equal duty {F(d, 4)} leaves {F(yaw.ResidualTorqueNm, 3)} N m ({F(yaw.YawAccelerationRadPerS2, 3)} rad/s^2); tolerance {F(yaw.LimitNm, 2)} N m"
-                + (yaw.ResidualTorqueNm is { } r && Math.Abs(r) > yaw.LimitNm ? $" {Over} over" : "")
+                + (yaw.ResidualWithinTolerance ? "" : $" {Over} over")
             : $"  {Over} no equal duty carries the weight");
         if (yaw.TrimDeltaDuty is { } delta)
         {
@@ -231,7 +224,7 @@ public sealed class HoverYawSheet : Sheet
         }
         sb.AppendLine($"  authority {F(yaw.AuthorityNm, 2)} N m (ccw {F(yaw.AuthorityPositiveNm, 2)}, cw {F(yaw.AuthorityNegativeNm, 2)}), margin {Percent(yaw.AuthorityMarginFraction)}"
             + (yaw.AuthorityLimitedBy is { } by ? $", bounded by {by.Replace('_', ' ')}" : "")
-            + (yaw.AuthorityNm < yaw.LimitNm ? $" {Over} below the tolerance" : ""));
+            + (yaw.AuthorityCoversTolerance ? "" : $" {Over} below the tolerance"));
         if (yaw.Sensitivity is { } sens)
         {
             sb.AppendLine($"  mismatch, station {sens.StationA + 1} against {sens.StationB + 1}: 1 % Kv {F(sens.KvMismatchNm, 3)} N m, 1 mm gap {F(sens.GapDifferenceNm, 3)} N m, 10 K plate {F(sens.PlateTempDifferenceNm, 3)} N m");
@@ -246,9 +239,7 @@ public sealed class HoverYawSheet : Sheet
         if (safety.AtHover.Count > 0)
         {
             sb.AppendLine($"  rim speed {F(safety.AtHover.Max(x => x.RimSpeedMPerS), 1)} m/s at hover");
-            // The station closest to failing: a failed check first, then the smallest margin; one not assessed last.
-            var worst = safety.AtHover.OrderBy(x => x.Passes == false ? 0 : x.MarginFraction is null ? 2 : 1).ThenBy(x => x.MarginFraction ?? double.MaxValue).First();
-            sb.AppendLine("  " + BurstText.Line(worst, "hover"));
+            sb.AppendLine("  " + BurstText.Line(safety.WorstAtHover!, "hover"));
         }
         else
         {
@@ -299,5 +290,18 @@ public sealed class HoverYawSheet : Sheet
 
     /// <summary>What the sheet computed: the model, the reviewed trim, the payload capacity and the yaw balance; or the
     /// parts missing before any of it can be computed.</summary>
-    internal sealed record HoverYawFigures(RigModel? Model, HoverReview? Review, double? PayloadCapacityKg, YawResult? Yaw, IReadOnlyList<string> Missing);
+    internal sealed record HoverYawFigures(HoverStudyResult? Study, IReadOnlyList<string> Missing)
+    {
+        /// <summary>The rig model analysed.</summary>
+        public RigModel? Model => Study?.Model;
+
+        /// <summary>The reviewed trim.</summary>
+        public HoverReview? Review => Study?.Review;
+
+        /// <summary>The payload capacity, kg.</summary>
+        public double? PayloadCapacityKg => Study?.PayloadCapacityKg;
+
+        /// <summary>The yaw balance.</summary>
+        public YawResult? Yaw => Study?.Yaw;
+    }
 }

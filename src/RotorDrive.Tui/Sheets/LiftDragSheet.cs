@@ -4,6 +4,7 @@ using Terminal.Gui.Views;
 using RotorDrive.Core;
 using RotorDrive.Core.Craft;
 using RotorDrive.Core.Loads;
+using RotorDrive.Core.Studies;
 using RotorDrive.Tui.Charts;
 using RotorDrive.Tui.Session;
 using RotorDrive.Tui.Shell;
@@ -35,7 +36,10 @@ public sealed class LiftDragSheet : ChartSheet
     public override string KeyHints => "F7 lift/torque";
 
     /// <summary>The last result shown, for tests.</summary>
-    internal LoadSweepResult? Result { get; private set; }
+    internal LoadStudyResult? Study { get; private set; }
+
+    /// <summary>The sweep shown, for tests.</summary>
+    internal LoadSweepResult? Result => Study?.Sweep;
 
     /// <summary>The chart.</summary>
     internal ChartView Chart => Panel.Chart;
@@ -47,7 +51,7 @@ public sealed class LiftDragSheet : ChartSheet
     internal TextField GapField => _gap;
 
     /// <inheritdoc/>
-    protected override void ClearShown() => Result = null;
+    protected override void ClearShown() => Study = null;
 
     /// <inheritdoc/>
     protected override void OnRigChanged(Rig rig)
@@ -76,37 +80,21 @@ public sealed class LiftDragSheet : ChartSheet
         double plateTempC = plateC!.Value;
         var design = rig.Stations[station!.Value].Rotor;
         Context.Work.Request("load curve", (token, progress) =>
-            (Compute(rig, design, gapM, plateTempC, token, progress), Compute(rig with { LoadModel = Other(rig.LoadModel) }, design, gapM, plateTempC, token, null)), result =>
+            (Compute(rig, design, gapM, plateTempC, null, token, progress), Compute(rig, design, gapM, plateTempC, Other(rig.LoadModel), token, null)), result =>
         {
-            Result = result.Item1;
+            Study = result.Item1;
             _comparison = result.Item2;
             Show();
         }, immediately);
     }
 
-    /// <summary>The sweep the sheet shows, as Core computes it (the same table and sweep as <c>rotordrive load</c>).</summary>
-    internal static LoadSweepResult Compute(Rig rig, Core.Magnetics.RotorDesign design, double gapM, double plateTempC,
+    /// <summary>The load the sheet shows, as Core's rotor-load study computes it for <c>rotordrive load</c> (same table and
+    /// sweep), in <see cref="Points"/> speeds from rest to the rated speed; <paramref name="model"/> null for the rig's.</summary>
+    internal static LoadStudyResult Compute(Rig rig, Core.Magnetics.RotorDesign design, double gapM, double plateTempC, LoadModelKind? model,
         CancellationToken token, IProgress<double>? progress)
-    {
-        var rigRange = rig.LoadTableRangeFor(design);
-        var range = rigRange with
-        {
-            MinGapM = Math.Min(rigRange.MinGapM, gapM),
-            MaxGapM = Math.Max(rigRange.MaxGapM, gapM * 1.01),
-            MinPlateTempC = Math.Min(rigRange.MinPlateTempC, plateTempC),
-            MaxPlateTempC = Math.Max(rigRange.MaxPlateTempC, plateTempC),
-        };
-        progress?.Report(0.1);
-        var table = RotorLoadTable.Build(design, rig.Plate, range, rig.LoadOptionsFor(design));
-        token.ThrowIfCancellationRequested();
-        progress?.Report(0.8);
-        double[] speeds = SpeedGrid.ZeroTo(Units.RadPerSToRpm(design.MaxSpeedRadPerS), Points - 1).Select(Units.RpmToRadPerS).ToArray();
-        var result = LoadSweep.Run(table, design.Id, true, gapM, plateTempC, rig.AmbientC, speeds, design.MaxSpeedRadPerS);
-        progress?.Report(1.0);
-        return result;
-    }
+        => LoadStudy.Run(rig, new LoadStudyRequest(design, gapM, plateTempC, Steps: Points - 1, Model: model), token, progress);
 
-    private LoadSweepResult? _comparison;
+    private LoadStudyResult? _comparison;
 
     // The load model the sheet draws for comparison: the other one of 3-D and 2-D.
     private static LoadModelKind Other(LoadModelKind kind)
@@ -116,17 +104,17 @@ public sealed class LiftDragSheet : ChartSheet
 
     private void Show()
     {
-        if (Result is not { } r || Context.Session.Rig is not { } rig)
+        if (Study is not { } study || Context.Session.Rig is not { } rig)
         {
             return;
         }
-        double share = rig.TotalMassKg * Units.StandardGravity / rig.Stations.Count;
+        var r = study.Sweep;
+        double share = study.WeightShareN;
         var peak = r.DragPeak;
         var top = r.Rows[^1];
-        var lifting = r.Rows.FirstOrDefault(row => row.LiftN >= share);
         Panel.Readout = $"{r.RotorId} at {r.GapM * 1000:0.##} mm, plate {r.PlateTempC:0.#} C: drag peak X {peak.SpeedRpm:F0} rpm, {peak.TorqueNm:F2} N m\n"
             + $"lift {top.LiftN:F0} N at {top.SpeedRpm:F0} rpm; share of weight {share:F0} N "
-            + (lifting is null ? "! not reached by rated speed" : $"from {lifting.SpeedRpm:F0} rpm");
+            + (study.ShareReachedAtRpm is not { } lifting ? "! not reached by rated speed" : $"from {lifting:F0} rpm");
         var rpm = r.Rows.Select(x => x.SpeedRpm).ToList();
         var torqueLines = new List<ChartLine>
         {
@@ -167,7 +155,7 @@ public sealed class LiftDragSheet : ChartSheet
         // The other model's curve, so both can be seen on one chart (load_model decides which one the analyses use).
         ChartLine[] Compare(Func<LoadSweepRow, double> value, string what)
             => _comparison is { } c
-                ? [new ChartLine($"{what} ({Label(Other(rig.LoadModel))} model)", 'o', c.Rows.Select(x => (x.SpeedRpm, value(x))).ToList())]
+                ? [new ChartLine($"{what} ({Label(Other(rig.LoadModel))} model)", 'o', c.Sweep.Rows.Select(x => (x.SpeedRpm, value(x))).ToList())]
                 : [];
     }
 }

@@ -78,7 +78,7 @@ public sealed class RigSheet : Sheet
         {
             var (cgx, cgy) = rig.CentreOfGravity();
             int cw = rig.Stations.Count(s => s.Spin == SpinDirection.Clockwise);
-            _totals.Text = $"Mass {F(rig.TotalMassKg, 1)} kg, weight {F(rig.TotalMassKg * Units.StandardGravity, 0)} N, CG x {F(cgx * 1000, 0)} y {F(cgy * 1000, 0)} mm, "
+            _totals.Text = $"Mass {F(rig.TotalMassKg, 1)} kg, weight {F(rig.WeightN, 0)} N, CG x {F(cgx * 1000, 0)} y {F(cgy * 1000, 0)} mm, "
                 + $"{cw} cw + {rig.Stations.Count - cw} ccw";
             _pack.Text = rig.Packs is { } b
                 ? $"Bus: {b.Count} x {b.Pack.Id}, {b.CellsSeries}S, {F(b.CapacityAh, 1)} Ah, {F(b.OpenCircuitVoltageAt(1.0), 1)} V full, {F(b.MassKg, 1)} kg"

@@ -4,7 +4,7 @@ using Terminal.Gui.Views;
 using RotorDrive.Core;
 using RotorDrive.Core.Craft;
 using RotorDrive.Core.Drive;
-using RotorDrive.Core.Loads;
+using RotorDrive.Core.Studies;
 using RotorDrive.Tui.Charts;
 using RotorDrive.Tui.Session;
 using RotorDrive.Tui.Shell;
@@ -45,18 +45,15 @@ public sealed class RunningPointsSheet : ChartSheet
     /// <summary>The what-if gap field.</summary>
     internal TextField GapField => _gap;
 
-    /// <summary>The station's drive as Core models it (load table over the rig's range), or why there is none.</summary>
-    internal static StationDrive? DriveFor(Rig rig, int station, out string? why)
+    /// <summary>The running points the sheet shows, as Core's operating-point study computes them for the <c>operate</c>
+    /// command (same drivetrain, load table and conditions), with the torque lines at <see cref="Duties"/>; or why there
+    /// are none.</summary>
+    internal static OperateStudyResult? Compute(Rig rig, int station, double gapM, double socFraction, out string? why)
     {
         var s = rig.Stations[station];
         why = s.Motor is null || s.Controller is null ? $"station {station + 1} has no motor or controller assigned"
             : rig.Packs is null ? "the rig has no pack assigned" : null;
-        if (why is not null)
-        {
-            return null;
-        }
-        var table = RotorLoadTable.Build(s.Rotor, rig.Plate, rig.LoadTableRangeFor(s.Rotor), rig.LoadOptionsFor(s.Rotor));
-        return new StationDrive(new Drivetrain(s.Motor!, s.Controller!), rig.Packs!, s.Rotor, table, rig.Limits.Station);
+        return why is null ? OperateStudy.Run(rig, new OperateStudyRequest(station, GapM: gapM, SocFraction: socFraction, MapDuties: Duties)) : null;
     }
 
     /// <inheritdoc/>
@@ -89,17 +86,10 @@ public sealed class RunningPointsSheet : ChartSheet
         double soc = socPct!.Value / 100.0;
         Context.Work.Request("running points", (token, progress) =>
         {
-            var drive = DriveFor(rig, station, out string? why);
-            if (drive is null)
-            {
-                return (Map: (TorqueSpeedMap?)null, Why: why);
-            }
             token.ThrowIfCancellationRequested();
-            progress.Report(0.3);
-            var conditions = OperatingConditions.Uniform(gapM, rig.AmbientC, soc) with { PlateTempC = rig.PlateTemperatureC };
-            var map = TorqueSpeedMap.Compute(drive, conditions, Duties);
+            var study = Compute(rig, station, gapM, soc, out string? why);
             progress.Report(1.0);
-            return (Map: (TorqueSpeedMap?)map, Why: (string?)null);
+            return (Map: study?.Map, Why: why);
         }, result =>
         {
             Map = result.Map;

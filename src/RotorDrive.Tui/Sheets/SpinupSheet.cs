@@ -124,12 +124,12 @@ public sealed class SpinupSheet : ChartSheet
     internal static string DescribeReadout(SimulationRig sim, SpinupStudyResult study)
     {
         var spin = study.Spinup;
-        double limitS = sim.Rig.Limits.LiftoffTimeS;
+        double limitS = study.LiftoffLimitS;
         string liftoff = spin.LiftoffTimeS is { } lo
-            ? (lo > limitS ? Over + " " : "") + $"lift-off {F(lo, 2)} s (limit {F(limitS, 1)} s)"
+            ? (study.LiftoffFails ? Over + " " : "") + $"lift-off {F(lo, 2)} s (limit {F(limitS, 1)} s)"
             : $"{Over} never lifts off";
         string hover = spin.HoverTimeS is { } h ? $", steady hover {F(h, 2)} s" : ", steady hover not reached";
-        var worst = spin.Stations.MaxBy(s => s.Motor.PeakA / Math.Max(s.CurrentLimitA, 1e-9))!;
+        var worst = study.WorstStation;
         string currents = $"peak motor {F(worst.Motor.PeakA, 1)} A (limit {F(worst.CurrentLimitA, 0)} A); pack {(spin.Pack.Exceeded ? Over : "")}{F(spin.Pack.PeakA, 0)} A, low {(spin.BelowCutoff ? Over : "")}{F(spin.MinBusVoltageV, 1)} V";
         string verdict = study.Passes
             ? "passes: lift-off in time, no stall, currents in allowance"
@@ -181,7 +181,7 @@ public sealed class SpinupSheet : ChartSheet
         sb.AppendLine(sim.HoverExists
             ? $"  target: trimmed hover at {F(sim.HoverSpeedsRadPerS.Min(Units.RadPerSToRpm), 0)}..{F(sim.HoverSpeedsRadPerS.Max(Units.RadPerSToRpm), 0)} rpm, {F(rig.DesignGapM * 1000, 1)} mm design gap"
             : $"  {Over} no trimmed hover to aim for at the design gap");
-        sb.AppendLine($"  lift-off {(spin.LiftoffTimeS is { } lo ? F(lo, 2) + " s" : Over + " never")} (limit {F(rig.Limits.LiftoffTimeS, 1)} s); steady hover {(spin.HoverTimeS is { } h ? F(h, 2) + " s" : "not reached")}");
+        sb.AppendLine($"  lift-off {(spin.LiftoffTimeS is { } lo ? F(lo, 2) + " s" : Over + " never")} (limit {F(study.LiftoffLimitS, 1)} s); steady hover {(spin.HoverTimeS is { } h ? F(h, 2) + " s" : "not reached")}");
         sb.AppendLine($"  pack: peak {(spin.Pack.Exceeded ? Over : "")}{F(spin.Pack.PeakA, 0)} A (continuous {F(spin.Pack.ContinuousA, 0)} A, {F(spin.Pack.TimeAboveContinuousS, 2)} s above; burst {F(spin.Pack.BurstA, 0)} A)");
         sb.AppendLine($"  lowest pack voltage {(spin.BelowCutoff ? Over : "")}{F(spin.MinBusVoltageV, 1)} V (cutoff {F(spin.CutoffVoltageV, 1)} V)");
         sb.AppendLine($"  yaw: peak reaction {F(spin.PeakYawTorqueNm, 2)} N m (gear holds {F(rig.GearYawFrictionNm, 1)} N m), peak rate {F(spin.PeakYawRateRadPerS * 180 / Math.PI, 2)} deg/s");
@@ -209,7 +209,7 @@ public sealed class SpinupSheet : ChartSheet
         sb.AppendLine($"LANDING from the hover, throttle cut {(request.StopRampS > 0 ? $"over {F(request.StopRampS, 1)} s" : "at once")}; controllers rated {F(study.ControllerMaxVoltageV, 1)} V");
         foreach (var (l, name) in new[] { (study.LandingBraking, "braking on "), (study.LandingCoasting, "braking off") })
         {
-            sb.AppendLine($"  {name}: regenerated {F(l.PeakRegenCurrentA, 1)} A, bus up to {F(l.MaxBusVoltageV, 1)} V{(l.MaxBusVoltageV > study.ControllerMaxVoltageV ? $" {Over} above the rating" : "")}, "
+            sb.AppendLine($"  {name}: regenerated {F(l.PeakRegenCurrentA, 1)} A, bus up to {F(l.MaxBusVoltageV, 1)} V{(study.RegenAboveRating(l) ? $" {Over} above the rating" : "")}, "
                 + (l.TouchdownTimeS is { } td ? $"touch-down at {F(td, 2)} s" : "no touch-down in the run"));
         }
         sb.AppendLine();
@@ -226,8 +226,7 @@ public sealed class SpinupSheet : ChartSheet
             }
         }
         sb.AppendLine();
-        var findings = new CautionFindings(true, [], spin.Stations.Max(s => s.PeakPlateTempC), spin.Stations.Max(s => s.PeakWindingTempC));
-        sb.Append(CautionText.Compose(Cautions.For(findings), study.Cautions));
+        sb.Append(CautionText.Compose(study.SafetyCautions, study.Cautions));
         return sb.ToString();
     }
 

@@ -333,7 +333,7 @@ public sealed class StressSheet : Sheet
         }
         if (r.WorstSample is { } worst && r.SampleResults.FirstOrDefault(s => s.Index == worst) is { } sample)
         {
-            var failed = StressCriteria.All.Where(c => !sample.Outcome.Passed(c)).Select(c => c.Key()).ToList();
+            var failed = sample.Outcome.FailedCriteria;
             lines.Add("");
             lines.Add($"Worst sample: {worst}, smallest margin {F(sample.Outcome.MinimumMarginFraction, 3)}, {(failed.Count == 0 ? "fails nothing" : "! fails " + string.Join(", ", failed))}");
             var session = Context.Session;

@@ -97,6 +97,8 @@ public class ThermalNodeTests
         // = 10.47198 rad/s/V, 500 rad/s gives 47.74648 V, times I0 = 1 A: 47.74648 W; total 71.67648 W.
         RelAssert.Close(71.67648, WindingThermalNode.HeatW(Motor(), 20, 500, 70), 1e-6);
         RelAssert.Close(71.67648, WindingThermalNode.HeatW(Motor(), -20, -500, 70), 1e-6, what: "sign of current and speed");
+        // Magnets at 90 % of their rated flux scale the back-EMF, so the no-load loss: 23.93 + 0.9 x 47.74648 = 66.90183 W.
+        RelAssert.Close(66.901832, WindingThermalNode.HeatW(Motor(), 20, 500, 70, fluxFactor: 0.9), 1e-6, what: "flux factor");
     }
 
     [Fact]

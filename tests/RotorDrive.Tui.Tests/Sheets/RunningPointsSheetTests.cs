@@ -1,5 +1,4 @@
-using RotorDrive.Core.Drive;
-using RotorDrive.Core.Loads;
+using RotorDrive.Core.Studies;
 using RotorDrive.Tui.Sheets;
 using RotorDrive.Tui.Tests.Support;
 using Xunit;
@@ -16,12 +15,8 @@ public class RunningPointsSheetTests
         await bench.SettleAsync();
         var sheet = Assert.IsType<RunningPointsSheet>(bench.Window.CurrentSheet);
         var rig = bench.Context.Session.Rig!;
-        var s = rig.Stations[0];
-        // The same picture straight from Core: the rig's load table, drivetrain and pack, duties as on the sheet.
-        var table = RotorLoadTable.Build(s.Rotor, rig.Plate, rig.LoadTableRangeFor(s.Rotor));
-        var drive = new StationDrive(new Drivetrain(s.Motor!, s.Controller!), rig.Packs!, s.Rotor, table, rig.Limits.Station);
-        var conditions = OperatingConditions.Uniform(rig.DesignGapM, rig.AmbientC, 1.0) with { PlateTempC = rig.PlateTemperatureC };
-        var map = TorqueSpeedMap.Compute(drive, conditions, RunningPointsSheet.Duties);
+        // The same picture straight from Core's operating-point study (what `rotordrive operate` runs), duties as on the sheet.
+        var map = OperateStudy.Run(rig, new OperateStudyRequest(0, MapDuties: RunningPointsSheet.Duties)).Map!;
         Assert.NotNull(sheet.Map);
         string screen = bench.Screen;
         foreach (var curve in map.Curves)

@@ -42,6 +42,10 @@ public sealed record StressOutcome(
     /// <summary>True when every criterion passed.</summary>
     public bool PassedAll => StressCriteria.All.All(Passed);
 
+    /// <summary>Every criterion this sample fails, as keys (<see cref="StressCriteria.Key"/>), in the order of
+    /// <see cref="StressCriteria.All"/>; empty when it passes all.</summary>
+    public IReadOnlyList<string> FailedCriteria => StressCriteria.All.Where(c => !Passed(c)).Select(c => c.Key()).ToList();
+
     /// <summary>The smallest assessed margin (the sample's distance to its nearest failure), or +infinity when none was
     /// assessed. The worst sample of a study is the one with the smallest value.</summary>
     public double MinimumMarginFraction => Margins.Where(m => m is not null).Select(m => m!.Value).DefaultIfEmpty(double.PositiveInfinity).Min();
