@@ -131,7 +131,7 @@ public sealed class EnduranceSheet : ChartSheet
         string verdict = r.Passes() ? "the pack ends it" : $"{Over} not the pack";
         return $"runtime {Runtime(r.RuntimeS)}; {verdict}\n"
             + $"ended by {r.FirstLimitText}\n"
-            + $"hottest winding {F(r.PeakWindingTempC, 1)} C, plate {F(r.PeakPlateTempC, 1)} C (limit {F(sim.Rig.Limits.PlateTempC, 0)} C)";
+            + $"{WindingText.Hottest(sim, r.PeakWindingTempC)}, plate {F(r.PeakPlateTempC, 1)} C (limit {F(sim.Rig.Limits.PlateTempC, 0)} C)";
     }
 
     /// <summary>The chart pages: state of charge, pack voltage, winding and plate temperatures against time.</summary>
@@ -183,7 +183,7 @@ public sealed class EnduranceSheet : ChartSheet
             sb.AppendLine($"  station {StationNumbers.Of(s.Index)}: {F(s.SpeedRpm, 0)} rpm, duty {F(s.Duty, 3)}, motor {F(s.MotorCurrentA, 1)} A");
         }
         sb.AppendLine($"AT THE END  charge {F(r.FinalSocFraction * 100, 1)} %, bus {F(r.FinalBusVoltageV, 1)} V, pack current {F(r.FinalPackCurrentA, 1)} A");
-        sb.AppendLine($"  hottest winding {F(r.PeakWindingTempC, 1)} C, hottest point of the plate {F(r.PeakPlateTempC, 1)} C (limit {F(sim.Rig.Limits.PlateTempC, 0)} C)");
+        sb.AppendLine($"  {WindingText.Hottest(sim, r.PeakWindingTempC)}, hottest point of the plate {F(r.PeakPlateTempC, 1)} C (limit {F(sim.Rig.Limits.PlateTempC, 0)} C)");
         if (r.PlateHotspot is { } hot)
         {
             sb.AppendLine($"  plate hot spot at the end: x {F(hot.XM * 1000, 0)} mm, y {F(hot.YM * 1000, 0)} mm, {F(hot.TemperatureC, 1)} C");

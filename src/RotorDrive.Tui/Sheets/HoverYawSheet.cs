@@ -247,8 +247,8 @@ public sealed class HoverYawSheet : Sheet
         {
             sb.AppendLine($"  rim speed {F(safety.AtHover.Max(x => x.RimSpeedMPerS), 1)} m/s at hover");
             // The station closest to failing: a failed check first, then the smallest margin; one not assessed last.
-            var worst = safety.AtHover.OrderBy(x => x.Passes == false ? 0 : x.MarginFraction is null ? 2 : 1).ThenBy(x => x.MarginFraction ?? double.MaxValue).First();
-            sb.AppendLine("  " + BurstText.Line(worst, "hover"));
+            var worst = RotorSafetyText.ClosestToFailing(safety.AtHover)!;
+            sb.AppendLine("  " + RotorSafetyText.Line(worst, "hover"));
         }
         else
         {
@@ -256,7 +256,7 @@ public sealed class HoverYawSheet : Sheet
         }
         foreach (var rated in safety.AtMaxRpm)
         {
-            sb.AppendLine("  " + BurstText.Line(rated, "rated"));
+            sb.AppendLine("  " + RotorSafetyText.Line(rated, "rated"));
         }
         sb.AppendLine("  " + safety.MagnetNote);
         sb.AppendLine();

@@ -153,7 +153,7 @@ public sealed class StationsSheet : Sheet
         // sits beside a failed check.
         var problems = session.UntypedFields.Select(u => $"! {u.Key}: {u.Value}")
             .Concat(session.Problems.Select(p => "! " + p.ToString()))
-            .Concat(session.FailedBurstChecks.Select(b => BurstText.Line(b, "rated")))
+            .Concat(session.FailedBurstChecks.Select(b => RotorSafetyText.Line(b, "rated")))
             .DefaultIfEmpty("No problems in the rig or its catalogs.")
             .ToList();
         _problemItems.Clear();
@@ -167,7 +167,7 @@ public sealed class StationsSheet : Sheet
         }
         _safety.Text = rig is not null && _selected < rig.Stations.Count
             && session.BurstChecks.FirstOrDefault(b => b.RotorId == rig.Stations[_selected].Rotor.Id) is { } check
-            ? string.Join("\n", Wrap.Lines(BurstText.Line(check, "rated"), Math.Max(20, _safety.Frame.Width > 0 ? _safety.Frame.Width : 60)))
+            ? string.Join("\n", Wrap.Lines(RotorSafetyText.Line(check, "rated"), Math.Max(20, _safety.Frame.Width > 0 ? _safety.Frame.Width : 60)))
             : "";
     }
 

@@ -78,8 +78,8 @@ public class StationsSheetTests
         string screen = bench.Screen;
         Assert.Contains($"rim {expected.RimSpeedMPerS:F0} m/s", screen);
         var sheet = Assert.IsType<StationsSheet>(bench.Window.CurrentSheet);
-        Assert.Equal(RotorDrive.Tui.Text.BurstText.Line(expected, "rated"), System.Text.RegularExpressions.Regex.Replace(sheet.SafetyText, @"\s+", " "));
-        Assert.StartsWith(expected.Passes == true ? "passes burst check" : "! ", RotorDrive.Tui.Text.BurstText.Line(expected, "rated"));
+        Assert.Equal(RotorDrive.Core.Safety.RotorSafetyText.Line(expected, "rated"), System.Text.RegularExpressions.Regex.Replace(sheet.SafetyText, @"\s+", " "));
+        Assert.StartsWith(expected.Passes == true ? "passes burst check" : "! ", RotorDrive.Core.Safety.RotorSafetyText.Line(expected, "rated"));
     }
 
     [Fact]
@@ -97,7 +97,7 @@ public class StationsSheetTests
         // The demo catalog's hx150-p6 (invented) has a thin 90 MPa ring: Core's check at its rated speed fails.
         var failed = Assert.Single(session.FailedBurstChecks);
         Assert.Equal(false, failed.Passes);
-        string line = RotorDrive.Tui.Text.BurstText.Line(failed, "rated");
+        string line = RotorDrive.Core.Safety.RotorSafetyText.Line(failed, "rated");
         Assert.StartsWith("! FAILS burst check, rotor hx150-p6", line);
         Assert.Contains(line, sheet.ProblemLines);
         Assert.DoesNotContain("No problems in the rig or its catalogs.", sheet.ProblemLines);
