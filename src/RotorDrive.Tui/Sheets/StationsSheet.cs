@@ -151,8 +151,8 @@ public sealed class StationsSheet : Sheet
         }
         // One list of what is wrong: typed text, input problems and Core's failed burst checks, so "no problems" never
         // sits beside a failed check.
-        var problems = session.UntypedFields.Select(u => $"! {u.Key}: {u.Value}")
-            .Concat(session.Problems.Select(p => "! " + p.ToString()))
+        var problems = session.UntypedFields.Select(u => $"! {FieldWords.Of(u.Key)}: {u.Value}")
+            .Concat(session.Problems.Select(p => "! " + (p.Field.Length == 0 ? p.ToString() : $"{p.File}:{p.Line}:{p.Column}: {FieldWords.Of(p.Field)}: {p.Message}")))
             .Concat(session.FailedBurstChecks.Select(b => RotorSafetyText.Line(b, "rated")))
             .DefaultIfEmpty("No problems in the rig or its catalogs.")
             .ToList();

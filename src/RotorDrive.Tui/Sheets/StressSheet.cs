@@ -298,7 +298,7 @@ public sealed class StressSheet : Sheet
         lines.Add($"  {"criterion",-13} {"fails",7} {"rate",8}  95 % interval (Wilson)");
         foreach (var c in r.Criteria)
         {
-            lines.Add(CriterionLine(c.Key, c.Rate));
+            lines.Add(CriterionLine(c.Key.Replace('_', ' '), c.Rate));
         }
         lines.Add(CriterionLine("overall", overall));
         lines.Add("");
@@ -325,7 +325,7 @@ public sealed class StressSheet : Sheet
         lines.Add("Top drivers (Spearman rho of a drawn value with a margin; + means larger is safer):");
         foreach (var d in r.Drivers.Take(DriversShown))
         {
-            lines.Add($"  {d.Input,-30} {d.Margin,-13} {d.Rho.ToString("+0.000;-0.000;0.000", CultureInfo.InvariantCulture)}");
+            lines.Add($"  {FieldWords.Input(d.Input),-30} {d.Margin.Replace('_', ' '),-13} {d.Rho.ToString("+0.000;-0.000;0.000", CultureInfo.InvariantCulture)}");
         }
         if (r.Drivers.Count == 0)
         {
@@ -333,7 +333,7 @@ public sealed class StressSheet : Sheet
         }
         if (r.WorstSample is { } worst && r.SampleResults.FirstOrDefault(s => s.Index == worst) is { } sample)
         {
-            var failed = StressCriteria.All.Where(c => !sample.Outcome.Passed(c)).Select(c => c.Key()).ToList();
+            var failed = StressCriteria.All.Where(c => !sample.Outcome.Passed(c)).Select(c => c.Key().Replace('_', ' ')).ToList();
             lines.Add("");
             lines.Add($"Worst sample: {worst}, smallest margin {F(sample.Outcome.MinimumMarginFraction, 3)}, {(failed.Count == 0 ? "fails nothing" : "! fails " + string.Join(", ", failed))}");
             var session = Context.Session;

@@ -424,7 +424,7 @@ public sealed class MainWindow : Window
         {
             return true;
         }
-        int? answer = _context.Prompts.Ask("Save", $"{untyped.Count} field(s) hold text that is not a valid value ({string.Join(", ", untyped.Keys)}). "
+        int? answer = _context.Prompts.Ask("Save", $"{untyped.Count} field(s) hold text that is not a valid value ({string.Join(", ", untyped.Keys.Select(FieldWords.Of))}). "
             + "The file will keep their last valid values. Save anyway?", ["Cancel", "Save"]);
         return answer == 1;
     }

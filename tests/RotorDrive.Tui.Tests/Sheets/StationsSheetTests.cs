@@ -64,7 +64,9 @@ public class StationsSheetTests
         rotor.Field.Text = "no-such-rotor";
         Assert.Null(bench.Context.Session.Rig);
         Assert.Contains("no-such-rotor", rotor.CurrentMessage);
-        Assert.Contains("$.stations[0].rotor", bench.Screen);
+        // The problem names the field in words, as the editor labels it, not by its rig-file key.
+        Assert.Contains("station 1, rotor:", bench.Screen);
+        Assert.DoesNotContain("$.stations", bench.Screen);
         Assert.Equal("no-such-rotor", rotor.Field.Text);
     }
 

@@ -51,7 +51,7 @@ public class StressSheetTests
         var lines = sheet.ResultLines;
         foreach (var c in expected.Criteria)
         {
-            Assert.Contains(lines, l => l.StartsWith($"  {c.Key,-13} {c.Rate.Count,7} ", StringComparison.Ordinal)
+            Assert.Contains(lines, l => l.StartsWith($"  {c.Key.Replace('_', ' '),-13} {c.Rate.Count,7} ", StringComparison.Ordinal)
                 && l.Contains((c.Rate.UpperFraction * 100).ToString("F2", System.Globalization.CultureInfo.InvariantCulture) + " %"));
         }
         var speed = expected.Percentiles.Single(p => p.Key == "hover_speed_rpm").Summary!;
