@@ -601,7 +601,8 @@ public sealed class ShortlistSheet : Sheet
         {
             return;
         }
-        string? chosen = Context.Prompts.Choose("Why not: pick a motor", catalog.Motors.Select(m => m.Id).ToList(), _whyNot.Text);
+        var ids = catalog.Motors.Select(m => m.Id).ToList();
+        string? chosen = Context.Prompts.Choose("Why not: pick a motor", ids, _whyNot.Text, ids.Select(id => PartSummary.Of(catalog, id)).ToList());
         if (chosen is not null)
         {
             _whyNot.Text = chosen;

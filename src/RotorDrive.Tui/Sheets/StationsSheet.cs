@@ -84,6 +84,12 @@ public sealed class StationsSheet : Sheet
     /// <summary>The selected station's burst check as shown (wrapped to the sheet's width).</summary>
     internal string SafetyText => _safety.Text;
 
+    /// <summary>The heading of the selected station ("Station 2 of 6").</summary>
+    internal string Heading => _sketchStations.Count == 0 ? "No stations" : $"Station {_selected + 1} of {_sketchStations.Count}";
+
+    /// <summary>The line under the sketch: the heading and the legend.</summary>
+    internal string LegendText => _legend.Text;
+
     /// <summary>The problem list as shown.</summary>
     internal IReadOnlyList<string> ProblemLines => _problemItems;
 
@@ -93,6 +99,7 @@ public sealed class StationsSheet : Sheet
         _selected = index;
         _stations.SetSelection(index, false);
         Retarget();
+        DrawSketch();
     }
 
     /// <inheritdoc/>
@@ -134,16 +141,32 @@ public sealed class StationsSheet : Sheet
         }).ToList();
         if (!items.SequenceEqual(_stationItems))
         {
-            _stationItems.Clear();
-            foreach (var item in items)
+            // Same count: the rows change in place (F7 re-spells the marks), so the list keeps the selected station.
+            if (items.Count == _stationItems.Count)
             {
-                _stationItems.Add(item);
+                for (int i = 0; i < items.Count; i++)
+                {
+                    _stationItems[i] = items[i];
+                }
+            }
+            else
+            {
+                _stationItems.Clear();
+                foreach (var item in items)
+                {
+                    _stationItems.Add(item);
+                }
             }
         }
         if (_selected >= docStations.Count)
         {
             _selected = Math.Max(0, docStations.Count - 1);
         }
+        if (docStations.Count > 0 && _stations.Value != _selected)
+        {
+            _stations.SetSelection(_selected, false);
+        }
+        DrawSketch();
         foreach (var f in _fields)
         {
             f.Field.Enabled = docStations.Count > 0;
@@ -192,12 +215,12 @@ public sealed class StationsSheet : Sheet
     {
         int width = Math.Max(20, _sketch.Frame.Width > 0 ? _sketch.Frame.Width : 58);
         int rows = Math.Max(MinSketchRows, _sketch.Frame.Height);
-        string text = string.Join("\n", StationSketch.Render(_sketchStations, _cg.X, _cg.Y, width, rows, _letters));
+        string text = string.Join("\n", StationSketch.Render(_sketchStations, _cg.X, _cg.Y, width, rows, _letters, _selected));
         if (_sketch.Text != text)
         {
             _sketch.Text = text;
         }
-        _legend.Text = StationSketch.Legend(_letters);
+        _legend.Text = Heading + "  " + StationSketch.Legend(_letters);
     }
 
     private void Retarget()

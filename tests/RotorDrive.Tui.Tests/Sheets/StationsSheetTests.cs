@@ -1,3 +1,4 @@
+using RotorDrive.Core;
 using Terminal.Gui.Input;
 using RotorDrive.Core.Craft;
 using RotorDrive.Tui.Sheets;
@@ -22,7 +23,7 @@ public class StationsSheetTests
             Assert.Contains($"{i + 1}{arrow}", sketch);
         }
         Assert.Contains("+", sketch);
-        Assert.Contains("↺ ccw (seen from above)", bench.Screen);
+        Assert.Contains("↺ ccw from above", bench.Screen);
     }
 
     [Fact]
@@ -37,6 +38,27 @@ public class StationsSheetTests
     }
 
     [Fact]
+    public void TheSelectedStation_HasAHeading_IsBracketedInTheSketch_AndF7KeepsIt()
+    {
+        using var bench = new Bench(80, 24);
+        bench.Window.ShowSheet("Stations");
+        var sheet = Assert.IsType<StationsSheet>(bench.Window.CurrentSheet);
+        sheet.SelectStation(2);
+        bench.Draw();
+        Assert.Equal("Station 3 of 6", sheet.Heading);
+        Assert.Contains("Station 3 of 6", bench.Screen);
+        Assert.Contains("[3↻]", sheet.SketchText);
+        Assert.DoesNotContain("[1↻]", sheet.SketchText);
+        bench.Press(Key.F7);
+        bench.Draw();
+        Assert.Equal("Station 3 of 6", sheet.Heading);
+        Assert.Contains("[3cw]", sheet.SketchText);
+        Assert.Contains(sheet.Fields, f => f.Spec.JsonPath == "$.stations[2].motor");
+        // The heading and the legend fit the sheet at 80 columns.
+        Assert.True(sheet.LegendText.Length <= 58, sheet.LegendText);
+    }
+
+    [Fact]
     public void ChoosingAMotorForAStation_UpdatesThatStationOnly()
     {
         using var bench = new Bench();
@@ -48,6 +70,12 @@ public class StationsSheetTests
         motor.Field.SetFocus();
         bench.Prompts.Answers.Enqueue(newId);
         bench.Press(Key.F4);
+        // The picker shows a one-line summary of each motor beside its id (Kv, current, power, mass).
+        var details = bench.Prompts.LastDetails!;
+        var motors = bench.Context.Session.Catalog!.Motors;
+        Assert.Equal(motors.Count, details.Count);
+        Assert.StartsWith($"Kv {Units.RadPerSToRpm(motors[0].KvRadPerSPerV):F0}, {motors[0].MaxCurrentA:F0} A", details[0]);
+        Assert.EndsWith($"{motors[0].MassKg * 1000:F0} g", details[0]);
         var rig = bench.Context.Session.Rig!;
         Assert.Equal(newId, rig.Stations[2].Motor!.Id);
         Assert.NotEqual(newId, rig.Stations[1].Motor!.Id);
