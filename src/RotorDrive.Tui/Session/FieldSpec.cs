@@ -21,6 +21,10 @@ public sealed record FieldSpec(
     Func<RigDocument, string, string?> Store,
     Func<PartsCatalog, IReadOnlyList<string>>? Choices = null)
 {
+    /// <summary>The value the resolver uses when the key is left out (RigDefaults), shown beside a blank field; null for
+    /// a required key or one without a single default.</summary>
+    public double? Default { get; init; }
+
     /// <summary>A number field; empty text stores "absent" (optional keys fall back to their documented default).</summary>
     public static FieldSpec Number(string label, string unit, string jsonPath, Func<RigDocument, double?> get, Action<RigDocument, double?> set)
         => new(label, unit, jsonPath,

@@ -38,10 +38,10 @@ public static class RigFields
         [
             FieldSpec.Number("yaw torque", "N m", "$.limits.yaw_torque_nm", d => d.Limits?.YawTorqueNm, (d, v) => Limits(d).YawTorqueNm = v),
             FieldSpec.Number("plate temp", "C", "$.limits.plate_temp_c", d => d.Limits?.PlateTempC, (d, v) => Limits(d).PlateTempC = v),
-            FieldSpec.Number("cell cutoff", "V", "$.limits.cell_cutoff_v", d => d.Limits?.CellCutoffV, (d, v) => Limits(d).CellCutoffV = v),
-            FieldSpec.Number("usable capacity", "%", "$.limits.usable_capacity_pct", d => d.Limits?.UsableCapacityPct, (d, v) => Limits(d).UsableCapacityPct = v),
-            FieldSpec.Number("max duty", "0..1", "$.limits.max_duty", d => d.Limits?.MaxDuty, (d, v) => Limits(d).MaxDuty = v),
-            FieldSpec.Number("lift-off time", "s", "$.limits.liftoff_time_s", d => d.Limits?.LiftoffTimeS, (d, v) => Limits(d).LiftoffTimeS = v),
+            FieldSpec.Number("cell cutoff", "V", "$.limits.cell_cutoff_v", d => d.Limits?.CellCutoffV, (d, v) => Limits(d).CellCutoffV = v) with { Default = RigDefaults.CellCutoffV },
+            FieldSpec.Number("usable capacity", "%", "$.limits.usable_capacity_pct", d => d.Limits?.UsableCapacityPct, (d, v) => Limits(d).UsableCapacityPct = v) with { Default = RigDefaults.UsableCapacityPct },
+            FieldSpec.Number("max duty", "0..1", "$.limits.max_duty", d => d.Limits?.MaxDuty, (d, v) => Limits(d).MaxDuty = v) with { Default = RigDefaults.MaxDuty },
+            FieldSpec.Number("lift-off time", "s", "$.limits.liftoff_time_s", d => d.Limits?.LiftoffTimeS, (d, v) => Limits(d).LiftoffTimeS = v) with { Default = RigDefaults.LiftoffTimeS },
         ]),
     ];
 

@@ -72,7 +72,11 @@ internal sealed class FieldBinding
         }
         string? message = session.MessageFor(Spec.JsonPath);
         CurrentMessage = message ?? "";
-        Message.Text = message is null ? "" : "! " + message;
+        // A blank optional value says what the rig uses instead.
+        string blank = Spec.Default is { } d && Field.Text.Trim().Length == 0
+            ? $"blank: default {FieldSpec.Format(d)}{(Spec.Unit.Length > 0 ? " " + Spec.Unit : "")}"
+            : "";
+        Message.Text = message is null ? blank : "! " + message;
         // Colour as well as the "!" mark, never colour alone.
         Message.SchemeName = message is null ? null : "Error";
     }
