@@ -66,6 +66,25 @@ public class StressSheetTests
     }
 
     [Fact]
+    public async Task AtEightyColumns_EveryResultLineFits_AndDriversAreNamedInWords()
+    {
+        using var bench = new Bench(80, 24);
+        var sheet = Open(bench);
+        Retype(bench, sheet.SamplesField, "24");
+        Retype(bench, sheet.SeedField, "3");
+        bench.Press(Key.F5);
+        await bench.SettleAsync();
+        bench.Draw();
+        Assert.NotNull(sheet.Result);
+        // The result list is 60 columns wide at 80 (18 for the sheet list, 2 for the frames); a line must end inside it.
+        Assert.All(sheet.ResultLines, l => Assert.True(l.Length < 60, $"{l.Length}: {l}"));
+        int drivers = sheet.ResultLines.ToList().FindIndex(l => l.StartsWith("Top drivers", StringComparison.Ordinal));
+        Assert.True(drivers >= 0);
+        Assert.All(sheet.ResultLines.Skip(drivers + 1).TakeWhile(l => l.StartsWith("  ", StringComparison.Ordinal)),
+            l => Assert.DoesNotContain("_", l));
+    }
+
+    [Fact]
     public void ABadTolerance_ShowsItsMessageBesideTheField_AndKeepsTheTypedText()
     {
         using var bench = new Bench(120, 40);
