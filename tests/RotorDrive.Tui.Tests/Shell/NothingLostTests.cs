@@ -75,6 +75,8 @@ public class NothingLostTests
         bench.Press(Key.D9.WithAlt);
         bench.Press(Key.F8);
         Assert.Contains("Stopped.", bench.Window.StatusText);
+        // While the worker returns, the status line does not also say the run is going.
+        Assert.DoesNotContain("stress test...", bench.Window.StatusText);
         await bench.SettleAsync();
         Assert.True(stress.Result!.Partial);
         Assert.True(stress.Result.Samples >= 1);
