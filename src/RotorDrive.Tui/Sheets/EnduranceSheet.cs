@@ -24,15 +24,34 @@ public sealed class EnduranceSheet : ChartSheet
 
     private readonly TextField _soc;
     private readonly PlateHeatMapView _heat;
+    private bool? _wide;
 
     /// <summary>Creates the sheet.</summary>
     public EnduranceSheet(WorkbenchContext context)
-        : base(context, "Endurance", readoutLines: 3, "the endurance run needs")
+        : base(context, "Endurance", readoutLines: 4, "the endurance run needs")
     {
         _soc = Panel.AddInput("charge %", 5, "100");
         Panel.Width = Dim.Percent(62);
         _heat = new PlateHeatMapView { X = Pos.Right(Panel), Y = 0, Width = Dim.Fill(), Height = Dim.Fill() };
         Add(_heat);
+        // Beside the charts only where both fit: on a narrow terminal the charts and the readout take the whole width
+        // (the figures page still names the hot spot).
+        FrameChanged += (_, _) => FitHeatMap();
+    }
+
+    /// <summary>Narrower than this, the sheet leaves the heat map out.</summary>
+    public const int HeatMapFromColumns = 90;
+
+    private void FitHeatMap()
+    {
+        bool wide = Frame.Width >= HeatMapFromColumns;
+        if (wide == _wide)
+        {
+            return;
+        }
+        _wide = wide;
+        _heat.Visible = wide;
+        Panel.Width = wide ? Dim.Percent(62) : Dim.Fill();
     }
 
     /// <summary>The plate heat map beside the charts.</summary>
