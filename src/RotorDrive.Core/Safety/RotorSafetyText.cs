@@ -6,10 +6,10 @@ namespace RotorDrive.Core.Safety;
 /// is <see cref="RotorSafetyResult.Passes"/>, never decided by the caller, and the figures are in rpm, MPa, % and m/s.</summary>
 public static class RotorSafetyText
 {
-    /// <summary>The check in one line: verdict first, then rotor, speed, ring stress against its allowable, margin and rim
-    /// speed ("passes burst check, rotor r1 at 9000 rpm (rated): ring 120 MPa, allowed 300 MPa, margin 150 %, rim 85 m/s"),
-    /// and, when it passes with a margin under the burst caution's threshold, that it does ("under the 50 % the burst
-    /// caution asks for").</summary>
+    /// <summary>The check in one line (two at 80 columns): verdict first, then rotor, speed, ring stress of its allowable,
+    /// margin and rim speed ("passes burst check: rotor r1 at 9000 rpm (rated), ring 120 of 300 MPa, margin 150 %, rim
+    /// 85 m/s"), and, when it passes with a margin under the burst caution's threshold, that it does ("caution: under
+    /// 50 %").</summary>
     /// <param name="result">Core's check.</param>
     /// <param name="where">What the speed is ("rated", "hover").</param>
     /// <param name="thresholds">The caution thresholds; <see cref="CautionThresholds.Default"/> when null.</param>
@@ -22,20 +22,20 @@ public static class RotorSafetyText
         double asked = (thresholds ?? CautionThresholds.Default).BurstMargin;
         string verdict = result.Passes switch
         {
-            true => "passes",
-            false => "! FAILS",
-            null => "! not assessed:",
+            true => "passes burst check",
+            false => "! FAILS burst check",
+            null => "! burst check not assessed",
         };
-        string at = $"burst check, rotor {result.RotorId} at {Rpm(result.SpeedRadPerS)} rpm ({where})";
+        string at = $"rotor {result.RotorId} at {Rpm(result.SpeedRadPerS)} rpm ({where})";
         string rim = $"rim {F0(result.RimSpeedMPerS)} m/s";
         string over = result.AboveRatedSpeed ? $", above its rated {Rpm(result.RatedSpeedRadPerS)} rpm" : "";
-        string thin = result.Passes == true && result.MarginFraction < asked ? $" (under the {Percent(asked)} the burst caution asks for)" : "";
+        string thin = result.Passes == true && result.MarginFraction < asked ? $" (caution: under {Percent(asked)})" : "";
         return result.Assessment switch
         {
-            RetainerAssessment.Assessed => $"{verdict} {at}: ring {Mpa(result.HoopStressPa)} MPa, allowed {Mpa(result.AllowablePa)} MPa, "
+            RetainerAssessment.Assessed => $"{verdict}: {at}, ring {Mpa(result.HoopStressPa)} of {Mpa(result.AllowablePa)} MPa, "
                 + $"margin {Percent(result.MarginFraction!.Value)}{thin}, {rim}{over}",
-            RetainerAssessment.NoAllowableStress => $"{verdict} {at}: ring {Mpa(result.HoopStressPa)} MPa, no allowable stress in the rotor row, {rim}{over}",
-            _ => $"{verdict} {at}: ring stress not assessed (the rotor row gives no retainer thickness), {rim}{over}",
+            RetainerAssessment.NoAllowableStress => $"{verdict}: {at}, ring {Mpa(result.HoopStressPa)} MPa, no allowable stress in the rotor row, {rim}{over}",
+            _ => $"{verdict}: {at}, ring stress not assessed (the rotor row gives no retainer thickness), {rim}{over}",
         };
     }
 

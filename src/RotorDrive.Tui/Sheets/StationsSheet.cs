@@ -17,7 +17,7 @@ namespace RotorDrive.Tui.Sheets;
 public sealed class StationsSheet : Sheet
 {
     private const int MinSketchRows = 8;
-    private const int RowsBelowSketch = 13;
+    private const int RowsBelowSketch = 14;
     private readonly Label _sketch;
     private readonly Label _legend;
     private readonly ListView _stations;
@@ -65,9 +65,9 @@ public sealed class StationsSheet : Sheet
             _fields.Add(binding);
         }
         _detail = new Label { X = 0, Y = Pos.Bottom(_sketch) + 7, Width = Dim.Fill(), Height = 1, Text = "" };
-        _safety = new Label { X = 0, Y = Pos.Bottom(_sketch) + 8, Width = Dim.Fill(), Height = 2, Text = "" };
+        _safety = new Label { X = 0, Y = Pos.Bottom(_sketch) + 8, Width = Dim.Fill(), Height = 3, Text = "" };
         Add(_safety);
-        _problems = new ListView { X = 0, Y = Pos.Bottom(_sketch) + 10, Width = Dim.Fill(), Height = Dim.Fill() };
+        _problems = new ListView { X = 0, Y = Pos.Bottom(_sketch) + 11, Width = Dim.Fill(), Height = Dim.Fill() };
         _problems.SetSource(_problemItems);
         Add(_detail, _problems);
     }
@@ -214,7 +214,7 @@ public sealed class StationsSheet : Sheet
     private void DrawSketch()
     {
         int width = Math.Max(20, _sketch.Frame.Width > 0 ? _sketch.Frame.Width : 58);
-        int rows = Math.Max(MinSketchRows, _sketch.Frame.Height);
+        int rows = _sketch.Frame.Height > 0 ? Math.Max(5, _sketch.Frame.Height) : MinSketchRows;
         string text = string.Join("\n", StationSketch.Render(_sketchStations, _cg.X, _cg.Y, width, rows, _letters, _selected));
         if (_sketch.Text != text)
         {

@@ -16,10 +16,10 @@ public class RotorSafetyTextTests
         var thin = Checked(6000);
         Assert.True(thin.Passes);
         string line = RotorSafetyText.Line(thin, "rated");
-        Assert.StartsWith("passes burst check, rotor ", line);
+        Assert.StartsWith("passes burst check: rotor ", line);
         Assert.Contains("at 6000 rpm (rated)", line);
-        Assert.Contains("margin 41 % (under the 50 % the burst caution asks for)", line);
-        Assert.DoesNotContain("under the", RotorSafetyText.Line(Checked(3000), "hover"));
+        Assert.Contains("margin 41 % (caution: under 50 %)", line);
+        Assert.DoesNotContain("caution", RotorSafetyText.Line(Checked(3000), "hover"));
     }
 
     [Fact]

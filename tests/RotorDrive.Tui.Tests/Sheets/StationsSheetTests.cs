@@ -54,8 +54,16 @@ public class StationsSheetTests
         Assert.Equal("Station 3 of 6", sheet.Heading);
         Assert.Contains("[3cw]", sheet.SketchText);
         Assert.Contains(sheet.Fields, f => f.Spec.JsonPath == "$.stations[2].motor");
-        // The heading and the legend fit the sheet at 80 columns.
+        // The heading and the legend fit the sheet at 80 columns, and so does the whole burst check, and every station of
+        // the sketch is on the screen.
         Assert.True(sheet.LegendText.Length <= 58, sheet.LegendText);
+        string screen = bench.Screen;
+        Assert.All(sheet.SafetyText.Split('\n'), l => Assert.Contains(l.Trim(), screen));
+        Assert.EndsWith("m/s", sheet.SafetyText);
+        for (int i = 1; i <= 6; i++)
+        {
+            Assert.Contains($"{i}c", screen);
+        }
     }
 
     [Fact]
@@ -128,7 +136,7 @@ public class StationsSheetTests
         var failed = Assert.Single(session.FailedBurstChecks);
         Assert.Equal(false, failed.Passes);
         string line = RotorDrive.Core.Safety.RotorSafetyText.Line(failed, "rated");
-        Assert.StartsWith("! FAILS burst check, rotor hx150-p6", line);
+        Assert.StartsWith("! FAILS burst check: rotor hx150-p6", line);
         Assert.Contains(line, sheet.ProblemLines);
         Assert.DoesNotContain("No problems in the rig or its catalogs.", sheet.ProblemLines);
         Assert.Contains($"! {session.Problems.Count + 1} problem(s)", bench.Window.StatusText);
