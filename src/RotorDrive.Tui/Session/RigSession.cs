@@ -171,6 +171,16 @@ public sealed class RigSession
         Resolve();
     }
 
+    /// <summary>Drops text typed into a field that is not a value (Esc in the field): the field shows the rig's value
+    /// again. Nothing happens when the field holds no such text.</summary>
+    public void DiscardTyped(string fieldPath)
+    {
+        if (_untyped.Remove(fieldPath))
+        {
+            Changed?.Invoke(this, EventArgs.Empty);
+        }
+    }
+
     /// <summary>Records that a field holds text that is not a valid value; the document keeps its last valid value.</summary>
     public void MarkUntyped(string fieldPath, string message)
     {
