@@ -226,7 +226,16 @@ public sealed class SpinupSheet : ChartSheet
             }
         }
         sb.AppendLine();
-        var findings = new CautionFindings(true, [], spin.Stations.Max(s => s.PeakPlateTempC), spin.Stations.Max(s => s.PeakWindingTempC));
+        // The burst check at rated speed, worded and judged as on Stations and Hover & yaw, and the burst caution raised
+        // from the same checks (so this sheet never shows a notice where the hover review warns).
+        var rated = HoverSafety.AtRatedSpeed(rig.Stations.Select(s => s.Rotor));
+        sb.AppendLine("RETAINING RING (burst checks)");
+        foreach (var check in rated)
+        {
+            sb.AppendLine("  " + RotorSafetyText.Line(check, "rated"));
+        }
+        sb.AppendLine();
+        var findings = new CautionFindings(true, rated, spin.Stations.Max(s => s.PeakPlateTempC), spin.Stations.Max(s => s.PeakWindingTempC));
         sb.Append(CautionText.Compose(Cautions.For(findings), study.Cautions));
         return sb.ToString();
     }
