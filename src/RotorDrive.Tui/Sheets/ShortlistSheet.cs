@@ -464,7 +464,7 @@ public sealed class ShortlistSheet : Sheet
         if (shown.Result.RankOf(candidate) is { } rank)
         {
             bool pareto = shown.Result.ParetoRanks.Contains(rank);
-            _assigned.Text = $"Rig: rank {rank}{(pareto ? " P" : "")} of {N(shown.Result.AcceptedCount)}: {evaluation.Label}";
+            _assigned.Text = Fit($"Rig: rank {rank}{(pareto ? " P" : "")} of {N(shown.Result.AcceptedCount)}", evaluation.Label);
             var listed = shown.Result.Top.FirstOrDefault(t => t.Evaluation.Candidate == candidate);
             var sim = listed?.Evaluation.Simulation ?? SimulationOf(shown.Study, candidate);
             _rigRow = Row($"rig {rank}", pareto, evaluation, sim, listed?.LiftoffTimeS ?? sim.LiftoffTimeS, listed?.Score);
@@ -472,10 +472,19 @@ public sealed class ShortlistSheet : Sheet
         else
         {
             string why = evaluation.Rejections.Count > 0 ? evaluation.Rejections[0].Kind.Describe() : "not ranked";
-            _assigned.Text = $"Rig: ! rejected: {why}" + (evaluation.Rejections.Count > 1 ? $" (+{evaluation.Rejections.Count - 1} more)" : "") + $": {evaluation.Label}";
+            _assigned.Text = Fit($"Rig: ! rejected: {why}" + (evaluation.Rejections.Count > 1 ? $" (+{evaluation.Rejections.Count - 1} more)" : ""), evaluation.Label);
             _rigRow = Row("rig -", false, evaluation, null, null, null);
         }
         ShowColumns();
+    }
+
+    // The rig line with its drivetrain when both fit the sheet's width; otherwise without it (the pinned row names the
+    // parts), so the line is never cut off.
+    private string Fit(string where, string label)
+    {
+        string full = $"{where}: {label}";
+        int width = Viewport.Width > 0 ? Viewport.Width : int.MaxValue;
+        return full.Length <= width ? full : where + " (its row is pinned below the table)";
     }
 
     // The endurance and spin-up runs of the rig's own drivetrain when it is not on the shortlist: run once per ranking

@@ -89,6 +89,8 @@ public class ShortlistSheetTests
             Assert.Equal(sim.EnduranceLimit.Words(), row[3]);
             Assert.Equal((study.Evaluate(own).Figures!.RuntimeS / 60).ToString("F1", CultureInfo.InvariantCulture), row[4]);
             Assert.True(bench.Screen.Contains($"rig {expected.RankOf(own)}"), bench.Screen);
+            // At 80 columns the rig line leaves the parts to the pinned row rather than being cut off.
+            Assert.Contains(sheet.AssignedText, bench.Screen);
 
             // Rows scroll under a header that stays; the pinned row stays too.
             sheet.Table.SetFocus();
