@@ -364,7 +364,8 @@ public sealed class ShortlistSheet : Sheet
         {
             double fraction = Context.Work.Current is { Name: RankJob, Progress: { } f } ? f : 0;
             _progress.Fraction = (float)fraction;
-            _state.Text = $"Ranking {(int)(fraction * 100)} %... F8 stops";
+            // The sweep reports its fraction; the spin-up and endurance runs of the shortlist come after it.
+            _state.Text = fraction >= 1 ? "Simulating the shortlist... F8 stops" : $"Ranking {(int)(fraction * 100)} %... F8 stops";
             return;
         }
         if (_shown is not { } shown)
