@@ -60,6 +60,24 @@ public sealed class HoverCommandTests : IDisposable
         Assert.Contains("Lithium packs", output);
     }
 
+    [Fact]
+    public async Task Hover_BurstChecks_AreCoresOneWording_InTextAndJson_WithTheMarginInPercent()
+    {
+        var (_, text, _) = await CliRunner.RunAsync("hover", RepoPaths.DemoRig);
+        var (_, json, _) = await CliRunner.RunAsync("hover", RepoPaths.DemoRig, "--json");
+        var checks = JsonDocument.Parse(json).RootElement.GetProperty("safety").GetProperty("checks").EnumerateArray().Select(c => c.GetString()!).ToList();
+        Assert.Equal(2, checks.Count);
+        Assert.StartsWith("passes burst check: rotor hx130-p4 at ", checks[0]);
+        Assert.Contains(" rpm (hover), ring ", checks[0]);
+        // The demo rotor passes at its rated 5000 rpm with a margin under the burst caution's 50 %: the check line says so,
+        // and the caution's reason uses the same per cent, not a bare fraction (issue 14 item 9).
+        Assert.StartsWith("passes burst check: rotor hx130-p4 at 5000 rpm (rated)", checks[1]);
+        Assert.Contains("margin 33 % (caution: under 50 %)", checks[1]);
+        Assert.All(checks, c => Assert.Contains("  " + c, text));
+        Assert.Contains("retaining-ring margin 33 % at 5000 rpm is under the 50 % asked for", text);
+        Assert.DoesNotContain("max_rpm", text);
+    }
+
     // The over-loaded demo names the failing limit and a payload that does hover; re-running at that payload passes.
     [Fact]
     public async Task Hover_Overloaded_ExitsOne_NamesTheLimit_AndAPayloadThatHovers()

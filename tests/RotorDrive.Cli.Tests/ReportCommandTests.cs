@@ -46,6 +46,9 @@ public sealed class ReportCommandTests : IDisposable
         Assert.Contains("2026-03-14", html);
         Assert.Contains("pacemaker", html);
         Assert.Contains("local codes", html);
+        // The burst caution weighs the rated-speed check as the hover review does: the demo rotor's 33 % margin at its rated
+        // 5000 rpm is under the caution's 50 %, so the report warns as `hover` does.
+        Assert.Contains("Rotor burst (warning).", html);
         // The exit code agrees with the failed-limits list.
         bool anyFailed = html.Contains("<ul class=\"failed\">", StringComparison.Ordinal);
         Assert.Equal(anyFailed ? ExitCodes.LimitFindings : ExitCodes.Ok, code);

@@ -114,7 +114,7 @@ public static class EnduranceCommand
         }
         else
         {
-            WriteText(report, rig, pass, output);
+            WriteText(report, rig, pass, study.HottestWindingText, output);
         }
         if (plot.Path is { } plotPath)
         {
@@ -127,7 +127,7 @@ public static class EnduranceCommand
         return pass ? ExitCodes.Ok : ExitCodes.LimitFindings;
     }
 
-    private static void WriteText(EnduranceReport report, Rig rig, bool pass, TextWriter output)
+    private static void WriteText(EnduranceReport report, Rig rig, bool pass, string windingLine, TextWriter output)
     {
         output.WriteLine($"Endurance: {report.Rig}, trimmed hover at the {Numbers.Format(rig.DesignGapM * 1000, 1)} mm design gap from a full pack");
         output.WriteLine($"  runtime: {Numbers.Format(report.RuntimeS, 0)} s ({Numbers.Format(report.RuntimeMin, 1)} min)");
@@ -136,7 +136,7 @@ public static class EnduranceCommand
             ? "  at the start: no trimmed hover exists"
             : $"  at the start: {string.Join(" / ", report.StartSpeedsRpm.Select(r => Numbers.Format(r, 0)))} rpm (stations 1..{report.StartSpeedsRpm.Count}), pack current {Numbers.Format(report.StartPackCurrentA, 1)} A");
         output.WriteLine($"  at the end: state of charge {Numbers.Format(report.FinalSocPct, 1)} %, bus {Numbers.Format(report.FinalBusVoltageV, 1)} V, pack current {Numbers.Format(report.FinalPackCurrentA, 1)} A");
-        output.WriteLine($"  hottest winding {Numbers.Format(report.PeakWindingTempC, 1)} C, hottest point of the plate {Numbers.Format(report.PeakPlateTempC, 1)} C (limit {Numbers.Format(report.PlateLimitC, 0)} C)");
+        output.WriteLine($"  {windingLine}, hottest point of the plate {Numbers.Format(report.PeakPlateTempC, 1)} C (limit {Numbers.Format(report.PlateLimitC, 0)} C)");
         if (report.PlateHotspot is { } h)
         {
             output.WriteLine($"  plate hot spot at the end: x {Numbers.Format(h.XMm, 0)} mm, y {Numbers.Format(h.YMm, 0)} mm, {Numbers.Format(h.TemperatureC, 1)} C"

@@ -95,7 +95,8 @@ public static class HoverCommand
                 safety.AtMaxRpm.Select(r => r.RimSpeedMPerS).DefaultIfEmpty(double.NaN).Max(),
                 worstMax?.HoopStressPa / 1e6, worstMax?.RingOwnStressPa / 1e6, worstMax?.MarginFraction),
             hoverRotors.Select(r => JsonNames.Of(r.Assessment)).Distinct().ToList(),
-            safety.MagnetNote);
+            safety.MagnetNote,
+            BurstChecks(safety));
         var limits = review.Findings.Select(f => new LimitEntry(f.Limit, f.Station + 1, f.Message)).ToList();
         bool pass = review.Pass;
         return new HoverReport(
@@ -106,6 +107,19 @@ public static class HoverCommand
             stations, h.PackMargins.Select(Margin).ToList(), limits, review.MaxPayloadKg, safetyEntry,
             safety.Cautions.Select(c => new CautionEntry(JsonNames.Of(c.Topic), JsonNames.Of(c.Level), c.Title, c.Text, c.Reason)).ToList(),
             h.Iterations, study.FailedCriteria, study.LimitingConstraint);
+    }
+
+    // The burst checks in Core's one wording (the workbench's Hover & yaw sheet prints the same lines): the rotor closest
+    // to failing at hover, then each rotor design at its rated speed.
+    private static IReadOnlyList<string> BurstChecks(HoverSafetyReport safety)
+    {
+        var lines = new List<string>();
+        if (safety.WorstAtHover is { } worst)
+        {
+            lines.Add(RotorSafetyText.Line(worst, "hover"));
+        }
+        lines.AddRange(safety.AtMaxRpm.Select(r => RotorSafetyText.Line(r, "rated")));
+        return lines;
     }
 
     private static MarginEntry Margin(LimitMargin m)
@@ -147,9 +161,11 @@ public static class HoverCommand
             }
         }
         o.WriteLine();
-        o.WriteLine($"Rotor safety: rim speed {Numbers.Format(r.Safety.RimSpeedMPerS, 1)} m/s at hover; retainer hoop stress {Numbers.Format(r.Safety.RetainerStressMpa, 1)} MPa "
-            + $"(margin {Numbers.Format(r.Safety.RetainerMargin * 100, 0)} %); at max_rpm {Numbers.Format(r.Safety.AtMaxRpm.SpeedRpm, 0)} rpm: {Numbers.Format(r.Safety.AtMaxRpm.RetainerStressMpa, 1)} MPa "
-            + $"(margin {Numbers.Format(r.Safety.AtMaxRpm.RetainerMargin * 100, 0)} %).");
+        o.WriteLine("Rotor safety (retaining ring):");
+        foreach (string line in r.Safety.Checks)
+        {
+            o.WriteLine("  " + line);
+        }
         o.WriteLine("  " + r.Safety.Note);
         o.WriteLine();
         if (r.Limits.Count == 0)
@@ -198,7 +214,7 @@ public static class HoverCommand
 
     private sealed record SafetyEntry(
         double? RimSpeedMPerS, double? RetainerStressMpa, double? RingOwnStressMpa, double? MagnetLoadStressMpa, double? AllowableMpa,
-        double? RetainerMargin, MaxRpmEntry AtMaxRpm, IReadOnlyList<string> Assessment, string Note);
+        double? RetainerMargin, MaxRpmEntry AtMaxRpm, IReadOnlyList<string> Assessment, string Note, IReadOnlyList<string> Checks);
 
     private sealed record MaxRpmEntry(double SpeedRpm, double RimSpeedMPerS, double? RetainerStressMpa, double? RingOwnStressMpa, double? RetainerMargin);
 

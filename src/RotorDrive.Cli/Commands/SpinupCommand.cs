@@ -194,7 +194,7 @@ public static class SpinupCommand
     private static void WriteText(SpinupReport r, Rig rig, TextWriter o)
     {
         o.WriteLine($"Spin-up: {r.Rig}, {r.Mode} mode, ramp {Numbers.Format(r.RampS, 1)} s, pack at {Numbers.Format(r.SocPct, 0)} %, {Numbers.Format(r.MassKg, 1)} kg");
-        o.WriteLine($"  hover target: {(r.HoverExists ? "trimmed speeds" : "no trim exists; full-throttle speeds")} {string.Join(" / ", r.HoverSpeedsRpm.Select(v => Numbers.Format(v, 0)))} rpm (stations 0..{r.HoverSpeedsRpm.Count - 1}) at the {Numbers.Format(rig.DesignGapM * 1000, 1)} mm design gap");
+        o.WriteLine($"  hover target: {(r.HoverExists ? "trimmed speeds" : "no trim exists; full-throttle speeds")} {string.Join(" / ", r.HoverSpeedsRpm.Select(v => Numbers.Format(v, 0)))} rpm (stations 1..{r.HoverSpeedsRpm.Count}) at the {Numbers.Format(rig.DesignGapM * 1000, 1)} mm design gap");
         o.WriteLine($"  lift-off: {(r.TimeToLiftoffS is { } lo ? Numbers.Format(lo, 2) + " s" : "never")} (limit {Numbers.Format(r.LiftoffLimitS, 1)} s); steady hover: {(r.TimeToHoverS is { } h ? Numbers.Format(h, 2) + " s" : "not reached")}");
         o.WriteLine($"  pack: peak {Numbers.Format(r.PeakPackCurrentA, 0)} A (continuous {Numbers.Format(r.PackContinuousA, 0)} A for "
             + $"{Numbers.Format(r.PackTimeAboveContinuousS, 2)} s above, burst {Numbers.Format(r.PackBurstA, 0)} A); lowest voltage {Numbers.Format(r.MinPackVoltageV, 1)} V (cutoff {Numbers.Format(r.CutoffVoltageV, 1)} V)");
@@ -204,8 +204,8 @@ public static class SpinupCommand
             new TableColumn("station", Alignment.Right), new TableColumn("spin", Alignment.Left), new TableColumn("speed_rpm", Alignment.Right),
             new TableColumn("peak_current_a", Alignment.Right), new TableColumn("limit_a", Alignment.Right),
             new TableColumn("above_cont_s", Alignment.Right), new TableColumn("burst_s", Alignment.Right),
-            new TableColumn("peak_rpm", Alignment.Right), new TableColumn("peak_nm", Alignment.Right),
-            new TableColumn("passing_a", Alignment.Right), new TableColumn("stalled", Alignment.Left));
+            new TableColumn("drag_peak_rpm", Alignment.Right), new TableColumn("drag_peak_nm", Alignment.Right),
+            new TableColumn("drag_peak_passing_a", Alignment.Right), new TableColumn("stalled", Alignment.Left));
         foreach (var s in r.Stations)
         {
             table.AddRow(StationText.Cell(s.Station, s.Name), s.Spin, Numbers.Format(s.FinalSpeedRpm, 0), Numbers.Format(s.PeakMotorCurrentA, 1),

@@ -582,7 +582,7 @@ public static class HoverTrim
                 if (m.Exceeded)
                 {
                     findings.Add(new HoverFinding(m.Limit.Key(), i,
-                        $"station {i + 1}: {m.Limit.Describe()} {m.ValueSi:0.###} {m.Limit.Unit()} exceeds the allowed {m.AllowedSi:0.###} {m.Limit.Unit()}"));
+                        $"station {i + 1}: {m.Sentence()}"));
                 }
             }
             if (!stable)
@@ -602,7 +602,7 @@ public static class HoverTrim
             if (m.Exceeded)
             {
                 findings.Add(new HoverFinding(m.Limit.Key(), null,
-                    $"pack: {m.Limit.Describe()} {m.ValueSi:0.###} {m.Limit.Unit()} is beyond the allowed {m.AllowedSi:0.###} {m.Limit.Unit()}"));
+                    $"pack: {m.Sentence()}"));
             }
         }
         double dg = 1e-4 * gapM, up = 0, down = 0;

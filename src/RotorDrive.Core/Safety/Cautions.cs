@@ -111,8 +111,8 @@ public static class Cautions
                 default:
                     if (r.MarginFraction is { } margin && margin < limits.BurstMargin)
                     {
-                        reasons.Add($"rotor {r.RotorId}: retainer stress margin {margin.ToString("0.00", CultureInfo.InvariantCulture)} at {rpm} rpm "
-                            + $"is below {limits.BurstMargin.ToString("0.00", CultureInfo.InvariantCulture)}");
+                        reasons.Add($"rotor {r.RotorId}: retaining-ring margin {RotorSafetyText.Percent(margin)} at {rpm} rpm "
+                            + $"is under the {RotorSafetyText.Percent(limits.BurstMargin)} asked for");
                     }
                     break;
             }

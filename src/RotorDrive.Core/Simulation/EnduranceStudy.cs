@@ -26,7 +26,7 @@ public static class EnduranceStudy
         progress?.Report(1.0);
         double? maxWinding = rig.Drivetrains.Select(d => d.Motor.MaxWindingTempC).Where(m => m is not null).Min();
         var cautions = Cautions.For(new CautionFindings(true, [], run.PeakPlateTempC, run.PeakWindingTempC, Craft.PlateAttraction.AtStandstill(rig.Model)));
-        return new EnduranceStudyResult(request, run, rig.Rig.Limits.PlateTempC, rig.Rig.Limits.CellCutoffV * rig.Packs.CellsSeries, maxWinding, cautions);
+        return new EnduranceStudyResult(request, run, rig.Rig.Limits.PlateTempC, rig.Rig.Limits.CellCutoffV * rig.Packs.CellsSeries, maxWinding, cautions, WindingText.Hottest(rig, run.PeakWindingTempC));
     }
 
     /// <summary>An ending as a snake_case key (<c>plate_temperature</c>, <c>usable_capacity</c>, ...).</summary>

@@ -9,6 +9,8 @@ namespace RotorDrive.Core.Simulation;
 /// <param name="PackCutoffV">The pack's cutoff voltage: cells in series x the rig's cell cutoff, V.</param>
 /// <param name="MaxWindingTempC">The lowest winding temperature rating over the rig's motors, C, or null when no motor
 /// gives one.</param>
+/// <param name="HottestWindingText">The hottest winding in words (<see cref="WindingText.Hottest"/>): its temperature, or that
+/// the windings are not modelled.</param>
 /// <param name="Cautions">The cautions for hot plates and windings, packs, magnets and estimates.</param>
 public sealed record EnduranceStudyResult(
     EnduranceStudyRequest Request,
@@ -16,7 +18,8 @@ public sealed record EnduranceStudyResult(
     double PlateLimitC,
     double PackCutoffV,
     double? MaxWindingTempC,
-    IReadOnlyList<Caution> Cautions)
+    IReadOnlyList<Caution> Cautions,
+    string HottestWindingText)
 {
     /// <summary>Whether the run passes: it hovered and the pack ended it (<see cref="EnduranceLimits.Passes(EnduranceResult)"/>).</summary>
     public bool Passes => Run.Passes();

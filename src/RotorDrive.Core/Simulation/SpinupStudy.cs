@@ -36,7 +36,8 @@ public static class SpinupStudy
 
         double controllerMaxV = rig.Drivetrains.Min(d => d.Controller.MaxCells) * request.FullCellV;
         return new SpinupStudyResult(request, soc, targets, spin, landBraking, landCoasting, controllerMaxV, rig.Rig.Limits.LiftoffTimeS,
-            check.Findings, [.. check.Cautions, .. LandingCautions(landBraking, landCoasting, controllerMaxV, request.FullCellV)]);
+            check.Findings, [.. check.Cautions, .. LandingCautions(landBraking, landCoasting, controllerMaxV, request.FullCellV)],
+            Craft.HoverSafety.AtRatedSpeed(rig.Rig.Stations.Select(st => st.Rotor)));
     }
 
     /// <summary>The spin-up alone and its verdict: what <see cref="Run"/> finds before it simulates the landings (the

@@ -12,6 +12,8 @@ namespace RotorDrive.Core.Simulation;
 /// <param name="Findings">Every failed limit, in words; empty when the spin-up passes.</param>
 /// <param name="Cautions">Landing results worth a caution (not failed limits: the catalogs give no regeneration or
 /// over-voltage ratings), in words.</param>
+/// <param name="RatedBurstChecks">The retaining-ring check of each station's rotor at its rated speed (the speed a
+/// spin-up may reach), as the hover review makes it.</param>
 public sealed record SpinupStudyResult(
     SpinupStudyRequest Request,
     double SocFraction,
@@ -22,7 +24,8 @@ public sealed record SpinupStudyResult(
     double ControllerMaxVoltageV,
     double LiftoffLimitS,
     IReadOnlyList<SpinupFinding> Findings,
-    IReadOnlyList<string> Cautions)
+    IReadOnlyList<string> Cautions,
+    IReadOnlyList<Safety.RotorSafetyResult> RatedBurstChecks)
 {
     /// <summary>True when no limit failed: lift-off in time, no stalled rotor, currents within their burst allowances,
     /// the pack above its cutoff and a trimmed hover to aim for.</summary>
@@ -43,8 +46,8 @@ public sealed record SpinupStudyResult(
     public IReadOnlyList<string> FailedCriteria => Findings.Select(f => f.Key).Distinct().ToList();
 
     /// <summary>The safety cautions for the run: magnets, burst, packs, and hot plates and windings at the run's peak
-    /// temperatures.</summary>
-    public IReadOnlyList<Safety.Caution> SafetyCautions => Safety.Cautions.For(new Safety.CautionFindings(true, [],
+    /// temperatures, the burst caution from the rated-speed checks.</summary>
+    public IReadOnlyList<Safety.Caution> SafetyCautions => Safety.Cautions.For(new Safety.CautionFindings(true, RatedBurstChecks,
         Spinup.Stations.Max(s => s.PeakPlateTempC), Spinup.Stations.Max(s => s.PeakWindingTempC)));
 
     /// <summary>The two landings: braking on, then off.</summary>

@@ -292,7 +292,10 @@ public static class RigReportHtml
 
     private static void CautionSection(StringBuilder s, RigReport report)
     {
-        var cautions = Cautions.For(new CautionFindings(true, report.Hover.Safety.AtHover, report.Endurance.Run.PeakPlateTempC, report.Endurance.Run.PeakWindingTempC,
+        // The burst caution weighs the same checks as the hover review (at hover and at rated speed), so the report warns
+        // where the hover command and the workbench warn.
+        var safety = report.Hover.Safety;
+        var cautions = Cautions.For(new CautionFindings(true, [.. safety.AtHover, .. safety.AtMaxRpm], report.Endurance.Run.PeakPlateTempC, report.Endurance.Run.PeakWindingTempC,
             PlateAttraction.AtStandstill(report.Model)));
         foreach (var c in cautions)
         {

@@ -20,6 +20,7 @@ public interface IWorkbenchPrompts
     /// <param name="title">Short title.</param>
     /// <param name="items">The choices.</param>
     /// <param name="current">The current value (selected first when in the list).</param>
+    /// <param name="details">A one-line summary beside each item (same order), or null for none.</param>
     /// <returns>The chosen item, or null when cancelled.</returns>
-    string? Choose(string title, IReadOnlyList<string> items, string? current);
+    string? Choose(string title, IReadOnlyList<string> items, string? current, IReadOnlyList<string>? details = null);
 }

@@ -85,11 +85,14 @@ public sealed class TerminalPrompts : IWorkbenchPrompts
     }
 
     /// <inheritdoc/>
-    public string? Choose(string title, IReadOnlyList<string> items, string? current)
+    public string? Choose(string title, IReadOnlyList<string> items, string? current, IReadOnlyList<string>? details = null)
     {
-        using var dialog = new Dialog { Title = title, Width = Dim.Percent(60), Height = Dim.Percent(80) };
+        using var dialog = new Dialog { Title = title, Width = Dim.Percent(details is null ? 60 : 90), Height = Dim.Percent(80) };
         var list = new ListView { X = 1, Y = 1, Width = Dim.Fill(1), Height = Dim.Fill(1) };
-        list.SetSource(new ObservableCollection<string>(items));
+        int idWidth = items.Count == 0 ? 0 : items.Max(i => i.Length);
+        list.SetSource(new ObservableCollection<string>(details is null
+            ? items
+            : items.Select((item, k) => k < details.Count && details[k].Length > 0 ? item.PadRight(idWidth) + "  " + details[k] : item)));
         int index = current is null ? -1 : items.ToList().FindIndex(i => string.Equals(i, current, StringComparison.OrdinalIgnoreCase));
         if (index >= 0)
         {

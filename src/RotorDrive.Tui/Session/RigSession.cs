@@ -4,6 +4,7 @@ using RotorDrive.Core.Safety;
 using RotorDrive.Core.Studies.Stress;
 using RotorDrive.Files;
 using RotorDrive.Files.Catalogs;
+using RotorDrive.Files.Json;
 using RotorDrive.Files.Rigs;
 using RotorDrive.Tui.Services;
 
@@ -15,6 +16,8 @@ namespace RotorDrive.Tui.Session;
 /// read when the file was opened (re-open to pick up catalog changes).</remarks>
 public sealed class RigSession
 {
+    // The rig file as read or last saved, whose comments a save carries over.
+    private string? _text;
     private readonly IWorkbenchFiles _files;
     private readonly Dictionary<string, string> _untyped = new(StringComparer.Ordinal);
     private readonly HashSet<string> _edited = new(StringComparer.Ordinal);
@@ -109,6 +112,7 @@ public sealed class RigSession
         CatalogLoadResult? catalogs = paths is null ? null : LoadCatalogs(paths, catalogProblems);
 
         RigPath = path;
+        _text = text;
         Document = read.Document;
         Catalogs = catalogs;
         _locations = read.Locations;
@@ -165,6 +169,16 @@ public sealed class RigSession
         }
         IsDirty = true;
         Resolve();
+    }
+
+    /// <summary>Drops text typed into a field that is not a value (Esc in the field): the field shows the rig's value
+    /// again. Nothing happens when the field holds no such text.</summary>
+    public void DiscardTyped(string fieldPath)
+    {
+        if (_untyped.Remove(fieldPath))
+        {
+            Changed?.Invoke(this, EventArgs.Empty);
+        }
     }
 
     /// <summary>Records that a field holds text that is not a valid value; the document keeps its last valid value.</summary>
@@ -261,7 +275,13 @@ public sealed class RigSession
                 return $"{path}.bak: cannot keep a backup of the previous file ({backup}); nothing was saved";
             }
         }
-        string? failure = _files.WriteAllTextAtomic(path, RigDocumentWriter.Write(document));
+        // The file's comments go into the new text too: the rig file is the user's, notes and all.
+        string text = JsonComments.Carry(_text ?? "", RigDocumentWriter.Write(document));
+        string? failure = _files.WriteAllTextAtomic(path, text);
+        if (failure is null)
+        {
+            _text = text;
+        }
         return failure is null ? null : $"{path}: {failure}";
     }
 

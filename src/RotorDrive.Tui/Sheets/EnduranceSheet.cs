@@ -24,15 +24,34 @@ public sealed class EnduranceSheet : ChartSheet
 
     private readonly TextField _soc;
     private readonly PlateHeatMapView _heat;
+    private bool? _wide;
 
     /// <summary>Creates the sheet.</summary>
     public EnduranceSheet(WorkbenchContext context)
-        : base(context, "Endurance", readoutLines: 3, "the endurance run needs")
+        : base(context, "Endurance", readoutLines: 4, "the endurance run needs")
     {
         _soc = Panel.AddInput("charge %", 5, "100");
         Panel.Width = Dim.Percent(62);
         _heat = new PlateHeatMapView { X = Pos.Right(Panel), Y = 0, Width = Dim.Fill(), Height = Dim.Fill() };
         Add(_heat);
+        // Beside the charts only where both fit: on a narrow terminal the charts and the readout take the whole width
+        // (the figures page still names the hot spot).
+        FrameChanged += (_, _) => FitHeatMap();
+    }
+
+    /// <summary>Narrower than this, the sheet leaves the heat map out.</summary>
+    public const int HeatMapFromColumns = 90;
+
+    private void FitHeatMap()
+    {
+        bool wide = Frame.Width >= HeatMapFromColumns;
+        if (wide == _wide)
+        {
+            return;
+        }
+        _wide = wide;
+        _heat.Visible = wide;
+        Panel.Width = wide ? Dim.Percent(62) : Dim.Fill();
     }
 
     /// <summary>The plate heat map beside the charts.</summary>
@@ -129,7 +148,7 @@ public sealed class EnduranceSheet : ChartSheet
         string verdict = study.Passes ? "the pack ends it" : $"{Over} not the pack";
         return $"runtime {Runtime(r.RuntimeS)}; {verdict}\n"
             + $"ended by {r.FirstLimitText}\n"
-            + $"hottest winding {F(r.PeakWindingTempC, 1)} C, plate {F(r.PeakPlateTempC, 1)} C (limit {F(study.PlateLimitC, 0)} C)";
+            + $"{study.HottestWindingText}, plate {F(r.PeakPlateTempC, 1)} C (limit {F(study.PlateLimitC, 0)} C)";
     }
 
     /// <summary>The chart pages: state of charge, pack voltage, winding and plate temperatures against time.</summary>
@@ -182,7 +201,7 @@ public sealed class EnduranceSheet : ChartSheet
             sb.AppendLine($"  station {StationNumbers.Of(s.Index)}: {F(s.SpeedRpm, 0)} rpm, duty {F(s.Duty, 3)}, motor {F(s.MotorCurrentA, 1)} A");
         }
         sb.AppendLine($"AT THE END  charge {F(r.FinalSocFraction * 100, 1)} %, bus {F(r.FinalBusVoltageV, 1)} V, pack current {F(r.FinalPackCurrentA, 1)} A");
-        sb.AppendLine($"  hottest winding {F(r.PeakWindingTempC, 1)} C, hottest point of the plate {F(r.PeakPlateTempC, 1)} C (limit {F(study.PlateLimitC, 0)} C)");
+        sb.AppendLine($"  {study.HottestWindingText}, hottest point of the plate {F(r.PeakPlateTempC, 1)} C (limit {F(study.PlateLimitC, 0)} C)");
         if (r.PlateHotspot is { } hot)
         {
             sb.AppendLine($"  plate hot spot at the end: x {F(hot.XM * 1000, 0)} mm, y {F(hot.YM * 1000, 0)} mm, {F(hot.TemperatureC, 1)} C");

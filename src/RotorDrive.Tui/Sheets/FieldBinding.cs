@@ -1,3 +1,4 @@
+using Terminal.Gui.Input;
 using Terminal.Gui.ViewBase;
 using Terminal.Gui.Views;
 using RotorDrive.Tui.Session;
@@ -25,6 +26,22 @@ internal sealed class FieldBinding
         Unit = new Label { X = x + labelWidth + 1 + fieldWidth + 1, Y = y, Width = unitWidth, Text = spec.Unit };
         Message = new Label { X = x + labelWidth + 1 + fieldWidth + 1 + unitWidth + 1, Y = y, Width = Dim.Fill(), Height = 1, Text = "" };
         Field.TextChanged += (_, _) => Typed();
+        // Esc in a field holding text that is not a value puts the rig's value back (Esc never quits).
+        Field.KeyDown += (_, key) =>
+        {
+            if (key == Key.Esc && _context.Session.UntypedFields.ContainsKey(Spec.JsonPath))
+            {
+                _context.Session.DiscardTyped(Spec.JsonPath);
+                if (_context.Session.Document is { } doc)
+                {
+                    _updating = true;
+                    Field.Text = Spec.Show(doc);
+                    _updating = false;
+                }
+                Refresh();
+                key.Handled = true;
+            }
+        };
         parent.Add(Label, Field, Unit, Message);
     }
 
@@ -74,7 +91,7 @@ internal sealed class FieldBinding
         CurrentMessage = message ?? "";
         // An empty optional field says what it stands for (the schema's default).
         Message.Text = message is not null ? "! " + message
-            : Field.Text.Length == 0 && Spec.DefaultText is { } d ? "default " + d + (Spec.Unit.Length > 0 ? " " + Spec.Unit : "") : "";
+            : Field.Text.Trim().Length == 0 && Spec.DefaultText is { } d ? "blank: default " + d + (Spec.Unit.Length > 0 ? " " + Spec.Unit : "") : "";
         // Colour as well as the "!" mark, never colour alone.
         Message.SchemeName = message is null ? null : "Error";
     }

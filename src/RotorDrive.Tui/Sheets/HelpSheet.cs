@@ -13,7 +13,8 @@ namespace RotorDrive.Tui.Sheets;
 public sealed class HelpSheet : Sheet
 {
     private readonly ListView _lines;
-    private readonly ObservableCollection<string> _items = [];
+    private readonly Label _position;
+    private ObservableCollection<string> _items = [];
     private int _wrappedAt = -1;
     private IReadOnlyList<(string Key, string Name)> _sheetList = [];
 
@@ -21,21 +22,38 @@ public sealed class HelpSheet : Sheet
     public HelpSheet(WorkbenchContext context)
         : base(context, "Help")
     {
-        _lines = new ListView { X = 0, Y = 0, Width = Dim.Fill(), Height = Dim.Fill() };
+        _lines = new ListView { X = 0, Y = 0, Width = Dim.Fill(), Height = Dim.Fill(1) };
         _lines.SetSource(_items);
-        Add(_lines);
+        _position = new Label { X = 0, Y = Pos.AnchorEnd(1), Width = Dim.Fill(), Height = 1, Text = "" };
+        Add(_lines, _position);
+        // The text re-wraps when the terminal is resized, and the line under it says where the view is.
+        _lines.FrameChanged += (_, _) =>
+        {
+            if (_lines.Viewport.Width > 0)
+            {
+                Fill(_lines.Viewport.Width);
+            }
+            ShowPosition();
+        };
+        _lines.ViewportChanged += (_, _) => ShowPosition();
         Fill(60);
     }
 
     /// <inheritdoc/>
-    public override void Refresh() => Fill(Viewport.Width > 0 ? Viewport.Width : 60);
+    public override void Refresh() => Fill(_lines.Viewport.Width > 0 ? _lines.Viewport.Width : 60);
+
+    /// <summary>The wrapped lines as listed.</summary>
+    internal IReadOnlyList<string> Lines => _items;
+
+    /// <summary>The scroll position line ("lines 1-20 of 96, PageDown for more").</summary>
+    internal string PositionText => _position.Text;
 
     /// <summary>Sets the sheets listed with their keys (the window calls this once it has assigned the keys).</summary>
     public void ListSheets(IReadOnlyList<(string Key, string Name)> sheets)
     {
         _sheetList = sheets ?? [];
         _wrappedAt = -1;
-        Fill(Viewport.Width > 0 ? Viewport.Width : 60);
+        Fill(_lines.Viewport.Width > 0 ? _lines.Viewport.Width : 60);
     }
 
     /// <summary>The whole help text: keys, marks and cautions, without the list of sheets.</summary>
@@ -96,10 +114,17 @@ public sealed class HelpSheet : Sheet
             return;
         }
         _wrappedAt = width;
-        _items.Clear();
-        foreach (string line in Wrap.Lines(Compose(_sheetList), width - 1))
-        {
-            _items.Add(line);
-        }
+        _items = new ObservableCollection<string>(Wrap.Lines(Compose(_sheetList), width - 1));
+        _lines.SetSource(_items);
+        ShowPosition();
+    }
+
+    private void ShowPosition()
+    {
+        int shown = Math.Max(1, _lines.Viewport.Height);
+        int first = Math.Clamp(_lines.Viewport.Y, 0, Math.Max(0, _items.Count - 1));
+        int last = Math.Min(_items.Count, first + shown);
+        string more = last < _items.Count ? ", PageDown for more" : first > 0 ? ", PageUp to go back" : "";
+        _position.Text = $"lines {first + 1}-{last} of {_items.Count}{more}";
     }
 }

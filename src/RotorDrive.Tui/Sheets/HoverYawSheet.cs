@@ -239,7 +239,7 @@ public sealed class HoverYawSheet : Sheet
         if (safety.AtHover.Count > 0)
         {
             sb.AppendLine($"  rim speed {F(safety.AtHover.Max(x => x.RimSpeedMPerS), 1)} m/s at hover");
-            sb.AppendLine("  " + BurstText.Line(safety.WorstAtHover!, "hover"));
+            sb.AppendLine("  " + RotorSafetyText.Line(safety.WorstAtHover!, "hover"));
         }
         else
         {
@@ -247,7 +247,7 @@ public sealed class HoverYawSheet : Sheet
         }
         foreach (var rated in safety.AtMaxRpm)
         {
-            sb.AppendLine("  " + BurstText.Line(rated, "rated"));
+            sb.AppendLine("  " + RotorSafetyText.Line(rated, "rated"));
         }
         sb.AppendLine("  " + safety.MagnetNote);
         sb.AppendLine();

@@ -155,7 +155,7 @@ public sealed class LiftDragSheet : ChartSheet
         // The other model's curve, so both can be seen on one chart (load_model decides which one the analyses use).
         ChartLine[] Compare(Func<LoadSweepRow, double> value, string what)
             => _comparison is { } c
-                ? [new ChartLine($"{what} ({Label(Other(rig.LoadModel))} model)", 'o', c.Sweep.Rows.Select(x => (x.SpeedRpm, value(x))).ToList())]
+                ? [new ChartLine($"{Label(Other(rig.LoadModel))} model {what}", 'o', c.Sweep.Rows.Select(x => (x.SpeedRpm, value(x))).ToList())]
                 : [];
     }
 }

@@ -1,4 +1,5 @@
 using RotorDrive.Tui.Shell;
+using RotorDrive.Tui.Text;
 
 namespace RotorDrive.Tui.Sheets;
 
@@ -19,7 +20,7 @@ internal static class Pick
             return;
         }
         var choices = field.Spec.Choices(catalog);
-        string? chosen = context.Prompts.Choose($"Pick {field.Spec.Label}", choices, field.Field.Text);
+        string? chosen = context.Prompts.Choose($"Pick {field.Spec.Label}", choices, field.Field.Text, choices.Select(id => PartSummary.Of(catalog, id)).ToList());
         if (chosen is not null)
         {
             field.Field.Text = chosen;

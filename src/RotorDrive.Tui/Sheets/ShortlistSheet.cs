@@ -42,7 +42,12 @@ public sealed class ShortlistSheet : Sheet
     private readonly ProgressBar _progress;
     private readonly Label _assigned;
     private readonly TableView _table;
+    private readonly TableView _pinned;
     private readonly Label _hint;
+    private List<IReadOnlyList<string>> _rows = [];
+    private IReadOnlyList<string>? _rigRow;
+    private int _firstScrolled = 1;
+    private readonly Dictionary<RankCandidate, RankSimulation> _simulated = [];
     private readonly TextField _whyNot;
     private readonly Label _whyNotMessage;
     private readonly ListView _details;
@@ -68,14 +73,22 @@ public sealed class ShortlistSheet : Sheet
         _state = new Label { X = 0, Y = 1, Width = Dim.Fill(21), Height = 1, Text = "" };
         _progress = new ProgressBar { X = Pos.AnchorEnd(20), Y = 1, Width = 20, Height = 1, Visible = false };
         _assigned = new Label { X = 0, Y = 2, Width = Dim.Fill(), Height = 1, Text = "" };
-        _table = new TableView { X = 0, Y = 3, Width = Dim.Fill(), Height = Dim.Percent(45), FullRowSelect = true };
+        // The header stays on screen while the rows scroll, the rank column stays while the other columns scroll sideways
+        // (Left/Right move the first scrolled column), and the rig's own drivetrain has a pinned row under the table.
+        _table = new SidewaysTable(ScrollColumns) { X = 0, Y = 3, Width = Dim.Fill(), Height = Dim.Percent(40), FullRowSelect = true };
         _table.Style.ShowHorizontalBottomLine = false;
+        _table.Style.AlwaysShowHeaders = true;
         _table.Accepting += (_, e) =>
         {
             ApplySelected();
             e.Handled = true;
         };
-        _hint = new Label { X = 0, Y = Pos.Bottom(_table), Width = Dim.Fill(), Height = 1, Text = "Enter applies the selected row to the rig (all stations and the pack)" };
+        _pinned = new TableView { X = 0, Y = Pos.Bottom(_table), Width = Dim.Fill(), Height = 1, CanFocus = false, FullRowSelect = true };
+        _pinned.Style.ShowHeaders = false;
+        _pinned.Style.ShowHorizontalHeaderOverline = false;
+        _pinned.Style.ShowHorizontalHeaderUnderline = false;
+        _pinned.Style.ShowHorizontalBottomLine = false;
+        _hint = new Label { X = 0, Y = Pos.Bottom(_pinned), Width = Dim.Fill(), Height = 1, Text = "Enter applies the selected row to the rig (all stations and the pack)" };
         Add(new Label { X = 0, Y = Pos.Bottom(_hint), Text = "why not motor" });
         _whyNot = new TextField { X = 14, Y = Pos.Bottom(_hint), Width = 18, Text = "" };
         _whyNotMessage = new Label { X = 33, Y = Pos.Bottom(_hint), Width = Dim.Fill(), Height = 1, Text = "F4 picks" };
@@ -88,7 +101,7 @@ public sealed class ShortlistSheet : Sheet
                 WrapDetails();
             }
         };
-        Add(_objectiveLabel, _packs, _packsMessage, _state, _progress, _assigned, _table, _hint, _whyNot, _whyNotMessage, _details);
+        Add(_objectiveLabel, _packs, _packsMessage, _state, _progress, _assigned, _table, _pinned, _hint, _whyNot, _whyNotMessage, _details);
 
         _packs.TextChanged += (_, _) =>
         {
@@ -122,6 +135,12 @@ public sealed class ShortlistSheet : Sheet
 
     /// <summary>The table of the best combinations.</summary>
     internal TableView Table => _table;
+
+    /// <summary>The pinned row of the rig's own drivetrain, in the table's columns, or null.</summary>
+    internal IReadOnlyList<string>? RigRow => _rigRow;
+
+    /// <summary>The table's columns as shown: the rank column, then the columns from the first scrolled one.</summary>
+    internal IReadOnlyList<string> ShownColumns => ((TextTableSource?)_table.Table)?.ColumnNames ?? [];
 
     /// <summary>The "packs up to" field.</summary>
     internal TextField PacksField => _packs;
@@ -306,11 +325,20 @@ public sealed class ShortlistSheet : Sheet
         {
             var study = RankStudy.Create(rig, catalog, options);
             var result = study.Run(p => progress.Report(p.Fraction), token);
-            return new Ranked(key, study, result);
+            // The rig's own drivetrain gets the same endurance run as the shortlist, for its pinned row.
+            var own = study.AssignedCandidate is { } c && result.RankOf(c) is not null && result.Top.All(t => t.Evaluation.Candidate != c)
+                ? (c, study.Simulate(c))
+                : ((RankCandidate, RankSimulation)?)null;
+            return new Ranked(key, study, result, own);
         }, ranked =>
         {
             _shown = ranked;
             _evaluated.Clear();
+            _simulated.Clear();
+            if (ranked.Own is { } own)
+            {
+                _simulated[own.Candidate] = own.Simulation;
+            }
             _explained = null;
             ShowTable();
             ShowAssigned();
@@ -336,7 +364,8 @@ public sealed class ShortlistSheet : Sheet
         {
             double fraction = Context.Work.Current is { Name: RankJob, Progress: { } f } ? f : 0;
             _progress.Fraction = (float)fraction;
-            _state.Text = $"Ranking {(int)(fraction * 100)} %... F8 stops";
+            // The sweep reports its fraction; the spin-up and endurance runs of the shortlist come after it.
+            _state.Text = fraction >= 1 ? "Simulating the shortlist... F8 stops" : $"Ranking {(int)(fraction * 100)} %... F8 stops";
             return;
         }
         if (_shown is not { } shown)
@@ -351,31 +380,64 @@ public sealed class ShortlistSheet : Sheet
 
     private void ShowTable()
     {
-        if (_shown is not { } shown)
-        {
-            _table.Table = new TextTableSource([], []);
-            return;
-        }
-        var rows = shown.Result.Top.Select(t =>
-        {
-            var e = t.Evaluation;
-            var f = e.Figures!;
-            return (IReadOnlyList<string>)
-            [
-                // The hover time is the endurance run's (pack, windings and plate together), with what ends it; the quick
-                // check's pack-only figure is labelled so.
-                t.Rank.ToString(CultureInfo.InvariantCulture), t.InParetoSet ? "P" : "",
-                e.Simulation is { } sim ? F(sim.EnduranceRuntimeS / 60, 1) : "-", e.Simulation is { } ending ? ending.EnduranceLimit.Words() : "-",
-                F(f.RuntimeS / 60, 1), F(f.TotalMassKg, 1),
-                f.CurrentMarginFraction is { } m ? F(m * 100, 0) : "-", e.MotorId, e.ControllerId, $"{e.Candidate.PackCount} x {e.PackId}",
-                t.LiftoffTimeS is { } s ? F(s, 2) : "none", F(t.Score, 3),
-            ];
-        }).ToList();
-        _table.Table = new TextTableSource(Columns, rows);
-        if (rows.Count > 0)
+        _rows = _shown is { } shown
+            ? shown.Result.Top.Select(t => Row(t.Rank.ToString(CultureInfo.InvariantCulture), t.InParetoSet, t.Evaluation, t.Evaluation.Simulation, t.LiftoffTimeS, t.Score)).ToList()
+            : [];
+        ShowColumns();
+        if (_rows.Count > 0)
         {
             _table.Value = new TableSelection(new Point(0, 0));
         }
+    }
+
+    // One row of the table: the hover time is the endurance run's (pack, windings and plate together), with what ends
+    // it; the quick check's pack-only figure is labelled so.
+    private static IReadOnlyList<string> Row(string rank, bool pareto, RankEvaluation e, RankSimulation? sim, double? liftoffS, double? score)
+    {
+        var f = e.Figures;
+        return
+        [
+            rank, pareto ? "P" : "",
+            sim is { } run ? F(run.EnduranceRuntimeS / 60, 1) : "-", sim is { } ending ? ending.EnduranceLimit.Words() : "-",
+            f is { } pf ? F(pf.RuntimeS / 60, 1) : "-", f is { } mf ? F(mf.TotalMassKg, 1) : "-",
+            f?.CurrentMarginFraction is { } m ? F(m * 100, 0) : "-", e.MotorId, e.ControllerId, $"{e.Candidate.PackCount} x {e.PackId}",
+            sim is null ? "-" : liftoffS is { } s ? F(s, 2) : "none", score is { } v ? F(v, 3) : "-",
+        ];
+    }
+
+    // Shows the rank column and the columns from the first scrolled one, in the table and the pinned rig row, with the
+    // same widths in both so the pinned row lines up under the header.
+    private void ShowColumns()
+    {
+        _firstScrolled = Math.Clamp(_firstScrolled, 1, Columns.Count - 1);
+        int[] shown = [0, .. Enumerable.Range(_firstScrolled, Columns.Count - _firstScrolled)];
+        IReadOnlyList<string> Pick(IReadOnlyList<string> row) => shown.Select(i => row[i]).ToList();
+        var all = _rigRow is { } rig ? _rows.Append(rig) : _rows;
+        int selected = _table.Value?.SelectedCell.Y ?? 0;
+        _table.Table = new TextTableSource(shown.Select(i => Columns[i]).ToList(), _rows.Select(Pick).ToList());
+        _pinned.Table = new TextTableSource(shown.Select(i => Columns[i]).ToList(), _rigRow is { } r ? [Pick(r)] : []);
+        foreach (var view in new[] { _table, _pinned })
+        {
+            view.Style.ColumnStyles.Clear();
+            for (int k = 0; k < shown.Length; k++)
+            {
+                int width = all.Select(row => row[shown[k]].Length).Append(Columns[shown[k]].Length).Max();
+                view.Style.ColumnStyles[k] = new ColumnStyle { MinWidth = width, MaxWidth = width };
+            }
+            view.Style.ExpandLastColumn = false;
+        }
+        if (_rows.Count > 0)
+        {
+            _table.Value = new TableSelection(new Point(0, Math.Clamp(selected, 0, _rows.Count - 1)));
+        }
+        _table.Update();
+        _pinned.Update();
+    }
+
+    private void ScrollColumns(int by)
+    {
+        _firstScrolled += by;
+        ShowColumns();
     }
 
 
@@ -384,11 +446,15 @@ public sealed class ShortlistSheet : Sheet
         if (_shown is not { } shown || Context.Session.Rig is not { } rig)
         {
             _assigned.Text = "";
+            _rigRow = null;
+            ShowColumns();
             return;
         }
         if (shown.Study.CandidateOf(rig) is not { } candidate)
         {
             _assigned.Text = "Rig: no single drivetrain to place (the same motor and controller everywhere, a pack within the pack count).";
+            _rigRow = null;
+            ShowColumns();
             return;
         }
         if (!_evaluated.TryGetValue(candidate, out var evaluation))
@@ -399,13 +465,39 @@ public sealed class ShortlistSheet : Sheet
         if (shown.Result.RankOf(candidate) is { } rank)
         {
             bool pareto = shown.Result.ParetoRanks.Contains(rank);
-            _assigned.Text = $"Rig: {evaluation.Label}: rank {rank}{(pareto ? " P" : "")} of {N(shown.Result.AcceptedCount)}";
+            _assigned.Text = Fit($"Rig: rank {rank}{(pareto ? " P" : "")} of {N(shown.Result.AcceptedCount)}", evaluation.Label);
+            var listed = shown.Result.Top.FirstOrDefault(t => t.Evaluation.Candidate == candidate);
+            var sim = listed?.Evaluation.Simulation ?? SimulationOf(shown.Study, candidate);
+            _rigRow = Row($"rig {rank}", pareto, evaluation, sim, listed?.LiftoffTimeS ?? sim.LiftoffTimeS, listed?.Score);
         }
         else
         {
             string why = evaluation.Rejections.Count > 0 ? evaluation.Rejections[0].Kind.Describe() : "not ranked";
-            _assigned.Text = $"Rig: {evaluation.Label}: ! rejected: {why}" + (evaluation.Rejections.Count > 1 ? $" (+{evaluation.Rejections.Count - 1} more)" : "");
+            _assigned.Text = Fit($"Rig: ! rejected: {why}" + (evaluation.Rejections.Count > 1 ? $" (+{evaluation.Rejections.Count - 1} more)" : ""), evaluation.Label);
+            _rigRow = Row("rig -", false, evaluation, null, null, null);
         }
+        ShowColumns();
+    }
+
+    // The rig line with its drivetrain when both fit the sheet's width; otherwise without it (the pinned row names the
+    // parts), so the line is never cut off.
+    private string Fit(string where, string label)
+    {
+        string full = $"{where}: {label}";
+        int width = Viewport.Width > 0 ? Viewport.Width : int.MaxValue;
+        return full.Length <= width ? full : where + " (its row is pinned below the table)";
+    }
+
+    // The endurance and spin-up runs of the rig's own drivetrain when it is not on the shortlist: run once per ranking
+    // and drivetrain (the ranking's worker runs it for the rig as opened).
+    private RankSimulation SimulationOf(RankStudy study, RankCandidate candidate)
+    {
+        if (!_simulated.TryGetValue(candidate, out var sim))
+        {
+            sim = study.Simulate(candidate);
+            _simulated[candidate] = sim;
+        }
+        return sim;
     }
 
     private void RequestWhyNot()
@@ -519,7 +611,8 @@ public sealed class ShortlistSheet : Sheet
         {
             return;
         }
-        string? chosen = Context.Prompts.Choose("Why not: pick a motor", catalog.Motors.Select(m => m.Id).ToList(), _whyNot.Text);
+        var ids = catalog.Motors.Select(m => m.Id).ToList();
+        string? chosen = Context.Prompts.Choose("Why not: pick a motor", ids, _whyNot.Text, ids.Select(id => PartSummary.Of(catalog, id)).ToList());
         if (chosen is not null)
         {
             _whyNot.Text = chosen;
@@ -530,7 +623,22 @@ public sealed class ShortlistSheet : Sheet
 
     private static string F(double v, int decimals) => v.ToString("F" + decimals.ToString(CultureInfo.InvariantCulture), CultureInfo.InvariantCulture);
 
+    // A table whose Left and Right keys go to the sheet (which moves the scrolled columns under the fixed rank column)
+    // instead of moving a cell cursor in a full-row selection.
+    private sealed class SidewaysTable(Action<int> scroll) : TableView
+    {
+        protected override bool OnKeyDown(Key key)
+        {
+            if (key == Key.CursorRight || key == Key.CursorLeft)
+            {
+                scroll(key == Key.CursorRight ? 1 : -1);
+                return true;
+            }
+            return base.OnKeyDown(key);
+        }
+    }
+
     private sealed record RankKey(string Document, PartsCatalog Catalog, RankObjective Objective, int MaxPacks);
 
-    private sealed record Ranked(RankKey Key, RankStudy Study, RankResult Result);
+    private sealed record Ranked(RankKey Key, RankStudy Study, RankResult Result, (RankCandidate Candidate, RankSimulation Simulation)? Own);
 }

@@ -189,8 +189,8 @@ public sealed class SpinupSheet : ChartSheet
         static string Row(string n, string end, string peak, string limit, string above, string allowance, string passing, string state)
             => $"{n,3} {end,6} {peak,7} {limit,6} {above,6} {allowance,6} {passing,8}  {state}";
         sb.AppendLine("STATIONS  motor current against the controller's limit");
-        sb.AppendLine(Row("", "end", "peak", "limit", "above", "burst", "passing", ""));
-        sb.AppendLine(Row("#", "rpm", "A", "A", "cont s", "allow", "peak A", ""));
+        sb.AppendLine(Row("", "end", "peak", "limit", "above", "burst", "drag pk", ""));
+        sb.AppendLine(Row("#", "rpm", "A", "A", "cont s", "allow s", "pass A", ""));
         foreach (var s in spin.Stations)
         {
             string state = s.Stalled ? $"{Over} STALLED" : s.Controller.Exceeded ? $"{Over} over allowance" : "ok";
@@ -224,6 +224,13 @@ public sealed class SpinupSheet : ChartSheet
             {
                 sb.AppendLine($"  {Over} {f.Message}");
             }
+        }
+        sb.AppendLine();
+        // The burst check at rated speed, worded and judged as on Stations and Hover & yaw (the study's checks).
+        sb.AppendLine("RETAINING RING (burst checks)");
+        foreach (var check in study.RatedBurstChecks)
+        {
+            sb.AppendLine("  " + RotorSafetyText.Line(check, "rated"));
         }
         sb.AppendLine();
         sb.Append(CautionText.Compose(study.SafetyCautions, study.Cautions));

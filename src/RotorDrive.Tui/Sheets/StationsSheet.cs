@@ -17,7 +17,7 @@ namespace RotorDrive.Tui.Sheets;
 public sealed class StationsSheet : Sheet
 {
     private const int MinSketchRows = 8;
-    private const int RowsBelowSketch = 13;
+    private const int RowsBelowSketch = 14;
     private readonly Label _sketch;
     private readonly Label _legend;
     private readonly ListView _stations;
@@ -65,9 +65,9 @@ public sealed class StationsSheet : Sheet
             _fields.Add(binding);
         }
         _detail = new Label { X = 0, Y = Pos.Bottom(_sketch) + 7, Width = Dim.Fill(), Height = 1, Text = "" };
-        _safety = new Label { X = 0, Y = Pos.Bottom(_sketch) + 8, Width = Dim.Fill(), Height = 2, Text = "" };
+        _safety = new Label { X = 0, Y = Pos.Bottom(_sketch) + 8, Width = Dim.Fill(), Height = 3, Text = "" };
         Add(_safety);
-        _problems = new ListView { X = 0, Y = Pos.Bottom(_sketch) + 10, Width = Dim.Fill(), Height = Dim.Fill() };
+        _problems = new ListView { X = 0, Y = Pos.Bottom(_sketch) + 11, Width = Dim.Fill(), Height = Dim.Fill() };
         _problems.SetSource(_problemItems);
         Add(_detail, _problems);
     }
@@ -84,6 +84,12 @@ public sealed class StationsSheet : Sheet
     /// <summary>The selected station's burst check as shown (wrapped to the sheet's width).</summary>
     internal string SafetyText => _safety.Text;
 
+    /// <summary>The heading of the selected station ("Station 2 of 6").</summary>
+    internal string Heading => _sketchStations.Count == 0 ? "No stations" : $"Station {_selected + 1} of {_sketchStations.Count}";
+
+    /// <summary>The line under the sketch: the heading and the legend.</summary>
+    internal string LegendText => _legend.Text;
+
     /// <summary>The problem list as shown.</summary>
     internal IReadOnlyList<string> ProblemLines => _problemItems;
 
@@ -93,6 +99,7 @@ public sealed class StationsSheet : Sheet
         _selected = index;
         _stations.SetSelection(index, false);
         Retarget();
+        DrawSketch();
     }
 
     /// <inheritdoc/>
@@ -134,16 +141,32 @@ public sealed class StationsSheet : Sheet
         }).ToList();
         if (!items.SequenceEqual(_stationItems))
         {
-            _stationItems.Clear();
-            foreach (var item in items)
+            // Same count: the rows change in place (F7 re-spells the marks), so the list keeps the selected station.
+            if (items.Count == _stationItems.Count)
             {
-                _stationItems.Add(item);
+                for (int i = 0; i < items.Count; i++)
+                {
+                    _stationItems[i] = items[i];
+                }
+            }
+            else
+            {
+                _stationItems.Clear();
+                foreach (var item in items)
+                {
+                    _stationItems.Add(item);
+                }
             }
         }
         if (_selected >= docStations.Count)
         {
             _selected = Math.Max(0, docStations.Count - 1);
         }
+        if (docStations.Count > 0 && _stations.Value != _selected)
+        {
+            _stations.SetSelection(_selected, false);
+        }
+        DrawSketch();
         foreach (var f in _fields)
         {
             f.Field.Enabled = docStations.Count > 0;
@@ -151,9 +174,9 @@ public sealed class StationsSheet : Sheet
         }
         // One list of what is wrong: typed text, input problems and Core's failed burst checks, so "no problems" never
         // sits beside a failed check.
-        var problems = session.UntypedFields.Select(u => $"! {u.Key}: {u.Value}")
-            .Concat(session.Problems.Select(p => "! " + p.ToString()))
-            .Concat(session.FailedBurstChecks.Select(b => BurstText.Line(b, "rated")))
+        var problems = session.UntypedFields.Select(u => $"! {FieldWords.Of(u.Key)}: {u.Value}")
+            .Concat(session.Problems.Select(p => "! " + (p.Field.Length == 0 ? p.ToString() : $"{p.File}:{p.Line}:{p.Column}: {FieldWords.Of(p.Field)}: {p.Message}")))
+            .Concat(session.FailedBurstChecks.Select(b => RotorSafetyText.Line(b, "rated")))
             .DefaultIfEmpty("No problems in the rig or its catalogs.")
             .ToList();
         _problemItems.Clear();
@@ -167,7 +190,7 @@ public sealed class StationsSheet : Sheet
         }
         _safety.Text = rig is not null && _selected < rig.Stations.Count
             && session.BurstChecks.FirstOrDefault(b => b.RotorId == rig.Stations[_selected].Rotor.Id) is { } check
-            ? string.Join("\n", Wrap.Lines(BurstText.Line(check, "rated"), Math.Max(20, _safety.Frame.Width > 0 ? _safety.Frame.Width : 60)))
+            ? string.Join("\n", Wrap.Lines(RotorSafetyText.Line(check, "rated"), Math.Max(20, _safety.Frame.Width > 0 ? _safety.Frame.Width : 60)))
             : "";
     }
 
@@ -191,13 +214,13 @@ public sealed class StationsSheet : Sheet
     private void DrawSketch()
     {
         int width = Math.Max(20, _sketch.Frame.Width > 0 ? _sketch.Frame.Width : 58);
-        int rows = Math.Max(MinSketchRows, _sketch.Frame.Height);
-        string text = string.Join("\n", StationSketch.Render(_sketchStations, _cg.X, _cg.Y, width, rows, _letters));
+        int rows = _sketch.Frame.Height > 0 ? Math.Max(5, _sketch.Frame.Height) : MinSketchRows;
+        string text = string.Join("\n", StationSketch.Render(_sketchStations, _cg.X, _cg.Y, width, rows, _letters, _selected));
         if (_sketch.Text != text)
         {
             _sketch.Text = text;
         }
-        _legend.Text = StationSketch.Legend(_letters);
+        _legend.Text = Heading + "  " + StationSketch.Legend(_letters);
     }
 
     private void Retarget()

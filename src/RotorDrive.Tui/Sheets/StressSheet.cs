@@ -46,6 +46,7 @@ public sealed class StressSheet : Sheet
     private readonly Label _hint;
     private readonly FieldList _tolerances;
     private readonly ListView _results;
+    private int _wrappedAt = -1;
     private ObservableCollection<string> _resultItems = [];
     private int _figure;
     private int _done;
@@ -77,6 +78,13 @@ public sealed class StressSheet : Sheet
         _tolerances.FocusChanged += (_, _) => ShowHint();
         _results = new ListView { X = 0, Y = Pos.Bottom(_tolerances), Width = Dim.Fill(), Height = Dim.Fill() };
         _results.SetSource(_resultItems);
+        _results.FrameChanged += (_, _) =>
+        {
+            if (_shown is not null && _results.Viewport.Width > 0 && Math.Max(40, _results.Viewport.Width) != _wrappedAt)
+            {
+                ShowResults();
+            }
+        };
         // The results come before the tolerances in the tab order: one Tab from the seed reaches them.
         Add(_samples, _seed, _results, _runMessage, _state, _progress, _hint, _tolerances);
         _samples.TextChanged += (_, _) => ReadSettings();
@@ -274,8 +282,11 @@ public sealed class StressSheet : Sheet
 
     private void ShowResults()
     {
-        // One new source per change: adding line by line to the bound collection re-measures the list per line.
-        _resultItems = new ObservableCollection<string>(ResultText(Math.Max(40, _results.Viewport.Width > 0 ? _results.Viewport.Width : 60)));
+        // One new source per change: adding line by line to the bound collection re-measures the list per line. Lines
+        // are wrapped to the list's width, so nothing is cut off at 80 columns.
+        int width = Math.Max(40, _results.Viewport.Width > 0 ? _results.Viewport.Width : 60);
+        _wrappedAt = width;
+        _resultItems = new ObservableCollection<string>(ResultText(width).SelectMany(l => l.Length <= width - 1 ? [l] : Wrap.Lines(l, width - 1)));
         _results.SetSource(_resultItems);
         ShowState();
     }
@@ -288,17 +299,17 @@ public sealed class StressSheet : Sheet
             return lines;
         }
         var r = shown.Result;
-        lines.Add($"{(r.Partial ? "PARTIAL: " : "")}{r.Samples} of {r.RequestedSamples} samples, seed {r.Seed}, {shown.Tolerances.Varied.Count} quantities varied");
+        lines.Add($"{(r.Partial ? "PARTIAL: " : "")}{r.Samples} of {r.RequestedSamples} samples, seed {r.Seed}, {shown.Tolerances.Varied.Count} varied");
         if (r.FailureRate is not { } overall)
         {
             lines.Add("No sample finished.");
             return lines;
         }
-        lines.Add($"Overall failure rate {Pct(overall.EstimateFraction)}, 95 % interval {Pct(overall.LowerFraction)} - {Pct(overall.UpperFraction)}");
+        lines.Add($"Failure rate {Pct(overall.EstimateFraction)} (95 % interval {Pct(overall.LowerFraction)} - {Pct(overall.UpperFraction)})");
         lines.Add($"  {"criterion",-13} {"fails",7} {"rate",8}  95 % interval (Wilson)");
         foreach (var c in r.Criteria)
         {
-            lines.Add(CriterionLine(c.Key, c.Rate));
+            lines.Add(CriterionLine(c.Key.Replace('_', ' '), c.Rate));
         }
         lines.Add(CriterionLine("overall", overall));
         lines.Add("");
@@ -325,7 +336,7 @@ public sealed class StressSheet : Sheet
         lines.Add("Top drivers (Spearman rho of a drawn value with a margin; + means larger is safer):");
         foreach (var d in r.Drivers.Take(DriversShown))
         {
-            lines.Add($"  {d.Input,-30} {d.Margin,-13} {d.Rho.ToString("+0.000;-0.000;0.000", CultureInfo.InvariantCulture)}");
+            lines.Add($"  {FieldWords.Input(d.Input),-30} {d.Margin.Replace('_', ' '),-13} {d.Rho.ToString("+0.000;-0.000;0.000", CultureInfo.InvariantCulture)}");
         }
         if (r.Drivers.Count == 0)
         {
@@ -333,7 +344,7 @@ public sealed class StressSheet : Sheet
         }
         if (r.WorstSample is { } worst && r.SampleResults.FirstOrDefault(s => s.Index == worst) is { } sample)
         {
-            var failed = sample.Outcome.FailedCriteria;
+            var failed = sample.Outcome.FailedCriteria.Select(k => k.Replace('_', ' ')).ToList();
             lines.Add("");
             lines.Add($"Worst sample: {worst}, smallest margin {F(sample.Outcome.MinimumMarginFraction, 3)}, {(failed.Count == 0 ? "fails nothing" : "! fails " + string.Join(", ", failed))}");
             var session = Context.Session;

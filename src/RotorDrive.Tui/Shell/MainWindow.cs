@@ -424,7 +424,7 @@ public sealed class MainWindow : Window
         {
             return true;
         }
-        int? answer = _context.Prompts.Ask("Save", $"{untyped.Count} field(s) hold text that is not a valid value ({string.Join(", ", untyped.Keys)}). "
+        int? answer = _context.Prompts.Ask("Save", $"{untyped.Count} field(s) hold text that is not a valid value ({string.Join(", ", untyped.Keys.Select(FieldWords.Of))}). "
             + "The file will keep their last valid values. Save anyway?", ["Cancel", "Save"]);
         return answer == 1;
     }
@@ -449,11 +449,14 @@ public sealed class MainWindow : Window
         var session = _context.Session;
         string mark = session.IsDirty ? " * unsaved" : "";
         string problems = session.Problems.Count + session.UntypedFields.Count + session.FailedBurstChecks.Count is var n and > 0 ? $" | ! {n} problem(s)" : "";
-        string work = _context.Work.Current is { } job ? $" | {job.Name}..." : "";
+        // A job F8 stopped is no longer shown as running while its worker returns: the notice says "Stopped." and the
+        // status line must not say "ranking..." beside it.
+        var running = _context.Work.Current is { } current && !_context.Work.IsStopping(current.Name) ? current : ((string Name, double? Progress)?)null;
+        string work = running is { } job ? $" | {job.Name}..." : "";
         string failure = _context.Work.LastFailure is { } f ? $" | ! {f}" : "";
         string notice = _notice.Length > 0 ? " | " + _notice : "";
         _status.Text = $"{session.DisplayName}{mark}{work}{failure}{notice}{problems}";
-        if (_context.Work.Current is { Progress: { } fraction })
+        if (running is { Progress: { } fraction })
         {
             _progress.Visible = true;
             _progress.Fraction = (float)fraction;

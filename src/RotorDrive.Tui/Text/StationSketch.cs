@@ -16,11 +16,12 @@ public static class StationSketch
             null => "?",
         };
 
-    /// <summary>The legend line that explains the marks.</summary>
+    /// <summary>The legend line that explains the marks (at most 42 characters, so a "Station N of M" heading fits
+    /// beside it on 80 columns).</summary>
     public static string Legend(bool letters)
         => letters
-            ? "Ncw/Nccw: station N, spin from above  + CG  up = forward"
-            : "↻ cw  ↺ ccw (seen from above)  + CG  up = forward";
+            ? "Ncw/Nccw spin from above [sel] +CG up=fwd"
+            : "↻ cw ↺ ccw from above [sel] +CG up=fwd";
 
     /// <summary>Renders the sketch into <paramref name="rows"/> lines of <paramref name="columns"/> characters.</summary>
     /// <param name="stations">The stations.</param>
@@ -29,7 +30,9 @@ public static class StationSketch
     /// <param name="columns">Width in characters (at least 12).</param>
     /// <param name="rows">Height in lines (at least 5).</param>
     /// <param name="letters">True to spell the spin as cw/ccw instead of arrows.</param>
-    public static IReadOnlyList<string> Render(IReadOnlyList<SketchStation> stations, double? cgXMm, double? cgYMm, int columns, int rows, bool letters)
+    /// <param name="selected">The selected station's index (0-based): its mark is bracketed ("[2↺]") and its rim drawn
+    /// with 'o' instead of '.', so it stands out without colour; null for none.</param>
+    public static IReadOnlyList<string> Render(IReadOnlyList<SketchStation> stations, double? cgXMm, double? cgYMm, int columns, int rows, bool letters, int? selected = null)
     {
         ArgumentNullException.ThrowIfNull(stations);
         columns = Math.Max(12, columns);
@@ -74,8 +77,8 @@ public static class StationSketch
             }
         }
 
-        // Rims first, so marks are drawn over them.
-        foreach (var s in stations)
+        // Rims first, so marks are drawn over them; the selected station's rim last, so it is whole.
+        foreach (var s in stations.OrderBy(s => s.Index == selected))
         {
             if (s.RadiusMm is not { } radius || radius <= 0)
             {
@@ -85,7 +88,7 @@ public static class StationSketch
             {
                 double a = 2 * Math.PI * k / 48;
                 var (r, c) = Place(s.XMm + radius * Math.Cos(a), s.YMm + radius * Math.Sin(a));
-                Put(r, c, '.');
+                Put(r, c, s.Index == selected ? 'o' : '.');
             }
         }
         if (cgXMm is { } cx && cgYMm is { } cy)
@@ -93,10 +96,10 @@ public static class StationSketch
             var (r, c) = Place(cx, cy);
             Put(r, c, '+');
         }
-        foreach (var s in stations)
+        foreach (var s in stations.OrderBy(s => s.Index == selected))
         {
             var (r, c) = Place(s.XMm, s.YMm);
-            string mark = Mark(s, letters);
+            string mark = s.Index == selected ? "[" + Mark(s, letters) + "]" : Mark(s, letters);
             int start = Math.Clamp(c - mark.Length / 2, 0, Math.Max(0, columns - mark.Length));
             for (int i = 0; i < mark.Length; i++)
             {

@@ -51,7 +51,7 @@ public class CautionsTests
         var low = Cautions.For(new CautionFindings(false, [Checked(3000), Checked(6000)]));
         Assert.Equal(CautionTopic.RotorBurst, low[0].Topic);
         Assert.Equal(CautionLevel.Warning, low[0].Level);
-        Assert.Contains("margin 0.41 at 6000 rpm is below 0.50", low[0].Reason);
+        Assert.Contains("margin 41 % at 6000 rpm is under the 50 % asked for", low[0].Reason);
 
         var ample = Cautions.For(new CautionFindings(false, [Checked(3000)]));
         Assert.Equal(CautionLevel.Notice, ample.Single(c => c.Topic == CautionTopic.RotorBurst).Level);

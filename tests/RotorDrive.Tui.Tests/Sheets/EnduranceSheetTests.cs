@@ -46,6 +46,25 @@ public class EnduranceSheetTests
     }
 
     [Fact]
+    public async Task AtEightyColumns_TheChartsAndReadoutTakeTheWidth_AndTheHeatMapWaitsForAWiderTerminal()
+    {
+        using var bench = new Bench(80, 24);
+        var sheet = await OpenAsync(bench);
+        bench.Draw();
+        Assert.False(sheet.HeatMap.Visible);
+        string screen = bench.Screen;
+        // Nothing of the readout is cut off (the sheet is 60 columns wide at 80; a long ending wraps onto the spare line):
+        // the last line is there whole and every line's last word is on the screen.
+        string[] lines = sheet.Panel.Readout.Split('\n');
+        Assert.True(screen.Contains(lines[^1], StringComparison.Ordinal), lines[^1] + "\n" + screen);
+        Assert.All(lines, line => Assert.True(screen.Contains(line.Split(' ')[^1], StringComparison.Ordinal), line + "\n" + screen));
+
+        bench.App.Driver!.SetScreenSize(120, 40);
+        bench.Draw();
+        Assert.True(sheet.HeatMap.Visible);
+    }
+
+    [Fact]
     public async Task StartingFromHalfCharge_Recomputes_AsCoreDoes()
     {
         using var bench = new Bench();

@@ -33,4 +33,23 @@ public class HelpSheetTests
         Assert.Equal("Help", bench.Window.CurrentSheet.SheetName);
         Assert.Contains("save the rig", bench.Screen);
     }
+
+    [Fact]
+    public void Help_ReWrapsWhenTheTerminalIsResized_AndSaysWhereTheViewIs()
+    {
+        using var bench = new Bench(columns: 120, rows: 30);
+        bench.Press(Terminal.Gui.Input.Key.F1);
+        bench.Draw();
+        var sheet = Assert.IsType<HelpSheet>(bench.Window.CurrentSheet);
+        int wide = sheet.Lines.Count;
+        Assert.StartsWith("lines 1-", sheet.PositionText);
+        Assert.EndsWith($"of {wide}, PageDown for more", sheet.PositionText);
+        Assert.Contains(sheet.PositionText, bench.Screen);
+
+        bench.App.Driver!.SetScreenSize(80, 24);
+        bench.Draw();
+        Assert.True(sheet.Lines.Count > wide, $"{sheet.Lines.Count} lines at 80 columns against {wide} at 120");
+        Assert.All(sheet.Lines, l => Assert.True(l.Length < 60, l));
+        Assert.EndsWith($"of {sheet.Lines.Count}, PageDown for more", sheet.PositionText);
+    }
 }

@@ -57,8 +57,8 @@ public class HoverYawSheetTests
         // The burst verdict and margin are Core's, worded as on every sheet: the station with the smallest margin at hover,
         // and each rotor design at its rated speed.
         var worst = review.Safety.AtHover.MinBy(r => r.MarginFraction)!;
-        Assert.Contains(RotorDrive.Tui.Text.BurstText.Line(worst, "hover"), sheet.SheetText);
-        Assert.Contains(RotorDrive.Tui.Text.BurstText.Line(review.Safety.AtMaxRpm[0], "rated"), sheet.SheetText);
+        Assert.Contains(RotorDrive.Core.Safety.RotorSafetyText.Line(worst, "hover"), sheet.SheetText);
+        Assert.Contains(RotorDrive.Core.Safety.RotorSafetyText.Line(review.Safety.AtMaxRpm[0], "rated"), sheet.SheetText);
         // The first screen shows the verdict and the station table.
         Assert.Contains("STATIONS", bench.Screen);
     }

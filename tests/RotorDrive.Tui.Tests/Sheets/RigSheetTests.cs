@@ -30,6 +30,37 @@ public class RigSheetTests
     }
 
     [Fact]
+    public void TheTestRig_ShowsTheDefaultOfEveryBlankLimit_AsTheResolverUsesIt()
+    {
+        using var bench = new Bench(columns: 120, rigPath: "/lab/test-rig.json");
+        Assert.Null(bench.OpenFailure);
+        var sheet = Assert.IsType<RigSheet>(bench.Window.CurrentSheet);
+        var limits = bench.Context.Session.Rig!.Limits;
+        // The test rig sets only yaw torque and plate temperature; the others are blank and the rig runs on the defaults
+        // (RigDefaults, the values RigResolver puts in their place).
+        (string Path, double InUse)[] blanks =
+        [
+            ("$.limits.cell_cutoff_v", limits.CellCutoffV),
+            ("$.limits.usable_capacity_pct", limits.UsableCapacityFraction * 100),
+            ("$.limits.max_duty", limits.MaxDuty),
+            ("$.limits.liftoff_time_s", limits.LiftoffTimeS),
+        ];
+        foreach (var (path, inUse) in blanks)
+        {
+            var field = sheet.Fields.Single(f => f.Spec.JsonPath == path);
+            Assert.Equal("", field.Field.Text);
+            Assert.StartsWith($"blank: default {inUse.ToString("R", CultureInfo.InvariantCulture)}", field.Message.Text);
+        }
+        var yaw = sheet.Fields.Single(f => f.Spec.JsonPath == "$.limits.yaw_torque_nm");
+        Assert.Equal("", yaw.Message.Text);
+        // A value typed in takes the place of the note.
+        var duty = sheet.Fields.Single(f => f.Spec.JsonPath == "$.limits.max_duty");
+        duty.Field.SetFocus();
+        bench.Type("0.9");
+        Assert.Equal("", duty.Message.Text);
+    }
+
+    [Fact]
     public void EditingTheDesignGap_UpdatesTheRig()
     {
         using var bench = new Bench();

@@ -45,6 +45,11 @@ public class SpinupSheetTests
         Assert.NotEmpty(expected.Cautions);
         Assert.Contains($"caution: landing regen lifts bus to {F(expected.LandingBraking.MaxBusVoltageV, 1)} V (rated {F(expected.ControllerMaxVoltageV, 1)} V)", readout);
         Assert.Contains(expected.Cautions[0], sheet.Panel.Details);
+        // The burst check is Core's, worded as on Stations, Hover & yaw and the hover command; the demo rotor's 33 % margin
+        // at rated speed is under the burst caution's 50 %, so the caution is a warning here as it is there.
+        var rated = RotorDrive.Core.Craft.HoverSafety.AtRatedSpeed(bench.Context.Session.Rig!.Stations.Select(s => s.Rotor));
+        Assert.Contains(RotorDrive.Core.Safety.RotorSafetyText.Line(rated[0], "rated"), sheet.Panel.Details);
+        Assert.Contains("WARNING Rotor burst", sheet.Panel.Details);
 
         // Four chart pages (speeds, currents, pack voltage, gap) and the figures page; F7 turns them.
         Assert.Equal(["speed, rpm", "motor current, A", "pack voltage, V", "gap, mm"], sheet.Panel.Pages.Select(p => p.YLabel));

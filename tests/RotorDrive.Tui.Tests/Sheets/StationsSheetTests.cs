@@ -1,3 +1,4 @@
+using RotorDrive.Core;
 using Terminal.Gui.Input;
 using RotorDrive.Core.Craft;
 using RotorDrive.Tui.Sheets;
@@ -22,7 +23,7 @@ public class StationsSheetTests
             Assert.Contains($"{i + 1}{arrow}", sketch);
         }
         Assert.Contains("+", sketch);
-        Assert.Contains("↺ ccw (seen from above)", bench.Screen);
+        Assert.Contains("↺ ccw from above", bench.Screen);
     }
 
     [Fact]
@@ -37,6 +38,35 @@ public class StationsSheetTests
     }
 
     [Fact]
+    public void TheSelectedStation_HasAHeading_IsBracketedInTheSketch_AndF7KeepsIt()
+    {
+        using var bench = new Bench(80, 24);
+        bench.Window.ShowSheet("Stations");
+        var sheet = Assert.IsType<StationsSheet>(bench.Window.CurrentSheet);
+        sheet.SelectStation(2);
+        bench.Draw();
+        Assert.Equal("Station 3 of 6", sheet.Heading);
+        Assert.Contains("Station 3 of 6", bench.Screen);
+        Assert.Contains("[3↻]", sheet.SketchText);
+        Assert.DoesNotContain("[1↻]", sheet.SketchText);
+        bench.Press(Key.F7);
+        bench.Draw();
+        Assert.Equal("Station 3 of 6", sheet.Heading);
+        Assert.Contains("[3cw]", sheet.SketchText);
+        Assert.Contains(sheet.Fields, f => f.Spec.JsonPath == "$.stations[2].motor");
+        // The heading and the legend fit the sheet at 80 columns, and so does the whole burst check, and every station of
+        // the sketch is on the screen.
+        Assert.True(sheet.LegendText.Length <= 58, sheet.LegendText);
+        string screen = bench.Screen;
+        Assert.All(sheet.SafetyText.Split('\n'), l => Assert.Contains(l.Trim(), screen));
+        Assert.EndsWith("m/s", sheet.SafetyText);
+        for (int i = 1; i <= 6; i++)
+        {
+            Assert.Contains($"{i}c", screen);
+        }
+    }
+
+    [Fact]
     public void ChoosingAMotorForAStation_UpdatesThatStationOnly()
     {
         using var bench = new Bench();
@@ -48,6 +78,12 @@ public class StationsSheetTests
         motor.Field.SetFocus();
         bench.Prompts.Answers.Enqueue(newId);
         bench.Press(Key.F4);
+        // The picker shows a one-line summary of each motor beside its id (Kv, current, power, mass).
+        var details = bench.Prompts.LastDetails!;
+        var motors = bench.Context.Session.Catalog!.Motors;
+        Assert.Equal(motors.Count, details.Count);
+        Assert.StartsWith($"Kv {Units.RadPerSToRpm(motors[0].KvRadPerSPerV):F0}, {motors[0].MaxCurrentA:F0} A", details[0]);
+        Assert.EndsWith($"{motors[0].MassKg * 1000:F0} g", details[0]);
         var rig = bench.Context.Session.Rig!;
         Assert.Equal(newId, rig.Stations[2].Motor!.Id);
         Assert.NotEqual(newId, rig.Stations[1].Motor!.Id);
@@ -64,7 +100,9 @@ public class StationsSheetTests
         rotor.Field.Text = "no-such-rotor";
         Assert.Null(bench.Context.Session.Rig);
         Assert.Contains("no-such-rotor", rotor.CurrentMessage);
-        Assert.Contains("$.stations[0].rotor", bench.Screen);
+        // The problem names the field in words, as the editor labels it, not by its rig-file key.
+        Assert.Contains("station 1, rotor:", bench.Screen);
+        Assert.DoesNotContain("$.stations", bench.Screen);
         Assert.Equal("no-such-rotor", rotor.Field.Text);
     }
 
@@ -78,8 +116,8 @@ public class StationsSheetTests
         string screen = bench.Screen;
         Assert.Contains($"rim {expected.RimSpeedMPerS:F0} m/s", screen);
         var sheet = Assert.IsType<StationsSheet>(bench.Window.CurrentSheet);
-        Assert.Equal(RotorDrive.Tui.Text.BurstText.Line(expected, "rated"), System.Text.RegularExpressions.Regex.Replace(sheet.SafetyText, @"\s+", " "));
-        Assert.StartsWith(expected.Passes == true ? "passes burst check" : "! ", RotorDrive.Tui.Text.BurstText.Line(expected, "rated"));
+        Assert.Equal(RotorDrive.Core.Safety.RotorSafetyText.Line(expected, "rated"), System.Text.RegularExpressions.Regex.Replace(sheet.SafetyText, @"\s+", " "));
+        Assert.StartsWith(expected.Passes == true ? "passes burst check" : "! ", RotorDrive.Core.Safety.RotorSafetyText.Line(expected, "rated"));
     }
 
     [Fact]
@@ -97,8 +135,8 @@ public class StationsSheetTests
         // The demo catalog's hx150-p6 (invented) has a thin 90 MPa ring: Core's check at its rated speed fails.
         var failed = Assert.Single(session.FailedBurstChecks);
         Assert.Equal(false, failed.Passes);
-        string line = RotorDrive.Tui.Text.BurstText.Line(failed, "rated");
-        Assert.StartsWith("! FAILS burst check, rotor hx150-p6", line);
+        string line = RotorDrive.Core.Safety.RotorSafetyText.Line(failed, "rated");
+        Assert.StartsWith("! FAILS burst check: rotor hx150-p6", line);
         Assert.Contains(line, sheet.ProblemLines);
         Assert.DoesNotContain("No problems in the rig or its catalogs.", sheet.ProblemLines);
         Assert.Contains($"! {session.Problems.Count + 1} problem(s)", bench.Window.StatusText);

@@ -51,7 +51,7 @@ public class StressSheetTests
         var lines = sheet.ResultLines;
         foreach (var c in expected.Criteria)
         {
-            Assert.Contains(lines, l => l.StartsWith($"  {c.Key,-13} {c.Rate.Count,7} ", StringComparison.Ordinal)
+            Assert.Contains(lines, l => l.StartsWith($"  {c.Key.Replace('_', ' '),-13} {c.Rate.Count,7} ", StringComparison.Ordinal)
                 && l.Contains((c.Rate.UpperFraction * 100).ToString("F2", System.Globalization.CultureInfo.InvariantCulture) + " %"));
         }
         var speed = expected.Percentiles.Single(p => p.Key == "hover_speed_rpm").Summary!;
@@ -63,6 +63,25 @@ public class StressSheetTests
         bench.Press(Key.F7);
         Assert.Equal("hover_current_a", sheet.HistogramFigure);
         Assert.Contains(sheet.ResultLines, l => l.StartsWith("Histogram of hover current, A", StringComparison.Ordinal));
+    }
+
+    [Fact]
+    public async Task AtEightyColumns_EveryResultLineFits_AndDriversAreNamedInWords()
+    {
+        using var bench = new Bench(80, 24);
+        var sheet = Open(bench);
+        Retype(bench, sheet.SamplesField, "24");
+        Retype(bench, sheet.SeedField, "3");
+        bench.Press(Key.F5);
+        await bench.SettleAsync();
+        bench.Draw();
+        Assert.NotNull(sheet.Result);
+        // The result list is 60 columns wide at 80 (18 for the sheet list, 2 for the frames); a line must end inside it.
+        Assert.All(sheet.ResultLines, l => Assert.True(l.Length < 60, $"{l.Length}: {l}"));
+        int drivers = sheet.ResultLines.ToList().FindIndex(l => l.StartsWith("Top drivers", StringComparison.Ordinal));
+        Assert.True(drivers >= 0);
+        Assert.All(sheet.ResultLines.Skip(drivers + 1).TakeWhile(l => l.StartsWith("  ", StringComparison.Ordinal)),
+            l => Assert.DoesNotContain("_", l));
     }
 
     [Fact]

@@ -89,6 +89,11 @@ public class MainWindowTests
         var reread = new RotorDrive.Tui.Session.RigSession(bench.Files);
         Assert.Null(reread.Open("/lab/demo-rig.json"));
         Assert.Equal(0.0095, reread.Rig!.DesignGapM, 12);
+        // The rig file's comments (the rig file allows // comments) are kept through the load, edit and save.
+        string saved = bench.Files["/lab/demo-rig.json"];
+        var comments = original.Split('\n').Select(l => l.Trim()).Where(l => l.StartsWith("//", StringComparison.Ordinal)).ToList();
+        Assert.NotEmpty(comments);
+        Assert.All(comments, c => Assert.Contains(c, saved));
     }
 
     [Fact]

@@ -39,6 +39,27 @@ public class NothingLostTests
     }
 
     [Fact]
+    public void Esc_InAFieldHoldingTextThatIsNotAValue_PutsTheRigsValueBack_AndDoesNotQuit()
+    {
+        using var bench = new Bench();
+        var sheet = Assert.IsType<RigSheet>(bench.Window.CurrentSheet);
+        var gap = sheet.Fields.Single(f => f.Spec.JsonPath == "$.gap.design_mm");
+        gap.Field.SetFocus();
+        bench.Press(Key.End);
+        bench.Type("x");
+        Assert.Equal("10x", gap.Field.Text);
+        Assert.Contains("$.gap.design_mm", bench.Context.Session.UntypedFields.Keys);
+        Assert.NotEqual("", gap.CurrentMessage);
+
+        bench.Press(Key.Esc);
+        Assert.False(bench.Window.StopRequested);
+        Assert.Empty(bench.Context.Session.UntypedFields);
+        Assert.Equal("10", gap.Field.Text);
+        Assert.Equal("", gap.CurrentMessage);
+        Assert.Equal(0.010, bench.Context.Session.Rig!.DesignGapM, 12);
+    }
+
+    [Fact]
     public async Task Quit_DuringALongRun_Asks_AndCancelKeepsTheRunGoing()
     {
         using var bench = new Bench(120, 40);
@@ -75,6 +96,8 @@ public class NothingLostTests
         bench.Press(Key.D9.WithAlt);
         bench.Press(Key.F8);
         Assert.Contains("Stopped.", bench.Window.StatusText);
+        // While the worker returns, the status line does not also say the run is going.
+        Assert.DoesNotContain("stress test...", bench.Window.StatusText);
         await bench.SettleAsync();
         Assert.True(stress.Result!.Partial);
         Assert.True(stress.Result.Samples >= 1);

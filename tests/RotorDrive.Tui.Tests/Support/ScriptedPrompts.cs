@@ -27,9 +27,13 @@ internal sealed class ScriptedPrompts : IWorkbenchPrompts
         return Answers.Count > 0 ? (string?)Answers.Dequeue() : null;
     }
 
-    public string? Choose(string title, IReadOnlyList<string> items, string? current)
+    /// <summary>The one-line summaries the last list offered, or null.</summary>
+    public IReadOnlyList<string>? LastDetails { get; private set; }
+
+    public string? Choose(string title, IReadOnlyList<string> items, string? current, IReadOnlyList<string>? details = null)
     {
         Asked.Add($"{title}: choose from {items.Count}");
+        LastDetails = details;
         return Answers.Count > 0 ? (string?)Answers.Dequeue() : null;
     }
 }

@@ -51,6 +51,18 @@ public static class StressQuantities
         _ => throw new ArgumentOutOfRangeException(nameof(quantity), quantity, "Unknown quantity."),
     };
 
+    /// <summary>Words for people, e.g. "motor Kv", "pack state of charge".</summary>
+    /// <param name="quantity">The quantity.</param>
+    public static string Words(this StressQuantity quantity) => quantity switch
+    {
+        StressQuantity.MotorKv => "motor Kv",
+        StressQuantity.PackStateOfCharge => "pack state of charge",
+        StressQuantity.AmbientTemperature => "ambient temperature",
+        StressQuantity.CgOffsetX => "CG forward x",
+        StressQuantity.CgOffsetY => "CG left y",
+        _ => quantity.Key().Replace('_', ' '),
+    };
+
     /// <summary>The SI unit drawn values are in (Core works in SI), e.g. "rad/s/V".</summary>
     /// <param name="quantity">The quantity.</param>
     public static string SiUnit(this StressQuantity quantity) => quantity switch
