@@ -28,7 +28,6 @@ public partial class MethodLengthTests
     {
         "RotorDrive.Cli/Commands/LoadCommand.cs: Create",
         "RotorDrive.Cli/Commands/RankCommand.cs: WriteText",
-        "RotorDrive.Core/Craft/HoverTrim.cs: Describe",
         "RotorDrive.Core/Craft/HoverTrim.cs: Newton",
         "RotorDrive.Core/Simulation/SimulationRig.cs: SimulationRig",
         "RotorDrive.Core/Studies/Calibration/CalibrationStudy.cs: Run",
