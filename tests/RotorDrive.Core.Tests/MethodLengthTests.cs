@@ -28,13 +28,11 @@ public partial class MethodLengthTests
     {
         "RotorDrive.Cli/Commands/LoadCommand.cs: Create",
         "RotorDrive.Cli/Commands/RankCommand.cs: WriteText",
-        "RotorDrive.Core/Craft/HoverTrim.cs: Describe",
         "RotorDrive.Core/Craft/HoverTrim.cs: Newton",
         "RotorDrive.Core/Simulation/SimulationRig.cs: SimulationRig",
         "RotorDrive.Core/Studies/Calibration/CalibrationStudy.cs: Run",
         "RotorDrive.Core/Studies/Calibration/CalibrationStudy.Report.cs: Assemble",
         "RotorDrive.Core/Studies/Calibration/CalibrationStudy.Report.cs: Judge",
-        "RotorDrive.Core/Craft/YawBalance.cs: Analyse",
         "RotorDrive.Core/Studies/Ranking/RankStudy.Direct.cs: EvaluateDirect",
         "RotorDrive.Core/Studies/Ranking/RankStudy.Evaluate.cs: ToEvaluation",
         "RotorDrive.Core/Studies/Ranking/RankStudy.Run.cs: Run",

@@ -492,10 +492,9 @@ public static class HoverTrim
         {
             var s = st[i];
             var dt = s.Drivetrain;
-            double backEmf = s.FluxFactor * speeds[i] / dt.Motor.KvRadPerSPerV;
             // Against the pack's open-circuit voltage (no bus voltage under load is higher), the duty is a lower bound.
             double voc = model.Source.OpenCircuitVoltageV;
-            double duty = (required[i] * dt.LoopResistanceAt(s.Conditions.WindingTempC) + backEmf) / voc;
+            double duty = dt.DutyFor(required[i], speeds[i], voc, s.Conditions.WindingTempC, s.FluxFactor);
             if (bus.Status == BusStatus.Solved && points[i].Regime == DriveRegime.Regulating)
             {
                 continue;
@@ -557,39 +556,7 @@ public static class HoverTrim
         var stations = new HoverStation[n];
         for (int i = 0; i < n; i++)
         {
-            var s = st[i];
-            var dt = s.Drivetrain;
-            var point = points[i];
-            double backEmf = s.FluxFactor * speeds[i] / dt.Motor.KvRadPerSPerV;
-            double loop = dt.LoopResistanceAt(s.Conditions.WindingTempC);
-            double requiredDuty = (required[i] * loop + backEmf) / v;
-            var margins = new List<LimitMargin>(DriveMargins.ForStation(dt, s.Rotor, point))
-            {
-                new(DriveLimit.DutyHeadroom, requiredDuty, model.Limits.MaxDuty),
-            };
-            double duty = Math.Clamp(requiredDuty, 0, 1);
-            double h = DiffStep * Math.Max(speeds[i], 1e-3);
-            double motorUp = DriveBus.Evaluate(v, s.Input(DriveCommand.Duty(duty), speeds[i] + h)).TorqueNm;
-            double motorHere = DriveBus.Evaluate(v, s.Input(DriveCommand.Duty(duty), speeds[i])).TorqueNm;
-            double loadUp = s.LoadAt(speeds[i] + h, gapM).TotalTorqueNm;
-            double slope = (motorUp - motorHere) / h - (loadUp - loads[i].TotalTorqueNm) / h;
-            bool stable = slope < 0;
-            stations[i] = new HoverStation(i, s.Spin, requiredDuty, speeds[i], loads[i].LiftN, loads[i].TotalTorqueNm,
-                s.Spin.Sign() * loads[i].TotalTorqueNm, point.MotorCurrentA, point.BusCurrentA, loads[i].EddyPowerW,
-                v * point.BusCurrentA, point.Regime, stable, slope, margins);
-            foreach (var m in margins)
-            {
-                if (m.Exceeded)
-                {
-                    findings.Add(new HoverFinding(m.Limit.Key(), i,
-                        $"station {i + 1}: {m.Sentence()}"));
-                }
-            }
-            if (!stable)
-            {
-                findings.Add(new HoverFinding("stability", i,
-                    $"station {i + 1}: {Units.RadPerSToRpm(speeds[i]):0} rpm is not a stable equilibrium at duty {requiredDuty:0.000} (load torque rises faster than the motor's)"));
-            }
+            stations[i] = DescribeStation(model, i, gapM, speeds[i], required[i], loads[i], points[i], v, findings);
         }
         double packCurrent = 0;
         for (int i = 0; i < n; i++)
@@ -615,5 +582,43 @@ public static class HoverTrim
         var status = findings.Count == 0 ? HoverStatus.Hovering : HoverStatus.LimitExceeded;
         return new HoverResult(mode, status, gapM, model.MassKg, weight, stations, v, packCurrent, plate, stiffness,
             (totalLift - weight) / weight, pitch / (weight * arm), roll / (weight * arm), yaw, packMargins, findings, iterations);
+    }
+
+    // One station of a balanced hover: duty, margins, stability (finite-difference slope of motor minus load torque),
+    // and its findings.
+    private static HoverStation DescribeStation(RigModel model, int i, double gapM, double speed, double required, Loads.LoadPoint load,
+        DrivePoint point, double v, List<HoverFinding> findings)
+    {
+        var s = model.Stations[i];
+        var dt = s.Drivetrain;
+        double requiredDuty = dt.DutyFor(required, speed, v, s.Conditions.WindingTempC, s.FluxFactor);
+        var margins = new List<LimitMargin>(DriveMargins.ForStation(dt, s.Rotor, point))
+        {
+            new(DriveLimit.DutyHeadroom, requiredDuty, model.Limits.MaxDuty),
+        };
+        double duty = Math.Clamp(requiredDuty, 0, 1);
+        double h = DiffStep * Math.Max(speed, 1e-3);
+        double motorUp = DriveBus.Evaluate(v, s.Input(DriveCommand.Duty(duty), speed + h)).TorqueNm;
+        double motorHere = DriveBus.Evaluate(v, s.Input(DriveCommand.Duty(duty), speed)).TorqueNm;
+        double loadUp = s.LoadAt(speed + h, gapM).TotalTorqueNm;
+        double slope = (motorUp - motorHere) / h - (loadUp - load.TotalTorqueNm) / h;
+        bool stable = slope < 0;
+        var station = new HoverStation(i, s.Spin, requiredDuty, speed, load.LiftN, load.TotalTorqueNm,
+            s.Spin.Sign() * load.TotalTorqueNm, point.MotorCurrentA, point.BusCurrentA, load.EddyPowerW,
+            v * point.BusCurrentA, point.Regime, stable, slope, margins);
+        foreach (var m in margins)
+        {
+            if (m.Exceeded)
+            {
+                findings.Add(new HoverFinding(m.Limit.Key(), i,
+                    $"station {i + 1}: {m.Sentence()}"));
+            }
+        }
+        if (!stable)
+        {
+            findings.Add(new HoverFinding("stability", i,
+                $"station {i + 1}: {Units.RadPerSToRpm(speed):0} rpm is not a stable equilibrium at duty {requiredDuty:0.000} (load torque rises faster than the motor's)"));
+        }
+        return station;
     }
 }

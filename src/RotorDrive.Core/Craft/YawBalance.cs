@@ -18,113 +18,132 @@ public static class YawBalance
         Preconditions.NotNull(model, nameof(model));
         options ??= HoverOptions.Default;
         var findings = new List<string>();
-        int n = model.Stations.Count;
-        double gap = model.DesignGapM, weight = model.WeightN;
+        var split = new DutySplit(model, options);
         double maxDuty = model.Limits.MaxDuty;
-        var cw = Enumerable.Range(0, n).Where(i => model.Stations[i].Spin == SpinDirection.Clockwise).ToArray();
-        var ccw = Enumerable.Range(0, n).Where(i => model.Stations[i].Spin == SpinDirection.CounterClockwise).ToArray();
-
-        double[] Duties(double cwDuty, double ccwDuty)
-        {
-            var d = new double[n];
-            for (int i = 0; i < n; i++)
-            {
-                d[i] = Math.Clamp(model.Stations[i].Spin == SpinDirection.Clockwise ? cwDuty : ccwDuty, 0, 1);
-            }
-            return d;
-        }
-        double Excess(RigModel m, double cwDuty, double ccwDuty) => CommonDutyHover.SpeedsAt(m, Duties(cwDuty, ccwDuty), gap, options).TotalLiftN - weight;
+        bool cwGroup = model.Stations.Any(s => s.Spin == SpinDirection.Clockwise), ccwGroup = model.Stations.Any(s => s.Spin == SpinDirection.CounterClockwise);
 
         double? equal = null, residual = null, accel = null, delta = null, cwDuty = null, ccwDuty = null;
         YawSensitivity? sensitivity = null;
-        if (Excess(model, maxDuty, maxDuty) < 0)
+        if (split.Excess(maxDuty, maxDuty) < 0)
         {
             findings.Add($"no equal duty up to the limit {maxDuty:0.00} carries the weight at the design gap");
         }
         else
         {
-            double d = Brent.FindRoot(x => Excess(model, x, x), 1e-4, maxDuty, 1e-12, 200);
+            double d = Brent.FindRoot(x => split.Excess(x, x), 1e-4, maxDuty, 1e-12, 200);
             equal = d;
-            double yaw = CommonDutyHover.SpeedsAt(model, Duties(d, d), gap, options).YawTorqueNm;
+            double yaw = split.YawAt(d, d);
             residual = yaw;
             accel = yaw / model.YawInertiaKgM2;
-            if (cw.Length == 0 || ccw.Length == 0)
+            if (!cwGroup || !ccwGroup)
             {
                 findings.Add("all rotors spin the same way: no differential duty can cancel their reaction");
             }
             else
             {
-                // For a split delta, the common part that still carries the weight, then the yaw there.
-                double Common(double dd)
+                if (split.Cancelling(d, yaw) is { } found)
                 {
-                    double lo = Math.Max(1e-4, Math.Abs(dd) / 2 + 1e-4), hi = maxDuty - Math.Abs(dd) / 2;
-                    if (!(hi > lo) || Excess(model, hi + dd / 2, hi - dd / 2) < 0 || Excess(model, lo + dd / 2, lo - dd / 2) > 0)
-                    {
-                        return double.NaN;
-                    }
-                    return Brent.FindRoot(x => Excess(model, x + dd / 2, x - dd / 2), lo, hi, 1e-12, 200);
+                    (delta, cwDuty, ccwDuty) = found;
                 }
-                double Yaw(double dd)
-                {
-                    double c = Common(dd);
-                    return double.IsNaN(c) ? double.NaN : CommonDutyHover.SpeedsAt(model, Duties(c + dd / 2, c - dd / 2), gap, options).YawTorqueNm;
-                }
-                double span = 2 * Math.Min(d, maxDuty - d);
-                // Walk out from zero both ways until the yaw changes sign; the root then lies in the last step. Which way
-                // depends on the regime: above the drag peak a faster rotor has less shaft torque, below it more.
-                bool found = false;
-                Span<double> prev = [0.0, 0.0];
-                Span<double> fPrev = [yaw, yaw];
-                Span<bool> open = [true, true];
-                for (int k = 1; k <= 40 && !found && yaw != 0; k++)
-                {
-                    for (int side = 0; side < 2 && !found; side++)
-                    {
-                        if (!open[side])
-                        {
-                            continue;
-                        }
-                        double x = (side == 0 ? 1 : -1) * span * k / 40.0;
-                        double f = Yaw(x);
-                        if (double.IsNaN(f))
-                        {
-                            open[side] = false;
-                            continue;
-                        }
-                        if (Math.Sign(f) != Math.Sign(fPrev[side]))
-                        {
-                            double root = Brent.FindRoot(Yaw, Math.Min(prev[side], x), Math.Max(prev[side], x), 1e-12, 200);
-                            double c = Common(root);
-                            delta = root;
-                            cwDuty = c + root / 2;
-                            ccwDuty = c - root / 2;
-                            found = true;
-                        }
-                        prev[side] = x;
-                        fPrev[side] = f;
-                    }
-                }
-                if (yaw == 0)
-                {
-                    delta = 0;
-                    cwDuty = ccwDuty = d;
-                }
-                else if (!found)
+                else
                 {
                     findings.Add("no differential duty within the duty limit cancels the residual yaw torque while carrying the weight");
                 }
-                sensitivity = Sensitivity(model, Duties(d, d), gap, yaw, cw[0], ccw[0], options);
+                int a = model.Stations.Select((s, i) => (s, i)).First(p => p.s.Spin == SpinDirection.Clockwise).i;
+                int b = model.Stations.Select((s, i) => (s, i)).First(p => p.s.Spin == SpinDirection.CounterClockwise).i;
+                sensitivity = Sensitivity(model, split.Duties(d, d), model.DesignGapM, yaw, a, b, options);
             }
         }
 
-        double positive = Authority(model, gap, +1, model.Limits.YawTorqueNm, options, out string? positiveLimit);
-        double negative = Authority(model, gap, -1, model.Limits.YawTorqueNm, options, out string? negativeLimit);
+        double positive = Authority(model, model.DesignGapM, +1, model.Limits.YawTorqueNm, options, out string? positiveLimit);
+        double negative = Authority(model, model.DesignGapM, -1, model.Limits.YawTorqueNm, options, out string? negativeLimit);
         if (positive == 0 && negative == 0)
         {
             findings.Add("the trimmed hover itself breaks a limit or has no balance: no yaw authority");
         }
         return new YawResult(equal, residual, accel, delta, cwDuty, ccwDuty, positive, negative, model.Limits.YawTorqueNm,
             positive <= negative ? positiveLimit : negativeLimit, sensitivity, findings);
+    }
+
+    // The craft at one duty for the clockwise group and one for the counter-clockwise group, at the design gap: its lift
+    // beyond the weight, its yaw torque, and the differential duty that cancels the yaw while carrying the weight.
+    private sealed class DutySplit(RigModel model, HoverOptions options)
+    {
+        private readonly double _maxDuty = model.Limits.MaxDuty;
+
+        public double[] Duties(double cwDuty, double ccwDuty)
+        {
+            var d = new double[model.Stations.Count];
+            for (int i = 0; i < d.Length; i++)
+            {
+                d[i] = Math.Clamp(model.Stations[i].Spin == SpinDirection.Clockwise ? cwDuty : ccwDuty, 0, 1);
+            }
+            return d;
+        }
+
+        public double Excess(double cwDuty, double ccwDuty)
+            => CommonDutyHover.SpeedsAt(model, Duties(cwDuty, ccwDuty), model.DesignGapM, options).TotalLiftN - model.WeightN;
+
+        public double YawAt(double cwDuty, double ccwDuty)
+            => CommonDutyHover.SpeedsAt(model, Duties(cwDuty, ccwDuty), model.DesignGapM, options).YawTorqueNm;
+
+        // The differential duty (cw minus ccw) and the two duties that cancel the yaw at equal duty d, or null when none
+        // within the duty limit does. Walks out from zero both ways until the yaw changes sign, then Brent in the last
+        // step: which way depends on the regime (above the drag peak a faster rotor has less shaft torque, below more).
+        public (double Delta, double Cw, double Ccw)? Cancelling(double d, double yaw)
+        {
+            if (yaw == 0)
+            {
+                return (0, d, d);
+            }
+            double span = 2 * Math.Min(d, _maxDuty - d);
+            Span<double> prev = [0.0, 0.0];
+            Span<double> fPrev = [yaw, yaw];
+            Span<bool> open = [true, true];
+            for (int k = 1; k <= 40; k++)
+            {
+                for (int side = 0; side < 2; side++)
+                {
+                    if (!open[side])
+                    {
+                        continue;
+                    }
+                    double x = (side == 0 ? 1 : -1) * span * k / 40.0;
+                    double f = Yaw(x);
+                    if (double.IsNaN(f))
+                    {
+                        open[side] = false;
+                        continue;
+                    }
+                    if (Math.Sign(f) != Math.Sign(fPrev[side]))
+                    {
+                        double root = Brent.FindRoot(Yaw, Math.Min(prev[side], x), Math.Max(prev[side], x), 1e-12, 200);
+                        double c = Common(root);
+                        return (root, c + root / 2, c - root / 2);
+                    }
+                    prev[side] = x;
+                    fPrev[side] = f;
+                }
+            }
+            return null;
+        }
+
+        // For a split delta, the common part that still carries the weight (NaN when none does), then the yaw there.
+        private double Common(double dd)
+        {
+            double lo = Math.Max(1e-4, Math.Abs(dd) / 2 + 1e-4), hi = _maxDuty - Math.Abs(dd) / 2;
+            if (!(hi > lo) || Excess(hi + dd / 2, hi - dd / 2) < 0 || Excess(lo + dd / 2, lo - dd / 2) > 0)
+            {
+                return double.NaN;
+            }
+            return Brent.FindRoot(x => Excess(x + dd / 2, x - dd / 2), lo, hi, 1e-12, 200);
+        }
+
+        private double Yaw(double dd)
+        {
+            double c = Common(dd);
+            return double.IsNaN(c) ? double.NaN : YawAt(c + dd / 2, c - dd / 2);
+        }
     }
 
     /// <summary>The equal-duty yaw residual alone: the common duty that carries the weight at the design gap (Brent, to

@@ -67,6 +67,17 @@ public sealed record Drivetrain
     public double FreeSpeedRadPerS(double busVoltageV, double duty, double magnetTempC)
         => duty * busVoltageV * Motor.KvRadPerSPerV / FluxFactorAt(magnetTempC);
 
+    /// <summary>The duty that drives a motor current at a shaft speed from a bus voltage: the motor needs I R(T) + E
+    /// (E = flux omega / Kv, M. Drela, "First-Order DC Electric Motor Model", MIT, 2007) and the averaged switch gives
+    /// d Vbus - I R_on, so d = (I (R(T) + R_on) + E) / Vbus. Not clamped: above the max duty the point cannot be driven.</summary>
+    /// <param name="currentA">Motor current, A.</param>
+    /// <param name="speedRadPerS">Shaft speed, rad/s.</param>
+    /// <param name="busVoltageV">Bus voltage, V (&gt; 0).</param>
+    /// <param name="windingTempC">Winding temperature, C.</param>
+    /// <param name="fluxFactor">Relative flux of the motor's magnets (<see cref="FluxFactorAt"/>).</param>
+    public double DutyFor(double currentA, double speedRadPerS, double busVoltageV, double windingTempC, double fluxFactor)
+        => (currentA * LoopResistanceAt(windingTempC) + fluxFactor * speedRadPerS / Motor.KvRadPerSPerV) / busVoltageV;
+
     /// <summary>Total mass of motor and controller, kg.</summary>
     public double MassKg => Motor.MassKg + Controller.MassKg;
 }
