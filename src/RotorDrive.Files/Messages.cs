@@ -221,6 +221,16 @@ public static class Messages
     public static string StationsOverlap(string other, double distanceMm, double neededMm)
         => $"this rotor overlaps the rotor of {other}: axes {N(distanceMm)} mm apart, at least {N(neededMm)} mm needed";
 
+    /// <summary>An unknown mount.</summary>
+    public static string BadMount(string text) => $"'{text}' is not a mount; use \"free\" (the default), \"guided\" or \"bench\"";
+
+    /// <summary>A whole-craft analysis asked of a rig that is not a free craft.</summary>
+    /// <param name="command">The command.</param>
+    /// <param name="mount">The rig's mount ("bench").</param>
+    public static string NotForMount(string command, string mount) => mount == "bench"
+        ? $"'{command}' is not for a bench rig (mount \"bench\": each rotor on a stand at a fixed gap, no hover); use 'load' or 'operate' for each station"
+        : $"'{command}' is not for a guided rig (mount \"guided\": rails carry pitch, roll and yaw, which this analysis balances for a free craft); use 'load' or 'operate' for each station";
+
     /// <summary>A station name that is empty or a number (which --station would read as a station number).</summary>
     public static string BadStationName(string name)
         => $"'{name}' cannot name a station: use words (e.g. \"front left\"), not an empty text or a number";

@@ -147,7 +147,7 @@ public class RigLoaderTests
             AmbientC = 20,
             GearYawFrictionNm = 1,
             LoadModel = "3d",
-            Stations = [new RigStationSection { XMm = 1, YMm = 2, Spin = "cw", Rotor = "r", Motor = "m", Controller = "c" }],
+            Stations = [new RigStationSection { Name = "front", XMm = 1, YMm = 2, Spin = "cw", Rotor = "r", Motor = "m", Controller = "c" }],
             Pack = new RigPackSection { Id = "p", Count = 2 },
             Limits = new RigLimitsSection { YawTorqueNm = 1, PlateTempC = 2, CellCutoffV = 3, UsableCapacityPct = 4, MaxDuty = 0.5, LiftoffTimeS = 6 },
             Tolerances = new RigTolerancesSection(),
