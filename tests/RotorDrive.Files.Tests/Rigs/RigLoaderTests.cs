@@ -147,6 +147,7 @@ public class RigLoaderTests
             AmbientC = 20,
             GearYawFrictionNm = 1,
             LoadModel = "3d",
+            Mount = "free",
             Stations = [new RigStationSection { Name = "front", XMm = 1, YMm = 2, Spin = "cw", Rotor = "r", Motor = "m", Controller = "c" }],
             Pack = new RigPackSection { Id = "p", Count = 2 },
             Limits = new RigLimitsSection { YawTorqueNm = 1, PlateTempC = 2, CellCutoffV = 3, UsableCapacityPct = 4, MaxDuty = 0.5, LiftoffTimeS = 6 },
