@@ -266,9 +266,10 @@ public static class Messages
     /// <param name="unit">The key's unit.</param>
     /// <param name="zeroAllowed">True when the quantity may reach zero but not go below it.</param>
     /// <param name="normal">True for a normal spread, false for a uniform one.</param>
+    /// <remarks><paramref name="station"/> is the station's index, 0-based; the message counts from 1.</remarks>
     public static string ToleranceReachesZero(string what, int? station, double nominal, double lowest, string unit, bool zeroAllowed, bool normal)
     {
-        string where = station is { } s ? $" at station {s}" : "";
+        string where = station is { } s ? $" at station {s + 1}" : "";
         string how = normal
             ? $"{G(nominal)} {unit} minus {G(Core.Studies.Stress.StressSpreadRule.NormalReachSd)} standard deviations"
             : $"{G(nominal)} {unit} plus the lower bound";
