@@ -27,6 +27,10 @@ public static class CraftInput
         ArgumentNullException.ThrowIfNull(error);
         string rigPath = loaded.RigPath;
         var rig = loaded.Rig!;
+        if (RefusesMount(command, loaded, error))
+        {
+            return null;
+        }
         var missing = RigModel.MissingParts(rig);
         if (missing.Count > 0)
         {
@@ -37,5 +41,23 @@ public static class CraftInput
             return null;
         }
         return RigModel.Build(rig);
+    }
+
+    /// <summary>True (after printing why) when a whole-craft analysis is asked of a rig that is not a free craft: a
+    /// guided sled or a bench of stands (rig file <c>mount</c>); the caller exits with <see cref="ExitCodes.BadInput"/>.</summary>
+    /// <param name="command">The subcommand's name.</param>
+    /// <param name="loaded">The loaded rig (no problems).</param>
+    /// <param name="error">Where the message goes.</param>
+    public static bool RefusesMount(string command, Files.RigLoadResult loaded, TextWriter error)
+    {
+        ArgumentNullException.ThrowIfNull(loaded);
+        ArgumentNullException.ThrowIfNull(error);
+        var mount = loaded.Rig!.Mount;
+        if (mount == MountKind.Free)
+        {
+            return false;
+        }
+        error.WriteLine($"rotordrive {command}: error: {loaded.RigPath}: $.mount: {Files.Messages.NotForMount(command, Output.JsonNames.Of(mount))}");
+        return true;
     }
 }

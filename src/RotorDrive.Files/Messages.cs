@@ -221,6 +221,16 @@ public static class Messages
     public static string StationsOverlap(string other, double distanceMm, double neededMm)
         => $"this rotor overlaps the rotor of {other}: axes {N(distanceMm)} mm apart, at least {N(neededMm)} mm needed";
 
+    /// <summary>An unknown mount.</summary>
+    public static string BadMount(string text) => $"'{text}' is not a mount; use \"free\" (the default), \"guided\" or \"bench\"";
+
+    /// <summary>A whole-craft analysis asked of a rig that is not a free craft.</summary>
+    /// <param name="command">The command.</param>
+    /// <param name="mount">The rig's mount ("bench").</param>
+    public static string NotForMount(string command, string mount) => mount == "bench"
+        ? $"'{command}' is not for a bench rig (mount \"bench\": each rotor on a stand at a fixed gap, no hover); use 'load' or 'operate' for each station"
+        : $"'{command}' is not for a guided rig (mount \"guided\": rails carry pitch, roll and yaw, which this analysis balances for a free craft); use 'load' or 'operate' for each station";
+
     /// <summary>A station name that is empty or a number (which --station would read as a station number).</summary>
     public static string BadStationName(string name)
         => $"'{name}' cannot name a station: use words (e.g. \"front left\"), not an empty text or a number";
@@ -256,9 +266,10 @@ public static class Messages
     /// <param name="unit">The key's unit.</param>
     /// <param name="zeroAllowed">True when the quantity may reach zero but not go below it.</param>
     /// <param name="normal">True for a normal spread, false for a uniform one.</param>
+    /// <remarks><paramref name="station"/> is the station's index, 0-based; the message counts from 1.</remarks>
     public static string ToleranceReachesZero(string what, int? station, double nominal, double lowest, string unit, bool zeroAllowed, bool normal)
     {
-        string where = station is { } s ? $" at station {s}" : "";
+        string where = station is { } s ? $" at station {s + 1}" : "";
         string how = normal
             ? $"{G(nominal)} {unit} minus {G(Core.Studies.Stress.StressSpreadRule.NormalReachSd)} standard deviations"
             : $"{G(nominal)} {unit} plus the lower bound";

@@ -85,13 +85,14 @@ public sealed class StressCommandTests : IDisposable
                 }
                 else
                 {
-                    Assert.Equal(double.Parse(cell, CultureInfo.InvariantCulture), margin.Value.GetDouble());
+                    // The CSV writes 15 significant digits (CsvNumber); the JSON keeps every digit.
+                    Assert.Equal(Files.Exports.CsvNumber.Format(margin.Value.GetDouble()), cell);
                 }
             }
             string hover = row[Array.IndexOf(header, "hover_speed_rpm")];
             if (hover.Length > 0)
             {
-                Assert.Equal(double.Parse(hover, CultureInfo.InvariantCulture), root.GetProperty("hover_speed_rpm").GetDouble());
+                Assert.Equal(Files.Exports.CsvNumber.Format(root.GetProperty("hover_speed_rpm").GetDouble()), hover);
             }
             Assert.True(root.GetProperty("trace").GetArrayLength() > 2);
             Assert.Equal(6, root.GetProperty("parts").GetProperty("stations").GetArrayLength());
@@ -119,7 +120,7 @@ public sealed class StressCommandTests : IDisposable
         var (code, output, _) = await CliRunner.RunAsync("stress", RepoPaths.DemoRig, "--sample", "0", "--csv", csv);
         Assert.NotEqual(ExitCodes.BadInput, code);
         Assert.Contains("Stress sample 0", output);
-        Assert.StartsWith("time_s,duty,speed_rpm_0", File.ReadAllText(csv));
+        Assert.StartsWith("time_s,duty,speed_rpm_1,", File.ReadAllText(csv));
     }
 
     [Fact]
@@ -138,8 +139,8 @@ public sealed class StressCommandTests : IDisposable
     [Theory]
     // Each spread can reach zero or below before a study runs (StressSpreadRule: a uniform lower bound, or 5 standard
     // deviations below nominal; the demo's landed gap is 6.5 mm, its plate 12 mm, its payload 25 kg).
-    [InlineData("\"gap_offset_mm\": { \"normal_sd\": 0.7 }", "\"gap_offset_mm\": { \"uniform\": [-7, 0] }", "gap_offset_mm.uniform", "landed gap plus gap offset at station 0")]
-    [InlineData("\"gap_offset_mm\": { \"normal_sd\": 0.7 }", "\"gap_offset_mm\": { \"normal_sd\": 1.4 }", "gap_offset_mm.normal_sd", "landed gap plus gap offset at station 0")]
+    [InlineData("\"gap_offset_mm\": { \"normal_sd\": 0.7 }", "\"gap_offset_mm\": { \"uniform\": [-7, 0] }", "gap_offset_mm.uniform", "landed gap plus gap offset at station 1")]
+    [InlineData("\"gap_offset_mm\": { \"normal_sd\": 0.7 }", "\"gap_offset_mm\": { \"normal_sd\": 1.4 }", "gap_offset_mm.normal_sd", "landed gap plus gap offset at station 1")]
     [InlineData("\"plate_thickness_mm\": { \"uniform\": [-0.3, 0.3] }", "\"plate_thickness_mm\": { \"uniform\": [-12, 0.3] }", "plate_thickness_mm.uniform", "plate thickness")]
     [InlineData("\"pack_resistance_mohm\": { \"normal_sd_pct\": 15 }", "\"pack_resistance_mohm\": { \"normal_sd_pct\": 25 }", "pack_resistance_mohm.normal_sd_pct", "pack internal resistance")]
     [InlineData("\"payload_kg\": { \"normal_sd\": 4 }", "\"payload_kg\": { \"normal_sd\": 6 }", "payload_kg.normal_sd", "payload")]
@@ -150,7 +151,9 @@ public sealed class StressCommandTests : IDisposable
         int line = Array.FindIndex(File.ReadAllLines(rig), l => l.Contains($"\"{key}\": {{", StringComparison.Ordinal)) + 1;
         var (code, output, error) = await CliRunner.RunAsync("stress", rig, "--samples", "2", "--json");
         Assert.Equal(ExitCodes.BadInput, code);
-        Assert.Equal("", output);
+        // With --json the problems are also the stdout document.
+        var problem = Assert.Single(JsonDocument.Parse(output).RootElement.GetProperty("problems").EnumerateArray());
+        Assert.Equal("$.tolerances." + path, problem.GetProperty("field").GetString());
         Assert.Contains($"demo-rig.json:{line}:", error);
         Assert.Contains("$.tolerances." + path, error);
         Assert.Contains("this spread can make the " + what, error);

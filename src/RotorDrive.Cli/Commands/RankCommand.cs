@@ -71,7 +71,7 @@ public static class RankCommand
     private static int Run(RankRequest request, TextWriter output, TextWriter error)
     {
         var loaded = RigInput.LoadOrReport(request.RigPath, error);
-        if (loaded is null)
+        if (loaded is null || CraftInput.RefusesMount("rank", loaded, error))
         {
             return ExitCodes.BadInput;
         }

@@ -106,7 +106,7 @@ public static class StressCommand
     private static async Task<int> RunAsync(StressRequest request, TextWriter output, TextWriter error, CancellationToken cancellationToken)
     {
         var loaded = RigInput.LoadOrReport(request.RigPath, error);
-        if (loaded is null)
+        if (loaded is null || CraftInput.RefusesMount("stress", loaded, error))
         {
             return ExitCodes.BadInput;
         }

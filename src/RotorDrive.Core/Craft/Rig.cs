@@ -76,6 +76,11 @@ public sealed record Rig(
     /// "2d" for the first-generation model, e.g. to compare).</summary>
     public LoadModelKind LoadModel { get; init; } = LoadModelKind.ThreeDimensional;
 
+    /// <summary>How the rig is held (rig file <c>mount</c>; default <see cref="MountKind.Free"/>): a free craft, a guided
+    /// sled or a bench of stands. The whole-craft analyses (trimmed hover, yaw, spin-up and endurance of the craft,
+    /// ranking, stress test) describe a free craft.</summary>
+    public MountKind Mount { get; init; } = MountKind.Free;
+
     /// <summary>The load model settings for a rotor of this rig: the given settings with the rig's load model and the
     /// rotor's calibration, if any.</summary>
     /// <param name="rotor">The rotor design.</param>

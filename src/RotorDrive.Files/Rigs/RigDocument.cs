@@ -34,6 +34,9 @@ public sealed class RigDocument
     /// strip model with the width factor.</summary>
     public string? LoadModel { get; set; }
 
+    /// <summary>"mount": "free" (default), "guided" or "bench".</summary>
+    public string? Mount { get; set; }
+
     /// <summary>"stations": the rotor stations.</summary>
     public List<RigStationSection>? Stations { get; set; }
 

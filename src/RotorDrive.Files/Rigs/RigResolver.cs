@@ -90,6 +90,13 @@ public static class RigResolver
         var gaps = ResolveGaps(document, ctx);
         var ambient = ctx.Value(RigSchema.AmbientC, document);
         var loadModel = ResolveLoadModel(document, ctx);
+        var mount = ctx.Choice(RigSchema.Mount, document, 0, Messages.BadMount) switch
+        {
+            null => (MountKind?)null,
+            "guided" => MountKind.Guided,
+            "bench" => MountKind.Bench,
+            _ => MountKind.Free,
+        };
         var gearFriction = ctx.Value(RigSchema.GearYawFrictionNm, document);
         var (stations, stationsOk) = ResolveStations(document, catalogs, ctx);
         var (bank, packOk) = ResolvePack(document, catalogs, ctx);
@@ -108,7 +115,7 @@ public static class RigResolver
 
         var ordered = problems.OrderBy(p => p.Line).ThenBy(p => p.Column).ToList();
         if (ordered.Count > 0 || !partsOk || !stationsOk || !packOk || !routeOk || name is null || plate is null || body is null || gaps is null
-            || ambient is null || gearFriction is null || limits is null || loadModel is null)
+            || ambient is null || gearFriction is null || limits is null || loadModel is null || mount is null)
         {
             return new RigResolveResult(null, ordered);
         }
@@ -121,6 +128,7 @@ public static class RigResolver
             Route = route,
             Calibrations = calibrations,
             LoadModel = loadModel.Value,
+            Mount = mount.Value,
         };
         return new RigResolveResult(rig, ordered) { Tolerances = tolerances ?? StressTolerances.None };
     }

@@ -150,6 +150,13 @@ public static class RigSchema
         + "Russell-Norsworthy width factor (to compare)",
         d => d.LoadModel, (d, v) => d.LoadModel = v);
 
+    /// <summary>"mount".</summary>
+    public static readonly RigKey Mount = Choice<RigDocument>("mount", ["free", "guided", "bench"], "free", "mount",
+        "how the rig is held: \"free\" (a craft that trims force, pitch, roll and yaw itself, four or more stations), \"guided\" (a sled "
+        + "on rails that carry pitch, roll and yaw) or \"bench\" (each rotor on a stand at a fixed gap); the whole-craft analyses "
+        + "(hover, yaw, spinup, endurance, rank, stress, report) are for a free craft and refuse the others (exit 2)",
+        d => d.Mount, (d, v) => d.Mount = v);
+
     /// <summary>"stations".</summary>
     public static readonly RigKey Stations = List<RigStationSection>("stations", true, 1, "the rotor stations; rotors must not overlap",
         d => d.Stations, (d, v) => d.Stations = v);
@@ -273,7 +280,7 @@ public static class RigSchema
         PlateEmissivity, PlateBackIronMm,
         Craft, CraftEmptyMassKg, CraftPayloadKg, CraftCgXMm, CraftCgYMm, CraftYawInertia, CraftHeaveDamping,
         Gap, GapDesignMm, GapLandedMm,
-        AmbientC, GearYawFrictionNm, LoadModel,
+        AmbientC, GearYawFrictionNm, LoadModel, Mount,
         Stations, StationName, StationXMm, StationYMm, StationSpin, StationRotor, StationMotor, StationController,
         Pack, PackId, PackCount,
         Limits, LimitYawTorqueNm, LimitPlateTempC, LimitCellCutoffV, LimitUsableCapacityPct, LimitMaxDuty, LimitLiftoffTimeS,

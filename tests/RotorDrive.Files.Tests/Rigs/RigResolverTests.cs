@@ -254,4 +254,23 @@ public class RigResolverTests
         var result = RigResolver.Resolve(doc, Catalogs.Catalog, File);
         Assert.Equal([new InputProblem(File, 0, 0, "$.craft.payload_kg", Messages.MustBeNonNegative(-1))], result.Problems);
     }
+
+    [Theory]
+    [InlineData("", RotorDrive.Core.Craft.MountKind.Free)]
+    [InlineData("\"mount\": \"bench\",", RotorDrive.Core.Craft.MountKind.Bench)]
+    [InlineData("\"mount\": \"Guided\",", RotorDrive.Core.Craft.MountKind.Guided)]
+    public void Resolve_ReadsTheMount_FreeByDefault(string key, RotorDrive.Core.Craft.MountKind expected)
+    {
+        var result = Resolve("\"stations\": [", key + "\"stations\": [");
+        Assert.Empty(result.Problems);
+        Assert.Equal(expected, result.Rig!.Mount);
+    }
+
+    [Fact]
+    public void Resolve_RejectsAnUnknownMount()
+    {
+        var result = Resolve("\"stations\": [", "\"mount\": \"rail\", \"stations\": [");
+        var problem = Assert.Single(result.Problems);
+        Assert.Equal(("$.mount", Messages.BadMount("rail")), (problem.Field, problem.Message));
+    }
 }
