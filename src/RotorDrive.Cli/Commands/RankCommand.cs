@@ -177,7 +177,7 @@ public static class RankCommand
                     $"{e.Candidate.PackCount} x {e.PackId}", Numbers.Format(f.MaxSpeedRpm, 0), Numbers.Format(f.MaxMotorCurrentA, 1),
                     Numbers.Format(f.MaxDuty, 3), Numbers.Format(f.PackCurrentA, 1), Numbers.Format(f.RuntimeS / 60, 1), Numbers.Format(f.TotalMassKg, 2),
                     Numbers.Format(f.CurrentMarginFraction * 100, 1), Numbers.Format(f.DragPeakTorqueMarginFraction * 100, 0), Numbers.Format(entry.LiftoffTimeS, 2),
-                    Numbers.Format(e.Simulation?.EnduranceRuntimeS / 60, 1), e.Simulation is { } sim ? LimitKey(sim.EnduranceLimit) : "",
+                    Numbers.Format(e.Simulation?.EnduranceRuntimeS / 60, 1), e.Simulation is { } sim ? sim.EnduranceLimit.Words() : "",
                     Numbers.Format(entry.Score, 3));
             }
             table.Write(o, 2);
@@ -196,8 +196,9 @@ public static class RankCommand
             }
             if (NotThePack(result.Top) is { } notPack)
             {
-                o.WriteLine($"  Note: every shortlisted combination's endurance ends on {notPack.Text} after {Numbers.Format(notPack.MinS / 60, 1)}-"
-                    + $"{Numbers.Format(notPack.MaxS / 60, 1)} min, well before its pack runs down: that limit, not the drivetrain, sets the hover time;");
+                string lo = Numbers.Format(notPack.MinS / 60, 1), hi = Numbers.Format(notPack.MaxS / 60, 1);
+                o.WriteLine($"  Note: every shortlisted combination's endurance ends on {notPack.Text} after {(lo == hi ? lo : lo + "-" + hi)} min, "
+                    + "well before its pack runs down: that limit, not the drivetrain, sets the hover time;");
                 o.WriteLine("  runtime_min ranks the drivetrains by their pack runtime once it is lifted.");
             }
             o.WriteLine();
