@@ -134,6 +134,27 @@ public sealed class StationsSheet : Sheet
         _cg = (cgx, cgy);
         DrawSketch();
 
+        RefreshStationList(sketch, docStations);
+        DrawSketch();
+        foreach (var f in _fields)
+        {
+            f.Field.Enabled = docStations.Count > 0;
+            f.Refresh();
+        }
+        RefreshProblems();
+        if (_fields.FirstOrDefault(f => f.Field.HasFocus) is { } focused)
+        {
+            ShowDetail(focused);
+        }
+        _safety.Text = rig is not null && _selected < rig.Stations.Count
+            && session.BurstChecks.FirstOrDefault(b => b.RotorId == rig.Stations[_selected].Rotor.Id) is { } check
+            ? string.Join("\n", Wrap.Lines(RotorSafetyText.Line(check, "rated"), Math.Max(20, _safety.Frame.Width > 0 ? _safety.Frame.Width : 60)))
+            : "";
+    }
+
+    // The list of stations (mark and rotor id), changed in place when its length stays, and the selection kept in range.
+    private void RefreshStationList(List<SketchStation> sketch, IReadOnlyList<RotorDrive.Files.Rigs.RigStationSection> docStations)
+    {
         var items = sketch.Select(s =>
         {
             string rotor = docStations[s.Index].Rotor ?? "?";
@@ -166,12 +187,11 @@ public sealed class StationsSheet : Sheet
         {
             _stations.SetSelection(_selected, false);
         }
-        DrawSketch();
-        foreach (var f in _fields)
-        {
-            f.Field.Enabled = docStations.Count > 0;
-            f.Refresh();
-        }
+    }
+
+    private void RefreshProblems()
+    {
+        var session = Context.Session;
         // One list of what is wrong: typed text, input problems and Core's failed burst checks, so "no problems" never
         // sits beside a failed check.
         var problems = session.UntypedFields.Select(u => $"! {FieldWords.Of(u.Key)}: {u.Value}")
@@ -184,14 +204,6 @@ public sealed class StationsSheet : Sheet
         {
             _problemItems.Add(p);
         }
-        if (_fields.FirstOrDefault(f => f.Field.HasFocus) is { } focused)
-        {
-            ShowDetail(focused);
-        }
-        _safety.Text = rig is not null && _selected < rig.Stations.Count
-            && session.BurstChecks.FirstOrDefault(b => b.RotorId == rig.Stations[_selected].Rotor.Id) is { } check
-            ? string.Join("\n", Wrap.Lines(RotorSafetyText.Line(check, "rated"), Math.Max(20, _safety.Frame.Width > 0 ? _safety.Frame.Width : 60)))
-            : "";
     }
 
     /// <inheritdoc/>
