@@ -19,7 +19,7 @@ namespace RotorDrive.Core.Craft;
 /// equilibrium is checked for stability at that duty. The speed solve is shared with the catalog ranking, which warm-starts
 /// it from its previous candidate: Newton's fixed point does not depend on the start, so the ranking's speeds are the
 /// hover's. Thread-safe; allocates only small arrays.</remarks>
-public static class HoverTrim
+public static partial class HoverTrim
 {
     private const double DiffStep = 1e-6;
     private const double CurvatureStep = 1e-4;
@@ -260,140 +260,30 @@ public static class HoverTrim
     {
         int n = st.Count;
         int size = n + 4;
-        double arm = 0;
-        foreach (var s in st)
+        var sys = new TrimConstraints(st, gapM, weight, cgX, cgY, yawTarget, ws);
+        if (!sys.Start(speeds))
         {
-            arm = Math.Max(arm, Math.Max(Math.Abs(s.XM - cgX), Math.Abs(s.YM - cgY)));
+            iterations = 0;
+            return false;
         }
-        arm = Math.Max(arm, 1e-3);
-        var lift = ws.Lift;
-        var torque = ws.Torque;
-        double torqueScale = 0;
-        for (int i = 0; i < n; i++)
-        {
-            if (!(speeds[i] > 0))
-            {
-                iterations = 0;
-                return false;
-            }
-            var p = st[i].LoadAt(speeds[i], gapM);
-            lift[i] = p.LiftN;
-            torque[i] = p.TotalTorqueNm;
-            torqueScale += Math.Abs(p.TotalTorqueNm);
-        }
-        torqueScale = Math.Max(torqueScale, Math.Max(Math.Abs(yawTarget), 1e-6 * weight * arm));
-        var scale = ws.Scale;
-        scale[0] = 1 / weight;
-        scale[1] = 1 / (weight * arm);
-        scale[2] = 1 / (weight * arm);
-        scale[3] = 1 / torqueScale;
-        var dLift = ws.DLift;
-        var dTorque = ws.DTorque;
-        var d2Lift = ws.D2Lift;
-        var d2Torque = ws.D2Torque;
         var multipliers = ws.Multipliers;
         for (int k = 0; k < 4; k++)
         {
-            multipliers[k] = warmMultipliers ? ws.Mu[k] / (scale[k] * w0 * w0) : 0.0;
+            multipliers[k] = warmMultipliers ? ws.Mu[k] / (ws.Scale[k] * w0 * w0) : 0.0;
         }
-        var c = ws.Residuals;
         var trial = ws.Trial;
-        var kkt = ws.Kkt.AsSpan(0, size * size);
         var rhs = ws.Rhs.AsSpan(0, size);
 
-        double Scaled()
-        {
-            double f = -weight, pitch = 0, roll = 0, yaw = -yawTarget;
-            for (int i = 0; i < n; i++)
-            {
-                f += lift[i];
-                pitch += lift[i] * (st[i].XM - cgX);
-                roll += lift[i] * (st[i].YM - cgY);
-                yaw += st[i].Spin.Sign() * torque[i];
-            }
-            c[0] = f * scale[0];
-            c[1] = pitch * scale[1];
-            c[2] = roll * scale[2];
-            c[3] = yaw * scale[3];
-            return Math.Max(Math.Max(Math.Abs(c[0]), Math.Abs(c[1])), Math.Max(Math.Abs(c[2]), Math.Abs(c[3])));
-        }
-
-        double Residuals(double[] w)
-        {
-            double f = -weight, pitch = 0, roll = 0, yaw = -yawTarget;
-            for (int i = 0; i < n; i++)
-            {
-                if (!(w[i] > 0))
-                {
-                    return double.PositiveInfinity;
-                }
-                var p = st[i].LoadAt(w[i], gapM);
-                lift[i] = p.LiftN;
-                torque[i] = p.TotalTorqueNm;
-                f += p.LiftN;
-                pitch += p.LiftN * (st[i].XM - cgX);
-                roll += p.LiftN * (st[i].YM - cgY);
-                yaw += st[i].Spin.Sign() * p.TotalTorqueNm;
-            }
-            c[0] = f * scale[0];
-            c[1] = pitch * scale[1];
-            c[2] = roll * scale[2];
-            c[3] = yaw * scale[3];
-            return Math.Max(Math.Max(Math.Abs(c[0]), Math.Abs(c[1])), Math.Max(Math.Abs(c[2]), Math.Abs(c[3])));
-        }
-
         // The loads at the start are in the workspace already.
-        double merit = Scaled();
+        double merit = sys.Scaled();
         for (iterations = 1; iterations <= options.MaxIterations; iterations++)
         {
             if (!double.IsFinite(merit))
             {
                 return false;
             }
-            for (int i = 0; i < n; i++)
-            {
-                // Central differences: slopes for the Jacobian, curvatures for the Lagrangian's Hessian.
-                double h = CurvatureStep * speeds[i];
-                var up = st[i].LoadAt(speeds[i] + h, gapM);
-                var down = st[i].LoadAt(speeds[i] - h, gapM);
-                dLift[i] = (up.LiftN - down.LiftN) / (2 * h) * w0;
-                dTorque[i] = (up.TotalTorqueNm - down.TotalTorqueNm) / (2 * h) * w0;
-                d2Lift[i] = (up.LiftN - 2 * lift[i] + down.LiftN) / (h * h) * w0 * w0;
-                d2Torque[i] = (up.TotalTorqueNm - 2 * torque[i] + down.TotalTorqueNm) / (h * h) * w0 * w0;
-            }
-            // Unknowns u = w / w0: [P + H J^T; J 0] [du; lambda] = [-P u; -c], P = I - 11^T/n (centring).
-            kkt.Clear();
-            double mean = 0;
-            for (int i = 0; i < n; i++)
-            {
-                mean += speeds[i] / w0;
-            }
-            mean /= n;
-            for (int i = 0; i < n; i++)
-            {
-                double dx = st[i].XM - cgX, dy = st[i].YM - cgY;
-                double sign = st[i].Spin.Sign();
-                var row = kkt.Slice(i * size, size);
-                for (int j = 0; j < n; j++)
-                {
-                    row[j] = -1.0 / n;
-                }
-                // Hessian of the Lagrangian: the centring projector plus the multipliers times each constraint's curvature
-                // (diagonal: every constraint is a sum of one-speed functions). Without the curvature SQP is only linear.
-                row[i] += 1.0 + multipliers[0] * d2Lift[i] * scale[0] + multipliers[1] * d2Lift[i] * dx * scale[1]
-                    + multipliers[2] * d2Lift[i] * dy * scale[2] + multipliers[3] * sign * d2Torque[i] * scale[3];
-                double j0 = dLift[i] * scale[0], j1 = dLift[i] * dx * scale[1], j2 = dLift[i] * dy * scale[2];
-                double j3 = sign * dTorque[i] * scale[3];
-                row[n] = kkt[n * size + i] = j0;
-                row[n + 1] = kkt[(n + 1) * size + i] = j1;
-                row[n + 2] = kkt[(n + 2) * size + i] = j2;
-                row[n + 3] = kkt[(n + 3) * size + i] = j3;
-                rhs[i] = -(speeds[i] / w0 - mean);
-            }
-            for (int k = 0; k < 4; k++)
-            {
-                rhs[n + k] = -c[k];
-            }
+            var kkt = ws.Kkt.AsSpan(0, size * size);
+            sys.Assemble(speeds, w0, multipliers, kkt, rhs);
             kkt.CopyTo(ws.LastKkt);
             if (!DenseSolve.Solve(kkt, rhs, size))
             {
@@ -422,21 +312,7 @@ public static class HoverTrim
                 Remember(ws, st.Count, speeds, w0, weight, cgX, cgY, yawTarget);
                 return true;
             }
-            double alpha = 1;
-            double newMerit = double.PositiveInfinity;
-            for (int tries = 0; tries < 30; tries++)
-            {
-                for (int i = 0; i < n; i++)
-                {
-                    trial[i] = speeds[i] + alpha * rhs[i] * w0;
-                }
-                newMerit = Residuals(trial);
-                if (newMerit <= Math.Max((1 - 1e-4 * alpha) * merit, 0.5 * options.Tolerance))
-                {
-                    break;
-                }
-                alpha *= 0.5;
-            }
+            double newMerit = LineSearch(sys, n, speeds, rhs, w0, merit, options.Tolerance, trial, out double alpha);
             if (!double.IsFinite(newMerit))
             {
                 return false;
@@ -456,6 +332,29 @@ public static class HoverTrim
             return true;
         }
         return false;
+    }
+
+    // Backtracking along the step (halving up to 30 times) until the largest scaled residual falls enough; trial holds
+    // the last speeds tried and the workspace their loads. Returns the new merit and the step fraction taken.
+    private static double LineSearch(in TrimConstraints sys, int n, double[] speeds, ReadOnlySpan<double> step, double w0, double merit,
+        double tolerance, double[] trial, out double alpha)
+    {
+        alpha = 1;
+        double newMerit = double.PositiveInfinity;
+        for (int tries = 0; tries < 30; tries++)
+        {
+            for (int i = 0; i < n; i++)
+            {
+                trial[i] = speeds[i] + alpha * step[i] * w0;
+            }
+            newMerit = sys.Residuals(trial);
+            if (newMerit <= Math.Max((1 - 1e-4 * alpha) * merit, 0.5 * tolerance))
+            {
+                break;
+            }
+            alpha *= 0.5;
+        }
+        return newMerit;
     }
 
     // Keeps what the next warm start's predictor needs: the trim, its parameters, scaling and multipliers (LastKkt holds
