@@ -121,6 +121,10 @@ public sealed partial class RankStudy
             {
                 o.Reject(RankRejectionKind.RotorSpeed);
             }
+            if (RingOverAllowable(i, o.Speeds[i]))
+            {
+                o.Reject(RankRejectionKind.RetainerStress);
+            }
             if (o.Speeds[i] > fastest)
             {
                 fastest = o.Speeds[i];

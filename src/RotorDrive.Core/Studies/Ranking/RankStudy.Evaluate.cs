@@ -72,6 +72,24 @@ public sealed partial class RankStudy
             endurance.RuntimeS, endurance.FirstLimit, endurance.FirstLimitText, endurance.PeakWindingTempC, endurance.PeakPlateTempC);
     }
 
+    // The station whose ring is furthest over its allowable at the trimmed speeds, in the hover review's words.
+    private string RetainerMessage(RankOutcome o)
+    {
+        int worst = 0;
+        for (int i = 1; i < _model.Stations.Count; i++)
+        {
+            if (o.Speeds[i] / _ringSpeed[i] > o.Speeds[worst] / _ringSpeed[worst])
+            {
+                worst = i;
+            }
+        }
+        var r = RotorSafety.Assess(_model.Stations[worst].Rotor, o.Speeds[worst], _model.Options.Safety);
+        return string.Format(CultureInfo.InvariantCulture,
+            "station {0}: the retaining ring of rotor {1} carries {2:0.0} MPa at the hover speed {3:0} rpm, above its allowable {4:0.0} MPa (reached at {5:0} rpm)",
+            worst + 1, r.RotorId, r.HoopStressPa!.Value / 1e6, Units.RadPerSToRpm(o.Speeds[worst]), r.AllowablePa!.Value / 1e6,
+            Units.RadPerSToRpm(_ringSpeed[worst]));
+    }
+
     // Turns an outcome into the public record, composing a sentence per reason.
     private RankEvaluation ToEvaluation(RankCandidate c, RankOutcome o)
     {
@@ -110,6 +128,10 @@ public sealed partial class RankStudy
                 ? string.Format(ci, "to lift {0:0.0} kg at the design gap station {1} must spin at {2:0} rpm, above its rotor's rated {3:0} rpm",
                     o.MassKg, worst + 1, Units.RadPerSToRpm(o.Speeds[worst]), Units.RadPerSToRpm(_maxSpeed[worst]))
                 : string.Format(ci, "the rotors cannot lift {0:0.0} kg at the design gap within {1:0.#} x their rated speed (no trim)", o.MassKg, _hoverOptions.SpeedSearchFactor)));
+        }
+        if (o.Has(RankRejectionKind.RetainerStress))
+        {
+            reasons.Add(new RankRejection(RankRejectionKind.RetainerStress, RetainerMessage(o)));
         }
         Add(RankRejectionKind.ControllerErpm, string.Format(ci,
             "controller {0} commutates at most {1:0} erpm, i.e. {2:0} rpm with the {3}-pole motor {4}, below the hover speed {5:0} rpm",

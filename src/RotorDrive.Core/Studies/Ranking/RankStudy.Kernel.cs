@@ -78,6 +78,10 @@ public sealed partial class RankStudy
             {
                 o.Reject(RankRejectionKind.RotorSpeed);
             }
+            if (speed > _ringSpeed[i])
+            {
+                o.Reject(RankRejectionKind.RetainerStress);
+            }
             if (speed > fastest)
             {
                 fastest = speed;
