@@ -93,6 +93,20 @@ public sealed partial class RankStudy
     // Turns an outcome into the public record, composing a sentence per reason.
     private RankEvaluation ToEvaluation(RankCandidate c, RankOutcome o)
     {
+        var controller = _catalog.Controllers[c.ControllerIndex];
+        var cautions = new List<RankRejection>();
+        if (o.CautionNotReversible)
+        {
+            cautions.Add(new RankRejection(RankRejectionKind.ControllerNotReversible, string.Format(CultureInfo.InvariantCulture,
+                "controller {0} is not reversible: set each rotor's direction by the motor wiring (swap two phases); it cannot reverse-brake a spinning rotor when landing",
+                controller.Id)));
+        }
+        return new RankEvaluation(c, _catalog.Motors[c.MotorIndex].Id, controller.Id, _catalog.Packs[c.PackIndex].Id, FiguresOf(o), ReasonsFor(c, o), cautions);
+    }
+
+    // One sentence per rejection the outcome holds, in the kinds' order.
+    private List<RankRejection> ReasonsFor(RankCandidate c, RankOutcome o)
+    {
         var ci = CultureInfo.InvariantCulture;
         var motor = _catalog.Motors[c.MotorIndex];
         var controller = _catalog.Controllers[c.ControllerIndex];
@@ -164,13 +178,12 @@ public sealed partial class RankStudy
                 _rig.LandedGapM * 1000, rotor.Id, _peakLoadTorqueNm[i], _peaks[i].SpeedRpm, motor.Id, o.PeakMotorTorqueNm,
                 controller.Id, controller.BurstCurrentA, _rig.Limits.MaxDuty, needA)));
         }
-        var cautions = new List<RankRejection>();
-        if (o.CautionNotReversible)
-        {
-            cautions.Add(new RankRejection(RankRejectionKind.ControllerNotReversible, string.Format(ci,
-                "controller {0} is not reversible: set each rotor's direction by the motor wiring (swap two phases); it cannot reverse-brake a spinning rotor when landing",
-                controller.Id)));
-        }
+        return reasons;
+    }
+
+    // The figures of a trimmed outcome, null when no trim was found.
+    private static RankFigures? FiguresOf(RankOutcome o)
+    {
         RankFigures? figures = null;
         if (o.Trimmed)
         {
@@ -192,6 +205,6 @@ public sealed partial class RankStudy
                 o.HoverReached ? o.CurrentMargin : null,
                 o.PeakStation >= 0 ? o.PeakTorqueRatio - 1 : null);
         }
-        return new RankEvaluation(c, motor.Id, controller.Id, pack.Id, figures, reasons, cautions);
+        return figures;
     }
 }
