@@ -33,7 +33,6 @@ public partial class MethodLengthTests
         "RotorDrive.Core/Studies/Calibration/CalibrationStudy.cs: Run",
         "RotorDrive.Core/Studies/Calibration/CalibrationStudy.Report.cs: Assemble",
         "RotorDrive.Core/Studies/Calibration/CalibrationStudy.Report.cs: Judge",
-        "RotorDrive.Core/Studies/Ranking/RankStudy.Run.cs: Run",
         "RotorDrive.Core/Thermal/PlateHeatSolver.cs: PlateHeatSolver",
         "RotorDrive.Files/Bench/CalibrationFile.cs: Read",
         "RotorDrive.Files/Catalogs/CatalogFormat.cs: Read",
