@@ -12,6 +12,10 @@ public enum RankRejectionKind
     /// <summary>No trim at the design gap within the rotors' rated speed: the rotors cannot lift this mass.</summary>
     RotorSpeed,
 
+    /// <summary>At a trimmed hover speed a rotor's retaining ring is over its allowable hoop stress (the check the hover
+    /// review fails with <c>retainer_stress</c>, <see cref="RotorDrive.Core.Safety.RotorSafety.Assess"/>).</summary>
+    RetainerStress,
+
     /// <summary>The controller cannot commutate this motor at the hover speed (max eRPM / pole pairs below it).</summary>
     ControllerErpm,
 

@@ -72,8 +72,40 @@ public sealed partial class RankStudy
             endurance.RuntimeS, endurance.FirstLimit, endurance.FirstLimitText, endurance.PeakWindingTempC, endurance.PeakPlateTempC);
     }
 
+    // The station whose ring is furthest over its allowable at the trimmed speeds, in the hover review's words.
+    private string RetainerMessage(RankOutcome o)
+    {
+        int worst = 0;
+        for (int i = 1; i < _model.Stations.Count; i++)
+        {
+            if (o.Speeds[i] / _ringSpeed[i] > o.Speeds[worst] / _ringSpeed[worst])
+            {
+                worst = i;
+            }
+        }
+        var r = RotorSafety.Assess(_model.Stations[worst].Rotor, o.Speeds[worst], _model.Options.Safety);
+        return string.Format(CultureInfo.InvariantCulture,
+            "station {0}: the retaining ring of rotor {1} carries {2:0.0} MPa at the hover speed {3:0} rpm, above its allowable {4:0.0} MPa (reached at {5:0} rpm)",
+            worst + 1, r.RotorId, r.HoopStressPa!.Value / 1e6, Units.RadPerSToRpm(o.Speeds[worst]), r.AllowablePa!.Value / 1e6,
+            Units.RadPerSToRpm(_ringSpeed[worst]));
+    }
+
     // Turns an outcome into the public record, composing a sentence per reason.
     private RankEvaluation ToEvaluation(RankCandidate c, RankOutcome o)
+    {
+        var controller = _catalog.Controllers[c.ControllerIndex];
+        var cautions = new List<RankRejection>();
+        if (o.CautionNotReversible)
+        {
+            cautions.Add(new RankRejection(RankRejectionKind.ControllerNotReversible, string.Format(CultureInfo.InvariantCulture,
+                "controller {0} is not reversible: set each rotor's direction by the motor wiring (swap two phases); it cannot reverse-brake a spinning rotor when landing",
+                controller.Id)));
+        }
+        return new RankEvaluation(c, _catalog.Motors[c.MotorIndex].Id, controller.Id, _catalog.Packs[c.PackIndex].Id, FiguresOf(o), ReasonsFor(c, o), cautions);
+    }
+
+    // One sentence per rejection the outcome holds, in the kinds' order.
+    private List<RankRejection> ReasonsFor(RankCandidate c, RankOutcome o)
     {
         var ci = CultureInfo.InvariantCulture;
         var motor = _catalog.Motors[c.MotorIndex];
@@ -111,6 +143,10 @@ public sealed partial class RankStudy
                     o.MassKg, worst + 1, Units.RadPerSToRpm(o.Speeds[worst]), Units.RadPerSToRpm(_maxSpeed[worst]))
                 : string.Format(ci, "the rotors cannot lift {0:0.0} kg at the design gap within {1:0.#} x their rated speed (no trim)", o.MassKg, _hoverOptions.SpeedSearchFactor)));
         }
+        if (o.Has(RankRejectionKind.RetainerStress))
+        {
+            reasons.Add(new RankRejection(RankRejectionKind.RetainerStress, RetainerMessage(o)));
+        }
         Add(RankRejectionKind.ControllerErpm, string.Format(ci,
             "controller {0} commutates at most {1:0} erpm, i.e. {2:0} rpm with the {3}-pole motor {4}, below the hover speed {5:0} rpm",
             controller.Id, controller.MaxErpm, controller.MaxErpm / Math.Max(1, motor.PolePairs), motor.Poles, motor.Id,
@@ -142,13 +178,12 @@ public sealed partial class RankStudy
                 _rig.LandedGapM * 1000, rotor.Id, _peakLoadTorqueNm[i], _peaks[i].SpeedRpm, motor.Id, o.PeakMotorTorqueNm,
                 controller.Id, controller.BurstCurrentA, _rig.Limits.MaxDuty, needA)));
         }
-        var cautions = new List<RankRejection>();
-        if (o.CautionNotReversible)
-        {
-            cautions.Add(new RankRejection(RankRejectionKind.ControllerNotReversible, string.Format(ci,
-                "controller {0} is not reversible: set each rotor's direction by the motor wiring (swap two phases); it cannot reverse-brake a spinning rotor when landing",
-                controller.Id)));
-        }
+        return reasons;
+    }
+
+    // The figures of a trimmed outcome, null when no trim was found.
+    private static RankFigures? FiguresOf(RankOutcome o)
+    {
         RankFigures? figures = null;
         if (o.Trimmed)
         {
@@ -170,6 +205,6 @@ public sealed partial class RankStudy
                 o.HoverReached ? o.CurrentMargin : null,
                 o.PeakStation >= 0 ? o.PeakTorqueRatio - 1 : null);
         }
-        return new RankEvaluation(c, motor.Id, controller.Id, pack.Id, figures, reasons, cautions);
+        return figures;
     }
 }

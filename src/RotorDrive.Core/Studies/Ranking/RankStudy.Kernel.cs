@@ -38,9 +38,9 @@ public sealed partial class RankStudy
             return;
         }
 
-        double rb = pack.ResistanceOhm / c.PackCount;
+        double rb = RankDriveEquations.BankResistanceOhm(pack, c.PackCount);
         double[] ocv = _ocvGrid[c.PackIndex];
-        double vocFull = cells * ocv[0];
+        double vocFull = RankDriveEquations.OpenCircuitV(cells, ocv[0]);
         SpinupCheckFast(c, motor, controller, vocFull, rb, w);
 
         if (fresh || !w.TrimCached || w.LastDrivetrainKg != drivetrainKg || w.LastPacksKg != packsKg)
@@ -72,27 +72,28 @@ public sealed partial class RankStudy
             // The station's flux factor does not depend on the motor (drive options and magnet temperature only).
             double flux = _model.Stations[i].FluxFactor;
             double r = motor.ResistanceAt(_model.Stations[i].Conditions.WindingTempC);
-            double rt = r + controller.OnResistanceOhm;
             double speed = o.Speeds[i];
             if (speed > _maxSpeed[i])
             {
                 o.Reject(RankRejectionKind.RotorSpeed);
+            }
+            if (speed > _ringSpeed[i])
+            {
+                o.Reject(RankRejectionKind.RetainerStress);
             }
             if (speed > fastest)
             {
                 fastest = speed;
                 o.FastestStation = i;
             }
-            // Drela 2007: I = Kv Q / phi + I0, E = phi omega / Kv; the controller's duty times the bus voltage is I R_loop + E.
-            double current = o.Torques[i] * kv / flux + motor.NoLoadCurrentA;
-            double emf = flux * speed / kv;
-            double num = current * rt + emf;
+            RankDriveEquations.Station(o.Torques[i], speed, kv, flux, motor.NoLoadCurrentA, r, controller.OnResistanceOhm,
+                out double current, out double num, out double motorPower);
             o.Currents[i] = current;
             o.Duties[i] = num;
             sumP += num * current;
             numMax = Math.Max(numMax, num);
             o.MaxCurrentA = Math.Max(o.MaxCurrentA, current);
-            o.MaxMotorPowerW = Math.Max(o.MaxMotorPowerW, (current * r + emf) * current);
+            o.MaxMotorPowerW = Math.Max(o.MaxMotorPowerW, motorPower);
         }
         if (motor.ElectricalRpm(fastest) > controller.MaxErpm)
         {
@@ -114,7 +115,7 @@ public sealed partial class RankStudy
         double idle = n * controller.IdleCurrentA;
         double cutoff = limits.CellCutoffV * cells;
         o.CutoffV = cutoff;
-        bool busOk = Bus(vocFull, rb, idle, sumP, out double v, out double ipack);
+        bool busOk = RankDriveEquations.Bus(vocFull, rb, idle, sumP, out double v, out double ipack);
         o.NeededDuty = busOk ? numMax / v : double.PositiveInfinity;
         if (busOk)
         {
@@ -146,13 +147,13 @@ public sealed partial class RankStudy
         string limit = "usable capacity";
         for (int k = 0; k < steps; k++)
         {
-            if (!RunState(cells * ocv[2 * k + 2], rb, idle, sumP, numMax, cutoff, limits.MaxDuty, out double iEnd, out string failure))
+            if (!RunState(RankDriveEquations.OpenCircuitV(cells, ocv[2 * k + 2]), rb, idle, sumP, numMax, cutoff, limits.MaxDuty, out double iEnd, out string failure))
             {
                 double good = SocAt(2 * k), bad = SocAt(2 * k + 2);
                 for (int b = 0; b < 60; b++)
                 {
                     double mid = 0.5 * (good + bad);
-                    if (RunState(cells * curve.OcvAt(mid), rb, idle, sumP, numMax, cutoff, limits.MaxDuty, out double iMid, out string why))
+                    if (RunState(RankDriveEquations.OpenCircuitV(cells, curve.OcvAt(mid)), rb, idle, sumP, numMax, cutoff, limits.MaxDuty, out double iMid, out string why))
                     {
                         good = mid;
                         peak = Math.Max(peak, iMid);
@@ -164,12 +165,12 @@ public sealed partial class RankStudy
                     }
                 }
                 double soc = 0.5 * (SocAt(2 * k) + good);
-                Bus(cells * curve.OcvAt(soc), rb, idle, sumP, out _, out double iPart);
+                RankDriveEquations.Bus(RankDriveEquations.OpenCircuitV(cells, curve.OcvAt(soc)), rb, idle, sumP, out _, out double iPart);
                 time += (SocAt(2 * k) - good) * capacityAh * 3600.0 / iPart;
                 limit = failure;
                 break;
             }
-            Bus(cells * ocv[2 * k + 1], rb, idle, sumP, out _, out double iMidStep);
+            RankDriveEquations.Bus(RankDriveEquations.OpenCircuitV(cells, ocv[2 * k + 1]), rb, idle, sumP, out _, out double iMidStep);
             time += stepAh * 3600.0 / iMidStep;
             peak = Math.Max(peak, iEnd);
         }
@@ -190,36 +191,11 @@ public sealed partial class RankStudy
         => HoverTrim.SolveSpeeds(_model.Stations, _model.DesignGapM, massKg * Units.StandardGravity, cgXM, cgYM, 0.0,
             w.TrimSpeeds, warm, _hoverOptions, w.TrimSpace, out _) == HoverTrim.SpeedSolve.Converged;
 
-    // The bus with every station drawing a fixed motor current (constant-power terms sum P = sum (I R_loop + E) I):
-    // V = Voc - R_bank (sum P / V + idle), the larger root; false when there is none or it is below Voc / 2 (past the
-    // pack's maximum-power point, where DriveBus reports a collapse).
-    private static bool Bus(double voc, double rb, double idle, double sumP, out double v, out double ipack)
-    {
-        if (rb == 0)
-        {
-            v = voc;
-        }
-        else
-        {
-            double a = voc - rb * idle;
-            double disc = a * a - 4 * rb * sumP;
-            if (!(disc >= 0))
-            {
-                v = 0;
-                ipack = 0;
-                return false;
-            }
-            v = 0.5 * (a + Math.Sqrt(disc));
-        }
-        ipack = sumP / v + idle;
-        return v >= 0.5 * voc && v > 0;
-    }
-
     // One state of charge of the run: false (with the limit in words) when the bus collapses, the loaded voltage is below
     // the cutoff, or the duty exceeds the limit.
     private static bool RunState(double voc, double rb, double idle, double sumP, double numMax, double cutoff, double maxDuty, out double ipack, out string failure)
     {
-        if (!Bus(voc, rb, idle, sumP, out double v, out ipack) || numMax / v > maxDuty)
+        if (!RankDriveEquations.Bus(voc, rb, idle, sumP, out double v, out ipack) || numMax / v > maxDuty)
         {
             failure = "duty headroom (the pack can no longer hold the hover speeds)";
             return false;

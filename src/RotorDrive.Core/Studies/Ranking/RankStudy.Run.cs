@@ -23,17 +23,30 @@ public sealed partial class RankStudy
     /// <returns>The ranking.</returns>
     public RankResult Run(Action<RankProgress>? progress = null, CancellationToken cancellationToken = default)
     {
+        var parallel = new ParallelOptions
+        {
+            MaxDegreeOfParallelism = _options.MaxDegreeOfParallelism,
+            CancellationToken = cancellationToken,
+        };
+        var accepted = Sweep(progress, parallel, out var rejectionCounts);
+        var simulated = new Dictionary<long, RankSimulation>();
+        var failed = new List<RankEvaluation>();
+        accepted = Shortlist(accepted, parallel, simulated, failed);
+        MarkPareto(accepted);
+        rejectionCounts[(int)RankRejectionKind.SpinupSimulation] = new RankRejectionCount(RankRejectionKind.SpinupSimulation, failed.Count);
+        return Assemble(accepted, simulated, failed, rejectionCounts);
+    }
+
+    // Every combination through the fast kernel, in parallel over motors: the accepted ones (in motor order) and the
+    // count of each rejection kind.
+    private Accepted[] Sweep(Action<RankProgress>? progress, ParallelOptions parallel, out RankRejectionCount[] rejectionCounts)
+    {
         int motors = _catalog.Motors.Count, controllers = _catalog.Controllers.Count, packs = _catalog.Packs.Count;
         int kinds = RankRejectionKinds.All.Count;
         long total = CombinationCount;
         var lists = new Accepted[motors][];
         var counts = new long[motors * kinds];
         long done = 0;
-        var parallel = new ParallelOptions
-        {
-            MaxDegreeOfParallelism = _options.MaxDegreeOfParallelism,
-            CancellationToken = cancellationToken,
-        };
         Parallel.For(
             0,
             motors,
@@ -86,7 +99,7 @@ public sealed partial class RankStudy
             list.CopyTo(accepted, at);
             at += list.Length;
         }
-        var rejectionCounts = new RankRejectionCount[kinds];
+        rejectionCounts = new RankRejectionCount[kinds];
         for (int r = 0; r < kinds; r++)
         {
             long sum = 0;
@@ -96,12 +109,15 @@ public sealed partial class RankStudy
             }
             rejectionCounts[r] = new RankRejectionCount(RankRejectionKinds.All[r], sum);
         }
+        return accepted;
+    }
 
-        // The shortlist: the best Top by the quick checks get the full checks (Simulate: the spin-up study and hover review
-        // of the spinup and hover commands, and the endurance run). One that fails them is rejected with those reasons and the ranking is redone without it (scores and Pareto set over
-        // the remaining), until the best Top have all been simulated and pass: the next one enters deterministically.
-        var simulated = new Dictionary<long, RankSimulation>();
-        var failed = new List<RankEvaluation>();
+    // The shortlist: the best Top by the quick checks get the full checks (Simulate: the spin-up study and hover review
+    // of the spinup and hover commands, and the endurance run). One that fails them is rejected with those reasons and
+    // the ranking is redone without it (scores and Pareto set over the remaining), until the best Top have all been
+    // simulated and pass: the next one enters deterministically. Returns the remaining accepted ones, sorted.
+    private Accepted[] Shortlist(Accepted[] accepted, ParallelOptions parallel, Dictionary<long, RankSimulation> simulated, List<RankEvaluation> failed)
+    {
         while (true)
         {
             Score(accepted);
@@ -141,9 +157,12 @@ public sealed partial class RankStudy
                 accepted = accepted.Where(a => !dropped.Contains(a.Index)).ToArray();
             }
         }
-        MarkPareto(accepted);
-        rejectionCounts[(int)RankRejectionKind.SpinupSimulation] = new RankRejectionCount(RankRejectionKind.SpinupSimulation, failed.Count);
+        return accepted;
+    }
 
+    // The result: the order, scores, Pareto ranks, the simulated top entries and the rig's own drivetrain's place.
+    private RankResult Assemble(Accepted[] accepted, Dictionary<long, RankSimulation> simulated, List<RankEvaluation> failed, RankRejectionCount[] rejectionCounts)
+    {
         var ordered = new RankCandidate[accepted.Length];
         var scores = new double[accepted.Length];
         var paretoRanks = new List<int>();
@@ -184,7 +203,7 @@ public sealed partial class RankStudy
                 }
             }
         }
-        return new RankResult(_options.Objective, _weights, total, ordered, scores, paretoRanks, rejectionCounts, top, assigned, assignedEvaluation, assignedRank)
+        return new RankResult(_options.Objective, _weights, CombinationCount, ordered, scores, paretoRanks, rejectionCounts, top, assigned, assignedEvaluation, assignedRank)
         {
             SimulationRejections = failed,
         };

@@ -1,6 +1,8 @@
 using RotorDrive.Core.Craft;
 using RotorDrive.Core.Drive;
 using RotorDrive.Core.Loads;
+using RotorDrive.Core.Magnetics;
+using RotorDrive.Core.Safety;
 
 namespace RotorDrive.Core.Studies.Ranking;
 
@@ -17,7 +19,8 @@ namespace RotorDrive.Core.Studies.Ranking;
 /// 2007): current I = Kv Q / phi + I0, back-EMF E = phi omega / Kv, and the averaged controller on the shared pack bus
 /// (V = Voc - R_bank I_pack, duty d = (I R_loop + E) / V), the same equations <see cref="DriveBus"/> solves for
 /// <see cref="HoverTrim.Solve(RigModel, HoverOptions)"/>. (3) Limits at hover: rotor rated speed, controller eRPM at the
-/// hover speed, duty against the team's limit on a full pack, motor current and power, controller continuous current,
+/// hover speed, the retaining rings' hoop stress at the hover speeds (the hover review's rule, <see cref="RotorSafety"/>),
+/// duty against the team's limit on a full pack, motor current and power, controller continuous current,
 /// pack continuous current over the run. (4) Runtime: the pack is drawn down in equal charge steps over the usable
 /// capacity (midpoint rule in charge: dt = dQ / I_pack), re-solving the bus at each state of charge, until the usable
 /// capacity, the cutoff voltage or the duty limit ends it; temperatures stay at the rig's start values (no thermal drift:
@@ -46,6 +49,7 @@ public sealed partial class RankStudy
     private readonly RigModel _model;
     private readonly HoverOptions _hoverOptions;
     private readonly double[] _maxSpeed;
+    private readonly double[] _ringSpeed;
     private readonly (int Controller, int Pack, int Count)[] _massOrder;
     private readonly int _maxPackCount;
     private readonly CellCurve[] _packCurves;
@@ -67,6 +71,7 @@ public sealed partial class RankStudy
         _maxPackCount = options.MaxPackCount ?? rig.Packs?.Count ?? 1;
         _hoverOptions = HoverOptions.Default;
         _maxSpeed = rig.Stations.Select(s => s.Rotor.MaxSpeedRadPerS).ToArray();
+        _ringSpeed = model.Stations.Select(s => RingSpeedRadPerS(s.Rotor, model.Options.Safety)).ToArray();
         _packCurves = PackCurves(catalog);
         _ocvGrid = new double[catalog.Packs.Count][];
         for (int p = 0; p < catalog.Packs.Count; p++)
@@ -280,6 +285,18 @@ public sealed partial class RankStudy
         }
         return grid;
     }
+
+    // The speed at which a rotor's retaining ring reaches its allowable hoop stress, by the hover review's own check
+    // (RotorSafety.Assess, stress = k omega^2, so omega_allow = omega sqrt(allowable / stress) from any speed): a trimmed
+    // speed above it is the review's retainer_stress failure. Infinite when the rotor row lacks the ring's data (the
+    // review then has nothing to fail either).
+    private static double RingSpeedRadPerS(RotorDesign rotor, RotorSafetyOptions safety)
+        => RotorSafety.Assess(rotor, rotor.MaxSpeedRadPerS, safety).SpeedAtAllowableRadPerS ?? double.PositiveInfinity;
+
+    // The hover review's retainer rule at one station and speed (RotorSafety.Assess, margin below zero), for the direct
+    // evaluation (the review assesses only the rotors that turn); the fast kernel compares the speed with RingSpeedRadPerS instead.
+    private bool RingOverAllowable(int station, double speedRadPerS)
+        => speedRadPerS > 0 && RotorSafety.Assess(_model.Stations[station].Rotor, speedRadPerS, _model.Options.Safety).MarginFraction is < 0;
 
     private (DragPeak Peak, double LoadTorqueNm) FindPeak(int station)
     {

@@ -159,6 +159,46 @@ public class RankStudyTests
         }
     }
 
+    // Issue 13: ranking judges the retaining ring at the hover speed by the hover review's own rule, so a drivetrain the
+    // `hover` command fails on its ring is rejected by rank with the same key. The ring's hoop stress grows as speed
+    // squared (thin rotating ring plus magnet load, S. P. Timoshenko and J. N. Goodier, "Theory of Elasticity", 3rd ed.,
+    // 1970; W. C. Young and R. G. Budynas, "Roark's Formulas for Stress and Strain", 7th ed., 2002): an allowable of
+    // 0.81 x the stress at the trimmed speed is reached at 0.9 x that speed (fails), 1.21 x at 1.1 x (passes).
+    [Theory]
+    [InlineData(0.81, false)]
+    [InlineData(1.21, true)]
+    public void RetainingRingOverItsAllowableAtHover_IsRejectedByRank_AndFailedByHover(double allowableOverHoverStress, bool passes)
+    {
+        var catalog = Catalog([Motor("A", 100, 40)], [Controller("long", 30, 80)], [Pack("flat-12s", "flat")]);
+        var candidate = new RankCandidate(0, 0, 0, 1);
+        var open = RankStudy.Create(SquareRig(20, 0), catalog, new RankOptions(MaxPackCount: 1), FourOf(HandLoad));
+        var reference = open.Evaluate(candidate);
+        Assert.True(reference.Accepted, "without ring data the drivetrain should be accepted");
+        double hoverSpeed = reference.Figures!.StationSpeedsRadPerS.Max();
+        var unrated = Rotor with { RetainerThicknessM = 0.003, RetainerAllowablePa = 1e12 };
+        double hoverStress = RotorDrive.Core.Safety.RotorSafety.Assess(unrated, hoverSpeed).HoopStressPa!.Value;
+        var ringed = unrated with { RetainerAllowablePa = allowableOverHoverStress * hoverStress };
+        var square = SquareRig(20, 0);
+        var rig = square with { Stations = square.Stations.Select(s => s with { Rotor = ringed }).ToArray() };
+
+        var study = RankStudy.Create(rig, catalog, new RankOptions(MaxPackCount: 1), FourOf(HandLoad));
+        var fast = study.Evaluate(candidate);
+        var direct = study.EvaluateDirect(candidate);
+        var hover = HoverReview.Trimmed(study.ModelFor(candidate), study.Model.DesignGapM);
+
+        Assert.Equal(passes, fast.Accepted);
+        Assert.Equal(direct.Rejections.Select(r => r.Kind), fast.Rejections.Select(r => r.Kind));
+        Assert.Equal(passes, hover.Pass);
+        Assert.Equal(passes, !hover.Findings.Any(f => f.Limit == HoverReview.RetainerStressKey));
+        if (!passes)
+        {
+            var rejection = Assert.Single(fast.Rejections);
+            Assert.Equal(RankRejectionKind.RetainerStress, rejection.Kind);
+            Assert.Equal(HoverReview.RetainerStressKey, rejection.Kind.Key());
+            Assert.Contains("the retaining ring of rotor syn-rotor carries", rejection.Message);
+        }
+    }
+
     [Fact]
     public void CellsOutsideTheControllerRange_AreRejected_AndOneWayControllersOnlyCautioned()
     {
