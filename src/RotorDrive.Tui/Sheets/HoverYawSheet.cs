@@ -76,9 +76,17 @@ public sealed class HoverYawSheet : Sheet
         return false;
     }
 
+    /// <summary>What the sheet says for a bench rig (mount "bench").</summary>
+    internal const string BenchNote = "No hover for a bench rig (mount \"bench\": each rotor on a stand at a fixed gap). See Lift & drag and Running points for each station.";
+
     /// <summary>The figures the sheet shows, as Core computes them for the <c>hover</c> and <c>yaw</c> commands.</summary>
     internal static HoverYawFigures Compute(Rig rig, RigModelCache models, CancellationToken token, IProgress<double>? progress)
     {
+        if (rig.Mount == MountKind.Bench)
+        {
+            // A bench has no hover: say so rather than trim a craft that does not exist (the hover command refuses it too).
+            return new HoverYawFigures(null, [], BenchNote);
+        }
         var missing = RigModel.MissingParts(rig);
         if (missing.Count > 0)
         {
@@ -101,6 +109,11 @@ public sealed class HoverYawSheet : Sheet
         {
             _verdict.Text = problem ?? "";
             SheetText = "";
+        }
+        else if (figures.NotForMount is { } note)
+        {
+            _verdict.Text = note;
+            SheetText = CautionText.Compose(Cautions.All);
         }
         else if (figures.Missing.Count > 0)
         {
@@ -309,7 +322,7 @@ public sealed class HoverYawSheet : Sheet
 
     /// <summary>What the sheet computed: the model, the reviewed trim, the payload capacity and the yaw balance; or the
     /// parts missing before any of it can be computed.</summary>
-    internal sealed record HoverYawFigures(HoverStudyResult? Study, IReadOnlyList<string> Missing)
+    internal sealed record HoverYawFigures(HoverStudyResult? Study, IReadOnlyList<string> Missing, string? NotForMount = null)
     {
         /// <summary>The rig model analysed.</summary>
         public RigModel? Model => Study?.Model;

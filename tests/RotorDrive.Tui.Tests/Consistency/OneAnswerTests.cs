@@ -61,6 +61,22 @@ public sealed class OneAnswerTests : IDisposable
         Assert.Equal(payloadKg < 100, figures.Study!.Rails is not null);
     }
 
+    // A bench rig has no hover: the sheet says so and computes no trim (the hover command refuses it with exit 2).
+    [Fact]
+    public async Task ABenchRig_GetsNoTrimOnTheSheet()
+    {
+        string text = await File.ReadAllTextAsync(Repo.DemoRig);
+        foreach (string catalog in new[] { "motors", "controllers", "packs", "cell_curves", "rotors", "plates" })
+        {
+            text = text.Replace($"\"{catalog}.csv\"", JsonSerializer.Serialize(Path.Combine(Repo.CatalogsFolder, catalog + ".csv")), StringComparison.Ordinal);
+        }
+        string path = Path.Combine(_folder, "bench-rig.json");
+        await File.WriteAllTextAsync(path, text.Replace("\"stations\": [", "\"mount\": \"bench\", \"stations\": [", StringComparison.Ordinal));
+        var figures = HoverYawSheet.Compute(RigLoader.Load(path).Rig!, new RigModelCache(), CancellationToken.None, null);
+        Assert.Null(figures.Study);
+        Assert.Equal(HoverYawSheet.BenchNote, figures.NotForMount);
+    }
+
     // Random valid rigs: the demo's hexagon of counter-rotating pairs with random parts from the demo catalogs, payload,
     // centre of gravity, gap, plate, pack count and max duty. Many do not hover within every limit; the answer must
     // still be the same everywhere. The 2-D load model keeps the table builds fast.
