@@ -229,7 +229,7 @@ public static class Messages
     /// <param name="mount">The rig's mount ("bench").</param>
     public static string NotForMount(string command, string mount) => mount == "bench"
         ? $"'{command}' is not for a bench rig (mount \"bench\": each rotor on a stand at a fixed gap, no hover); use 'load' or 'operate' for each station"
-        : $"'{command}' is not for a guided rig (mount \"guided\": rails carry pitch, roll and yaw, which this analysis balances for a free craft); use 'load' or 'operate' for each station";
+        : $"'{command}' is not for a guided rig (mount \"guided\": rails carry pitch, roll and yaw, which this analysis balances for a free craft); use 'hover' for the common duty that carries the weight, or 'load' or 'operate' for each station";
 
     /// <summary>A station name that is empty or a number (which --station would read as a station number).</summary>
     public static string BadStationName(string name)

@@ -32,8 +32,11 @@ public sealed class MountTests : IDisposable
     [InlineData("bench", "endurance")]
     [InlineData("bench", "rank")]
     [InlineData("bench", "stress")]
-    [InlineData("guided", "hover")]
     [InlineData("guided", "yaw")]
+    [InlineData("guided", "spinup")]
+    [InlineData("guided", "endurance")]
+    [InlineData("guided", "rank")]
+    [InlineData("guided", "stress")]
     public async Task WholeCraftAnalyses_RefuseARigThatIsNotFree_WithExit2(string mount, string command)
     {
         var (code, output, error) = await CliRunner.RunAsync(command, RigWith(mount));
@@ -60,6 +63,43 @@ public sealed class MountTests : IDisposable
     {
         var (code, _, error) = await CliRunner.RunAsync(command, RigWith("bench"));
         Assert.True(code is ExitCodes.Ok or ExitCodes.LimitFindings, error);
+    }
+
+    // A guided sled hovers at one common duty at its design gap: every station's duty is the same and within max_duty,
+    // the lifts sum to the weight (statics, Newton's first law; 1e-6 relative after rounding-free JSON) and the rails'
+    // loads are reported.
+    [Fact]
+    public async Task Hover_OnAGuidedRig_GivesTheCommonDutyAtTheGap()
+    {
+        var (code, output, error) = await CliRunner.RunAsync("hover", RigWith("guided"), "--json");
+        Assert.True(code is ExitCodes.Ok or ExitCodes.LimitFindings, error);
+        var root = JsonDocument.Parse(output).RootElement;
+        Assert.Equal("guided", root.GetProperty("mode").GetString());
+        var stations = root.GetProperty("stations").EnumerateArray().ToList();
+        Assert.NotEmpty(stations);
+        double duty = stations[0].GetProperty("duty").GetDouble();
+        Assert.All(stations, s => Assert.Equal(duty, s.GetProperty("duty").GetDouble(), 1e-9));
+        Assert.True(duty <= 0.95, $"duty {duty} above the demo rig's max_duty 0.95");
+        double lift = stations.Sum(s => s.GetProperty("lift_n").GetDouble());
+        double weight = root.GetProperty("weight_n").GetDouble();
+        Assert.True(Math.Abs(lift - weight) <= 1e-6 * weight, $"lift {lift} N, weight {weight} N");
+        Assert.Equal(JsonValueKind.Object, root.GetProperty("rails").ValueKind);
+        Assert.Equal(code == ExitCodes.Ok, root.GetProperty("pass").GetBoolean());
+        Assert.Equal(root.GetProperty("limits").GetArrayLength() == 0, root.GetProperty("pass").GetBoolean());
+    }
+
+    // Too heavy for max_duty: the failure names the duty limit, and no duty (let alone one above max_duty) is printed.
+    [Fact]
+    public async Task Hover_OnAGuidedRigTooHeavyForMaxDuty_FailsNamingTheLimit()
+    {
+        string path = RigWith("guided");
+        File.WriteAllText(path, File.ReadAllText(path).Replace("\"payload_kg\": 25,", "\"payload_kg\": 900,", StringComparison.Ordinal));
+        var (code, output, _) = await CliRunner.RunAsync("hover", path);
+        Assert.Equal(ExitCodes.LimitFindings, code);
+        Assert.Contains("[duty_headroom]", output, StringComparison.Ordinal);
+        Assert.Contains("max_duty 0.950", output, StringComparison.Ordinal);
+        Assert.DoesNotContain("station  spin   duty", output, StringComparison.Ordinal);
+        Assert.Contains("Result: FAIL", output, StringComparison.Ordinal);
     }
 
     [Fact]

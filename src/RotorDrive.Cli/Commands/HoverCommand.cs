@@ -100,14 +100,22 @@ public static class HoverCommand
         var limits = review.Findings.Select(f => new LimitEntry(f.Limit, f.Station + 1, f.Message)).ToList();
         bool pass = review.Pass;
         return new HoverReport(
-            model.Rig.Name, h.Mode == HoverMode.Trimmed ? "trimmed" : "common_duty", JsonNames.Of(h.Status), pass,
+            model.Rig.Name, ModeKey(h.Mode), JsonNames.Of(h.Status), pass,
             h.GapM * 1000, h.MassKg, model.PayloadKg, h.WeightN, h.BusVoltageV, h.PackCurrentA, h.ElectricalPowerW, h.PlatePowerW,
             h.Balanced ? h.LiftSpecificPowerWPerN : double.NaN, h.HeaveStiffnessNPerM / 1000, h.Balanced ? h.HeaveFrequencyHz : double.NaN,
             new ResidualEntry(h.ForceResidualRatio, h.PitchResidualRatio, h.RollResidualRatio), h.YawTorqueNm,
             stations, h.PackMargins.Select(Margin).ToList(), limits, review.MaxPayloadKg, safetyEntry,
             safety.Cautions.Select(c => new CautionEntry(JsonNames.Of(c.Topic), JsonNames.Of(c.Level), c.Title, c.Text, c.Reason)).ToList(),
-            h.Iterations, study.FailedCriteria, study.LimitingConstraint);
+            h.Iterations, study.FailedCriteria, study.LimitingConstraint,
+            study.Rails is { } rails ? new RailEntry(rails.PitchMomentNm, rails.RollMomentNm, rails.YawTorqueNm) : null);
     }
+
+    private static string ModeKey(HoverMode mode) => mode switch
+    {
+        HoverMode.Trimmed => "trimmed",
+        HoverMode.CommonDuty => "common_duty",
+        _ => "guided",
+    };
 
     // The burst checks in Core's one wording (the workbench's Hover & yaw sheet prints the same lines): the rotor closest
     // to failing at hover, then each rotor design at its rated speed.
@@ -127,7 +135,12 @@ public static class HoverCommand
 
     private static void WriteText(HoverReport r, TextWriter o)
     {
-        string title = r.Mode == "trimmed" ? "Trimmed hover" : "Hover at one common duty";
+        string title = r.Mode switch
+        {
+            "trimmed" => "Trimmed hover",
+            "guided" => "Guided hover at one common duty (the rails carry pitch, roll and yaw)",
+            _ => "Hover at one common duty",
+        };
         o.WriteLine($"{title}: {r.Rig}");
         o.WriteLine($"  mass {Numbers.Format(r.MassKg, 1)} kg (payload {Numbers.Format(r.PayloadKg, 1)} kg), weight {Numbers.Format(r.WeightN, 1)} N, gap {Numbers.Format(r.GapMm, 2)} mm");
         if (r.Stations.Count == 0)
@@ -155,6 +168,10 @@ public static class HoverCommand
             o.WriteLine($"  pack {Numbers.Format(r.PackVoltageV, 2)} V, {Numbers.Format(r.PackCurrentA, 1)} A, {Numbers.Format(r.ElectricalPowerW, 0)} W; into the plate {Numbers.Format(r.PlatePowerW, 0)} W");
             o.WriteLine($"  lift-specific power {Numbers.Format(r.LiftSpecificPowerWPerN, 2)} W/N; heave stiffness {Numbers.Format(r.HeaveStiffnessNPerMm, 1)} N/mm, natural frequency {Numbers.Format(r.HeaveFrequencyHz, 2)} Hz (undamped)");
             o.WriteLine($"  residuals: force {r.Residuals.Force:0.0e+0}, pitch {r.Residuals.Pitch:0.0e+0}, roll {r.Residuals.Roll:0.0e+0} (relative); net yaw {Numbers.Format(r.YawTorqueNm, 3)} N m");
+            if (r.Rails is { } rails)
+            {
+                o.WriteLine($"  the rails carry: pitch moment {Numbers.Format(rails.PitchMomentNm, 3)} N m, roll moment {Numbers.Format(rails.RollMomentNm, 3)} N m, yaw torque {Numbers.Format(rails.YawTorqueNm, 3)} N m (reported, not judged)");
+            }
             foreach (var m in r.PackMargins)
             {
                 o.WriteLine($"  {m.Limit.Replace('_', ' ')}: {Numbers.Format(m.Value, 2)} of {Numbers.Format(m.Allowed, 2)} {m.Unit} (margin {Numbers.Format(m.Margin * 100, 0)} %)");
@@ -199,7 +216,9 @@ public static class HoverCommand
         double HeaveStiffnessNPerMm, double HeaveFrequencyHz, ResidualEntry Residuals, double YawTorqueNm,
         IReadOnlyList<StationEntry> Stations, IReadOnlyList<MarginEntry> PackMargins, IReadOnlyList<LimitEntry> Limits,
         double? MaxPayloadKg, SafetyEntry Safety, IReadOnlyList<CautionEntry> Cautions, int Iterations,
-        IReadOnlyList<string> FailedCriteria, string? LimitingConstraint);
+        IReadOnlyList<string> FailedCriteria, string? LimitingConstraint, RailEntry? Rails);
+
+    private sealed record RailEntry(double PitchMomentNm, double RollMomentNm, double YawTorqueNm);
 
     private sealed record ResidualEntry(double Force, double Pitch, double Roll);
 

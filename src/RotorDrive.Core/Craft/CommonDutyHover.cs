@@ -113,6 +113,75 @@ public static class CommonDutyHover
         return result;
     }
 
+    /// <summary>A guided sled at a fixed gap: the one common duty at which the rotors' total lift equals the weight
+    /// (bisection on the duty, <see cref="SpeedsAt"/>'s lift), and the hover state there with its margins and findings
+    /// (<see cref="HoverMode.Guided"/>; the pitch and roll residuals and the yaw torque are what the rails carry).</summary>
+    /// <remarks>The duty is searched in [0, top], top = the smaller of the rig's max_duty and every controller's maximum
+    /// duty, so no duty above max_duty is ever returned. Each rotor's top equilibrium speed rises with its duty (the
+    /// motor torque at a speed rises with the applied voltage), so the total lift is monotone in the duty on a stiff bus;
+    /// with pack sag the bisection still needs only the sign change between 0 and top. When even top does not lift the
+    /// weight the result holds no state and one "duty_headroom" finding names that limit.</remarks>
+    /// <param name="model">The rig model.</param>
+    /// <param name="gapM">Rig gap, m (&gt; 0).</param>
+    /// <param name="options">Numerical settings; defaults when null.</param>
+    public static HoverResult SolveAtGap(RigModel model, double gapM, HoverOptions? options = null)
+    {
+        Preconditions.NotNull(model, nameof(model));
+        Preconditions.Positive(gapM, nameof(gapM));
+        options ??= HoverOptions.Default;
+        int n = model.Stations.Count;
+        double weight = model.WeightN;
+        double top = model.Stations.Select(s => s.Drivetrain.MaxDuty).Append(model.Limits.MaxDuty).Min();
+        int evaluations = 0;
+        EqualDutyState At(double duty)
+        {
+            evaluations++;
+            return SpeedsAt(model, Enumerable.Repeat(duty, n).ToArray(), gapM, options);
+        }
+        var atTop = At(top);
+        if (atTop.TotalLiftN < weight)
+        {
+            string limit = top < model.Limits.MaxDuty ? "the controllers' maximum duty" : "the rig's max_duty";
+            return new HoverResult(HoverMode.Guided, HoverStatus.NoBalance, gapM, model.MassKg, weight, [], double.NaN, double.NaN,
+                double.NaN, double.NaN, double.NaN, double.NaN, double.NaN, double.NaN, [],
+                [new HoverFinding(DriveLimit.DutyHeadroom.Key(), null, System.FormattableString.Invariant(
+                    $"no hover at {gapM * 1000:0.00} mm: even at {limit} {top:0.000} on every station the rotors lift only {atTop.TotalLiftN:0.0} N, less than the weight ({weight:0.0} N)"))],
+                evaluations);
+        }
+        // Bisection: lift(lo) < weight <= lift(hi); the duty is found to 1e-12 (about 40 halvings).
+        double lo = 0, hi = top;
+        var state = atTop;
+        while (hi - lo > 1e-12)
+        {
+            double mid = 0.5 * (lo + hi);
+            var s = At(mid);
+            if (s.TotalLiftN < weight)
+            {
+                lo = mid;
+            }
+            else
+            {
+                hi = mid;
+                state = s;
+            }
+        }
+        var result = HoverTrim.Describe(model, HoverMode.Guided, gapM, state.SpeedsRadPerS.ToArray(), evaluations);
+        if (result.Balanced && Math.Abs(result.ForceResidualRatio) > LiftTolerance)
+        {
+            // A rotor's top equilibrium jumped between two duties 1e-12 apart: no duty carries exactly the weight.
+            result = result with
+            {
+                Status = HoverStatus.LimitExceeded,
+                Findings = [.. result.Findings, new HoverFinding("lift", null, System.FormattableString.Invariant(
+                    $"no common duty lifts exactly the weight at {gapM * 1000:0.00} mm: the lift jumps to {result.ForceResidualRatio * 100:+0.0;-0.0} % of it at duty {hi:0.000} (a rotor leaves a lower equilibrium)"))],
+            };
+        }
+        return result;
+    }
+
+    // Relative lift mismatch beyond which a guided hover's bisection has met a jump, not a root.
+    private const double LiftTolerance = 1e-6;
+
     private static HoverResult NoGap(RigModel model, double gapM, string message, int evaluations)
         => new(HoverMode.CommonDuty, HoverStatus.NoBalance, gapM, model.MassKg, model.WeightN, [], double.NaN, double.NaN,
             double.NaN, double.NaN, double.NaN, double.NaN, double.NaN, double.NaN, [], [new HoverFinding("lift", null, message)], evaluations);

@@ -9,4 +9,8 @@ public enum HoverMode
     /// <summary>One common duty for all stations; the gap follows from lift = weight (pitch, roll and yaw left
     /// unbalanced and reported).</summary>
     CommonDuty,
+
+    /// <summary>A guided sled: one common duty at a fixed gap, found from total lift = weight; the rails carry pitch, roll
+    /// and yaw (reported in <see cref="RailLoads"/>, not judged).</summary>
+    Guided,
 }

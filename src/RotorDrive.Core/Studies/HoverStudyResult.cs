@@ -9,13 +9,15 @@ namespace RotorDrive.Core.Studies;
 /// <param name="Review">The hover state, its rotor safety and cautions, every failing limit and the verdict.</param>
 /// <param name="PayloadCapacityKg">The largest payload that hovers within every limit at the gap, kg, or null when it
 /// was not asked for or even the empty craft does not.</param>
-/// <param name="Yaw">The yaw balance, or null when not asked for.</param>
+/// <param name="Yaw">The yaw balance, or null when not asked for (or the rig is guided).</param>
+/// <param name="Rails">For a guided rig's hover state, what its rails carry; null otherwise.</param>
 public sealed record HoverStudyResult(
     HoverStudyRequest Request,
     RigModel Model,
     HoverReview Review,
     double? PayloadCapacityKg,
-    YawResult? Yaw)
+    YawResult? Yaw,
+    RailLoads? Rails = null)
 {
     /// <summary>Whether the craft hovers within every limit (<see cref="HoverReview.Pass"/>).</summary>
     public bool HoverPasses => Review.Pass;

@@ -154,7 +154,8 @@ public static class RigSchema
     public static readonly RigKey Mount = Choice<RigDocument>("mount", ["free", "guided", "bench"], "free", "mount",
         "how the rig is held: \"free\" (a craft that trims force, pitch, roll and yaw itself, four or more stations), \"guided\" (a sled "
         + "on rails that carry pitch, roll and yaw) or \"bench\" (each rotor on a stand at a fixed gap); the whole-craft analyses "
-        + "(hover, yaw, spinup, endurance, rank, stress, report) are for a free craft and refuse the others (exit 2)",
+        + "are for a free craft; a guided sled gets hover at one common duty (the rails carry pitch, roll and yaw), the others "
+        + "refuse it and a bench rig (exit 2); see the README's mount table",
         d => d.Mount, (d, v) => d.Mount = v);
 
     /// <summary>"stations".</summary>

@@ -76,9 +76,17 @@ public sealed class HoverYawSheet : Sheet
         return false;
     }
 
+    /// <summary>What the sheet says for a bench rig (mount "bench").</summary>
+    internal const string BenchNote = "No hover for a bench rig (mount \"bench\": each rotor on a stand at a fixed gap). See Lift & drag and Running points for each station.";
+
     /// <summary>The figures the sheet shows, as Core computes them for the <c>hover</c> and <c>yaw</c> commands.</summary>
     internal static HoverYawFigures Compute(Rig rig, RigModelCache models, CancellationToken token, IProgress<double>? progress)
     {
+        if (rig.Mount == MountKind.Bench)
+        {
+            // A bench has no hover: say so rather than trim a craft that does not exist (the hover command refuses it too).
+            return new HoverYawFigures(null, [], BenchNote);
+        }
         var missing = RigModel.MissingParts(rig);
         if (missing.Count > 0)
         {
@@ -101,6 +109,11 @@ public sealed class HoverYawSheet : Sheet
         {
             _verdict.Text = problem ?? "";
             SheetText = "";
+        }
+        else if (figures.NotForMount is { } note)
+        {
+            _verdict.Text = note;
+            SheetText = CautionText.Compose(Cautions.All);
         }
         else if (figures.Missing.Count > 0)
         {
@@ -141,13 +154,14 @@ public sealed class HoverYawSheet : Sheet
     internal static string DescribeVerdict(HoverYawFigures f)
     {
         var review = f.Review!;
-        var yaw = f.Yaw!;
         string hover = review.Pass
             ? $"Hovers within every limit at {F(review.Hover.GapM * 1000, 2)} mm."
             : review.Hover.Balanced
                 ? $"{Over} over: {review.Findings.Count} {(review.Findings.Count == 1 ? "limit fails" : "limits fail")} at {F(review.Hover.GapM * 1000, 2)} mm (marked {Over} below)."
                 : $"{Over} No hover: {review.Findings.FirstOrDefault()?.Limit.Replace('_', ' ') ?? "no balance"} (see below).";
-        string yawText = yaw.Pass ? "Yaw balanced; the trim covers the tolerance both ways." : $"{Over} Yaw fails (see YAW below).";
+        string yawText = f.Yaw is not { } yaw
+            ? "Guided rig: one common duty carries the weight; the rails carry pitch, roll and yaw (see RAILS below)."
+            : yaw.Pass ? "Yaw balanced; the trim covers the tolerance both ways." : $"{Over} Yaw fails (see YAW below).";
         return hover + "\n" + yawText;
     }
 
@@ -156,7 +170,6 @@ public sealed class HoverYawSheet : Sheet
     {
         var model = f.Model!;
         var review = f.Review!;
-        var yaw = f.Yaw!;
         var h = review.Hover;
         var sb = new StringBuilder();
         sb.AppendLine($"CRAFT  {F(h.MassKg, 1)} kg (payload {F(model.PayloadKg, 1)} kg), {F(h.WeightN, 1)} N, gap {F(h.GapM * 1000, 2)} mm");
@@ -165,9 +178,12 @@ public sealed class HoverYawSheet : Sheet
             sb.AppendLine($"  pack {F(h.PackCurrentA, 1)} A at {F(h.BusVoltageV, 2)} V: {F(h.ElectricalPowerW, 0)} W electrical, {F(h.LiftSpecificPowerWPerN, 2)} W/N");
             sb.AppendLine($"  into the plate {F(h.PlatePowerW, 0)} W; heave stiffness {F(h.HeaveStiffnessNPerM / 1000, 1)} N/mm, natural frequency {F(h.HeaveFrequencyHz, 2)} Hz");
         }
-        sb.AppendLine(f.PayloadCapacityKg is { } cap
-            ? $"  {(f.Study!.CarriesPayload == true ? "" : Over + " ")}max payload within every limit {F(cap, 1)} kg (carries {F(model.PayloadKg, 1)})"
-            : $"  {Over} max payload: even the empty craft does not hover within every limit");
+        if (f.Study!.Request.PayloadCapacity)
+        {
+            sb.AppendLine(f.PayloadCapacityKg is { } cap
+                ? $"  {(f.Study.CarriesPayload == true ? "" : Over + " ")}max payload within every limit {F(cap, 1)} kg (carries {F(model.PayloadKg, 1)})"
+                : $"  {Over} max payload: even the empty craft does not hover within every limit");
+        }
         if (h.Balanced)
         {
             sb.AppendLine();
@@ -213,25 +229,16 @@ public sealed class HoverYawSheet : Sheet
             }
         }
         sb.AppendLine();
-        sb.AppendLine("YAW   (torque positive counter-clockwise seen from above)");
-        sb.AppendLine(yaw.EqualDuty is { } d
-            ? $"  equal duty {F(d, 4)} leaves {F(yaw.ResidualTorqueNm, 3)} N m ({F(yaw.YawAccelerationRadPerS2, 3)} rad/s^2); tolerance {F(yaw.LimitNm, 2)} N m"
-                + (yaw.ResidualWithinTolerance ? "" : $" {Over} over")
-            : $"  {Over} no equal duty carries the weight");
-        if (yaw.TrimDeltaDuty is { } delta)
+        if (f.Yaw is { } yaw)
         {
-            sb.AppendLine($"  trim: cw minus ccw duty {F(delta, 4)} (cw {F(yaw.ClockwiseDuty, 4)}, ccw {F(yaw.CounterClockwiseDuty, 4)})");
+            ComposeYaw(sb, yaw);
         }
-        sb.AppendLine($"  authority {F(yaw.AuthorityNm, 2)} N m (ccw {F(yaw.AuthorityPositiveNm, 2)}, cw {F(yaw.AuthorityNegativeNm, 2)}), margin {Percent(yaw.AuthorityMarginFraction)}"
-            + (yaw.AuthorityLimitedBy is { } by ? $", bounded by {by.Replace('_', ' ')}" : "")
-            + (yaw.AuthorityCoversTolerance ? "" : $" {Over} below the tolerance"));
-        if (yaw.Sensitivity is { } sens)
+        else
         {
-            sb.AppendLine($"  mismatch, station {sens.StationA + 1} against {sens.StationB + 1}: 1 % Kv {F(sens.KvMismatchNm, 3)} N m, 1 mm gap {F(sens.GapDifferenceNm, 3)} N m, 10 K plate {F(sens.PlateTempDifferenceNm, 3)} N m");
-        }
-        foreach (string note in yaw.Findings)
-        {
-            sb.AppendLine($"  {Over} {note}");
+            sb.AppendLine("RAILS (guided rig: every station at one common duty; the rails carry pitch, roll and yaw, reported, not judged)");
+            sb.AppendLine(f.Study.Rails is { } rails
+                ? $"  pitch moment {F(rails.PitchMomentNm, 3)} N m, roll moment {F(rails.RollMomentNm, 3)} N m, yaw torque {F(rails.YawTorqueNm, 3)} N m"
+                : "  no hover state, so no rail loads");
         }
         sb.AppendLine();
         var safety = review.Safety;
@@ -253,6 +260,31 @@ public sealed class HoverYawSheet : Sheet
         sb.AppendLine();
         sb.Append(CautionText.Compose(safety.Cautions));
         return sb.ToString();
+    }
+
+    // The YAW section of a free craft: equal-duty residual, trim, authority, sensitivity and the yaw findings.
+    private static void ComposeYaw(StringBuilder sb, YawResult yaw)
+    {
+        sb.AppendLine("YAW   (torque positive counter-clockwise seen from above)");
+        sb.AppendLine(yaw.EqualDuty is { } d
+            ? $"  equal duty {F(d, 4)} leaves {F(yaw.ResidualTorqueNm, 3)} N m ({F(yaw.YawAccelerationRadPerS2, 3)} rad/s^2); tolerance {F(yaw.LimitNm, 2)} N m"
+                + (yaw.ResidualWithinTolerance ? "" : $" {Over} over")
+            : $"  {Over} no equal duty carries the weight");
+        if (yaw.TrimDeltaDuty is { } delta)
+        {
+            sb.AppendLine($"  trim: cw minus ccw duty {F(delta, 4)} (cw {F(yaw.ClockwiseDuty, 4)}, ccw {F(yaw.CounterClockwiseDuty, 4)})");
+        }
+        sb.AppendLine($"  authority {F(yaw.AuthorityNm, 2)} N m (ccw {F(yaw.AuthorityPositiveNm, 2)}, cw {F(yaw.AuthorityNegativeNm, 2)}), margin {Percent(yaw.AuthorityMarginFraction)}"
+            + (yaw.AuthorityLimitedBy is { } by ? $", bounded by {by.Replace('_', ' ')}" : "")
+            + (yaw.AuthorityCoversTolerance ? "" : $" {Over} below the tolerance"));
+        if (yaw.Sensitivity is { } sens)
+        {
+            sb.AppendLine($"  mismatch, station {sens.StationA + 1} against {sens.StationB + 1}: 1 % Kv {F(sens.KvMismatchNm, 3)} N m, 1 mm gap {F(sens.GapDifferenceNm, 3)} N m, 10 K plate {F(sens.PlateTempDifferenceNm, 3)} N m");
+        }
+        foreach (string note in yaw.Findings)
+        {
+            sb.AppendLine($"  {Over} {note}");
+        }
     }
 
     /// <summary>A station's state in the table: "ok" only when Core's review finds nothing at the station, else marked with
@@ -290,7 +322,7 @@ public sealed class HoverYawSheet : Sheet
 
     /// <summary>What the sheet computed: the model, the reviewed trim, the payload capacity and the yaw balance; or the
     /// parts missing before any of it can be computed.</summary>
-    internal sealed record HoverYawFigures(HoverStudyResult? Study, IReadOnlyList<string> Missing)
+    internal sealed record HoverYawFigures(HoverStudyResult? Study, IReadOnlyList<string> Missing, string? NotForMount = null)
     {
         /// <summary>The rig model analysed.</summary>
         public RigModel? Model => Study?.Model;

@@ -33,6 +33,50 @@ public sealed class OneAnswerTests : IDisposable
     public async Task TheShippedRigs_GetOneAnswerEverywhere(string file)
         => await AssertOneAnswer(Path.Combine(Repo.CatalogsFolder, file));
 
+    // A guided sled (issue 14 item 7): the demo rig on rails, at its payload (hovers at one common duty) and far too heavy
+    // for max_duty (no state): the command line and the sheet run the one guided study.
+    [Theory]
+    [InlineData(25)]
+    [InlineData(900)]
+    public async Task AGuidedRig_GetsOneAnswerEverywhere(double payloadKg)
+    {
+        string text = await File.ReadAllTextAsync(Repo.DemoRig);
+        foreach (string catalog in new[] { "motors", "controllers", "packs", "cell_curves", "rotors", "plates" })
+        {
+            text = text.Replace($"\"{catalog}.csv\"", JsonSerializer.Serialize(Path.Combine(Repo.CatalogsFolder, catalog + ".csv")), StringComparison.Ordinal);
+        }
+        text = text.Replace("\"payload_kg\": 25,", FormattableString.Invariant($"\"payload_kg\": {payloadKg},"), StringComparison.Ordinal)
+            .Replace("\"stations\": [", "\"mount\": \"guided\", \"stations\": [", StringComparison.Ordinal);
+        string path = Path.Combine(_folder, "guided-rig.json");
+        await File.WriteAllTextAsync(path, text);
+        await AssertOneAnswer(path, "guided, payload " + payloadKg.ToString(Ci));
+
+        // The sheet says what a guided rig gets: the rails' loads, never a yaw trim or a payload search it cannot have.
+        var figures = HoverYawSheet.Compute(RigLoader.Load(path).Rig!, new RigModelCache(), CancellationToken.None, null);
+        string sheetText = HoverYawSheet.Compose(figures);
+        Assert.Contains("RAILS (guided rig", sheetText, StringComparison.Ordinal);
+        Assert.DoesNotContain("YAW   (", sheetText, StringComparison.Ordinal);
+        Assert.DoesNotContain("max payload", sheetText, StringComparison.Ordinal);
+        Assert.Contains("Guided rig: one common duty", HoverYawSheet.DescribeVerdict(figures), StringComparison.Ordinal);
+        Assert.Equal(payloadKg < 100, figures.Study!.Rails is not null);
+    }
+
+    // A bench rig has no hover: the sheet says so and computes no trim (the hover command refuses it with exit 2).
+    [Fact]
+    public async Task ABenchRig_GetsNoTrimOnTheSheet()
+    {
+        string text = await File.ReadAllTextAsync(Repo.DemoRig);
+        foreach (string catalog in new[] { "motors", "controllers", "packs", "cell_curves", "rotors", "plates" })
+        {
+            text = text.Replace($"\"{catalog}.csv\"", JsonSerializer.Serialize(Path.Combine(Repo.CatalogsFolder, catalog + ".csv")), StringComparison.Ordinal);
+        }
+        string path = Path.Combine(_folder, "bench-rig.json");
+        await File.WriteAllTextAsync(path, text.Replace("\"stations\": [", "\"mount\": \"bench\", \"stations\": [", StringComparison.Ordinal));
+        var figures = HoverYawSheet.Compute(RigLoader.Load(path).Rig!, new RigModelCache(), CancellationToken.None, null);
+        Assert.Null(figures.Study);
+        Assert.Equal(HoverYawSheet.BenchNote, figures.NotForMount);
+    }
+
     // Random valid rigs: the demo's hexagon of counter-rotating pairs with random parts from the demo catalogs, payload,
     // centre of gravity, gap, plate, pack count and max duty. Many do not hover within every limit; the answer must
     // still be the same everywhere. The 2-D load model keeps the table builds fast.
@@ -83,7 +127,20 @@ public sealed class OneAnswerTests : IDisposable
             Assert.Equal(hover.PackCurrentA, root.GetProperty("pack_current_a").GetDouble());
         }
 
-        if (RigModel.MissingParts(rig).Count > 0 || rig.Stations.Count < 4)
+        // A guided rig: the rails' loads are the sheet's; no trim, so nothing for ranking or stress to agree with.
+        Assert.Equal(rig.Mount == MountKind.Guided ? HoverMode.Guided : HoverMode.Trimmed, hover.Mode);
+        if (sheet.Rails is { } rails)
+        {
+            var r = root.GetProperty("rails");
+            Assert.Equal(rails.PitchMomentNm, r.GetProperty("pitch_moment_nm").GetDouble());
+            Assert.Equal(rails.RollMomentNm, r.GetProperty("roll_moment_nm").GetDouble());
+            Assert.Equal(rails.YawTorqueNm, r.GetProperty("yaw_torque_nm").GetDouble());
+        }
+        else
+        {
+            Assert.Equal(JsonValueKind.Null, root.GetProperty("rails").ValueKind);
+        }
+        if (RigModel.MissingParts(rig).Count > 0 || rig.Stations.Count < 4 || rig.Mount != MountKind.Free)
         {
             return;
         }
