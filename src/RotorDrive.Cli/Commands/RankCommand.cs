@@ -159,6 +159,43 @@ public static class RankCommand
         o.WriteLine($"  hover at the {Numbers.Format(rig.DesignGapM * 1000, 1)} mm design gap, plate at {Numbers.Format(rig.PlateTemperatureC, 0)} C, motors at {Numbers.Format(rig.AmbientC, 0)} C;"
             + $" drag peak checked on the landing gear ({Numbers.Format(rig.LandedGapM * 1000, 1)} mm) on a full pack");
         o.WriteLine();
+        WriteTop(o, result);
+        if (result.SimulationRejections.Count > 0)
+        {
+            o.WriteLine("Shortlisted but rejected by the spin-up or hover checks (the next ones moved up):");
+            foreach (var e in result.SimulationRejections)
+            {
+                o.WriteLine($"  - {e.Label}: {e.Rejections[^1].Message}");
+            }
+            o.WriteLine();
+        }
+        o.WriteLine($"Pareto set: {result.ParetoRanks.Count} combination(s); ranks {string.Join(", ", result.ParetoRanks.Take(30))}{(result.ParetoRanks.Count > 30 ? ", ..." : "")}");
+        o.WriteLine();
+        o.WriteLine("Rejections by reason (a combination with several reasons counts under each):");
+        var reasons = new TextTable(new TableColumn("combinations", Alignment.Right), new TableColumn("reason"));
+        foreach (var count in result.RejectionCounts.Where(c => c.Count > 0))
+        {
+            reasons.AddRow(count.Count.ToString("N0", CultureInfo.InvariantCulture), count.Kind.Describe());
+        }
+        reasons.Write(o, 2);
+        o.WriteLine();
+        WriteAssigned(o, result);
+        if (explained is not null)
+        {
+            WriteWhyNot(o, explained, result);
+        }
+        o.WriteLine();
+        o.WriteLine("Method: trimmed hover at the design gap with the drivetrain's and packs' mass included (lift = weight, level, zero yaw; the");
+        o.WriteLine("same trim as 'hover'); first-order motor model (Drela 2007) on the shared pack bus; runtime on the usable capacity without");
+        o.WriteLine("thermal drift; the shortlist simulated in full (spin-up as 'spinup', endurance as 'endurance'); see README.");
+        o.WriteLine("Caution: one-way controllers are fine for a fixed spin direction (wire the motor for it) but cannot reverse-brake a rotor.");
+        o.WriteLine("Estimates only: follow the manufacturers' ratings; lithium packs, strong magnets and spinning rotors are dangerous (see README, Safety).");
+    }
+
+    // The best entries with their figures, the cautions that do not reject (each once, with its ranks) and, when one limit
+    // other than the pack ends every shortlisted endurance run, a note saying so.
+    private static void WriteTop(TextWriter o, RankResult result)
+    {
         if (result.Top.Count > 0)
         {
             o.WriteLine($"Best {result.Top.Count} (P = in the Pareto set over runtime, mass and current margin):");
@@ -208,25 +245,11 @@ public static class RankCommand
             o.WriteLine("No combination can fly this rig; see the rejections below.");
             o.WriteLine();
         }
-        if (result.SimulationRejections.Count > 0)
-        {
-            o.WriteLine("Shortlisted but rejected by the spin-up or hover checks (the next ones moved up):");
-            foreach (var e in result.SimulationRejections)
-            {
-                o.WriteLine($"  - {e.Label}: {e.Rejections[^1].Message}");
-            }
-            o.WriteLine();
-        }
-        o.WriteLine($"Pareto set: {result.ParetoRanks.Count} combination(s); ranks {string.Join(", ", result.ParetoRanks.Take(30))}{(result.ParetoRanks.Count > 30 ? ", ..." : "")}");
-        o.WriteLine();
-        o.WriteLine("Rejections by reason (a combination with several reasons counts under each):");
-        var reasons = new TextTable(new TableColumn("combinations", Alignment.Right), new TableColumn("reason"));
-        foreach (var count in result.RejectionCounts.Where(c => c.Count > 0))
-        {
-            reasons.AddRow(count.Count.ToString("N0", CultureInfo.InvariantCulture), count.Kind.Describe());
-        }
-        reasons.Write(o, 2);
-        o.WriteLine();
+    }
+
+    // Where the rig's own drivetrain ranks, or why it is rejected.
+    private static void WriteAssigned(TextWriter o, RankResult result)
+    {
         if (result.Assigned is { } assigned)
         {
             string where = result.AssignedRank is { } r ? $"rank {r} of {result.AcceptedCount}" : "rejected";
@@ -244,30 +267,26 @@ public static class RankCommand
         {
             o.WriteLine("The rig names no single drivetrain (same motor and controller at every station, and a pack) to place in the ranking.");
         }
-        if (explained is not null)
-        {
-            o.WriteLine();
-            o.WriteLine($"Why not {explained[0].MotorId}: every controller and pack with this motor");
-            int acceptedHere = explained.Count(e => e.Accepted);
-            var byReason = explained.SelectMany(e => e.Rejections.Select(r => r.Kind).Distinct()).GroupBy(k => k).OrderByDescending(g => g.Count()).ThenBy(g => g.Key);
-            o.WriteLine($"  {acceptedHere} of {explained.Count} accepted; rejected for: "
-                + string.Join(", ", byReason.Select(g => $"{g.Key.Describe()} ({g.Count()})")));
-            var table = new TextTable(new TableColumn("controller"), new TableColumn("packs"), new TableColumn("verdict"));
-            foreach (var e in explained)
-            {
-                string verdict = e.Accepted
-                    ? $"accepted, rank {result.RankOf(e.Candidate)}"
-                    : string.Join("; ", e.Rejections.Select(r => r.Message));
-                table.AddRow(e.ControllerId, $"{e.Candidate.PackCount} x {e.PackId}", verdict);
-            }
-            table.Write(o, 2);
-        }
+    }
+
+    // Every controller and pack tried with one motor, and what rejected each.
+    private static void WriteWhyNot(TextWriter o, IReadOnlyList<RankEvaluation> explained, RankResult result)
+    {
         o.WriteLine();
-        o.WriteLine("Method: trimmed hover at the design gap with the drivetrain's and packs' mass included (lift = weight, level, zero yaw; the");
-        o.WriteLine("same trim as 'hover'); first-order motor model (Drela 2007) on the shared pack bus; runtime on the usable capacity without");
-        o.WriteLine("thermal drift; the shortlist simulated in full (spin-up as 'spinup', endurance as 'endurance'); see README.");
-        o.WriteLine("Caution: one-way controllers are fine for a fixed spin direction (wire the motor for it) but cannot reverse-brake a rotor.");
-        o.WriteLine("Estimates only: follow the manufacturers' ratings; lithium packs, strong magnets and spinning rotors are dangerous (see README, Safety).");
+        o.WriteLine($"Why not {explained[0].MotorId}: every controller and pack with this motor");
+        int acceptedHere = explained.Count(e => e.Accepted);
+        var byReason = explained.SelectMany(e => e.Rejections.Select(r => r.Kind).Distinct()).GroupBy(k => k).OrderByDescending(g => g.Count()).ThenBy(g => g.Key);
+        o.WriteLine($"  {acceptedHere} of {explained.Count} accepted; rejected for: "
+            + string.Join(", ", byReason.Select(g => $"{g.Key.Describe()} ({g.Count()})")));
+        var table = new TextTable(new TableColumn("controller"), new TableColumn("packs"), new TableColumn("verdict"));
+        foreach (var e in explained)
+        {
+            string verdict = e.Accepted
+                ? $"accepted, rank {result.RankOf(e.Candidate)}"
+                : string.Join("; ", e.Rejections.Select(r => r.Message));
+            table.AddRow(e.ControllerId, $"{e.Candidate.PackCount} x {e.PackId}", verdict);
+        }
+        table.Write(o, 2);
     }
 
     private static string Key(RankObjective objective) => objective.ToString().ToLowerInvariant();
