@@ -88,7 +88,7 @@ public sealed class ShortlistSheet : Sheet
         _pinned.Style.ShowHorizontalHeaderOverline = false;
         _pinned.Style.ShowHorizontalHeaderUnderline = false;
         _pinned.Style.ShowHorizontalBottomLine = false;
-        _hint = new Label { X = 0, Y = Pos.Bottom(_pinned), Width = Dim.Fill(), Height = 1, Text = "Enter applies the selected row to the rig (all stations and the pack)" };
+        _hint = new Label { X = 0, Y = Pos.Bottom(_pinned), Width = Dim.Fill(), Height = 1, Text = "Enter: use the selected row (every station, the pack)" };
         Add(new Label { X = 0, Y = Pos.Bottom(_hint), Text = "why not motor" });
         _whyNot = new TextField { X = 14, Y = Pos.Bottom(_hint), Width = 18, Text = "" };
         _whyNotMessage = new Label { X = 33, Y = Pos.Bottom(_hint), Width = Dim.Fill(), Height = 1, Text = "F4 picks" };
