@@ -47,6 +47,35 @@ public sealed class SimulationRig
         Model = model;
         Options = options;
         var rig = model.Rig;
+        int n = CheckModel(model);
+        double spreading = options.PlateSpreadingFactor ?? rig.PlateSpreadingFactor;
+        _stations = model.Stations.ToArray();
+        _loads = new IRotorLoad[n];
+        _drives = new Drivetrain[n];
+        _windings = new WindingThermalNode?[n];
+        _plates = new PlatePatchThermalNode[n];
+        _peaks = new DragPeak[n];
+        var search = new LandedPeakSearch(parentPeaks is not null && parentPeaks.Count == n ? parentPeaks : null);
+        for (int j = 0; j < n; j++)
+        {
+            var s = _stations[j];
+            double landed = CheckStationGaps(model, s, j);
+            _loads[j] = s.Load;
+            _drives[j] = s.Drivetrain;
+            _windings[j] = WindingThermalNode.FromMotor(s.Drivetrain.Motor);
+            _plates[j] = PlatePatchThermalNode.UnderRotor(s.Rotor, rig.Plate, rig.PlateConvectionWPerM2K, spreading);
+            _peaks[j] = search.PeakAt(j, s, landed);
+        }
+        Hover = HoverTrim.Solve(model, options.Hover);
+        (_hoverSpeeds, double stiffness) = Hover.Balanced ? TrimmedSpeeds(Hover, n) : FullThrottleSpeeds(model, _stations);
+        double damping = options.HeaveDampingNsPerM ?? 2 * rig.Body.HeaveDampingRatio * Math.Sqrt(Math.Max(stiffness, 0) * model.MassKg);
+        HeaveDampingNsPerM = Preconditions.NonNegative(damping, nameof(options.HeaveDampingNsPerM));
+    }
+
+    // The rig-wide ranges a transient run relies on; returns the station count.
+    private static int CheckModel(RigModel model)
+    {
+        var rig = model.Rig;
         int n = model.Stations.Count;
         if (n == 0)
         {
@@ -56,87 +85,82 @@ public sealed class SimulationRig
         Preconditions.Positive(rig.DesignGapM, "design gap");
         Preconditions.Positive(model.YawInertiaKgM2, "yaw inertia");
         Preconditions.NonNegative(rig.GearYawFrictionNm, "gear yaw friction");
-        double spreading = options.PlateSpreadingFactor ?? rig.PlateSpreadingFactor;
-        _stations = model.Stations.ToArray();
-        _loads = new IRotorLoad[n];
-        _drives = new Drivetrain[n];
-        _windings = new WindingThermalNode?[n];
-        _plates = new PlatePatchThermalNode[n];
-        _peaks = new DragPeak[n];
-        var loadHints = new Dictionary<IRotorLoad, double>(ReferenceEqualityComparer.Instance);
-        if (parentPeaks is not null && parentPeaks.Count != n)
+        return n;
+    }
+
+    // Station j's rotor inertia and its gaps on the gear and at the design gap; returns its landed gap, m.
+    private static double CheckStationGaps(RigModel model, CraftStation s, int j)
+    {
+        var rig = model.Rig;
+        Preconditions.Positive(s.Rotor.InertiaKgM2, $"rotor inertia of station {j}");
+        double landed = rig.LandedGapM + s.Conditions.GapOffsetM;
+        double design = rig.DesignGapM + s.Conditions.GapOffsetM;
+        if (!(landed > 0) || !(design > 0))
         {
-            parentPeaks = null;
+            throw new ArgumentOutOfRangeException(nameof(model), s.Conditions.GapOffsetM,
+                $"station {j + 1}: the gap offset {s.Conditions.GapOffsetM * 1000:0.###} mm leaves no air gap on the gear or at the design gap.");
         }
-        var found = new List<(IRotorLoad Load, double Gap, double PlateC, double MagnetC, double Top, DragPeak Peak)>();
+        return landed;
+    }
+
+    // The trimmed hover's station speeds and heave stiffness.
+    private static (double[] Speeds, double StiffnessNPerM) TrimmedSpeeds(HoverResult hover, int n)
+    {
+        var speeds = new double[n];
         for (int j = 0; j < n; j++)
         {
-            var s = _stations[j];
-            Preconditions.Positive(s.Rotor.InertiaKgM2, $"rotor inertia of station {j}");
-            double landed = rig.LandedGapM + s.Conditions.GapOffsetM;
-            double design = rig.DesignGapM + s.Conditions.GapOffsetM;
-            if (!(landed > 0) || !(design > 0))
-            {
-                throw new ArgumentOutOfRangeException(nameof(model), s.Conditions.GapOffsetM,
-                    $"station {j + 1}: the gap offset {s.Conditions.GapOffsetM * 1000:0.###} mm leaves no air gap on the gear or at the design gap.");
-            }
-            _loads[j] = s.Load;
-            _drives[j] = s.Drivetrain;
-            _windings[j] = WindingThermalNode.FromMotor(s.Drivetrain.Motor);
-            _plates[j] = PlatePatchThermalNode.UnderRotor(s.Rotor, rig.Plate, rig.PlateConvectionWPerM2K, spreading);
-            DragPeak? peak = null;
-            foreach (var f in found)
+            speeds[j] = hover.Stations[j].SpeedRadPerS;
+        }
+        return (speeds, hover.HeaveStiffnessNPerM);
+    }
+
+    // No trim: every rotor at full throttle (its rated speed, or its motor's free speed at the max duty on the
+    // open-circuit voltage if lower); the stiffness there by a central difference in the rig gap.
+    private static (double[] Speeds, double StiffnessNPerM) FullThrottleSpeeds(RigModel model, CraftStation[] stations)
+    {
+        int n = stations.Length;
+        var speeds = new double[n];
+        double g = model.Rig.DesignGapM, dg = 1e-4 * g, up = 0, down = 0;
+        for (int j = 0; j < n; j++)
+        {
+            var s = stations[j];
+            double free = s.Drivetrain.FreeSpeedRadPerS(model.Source.OpenCircuitVoltageV, s.Drivetrain.MaxDuty, s.Conditions.MotorMagnetTempC);
+            speeds[j] = Math.Min(s.Rotor.MaxSpeedRadPerS, free);
+            up += stations[j].LoadAt(speeds[j], g + dg).LiftN;
+            down += stations[j].LoadAt(speeds[j], g - dg).LiftN;
+        }
+        return (speeds, -(up - down) / (2 * dg));
+    }
+
+    // The landed drag peaks of one rig, station by station: a station that shares load, landed gap, temperatures and top
+    // speed with an earlier one shares its peak; otherwise the search starts next to the same station's peak in the
+    // parent rig (a tolerance sample wraps its loads, so only the station tells which peak it varies), else next to a
+    // peak of the same load found here.
+    private sealed class LandedPeakSearch(IReadOnlyList<DragPeak>? parentPeaks)
+    {
+        private readonly Dictionary<IRotorLoad, double> _loadHints = new(ReferenceEqualityComparer.Instance);
+        private readonly List<(IRotorLoad Load, double Gap, double PlateC, double MagnetC, double Top, DragPeak Peak)> _found = [];
+
+        public DragPeak PeakAt(int j, CraftStation s, double landed)
+        {
+            foreach (var f in _found)
             {
                 if (ReferenceEquals(f.Load, s.Load) && f.Gap == landed && f.PlateC == s.Conditions.PlateTempC
                     && f.MagnetC == s.Conditions.RotorMagnetTempC && f.Top == s.Rotor.MaxSpeedRadPerS)
                 {
-                    peak = f.Peak;
-                    break;
+                    return f.Peak;
                 }
             }
-            if (peak is null)
+            double? hint = parentPeaks?[j] is { Status: DragPeakStatus.Converged } parent ? parent.SpeedRadPerS
+                : _loadHints.TryGetValue(s.Load, out double h) ? h : null;
+            var peak = TotalTorquePeak(s.Load, landed, s.Conditions.PlateTempC, s.Conditions.RotorMagnetTempC, s.Rotor.MaxSpeedRadPerS, hint);
+            _found.Add((s.Load, landed, s.Conditions.PlateTempC, s.Conditions.RotorMagnetTempC, s.Rotor.MaxSpeedRadPerS, peak));
+            if (peak.Status is DragPeakStatus.Converged)
             {
-                // Start next to the same station's peak in the parent rig (a tolerance sample wraps its loads, so only the
-                // station tells which peak it varies), else next to a peak of the same load found here.
-                double? hint = parentPeaks?[j] is { Status: DragPeakStatus.Converged } parent ? parent.SpeedRadPerS
-                    : loadHints.TryGetValue(s.Load, out double h) ? h : null;
-                peak = TotalTorquePeak(s.Load, landed, s.Conditions.PlateTempC, s.Conditions.RotorMagnetTempC, s.Rotor.MaxSpeedRadPerS, hint);
-                found.Add((s.Load, landed, s.Conditions.PlateTempC, s.Conditions.RotorMagnetTempC, s.Rotor.MaxSpeedRadPerS, peak));
-                if (peak.Status is DragPeakStatus.Converged)
-                {
-                    loadHints.TryAdd(s.Load, peak.SpeedRadPerS);
-                }
+                _loadHints.TryAdd(s.Load, peak.SpeedRadPerS);
             }
-            _peaks[j] = peak;
+            return peak;
         }
-        Hover = HoverTrim.Solve(model, options.Hover);
-        _hoverSpeeds = new double[n];
-        double stiffness;
-        if (Hover.Balanced)
-        {
-            for (int j = 0; j < n; j++)
-            {
-                _hoverSpeeds[j] = Hover.Stations[j].SpeedRadPerS;
-            }
-            stiffness = Hover.HeaveStiffnessNPerM;
-        }
-        else
-        {
-            // No trim: every rotor at full throttle (its rated speed, or its motor's free speed at the max duty on the
-            // open-circuit voltage if lower); the stiffness there by a central difference in the rig gap.
-            double g = rig.DesignGapM, dg = 1e-4 * g, up = 0, down = 0;
-            for (int j = 0; j < n; j++)
-            {
-                var s = _stations[j];
-                double free = s.Drivetrain.FreeSpeedRadPerS(model.Source.OpenCircuitVoltageV, s.Drivetrain.MaxDuty, s.Conditions.MotorMagnetTempC);
-                _hoverSpeeds[j] = Math.Min(s.Rotor.MaxSpeedRadPerS, free);
-                up += _stations[j].LoadAt(_hoverSpeeds[j], g + dg).LiftN;
-                down += _stations[j].LoadAt(_hoverSpeeds[j], g - dg).LiftN;
-            }
-            stiffness = -(up - down) / (2 * dg);
-        }
-        double damping = options.HeaveDampingNsPerM ?? 2 * rig.Body.HeaveDampingRatio * Math.Sqrt(Math.Max(stiffness, 0) * model.MassKg);
-        HeaveDampingNsPerM = Preconditions.NonNegative(damping, nameof(options.HeaveDampingNsPerM));
     }
 
     /// <summary>Prepares a model for time simulations.</summary>

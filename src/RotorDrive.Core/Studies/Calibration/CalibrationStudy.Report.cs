@@ -11,10 +11,33 @@ public static partial class CalibrationStudy
         double[] measured, string[] series, double[] scale, int iterations)
     {
         var options = request.Options;
-        int n = measured.Length, p = map.Free.Count, dof = n - p;
+        int n = measured.Length;
         double[] phys = map.Physical(theta);
         var model = new double[n];
         problem.Predict(phys, model);
+        var (covTheta, noInformation) = InternalCovariance(problem, map, theta, measured, model, scale);
+        double t = StudentT.InvCDF(0, 1, n - map.Free.Count, 0.5 + 0.5 * options.ConfidenceLevel);
+        var (estimates, covariance) = Estimates(options, map, theta, phys, covTheta, noInformation, t);
+        double peakSpeed = FittedPeakSpeed(request, problem, phys);
+        if (request.Trace is { } trace && !estimates[0].Undetermined && estimates[0].Fitted && double.IsFinite(peakSpeed))
+        {
+            estimates[0] = UnlessTracePassesPeak(estimates[0], trace, peakSpeed);
+        }
+
+        var quality = Quality(request, map, measured, series, model, scale, iterations, phys, peakSpeed);
+        var (refusal, detail) = Judge(request, problem, estimates, measured, series, model, phys, quality);
+        return new CalibrationResult(request.Kind, request.Rotor.Id, estimates, covariance, Residuals(request, measured, series, model),
+            quality, refusal, detail, options.ConfidenceLevel);
+    }
+
+    // Covariance of the internal parameters, s^2 (J^T J)^-1 (Bates & Watts 1988, §2.3); a singular J^T J (parameters the
+    // data cannot separate) is inverted on its well-conditioned part only, and the parameters involved are flagged by
+    // their correlation. NoInformation: the smallest singular value is negligible (a zero variance then means the data
+    // say nothing on that parameter).
+    private static (Matrix<double> CovTheta, bool NoInformation) InternalCovariance(CalibrationProblem problem, ParameterMap map,
+        Vector<double> theta, double[] measured, double[] model, double[] scale)
+    {
+        int n = measured.Length, p = map.Free.Count, dof = n - p;
         double rss = 0;
         for (int i = 0; i < n; i++)
         {
@@ -22,9 +45,6 @@ public static partial class CalibrationStudy
             rss += r * r;
         }
         double s2 = rss / dof;
-
-        // Covariance s^2 (J^T J)^-1 (Bates & Watts 1988, §2.3); a singular J^T J (parameters the data cannot separate) is
-        // inverted on its well-conditioned part only, and the parameters involved are flagged by their correlation.
         var jacobian = WeightedJacobian(problem, map, theta, scale);
         var jtj = jacobian.TransposeThisAndMultiply(jacobian);
         var svd = jtj.Svd(true);
@@ -43,8 +63,14 @@ public static partial class CalibrationStudy
             }
         }
         var covTheta = svd.VT.TransposeThisAndMultiply(inverseS) * svd.U.Transpose() * s2;
-        double t = StudentT.InvCDF(0, 1, dof, 0.5 + 0.5 * options.ConfidenceLevel);
+        return (covTheta, singular && svd.S[p - 1] <= 1e-13 * sMax);
+    }
 
+    // Each quantity's estimate (held ones at their start, without interval) and the covariance of the physical quantities
+    // by the delta method; t is Student's quantile for the confidence level at the fit's degrees of freedom.
+    private static (CalibrationEstimate[] Estimates, double[][] Covariance) Estimates(CalibrationOptions options, ParameterMap map,
+        Vector<double> theta, double[] phys, Matrix<double> covTheta, bool noInformation, double t)
+    {
         var estimates = new CalibrationEstimate[Quantities];
         var covariance = new double[Quantities][];
         for (int a = 0; a < Quantities; a++)
@@ -63,36 +89,7 @@ public static partial class CalibrationStudy
             double lower = map.Forward(k, theta[j] - t * se);
             double upper = map.Forward(k, theta[j] + t * se);
             double seK = Math.Abs(map.Slope(k, theta[j])) * se;
-            string? why = null;
-            double halfWidth = 0.5 * (upper - lower);
-            double floor = k switch
-            {
-                2 => 0.01 * map.TorqueRef,
-                3 => 0.01 * map.TorqueRef / map.SpeedRef,
-                _ => 0.0,
-            };
-            if (singular && svd.S[p - 1] <= 1e-13 * sMax && covTheta[j, j] == 0)
-            {
-                why = "the data carry no information on it";
-            }
-            else if (halfWidth > options.RelativeHalfWidthLimit * Math.Max(Math.Abs(phys[k]), floor))
-            {
-                why = $"its {Pct(options.ConfidenceLevel)} interval is wider than {Pct(options.RelativeHalfWidthLimit)} of its value either side";
-            }
-            for (int other = 0; other < Quantities && why is null; other++)
-            {
-                int jo = IndexOf(map.Free, other);
-                if (other == k || jo < 0)
-                {
-                    continue;
-                }
-                double denominator = Math.Sqrt(covTheta[j, j] * covTheta[jo, jo]);
-                double rho = denominator > 0 ? covTheta[j, jo] / denominator : 0;
-                if (Math.Abs(rho) > options.CorrelationLimit)
-                {
-                    why = $"the data cannot tell it apart from {KeyOf((CalibrationParameter)other)} (correlation {rho:F3})";
-                }
-            }
+            string? why = WhyUndetermined(options, map, k, j, phys[k], 0.5 * (upper - lower), covTheta, noInformation);
             estimates[k] = new CalibrationEstimate((CalibrationParameter)k, phys[k], seK, lower, upper, true, why is not null, why);
             for (int other = 0; other < Quantities; other++)
             {
@@ -103,29 +100,68 @@ public static partial class CalibrationStudy
                 }
             }
         }
+        return (estimates, covariance);
+    }
 
-        // Drag peak of the fitted model at the data's median gap: the table's peak in sigma omega does not depend on the
-        // conductivity factor, so the fitted peak speed is the uncorrected one divided by it.
-        double medianGap = Median(request.Trace?.Select(s => s.GapM) ?? request.Points!.Select(q => q.GapM));
-        var peak = DragPeakFinder.Find(problem.Table, medianGap, request.PlateTempC, request.MagnetTempC, problem.Table.Range.MaxSpeedRadPerS);
-        double peakSpeed = peak.Status is DragPeakStatus.Converged or DragPeakStatus.ScanOnly ? peak.SpeedRadPerS / phys[0] : double.NaN;
-        if (request.Trace is { } trace && !estimates[0].Undetermined && estimates[0].Fitted && double.IsFinite(peakSpeed))
+    // Why a fitted quantity (physical index k, internal index j) is undetermined, or null: no information in the data, an
+    // interval wider than the limit (relative to the value, or for the bearing terms to 1 % of the data's scale), or a
+    // correlation with another free quantity beyond the limit.
+    private static string? WhyUndetermined(CalibrationOptions options, ParameterMap map, int k, int j, double value, double halfWidth,
+        Matrix<double> covTheta, bool noInformation)
+    {
+        double floor = k switch
         {
-            double top = trace.Max(s => s.SpeedRadPerS), bottom = trace.Min(s => s.SpeedRadPerS);
-            if (!(top > peakSpeed && bottom < peakSpeed))
+            2 => 0.01 * map.TorqueRef,
+            3 => 0.01 * map.TorqueRef / map.SpeedRef,
+            _ => 0.0,
+        };
+        if (noInformation && covTheta[j, j] == 0)
+        {
+            return "the data carry no information on it";
+        }
+        if (halfWidth > options.RelativeHalfWidthLimit * Math.Max(Math.Abs(value), floor))
+        {
+            return $"its {Pct(options.ConfidenceLevel)} interval is wider than {Pct(options.RelativeHalfWidthLimit)} of its value either side";
+        }
+        for (int other = 0; other < Quantities; other++)
+        {
+            int jo = IndexOf(map.Free, other);
+            if (other == k || jo < 0)
             {
-                estimates[0] = estimates[0] with
-                {
-                    Undetermined = true,
-                    Why = $"the trace ({Units.RadPerSToRpm(bottom):F0}..{Units.RadPerSToRpm(top):F0} rpm) never passes the drag peak (about {Units.RadPerSToRpm(peakSpeed):F0} rpm at this gap); start the spin-down above it",
-                };
+                continue;
+            }
+            double denominator = Math.Sqrt(covTheta[j, j] * covTheta[jo, jo]);
+            double rho = denominator > 0 ? covTheta[j, jo] / denominator : 0;
+            if (Math.Abs(rho) > options.CorrelationLimit)
+            {
+                return $"the data cannot tell it apart from {KeyOf((CalibrationParameter)other)} (correlation {rho:F3})";
             }
         }
+        return null;
+    }
 
-        var quality = Quality(request, map, measured, series, model, scale, iterations, phys, peakSpeed);
-        var (refusal, detail) = Judge(request, problem, estimates, measured, series, model, phys, quality);
-        return new CalibrationResult(request.Kind, request.Rotor.Id, estimates, covariance, Residuals(request, measured, series, model),
-            quality, refusal, detail, options.ConfidenceLevel);
+    // Drag peak of the fitted model at the data's median gap: the table's peak in sigma omega does not depend on the
+    // conductivity factor, so the fitted peak speed is the uncorrected one divided by it. NaN when no peak was found.
+    private static double FittedPeakSpeed(CalibrationRequest request, CalibrationProblem problem, double[] phys)
+    {
+        double medianGap = Median(request.Trace?.Select(s => s.GapM) ?? request.Points!.Select(q => q.GapM));
+        var peak = DragPeakFinder.Find(problem.Table, medianGap, request.PlateTempC, request.MagnetTempC, problem.Table.Range.MaxSpeedRadPerS);
+        return peak.Status is DragPeakStatus.Converged or DragPeakStatus.ScanOnly ? peak.SpeedRadPerS / phys[0] : double.NaN;
+    }
+
+    // A spin-down fixes the conductivity factor only if it passes the drag peak; otherwise the estimate is undetermined.
+    private static CalibrationEstimate UnlessTracePassesPeak(CalibrationEstimate conductivity, IReadOnlyList<SpinDownSample> trace, double peakSpeed)
+    {
+        double top = trace.Max(s => s.SpeedRadPerS), bottom = trace.Min(s => s.SpeedRadPerS);
+        if (top > peakSpeed && bottom < peakSpeed)
+        {
+            return conductivity;
+        }
+        return conductivity with
+        {
+            Undetermined = true,
+            Why = $"the trace ({Units.RadPerSToRpm(bottom):F0}..{Units.RadPerSToRpm(top):F0} rpm) never passes the drag peak (about {Units.RadPerSToRpm(peakSpeed):F0} rpm at this gap); start the spin-down above it",
+        };
     }
 
     private static CalibrationResult Refused(CalibrationRequest request, CalibrationProblem problem, ParameterMap map, double[] phys,
@@ -149,66 +185,12 @@ public static partial class CalibrationStudy
         double cf = phys[0], ff = phys[1];
         bool ffOut = estimates[1].Fitted && (ff < options.FieldFactorRange.Min || ff > options.FieldFactorRange.Max);
         bool cfOut = estimates[0].Fitted && (cf < options.ConductivityFactorRange.Min || cf > options.ConductivityFactorRange.Max);
-        if (request.Trace is not null)
+        var forces = request.Trace is not null
+            ? (ffOut ? InertiaRefusal(request, ff) : null)
+            : ForceScaleRefusal(request, problem, series, phys, ffOut);
+        if (forces is { } refused)
         {
-            if (ffOut)
-            {
-                double j = request.Rotor.InertiaKgM2;
-                double implied = j / (ff * ff);
-                string hint = Math.Abs(Math.Log10(ff * ff) - 4) < 0.5 ? " (a factor of about 10^4: kg cm^2 entered as kg m^2?)"
-                    : Math.Abs(Math.Log10(ff * ff) - 7) < 0.5 ? " (a factor of about 10^7: g cm^2 entered as kg m^2?)" : "";
-                return (CalibrationRefusal.Inertia,
-                    $"the trace slows as if the rotor's inertia were {implied:G3} kg m^2, not the catalog's {j:G3} kg m^2{hint}: the model would need a field factor of {ff:G3}, "
-                    + $"outside the plausible {options.FieldFactorRange.Min:G3}..{options.FieldFactorRange.Max:G3}. Likely cause: a wrong inertia_kg_m2 in the rotor row (check its unit, kg m^2); "
-                    + "if the inertia is right, check the rotor row's remanence and radii and the gap.");
-            }
-        }
-        else
-        {
-            // Each series' own scale over the uncorrected eddy part at the fitted conductivity factor: a column in another
-            // unit shows as one series (or both) far outside the plausible force scale.
-            double ScaleOf(string name)
-            {
-                double sxy = 0, sxx = 0;
-                foreach (var pt in request.Points!)
-                {
-                    var (lift, torque) = problem.Eddy(cf, 1.0, pt.SpeedRadPerS, pt.GapM, pt.PlateTempC ?? request.PlateTempC);
-                    if (name == "torque")
-                    {
-                        double y = pt.TorqueNm - problem.Windage(pt.SpeedRadPerS) - BearingDrag.TorqueUnchecked(pt.SpeedRadPerS, phys[2], phys[3]);
-                        sxy += torque * y;
-                        sxx += torque * torque;
-                    }
-                    else if (pt.LiftN is { } l)
-                    {
-                        sxy += lift * l;
-                        sxx += lift * lift;
-                    }
-                }
-                return sxx > 0 ? sxy / sxx : double.NaN;
-            }
-            double torqueScale = ScaleOf("torque");
-            double liftScale = series.Contains("lift") ? ScaleOf("lift") : double.NaN;
-            bool Plausible(double forceScale) => forceScale > 0 && Math.Sqrt(forceScale) >= options.FieldFactorRange.Min && Math.Sqrt(forceScale) <= options.FieldFactorRange.Max;
-            bool torqueBad = !Plausible(torqueScale);
-            bool liftBad = !double.IsNaN(liftScale) && !Plausible(liftScale);
-            if (torqueBad && TorqueUnit(torqueScale) is { } unit)
-            {
-                return (CalibrationRefusal.TorqueUnits,
-                    $"the torques are about {torqueScale:G3} times what the model gives: the torque_nm column looks like {unit}, not N m. Convert it to N m and run again.");
-            }
-            if (liftBad && !torqueBad && LiftUnit(liftScale) is { } liftUnit)
-            {
-                return (CalibrationRefusal.LiftUnits,
-                    $"the lifts are about {liftScale:G3} times what the model gives while the torques agree: the lift_n column looks like {liftUnit}, not N. Convert it to N and run again.");
-            }
-            if (ffOut || torqueBad || liftBad)
-            {
-                return (CalibrationRefusal.ImplausibleFactor,
-                    $"the forces need a field factor of {ff:G3} (torque {torqueScale:G3} times the model{(double.IsNaN(liftScale) ? "" : $", lift {liftScale:G3} times")}), outside the plausible "
-                    + $"{options.FieldFactorRange.Min:G3}..{options.FieldFactorRange.Max:G3}. Likely cause: the data belong to another rotor, plate or gap, or a column is in another unit; "
-                    + "check the rotor row (remanence_t, radii, magnet_thickness_mm) and gap_mm.");
-            }
+            return refused;
         }
         if (cfOut)
         {
@@ -232,6 +214,76 @@ public static partial class CalibrationStudy
                 + "Likely cause: speed or gap in another unit, torque logged before the speed settled, or a rotor or plate other than the rig's.");
         }
         return (CalibrationRefusal.None, null);
+    }
+
+    // A spin-down whose field factor is out of range: the trace slows as if the rotor's inertia were another.
+    private static (CalibrationRefusal, string?) InertiaRefusal(CalibrationRequest request, double ff)
+    {
+        var options = request.Options;
+        double j = request.Rotor.InertiaKgM2;
+        double implied = j / (ff * ff);
+        string hint = Math.Abs(Math.Log10(ff * ff) - 4) < 0.5 ? " (a factor of about 10^4: kg cm^2 entered as kg m^2?)"
+            : Math.Abs(Math.Log10(ff * ff) - 7) < 0.5 ? " (a factor of about 10^7: g cm^2 entered as kg m^2?)" : "";
+        return (CalibrationRefusal.Inertia,
+            $"the trace slows as if the rotor's inertia were {implied:G3} kg m^2, not the catalog's {j:G3} kg m^2{hint}: the model would need a field factor of {ff:G3}, "
+            + $"outside the plausible {options.FieldFactorRange.Min:G3}..{options.FieldFactorRange.Max:G3}. Likely cause: a wrong inertia_kg_m2 in the rotor row (check its unit, kg m^2); "
+            + "if the inertia is right, check the rotor row's remanence and radii and the gap.");
+    }
+
+    // Steady points: each series' own scale over the uncorrected eddy part at the fitted conductivity factor. A column in
+    // another unit shows as one series (or both) far outside the plausible force scale; null when both are plausible and
+    // the field factor is in range.
+    private static (CalibrationRefusal, string?)? ForceScaleRefusal(CalibrationRequest request, CalibrationProblem problem, string[] series,
+        double[] phys, bool ffOut)
+    {
+        var options = request.Options;
+        double ff = phys[1];
+        double torqueScale = ForceScale(request, problem, phys, "torque");
+        double liftScale = series.Contains("lift") ? ForceScale(request, problem, phys, "lift") : double.NaN;
+        bool Plausible(double forceScale) => forceScale > 0 && Math.Sqrt(forceScale) >= options.FieldFactorRange.Min && Math.Sqrt(forceScale) <= options.FieldFactorRange.Max;
+        bool torqueBad = !Plausible(torqueScale);
+        bool liftBad = !double.IsNaN(liftScale) && !Plausible(liftScale);
+        if (torqueBad && TorqueUnit(torqueScale) is { } unit)
+        {
+            return (CalibrationRefusal.TorqueUnits,
+                $"the torques are about {torqueScale:G3} times what the model gives: the torque_nm column looks like {unit}, not N m. Convert it to N m and run again.");
+        }
+        if (liftBad && !torqueBad && LiftUnit(liftScale) is { } liftUnit)
+        {
+            return (CalibrationRefusal.LiftUnits,
+                $"the lifts are about {liftScale:G3} times what the model gives while the torques agree: the lift_n column looks like {liftUnit}, not N. Convert it to N and run again.");
+        }
+        if (ffOut || torqueBad || liftBad)
+        {
+            return (CalibrationRefusal.ImplausibleFactor,
+                $"the forces need a field factor of {ff:G3} (torque {torqueScale:G3} times the model{(double.IsNaN(liftScale) ? "" : $", lift {liftScale:G3} times")}), outside the plausible "
+                + $"{options.FieldFactorRange.Min:G3}..{options.FieldFactorRange.Max:G3}. Likely cause: the data belong to another rotor, plate or gap, or a column is in another unit; "
+                + "check the rotor row (remanence_t, radii, magnet_thickness_mm) and gap_mm.");
+        }
+        return null;
+    }
+
+    // The least-squares scale of one measured series ("torque" net of windage and bearing drag, or "lift") over the
+    // uncorrected eddy part at the fitted conductivity factor; NaN without data.
+    private static double ForceScale(CalibrationRequest request, CalibrationProblem problem, double[] phys, string name)
+    {
+        double sxy = 0, sxx = 0;
+        foreach (var pt in request.Points!)
+        {
+            var (lift, torque) = problem.Eddy(phys[0], 1.0, pt.SpeedRadPerS, pt.GapM, pt.PlateTempC ?? request.PlateTempC);
+            if (name == "torque")
+            {
+                double y = pt.TorqueNm - problem.Windage(pt.SpeedRadPerS) - BearingDrag.TorqueUnchecked(pt.SpeedRadPerS, phys[2], phys[3]);
+                sxy += torque * y;
+                sxx += torque * torque;
+            }
+            else if (pt.LiftN is { } l)
+            {
+                sxy += lift * l;
+                sxx += lift * lift;
+            }
+        }
+        return sxx > 0 ? sxy / sxx : double.NaN;
     }
 
     // Torque in N cm is 100 times the N m value, in N mm 1000 times, in kgf cm 1/0.0980665 = 10.2 times.

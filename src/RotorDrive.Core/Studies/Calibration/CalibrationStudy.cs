@@ -46,19 +46,66 @@ public static partial class CalibrationStudy
     public static CalibrationResult Run(CalibrationRequest request)
     {
         Validate(request);
-        if (request.Trace is { } full && FirstRest(full) is int rest && rest + 1 < full.Count)
-        {
-            // Once the tachometer reads 0 the rotor is at rest: later samples carry no information on the drag, and counting
-            // them as degrees of freedom would shrink the residual variance and the intervals.
-            request = request with { Trace = full.Take(rest + 1).ToArray() };
-        }
+        request = UpToRest(request);
         var options = request.Options;
         var problem = new CalibrationProblem(request);
         var (measured, series) = problem.Measured();
         int n = measured.Length;
+        var map = StartingMap(request);
+        int p = map.Free.Count;
+        if (n <= p + 1)
+        {
+            return Refused(request, problem, map, map.Physical(map.Start()), measured, series, Enumerable.Repeat(1.0, n).ToArray(),
+                CalibrationRefusal.TooFewPoints, $"{n} measured values cannot fit {p} parameters with any check left; measure at least {p + 2}.");
+        }
+        if (request.Trace is null && !options.Fixed.Contains(CalibrationParameter.FieldFactor))
+        {
+            map = WithFieldFactorFromTorque(request, problem, map);
+        }
+
+        // Series scales: first the measured values' own size, then (torque with lift) each series' residual scatter.
+        var scale = SeriesScales(measured, series, null, p);
+        Vector<double> theta;
+        int iterations;
+        try
+        {
+            (theta, iterations) = Minimise(problem, map, measured, scale, map.Start(), options.MaxIterations);
+            if (series.Contains("lift"))
+            {
+                var model = new double[n];
+                problem.Predict(map.Physical(theta), model);
+                scale = SeriesScales(measured, series, model, p);
+                (theta, iterations) = Minimise(problem, map, measured, scale, theta, options.MaxIterations);
+            }
+        }
+        catch (Exception e) when (e is NonConvergenceException or MaximumIterationsException or ArithmeticException)
+        {
+            return Refused(request, problem, map, map.Physical(map.Start()), measured, series, scale, CalibrationRefusal.NotConverged,
+                $"the least-squares fit did not converge ({e.Message}); check that the data belong to this rotor and plate and are in the documented units.");
+        }
+        double[] phys = map.Physical(theta);
+        if (phys.Any(v => !double.IsFinite(v)))
+        {
+            return Refused(request, problem, map, map.Physical(map.Start()), measured, series, scale, CalibrationRefusal.NotConverged,
+                "the least-squares fit ran away to non-finite values; check that the data belong to this rotor and plate and are in the documented units.");
+        }
+        return Assemble(request, problem, map, theta, measured, series, scale, iterations);
+    }
+
+    // Once the tachometer reads 0 the rotor is at rest: later samples carry no information on the drag, and counting them
+    // as degrees of freedom would shrink the residual variance and the intervals.
+    private static CalibrationRequest UpToRest(CalibrationRequest request)
+        => request.Trace is { } full && FirstRest(full) is int rest && rest + 1 < full.Count
+            ? request with { Trace = full.Take(rest + 1).ToArray() }
+            : request;
+
+    // The free parameters (the two factors unless held; with a spin-down also the bearing terms unless held, and the start
+    // speed), the start at the rotor row's values and the scales the bearing terms and start speed are fitted in.
+    private static ParameterMap StartingMap(CalibrationRequest request)
+    {
+        var options = request.Options;
         bool spin = request.Trace is not null;
         var rotor = request.Rotor;
-
         var free = new List<int>();
         foreach (var q in new[] { CalibrationParameter.ConductivityFactor, CalibrationParameter.FieldFactor })
         {
@@ -85,60 +132,28 @@ public static partial class CalibrationStudy
             ? rotor.InertiaKgM2 * speedRef / Math.Max(1e-9, request.Trace![^1].TimeS - request.Trace[0].TimeS)
             : Math.Max(1e-12, request.Points!.Max(p => Math.Abs(p.TorqueNm)));
         var start = new[] { 1.0, 1.0, rotor.BearingDragNm, rotor.BearingDampingNmPerRadPerS, startSpeed };
-        var map = new ParameterMap(free, start, torqueRef, speedRef);
+        return new ParameterMap(free, start, torqueRef, speedRef);
+    }
 
-        if (n <= free.Count + 1)
+    // Steady points: start the field factor at the torque's least-squares scale over the uncorrected eddy torque, so a
+    // fit that starts far off (a torque column in another unit) still lands in the right basin.
+    private static ParameterMap WithFieldFactorFromTorque(CalibrationRequest request, CalibrationProblem problem, ParameterMap map)
+    {
+        var start = map.StartPhysical.ToArray();
+        double sxy = 0, sxx = 0;
+        foreach (var p in request.Points!)
         {
-            return Refused(request, problem, map, map.Physical(map.Start()), measured, series, Enumerable.Repeat(1.0, n).ToArray(),
-                CalibrationRefusal.TooFewPoints, $"{n} measured values cannot fit {free.Count} parameters with any check left; measure at least {free.Count + 2}.");
+            double m = problem.Eddy(1, 1, p.SpeedRadPerS, p.GapM, p.PlateTempC ?? request.PlateTempC).TorqueNm;
+            double y = p.TorqueNm - problem.Windage(p.SpeedRadPerS) - BearingDrag.TorqueUnchecked(p.SpeedRadPerS, start[2], start[3]);
+            sxy += m * y;
+            sxx += m * m;
         }
-
-        if (!spin && !options.Fixed.Contains(CalibrationParameter.FieldFactor))
+        if (sxx > 0 && sxy > 0)
         {
-            // Start the field factor at the torque's least-squares scale over the uncorrected eddy torque, so a fit that
-            // starts far off (a torque column in another unit) still lands in the right basin.
-            double sxy = 0, sxx = 0;
-            foreach (var p in request.Points!)
-            {
-                double m = problem.Eddy(1, 1, p.SpeedRadPerS, p.GapM, p.PlateTempC ?? request.PlateTempC).TorqueNm;
-                double y = p.TorqueNm - problem.Windage(p.SpeedRadPerS) - BearingDrag.TorqueUnchecked(p.SpeedRadPerS, start[2], start[3]);
-                sxy += m * y;
-                sxx += m * m;
-            }
-            if (sxx > 0 && sxy > 0)
-            {
-                start[1] = Math.Sqrt(sxy / sxx);
-                map = new ParameterMap(free, start, torqueRef, speedRef);
-            }
+            start[1] = Math.Sqrt(sxy / sxx);
+            return new ParameterMap(map.Free, start, map.TorqueRef, map.SpeedRef);
         }
-
-        // Series scales: first the measured values' own size, then (torque with lift) each series' residual scatter.
-        var scale = SeriesScales(measured, series, null, free.Count);
-        Vector<double> theta;
-        int iterations;
-        try
-        {
-            (theta, iterations) = Minimise(problem, map, measured, scale, map.Start(), options.MaxIterations);
-            if (series.Contains("lift"))
-            {
-                var model = new double[n];
-                problem.Predict(map.Physical(theta), model);
-                scale = SeriesScales(measured, series, model, free.Count);
-                (theta, iterations) = Minimise(problem, map, measured, scale, theta, options.MaxIterations);
-            }
-        }
-        catch (Exception e) when (e is NonConvergenceException or MaximumIterationsException or ArithmeticException)
-        {
-            return Refused(request, problem, map, map.Physical(map.Start()), measured, series, scale, CalibrationRefusal.NotConverged,
-                $"the least-squares fit did not converge ({e.Message}); check that the data belong to this rotor and plate and are in the documented units.");
-        }
-        double[] phys = map.Physical(theta);
-        if (phys.Any(v => !double.IsFinite(v)))
-        {
-            return Refused(request, problem, map, map.Physical(map.Start()), measured, series, scale, CalibrationRefusal.NotConverged,
-                "the least-squares fit ran away to non-finite values; check that the data belong to this rotor and plate and are in the documented units.");
-        }
-        return Assemble(request, problem, map, theta, measured, series, scale, iterations);
+        return map;
     }
 
     private static int? FirstRest(IReadOnlyList<SpinDownSample> trace)
