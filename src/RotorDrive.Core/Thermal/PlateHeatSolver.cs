@@ -51,10 +51,7 @@ internal sealed class PlateHeatSolver
     {
         _sheet = Preconditions.NotNull(sheet, nameof(sheet));
         Preconditions.NotNull(sources, nameof(sources));
-        Preconditions.Positive(sheet.ThicknessM, "plate thickness");
-        Preconditions.Positive(sheet.ConductivityWPerMK, "plate thermal conductivity");
-        Preconditions.Positive(sheet.HeatCapacityJPerM2K, "plate heat capacity");
-        Preconditions.NonNegative(sheet.LossWPerM2K, "plate face loss coefficient");
+        CheckSheet(sheet);
         _fft = new Fft(count);
         _n = count;
         OriginXM = Preconditions.Finite(originXM, nameof(originXM));
@@ -64,71 +61,102 @@ internal sealed class PlateHeatSolver
         _capacity = sheet.HeatCapacityJPerM2K;
         _beta = sheet.LossRatePerS;
         _alpha = sheet.DiffusivityM2PerS;
-        int n = count, modes = n * n, half = n / 2;
-        _k = new double[n];
-        for (int i = 0; i < n; i++)
-        {
-            _k[i] = 2 * Math.PI / lengthM * (i <= half ? i : i - n);
-        }
+        _k = Wavenumbers(count, lengthM);
+        int modes = count * count;
         _a = new Complex[modes];
         _e = new Complex[modes];
         _f = new Complex[modes];
         _s = new Complex[modes];
         _work = new Complex[modes];
-        _column = new Complex[n];
+        _column = new Complex[count];
         _sources = new Complex[sources.Count][];
         _weights = new Complex[sources.Count][];
-        var hankels = new Dictionary<double[], double[]>(ReferenceEqualityComparer.Instance);
-        var px = new Complex[n];
-        var py = new Complex[n];
+        var ringTables = new Dictionary<double[], double[]>(ReferenceEqualityComparer.Instance);
         for (int j = 0; j < sources.Count; j++)
         {
             var src = sources[j];
-            if (!hankels.TryGetValue(src.RingRadiiM, out var ringTable))
+            if (!ringTables.TryGetValue(src.RingRadiiM, out var ringTable))
             {
-                ringTable = Quadrant(kappa =>
-                {
-                    double sum = 0;
-                    for (int r = 0; r < src.RingRadiiM.Length; r++)
-                    {
-                        sum += src.RingFractions[r] * Bessel.J0(kappa * src.RingRadiiM[r]);
-                    }
-                    return sum;
-                });
-                hankels[src.RingRadiiM] = ringTable;
+                ringTable = RingTable(src);
+                ringTables[src.RingRadiiM] = ringTable;
             }
-            double ri = src.InnerRadiusM, ro = src.OuterRadiusM;
-            var meanTable = Quadrant(kappa => kappa == 0 ? 1.0 : 2 * (ro * Bessel.J1(kappa * ro) - ri * Bessel.J1(kappa * ri)) / (kappa * (ro * ro - ri * ri)));
-            for (int i = 0; i < n; i++)
+            (_sources[j], _weights[j]) = SourceModes(src, ringTable, AnnulusMeanTable(src));
+        }
+    }
+
+    private static void CheckSheet(PlateSheet sheet)
+    {
+        Preconditions.Positive(sheet.ThicknessM, "plate thickness");
+        Preconditions.Positive(sheet.ConductivityWPerMK, "plate thermal conductivity");
+        Preconditions.Positive(sheet.HeatCapacityJPerM2K, "plate heat capacity");
+        Preconditions.NonNegative(sheet.LossWPerM2K, "plate face loss coefficient");
+    }
+
+    // The wavenumbers of a periodic grid of n points on a side of lengthM: 2 pi / L times 0..n/2, then -(n/2 - 1)..-1.
+    private static double[] Wavenumbers(int n, double lengthM)
+    {
+        int half = n / 2;
+        var k = new double[n];
+        for (int i = 0; i < n; i++)
+        {
+            k[i] = 2 * Math.PI / lengthM * (i <= half ? i : i - n);
+        }
+        return k;
+    }
+
+    // The transform of a source's rings about its centre, sum_r f_r J0(|k| r_r), over one quadrant of |k|.
+    private double[] RingTable(AnnularSource src) => Quadrant(kappa =>
+    {
+        double sum = 0;
+        for (int r = 0; r < src.RingRadiiM.Length; r++)
+        {
+            sum += src.RingFractions[r] * Bessel.J0(kappa * src.RingRadiiM[r]);
+        }
+        return sum;
+    });
+
+    // The transform of the mean over a source's magnet annulus about its centre, over one quadrant of |k|.
+    private double[] AnnulusMeanTable(AnnularSource src)
+    {
+        double ri = src.InnerRadiusM, ro = src.OuterRadiusM;
+        return Quadrant(kappa => kappa == 0 ? 1.0 : 2 * (ro * Bessel.J1(kappa * ro) - ri * Bessel.J1(kappa * ri)) / (kappa * (ro * ro - ri * ri)));
+    }
+
+    // A source's modes on the grid: its deposit (ring transform shifted to the source's centre, e^(-i k.s)) and its
+    // annulus-mean weights (the conjugate shift); the Nyquist modes stay zero.
+    private (Complex[] Deposit, Complex[] Weights) SourceModes(AnnularSource src, double[] ringTable, double[] meanTable)
+    {
+        int n = _n, half = n / 2;
+        var px = new Complex[n];
+        var py = new Complex[n];
+        for (int i = 0; i < n; i++)
+        {
+            px[i] = Complex.FromPolarCoordinates(1, -_k[i] * src.XM);
+            py[i] = Complex.FromPolarCoordinates(1, -_k[i] * src.YM);
+        }
+        var g = new Complex[n * n];
+        var w = new Complex[n * n];
+        for (int iy = 0; iy < n; iy++)
+        {
+            if (iy == half && n > 1)
             {
-                px[i] = Complex.FromPolarCoordinates(1, -_k[i] * src.XM);
-                py[i] = Complex.FromPolarCoordinates(1, -_k[i] * src.YM);
+                continue;
             }
-            var g = new Complex[modes];
-            var w = new Complex[modes];
-            for (int iy = 0; iy < n; iy++)
+            int ay = Math.Abs(iy <= half ? iy : iy - n);
+            for (int ix = 0; ix < n; ix++)
             {
-                if (iy == half && n > 1)
+                if (ix == half && n > 1)
                 {
                     continue;
                 }
-                int ay = Math.Abs(iy <= half ? iy : iy - n);
-                for (int ix = 0; ix < n; ix++)
-                {
-                    if (ix == half && n > 1)
-                    {
-                        continue;
-                    }
-                    int ax = Math.Abs(ix <= half ? ix : ix - n);
-                    int q = ax * (half + 1) + ay;
-                    Complex phase = px[ix] * py[iy];
-                    g[iy * n + ix] = ringTable[q] * phase;
-                    w[iy * n + ix] = meanTable[q] * Complex.Conjugate(phase);
-                }
+                int ax = Math.Abs(ix <= half ? ix : ix - n);
+                int q = ax * (half + 1) + ay;
+                Complex phase = px[ix] * py[iy];
+                g[iy * n + ix] = ringTable[q] * phase;
+                w[iy * n + ix] = meanTable[q] * Complex.Conjugate(phase);
             }
-            _sources[j] = g;
-            _weights[j] = w;
         }
+        return (g, w);
     }
 
     /// <summary>Points per side.</summary>
