@@ -97,6 +97,28 @@ public static class CalibrationFile
         ArgumentNullException.ThrowIfNull(text);
         ArgumentNullException.ThrowIfNull(problems);
         int before = problems.Count;
+        if (ReadRows(text, file, problems) is not { } rows)
+        {
+            return null;
+        }
+        string? rotor = Meta(rows, "rotor", file, problems);
+        string? rotorHash = Meta(rows, "rotor_row_sha256", file, problems);
+        var (values, fitted, covariance) = ReadQuantities(rows, file, problems);
+        if (problems.Count > before || rotor is null || rotorHash is null)
+        {
+            return null;
+        }
+        var factors = new LoadCalibration(values[0], values[1], fitted[2] ? values[2] : null, fitted[3] ? values[3] : null);
+        string? dataFile = rows.TryGetValue("data_file", out var d) && d.Fields[1].Length > 0 ? d.Fields[1] : null;
+        string? dataHash = rows.TryGetValue("data_sha256", out var h) && h.Fields[1].Length > 0 ? h.Fields[1] : null;
+        return (new RotorCalibration(rotor, factors, covariance, Path.GetFileName(file)), rotorHash, dataFile, dataHash);
+    }
+
+    // The rows by key, after checking the header; null when the header or the CSV itself is broken (rows with the wrong
+    // number of fields are reported and skipped).
+    private static Dictionary<string, (string[] Fields, int Line)>? ReadRows(string text, string file, List<InputProblem> problems)
+    {
+        int before = problems.Count;
         var rows = new Dictionary<string, (string[] Fields, int Line)>(StringComparer.OrdinalIgnoreCase);
         var options = CsvReaderOptions.Default with { TrackLineNumbers = true, Separator = ',' };
         try
@@ -137,33 +159,13 @@ public static class CalibrationFile
             problems.Add(new InputProblem(file, (int)Math.Max(0, e.LineNumber), 0, "", Messages.MalformedRow(e.Message)));
             return null;
         }
+        return rows;
+    }
 
-        string? Meta(string key)
-        {
-            if (!rows.TryGetValue(key, out var row) || row.Fields[1].Length == 0)
-            {
-                problems.Add(new InputProblem(file, 0, 0, key, Messages.CalibrationMissing(key)));
-                return null;
-            }
-            return row.Fields[1];
-        }
-        double Number(string key, int column, (string[] Fields, int Line) row, bool positive)
-        {
-            string t = row.Fields[column];
-            if (!double.TryParse(t, NumberStyles.Float, CultureInfo.InvariantCulture, out double v) || !double.IsFinite(v))
-            {
-                problems.Add(new InputProblem(file, row.Line, column + 1, Header[column], Messages.NotANumber(t)));
-                return double.NaN;
-            }
-            if (positive && !(v > 0))
-            {
-                problems.Add(new InputProblem(file, row.Line, column + 1, Header[column], Messages.CalibrationFactorInvalid(key, v)));
-            }
-            return v;
-        }
-
-        string? rotor = Meta("rotor");
-        string? rotorHash = Meta("rotor_row_sha256");
+    // The four quantities in SI: value, whether it was fitted, and its covariance row.
+    private static (double[] Values, bool[] Fitted, double[][] Covariance) ReadQuantities(Dictionary<string, (string[] Fields, int Line)> rows,
+        string file, List<InputProblem> problems)
+    {
         var values = new double[4];
         var fitted = new bool[4];
         var covariance = new double[4][];
@@ -175,7 +177,7 @@ public static class CalibrationFile
                 problems.Add(new InputProblem(file, 0, 0, QuantityKeys[k], Messages.CalibrationMissing(QuantityKeys[k])));
                 continue;
             }
-            values[k] = Number(QuantityKeys[k], 1, row, k < 2) / UnitScale(k);
+            values[k] = Number(QuantityKeys[k], 1, row, k < 2, file, problems) / UnitScale(k);
             fitted[k] = string.Equals(row.Fields[5], "true", StringComparison.OrdinalIgnoreCase);
             if (k >= 2 && values[k] < 0)
             {
@@ -183,17 +185,38 @@ public static class CalibrationFile
             }
             for (int c = 0; c < 4; c++)
             {
-                covariance[k][c] = Number(QuantityKeys[k], 7 + c, row, false) / (UnitScale(k) * UnitScale(c));
+                covariance[k][c] = Number(QuantityKeys[k], 7 + c, row, false, file, problems) / (UnitScale(k) * UnitScale(c));
             }
         }
-        if (problems.Count > before || rotor is null || rotorHash is null)
+        return (values, fitted, covariance);
+    }
+
+    // A text entry from the value column, or null (reported) when the row is missing or empty.
+    private static string? Meta(Dictionary<string, (string[] Fields, int Line)> rows, string key, string file, List<InputProblem> problems)
+    {
+        if (!rows.TryGetValue(key, out var row) || row.Fields[1].Length == 0)
         {
+            problems.Add(new InputProblem(file, 0, 0, key, Messages.CalibrationMissing(key)));
             return null;
         }
-        var factors = new LoadCalibration(values[0], values[1], fitted[2] ? values[2] : null, fitted[3] ? values[3] : null);
-        string? dataFile = rows.TryGetValue("data_file", out var d) && d.Fields[1].Length > 0 ? d.Fields[1] : null;
-        string? dataHash = rows.TryGetValue("data_sha256", out var h) && h.Fields[1].Length > 0 ? h.Fields[1] : null;
-        return (new RotorCalibration(rotor, factors, covariance, Path.GetFileName(file)), rotorHash, dataFile, dataHash);
+        return row.Fields[1];
+    }
+
+    // A number from one column of a quantity's row; NaN (reported) when it is not a finite number, and reported when it
+    // must be positive and is not.
+    private static double Number(string key, int column, (string[] Fields, int Line) row, bool positive, string file, List<InputProblem> problems)
+    {
+        string t = row.Fields[column];
+        if (!double.TryParse(t, NumberStyles.Float, CultureInfo.InvariantCulture, out double v) || !double.IsFinite(v))
+        {
+            problems.Add(new InputProblem(file, row.Line, column + 1, Header[column], Messages.NotANumber(t)));
+            return double.NaN;
+        }
+        if (positive && !(v > 0))
+        {
+            problems.Add(new InputProblem(file, row.Line, column + 1, Header[column], Messages.CalibrationFactorInvalid(key, v)));
+        }
+        return v;
     }
 
     // File units per SI unit: bearing damping is written per 1000 rpm.

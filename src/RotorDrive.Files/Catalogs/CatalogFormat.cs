@@ -77,17 +77,10 @@ public abstract class CatalogFormat<TRow> where TRow : notnull
             using var reader = CsvReader.FromText(text, options);
             reader.ReadHeader();
             var headers = reader.Headers;
-            if (headers.Count == 0 || headers.All(h => h.Trim().Length == 0))
-            {
-                problems.Add(new InputProblem(file, 1, 0, "", Messages.EmptyCsv()));
-                return Result(kept, problems, rejected, columnIndex);
-            }
             int headerLine = (int)reader.LineNumber;
-            // A semicolon or tab export reads as one long header column: one message that says so, not one per column.
-            if (headers.Count == 1 && (headers[0].Contains(';', StringComparison.Ordinal) || headers[0].Contains('\t', StringComparison.Ordinal)))
+            if (UnreadableHeader(headers, file, headerLine) is { } unreadable)
             {
-                string separator = headers[0].Contains(';', StringComparison.Ordinal) ? "semicolons" : "tabs";
-                problems.Add(new InputProblem(file, headerLine, 0, "", Messages.CsvWrongSeparator(separator)));
+                problems.Add(unreadable);
                 return Result(kept, problems, rejected, columnIndex);
             }
             if (malformed.TryGetValue(headerLine, out string? headerReason))
@@ -95,46 +88,7 @@ public abstract class CatalogFormat<TRow> where TRow : notnull
                 problems.Add(new InputProblem(file, headerLine, 0, "", Messages.MalformedRow(headerReason)));
             }
             columnIndex = ReadHeader(headers, file, headerLine, problems);
-
-            var seenIds = new Dictionary<string, int>(StringComparer.OrdinalIgnoreCase);
-            while (reader.Read())
-            {
-                int line = (int)reader.LineNumber;
-                var fields = new string[reader.FieldCount];
-                for (int i = 0; i < fields.Length; i++)
-                {
-                    fields[i] = reader.GetString(i);
-                }
-                if (malformed.TryGetValue(line, out string? reason))
-                {
-                    problems.Add(new InputProblem(file, line, 0, "", Messages.MalformedRow(reason)));
-                    RejectRawId(fields, columnIndex, rejected);
-                    continue;
-                }
-                if (fields.Length != headers.Count)
-                {
-                    problems.Add(new InputProblem(file, line, 0, "", Messages.FieldCount(headers.Count, fields.Length)));
-                    RejectRawId(fields, columnIndex, rejected);
-                    continue;
-                }
-                var cursor = new CsvRowCursor(file, line, fields, columnIndex, _byName, problems);
-                var row = ReadRow(cursor);
-                if (row is null || cursor.HasProblems)
-                {
-                    RejectRawId(fields, columnIndex, rejected);
-                    continue;
-                }
-                if (IdOf(row) is { } id)
-                {
-                    if (seenIds.TryGetValue(id, out int firstLine))
-                    {
-                        cursor.Report(IdColumn!, Messages.DuplicateId(id, firstLine));
-                        continue;
-                    }
-                    seenIds[id] = line;
-                }
-                kept.Add((row, line));
-            }
+            ReadRecords(reader, headers.Count, file, columnIndex, malformed, problems, rejected, kept);
         }
         catch (CsvFormatException e)
         {
@@ -144,6 +98,68 @@ public abstract class CatalogFormat<TRow> where TRow : notnull
 
         kept = CheckTable(kept, file, name => columnIndex.TryGetValue(name, out int i) ? i + 1 : 0, problems, rejected);
         return Result(kept, problems, rejected, columnIndex);
+    }
+
+    // A header that cannot start a catalog: empty, or one long column from a semicolon or tab export (one message that
+    // says so, not one per column); null when the header can be read column by column.
+    private static InputProblem? UnreadableHeader(IReadOnlyList<string> headers, string file, int headerLine)
+    {
+        if (headers.Count == 0 || headers.All(h => h.Trim().Length == 0))
+        {
+            return new InputProblem(file, 1, 0, "", Messages.EmptyCsv());
+        }
+        if (headers.Count == 1 && (headers[0].Contains(';', StringComparison.Ordinal) || headers[0].Contains('\t', StringComparison.Ordinal)))
+        {
+            string separator = headers[0].Contains(';', StringComparison.Ordinal) ? "semicolons" : "tabs";
+            return new InputProblem(file, headerLine, 0, "", Messages.CsvWrongSeparator(separator));
+        }
+        return null;
+    }
+
+    // The data rows after the header: a malformed row, a row with the wrong number of fields or a row with a problem is
+    // reported and its id rejected; a repeated id is reported; every other row is kept with its line.
+    private void ReadRecords(CsvReader reader, int headerCount, string file, Dictionary<string, int> columnIndex, Dictionary<long, string> malformed,
+        List<InputProblem> problems, HashSet<string> rejected, List<(TRow Row, int Line)> kept)
+    {
+        var seenIds = new Dictionary<string, int>(StringComparer.OrdinalIgnoreCase);
+        while (reader.Read())
+        {
+            int line = (int)reader.LineNumber;
+            var fields = new string[reader.FieldCount];
+            for (int i = 0; i < fields.Length; i++)
+            {
+                fields[i] = reader.GetString(i);
+            }
+            if (malformed.TryGetValue(line, out string? reason))
+            {
+                problems.Add(new InputProblem(file, line, 0, "", Messages.MalformedRow(reason)));
+                RejectRawId(fields, columnIndex, rejected);
+                continue;
+            }
+            if (fields.Length != headerCount)
+            {
+                problems.Add(new InputProblem(file, line, 0, "", Messages.FieldCount(headerCount, fields.Length)));
+                RejectRawId(fields, columnIndex, rejected);
+                continue;
+            }
+            var cursor = new CsvRowCursor(file, line, fields, columnIndex, _byName, problems);
+            var row = ReadRow(cursor);
+            if (row is null || cursor.HasProblems)
+            {
+                RejectRawId(fields, columnIndex, rejected);
+                continue;
+            }
+            if (IdOf(row) is { } id)
+            {
+                if (seenIds.TryGetValue(id, out int firstLine))
+                {
+                    cursor.Report(IdColumn!, Messages.DuplicateId(id, firstLine));
+                    continue;
+                }
+                seenIds[id] = line;
+            }
+            kept.Add((row, line));
+        }
     }
 
     /// <summary>Writes rows as catalog text with a header row (invariant culture, round-trip number formatting).</summary>
