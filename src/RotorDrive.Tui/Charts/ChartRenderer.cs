@@ -39,34 +39,56 @@ public static class ChartRenderer
         var (xLo, xHi, xStep, yLo, yHi, yStep) = Ranges(data, finite, picture.Width, picture.Height);
         var yTicks = Ticks(yLo, yHi, yStep);
         int labelWidth = yTicks.Max(t => ChartView.Short(t).Length);
-        int axisColumn = labelWidth;
-        int plotLeft = axisColumn + 1, plotTop = 1;
-        int plotWidth = Math.Max(4, picture.Width - plotLeft - 1);
-        int plotHeight = picture.Height - FrameRows;
-        int axisRow = plotTop + plotHeight;
-        picture.PlotLeft = plotLeft;
-        picture.PlotTop = plotTop;
-        picture.PlotWidth = plotWidth;
-        picture.PlotHeight = plotHeight;
+        int plotLeft = labelWidth + 1;
+        var plot = new PlotArea(xLo, xHi, yLo, yHi, plotLeft, 1, Math.Max(4, picture.Width - plotLeft - 1), picture.Height - FrameRows);
+        picture.PlotLeft = plot.Left;
+        picture.PlotTop = plot.Top;
+        picture.PlotWidth = plot.Width;
+        picture.PlotHeight = plot.Height;
 
-        int Column(double x) => plotLeft + (int)Math.Round((x - xLo) / (xHi - xLo) * (plotWidth - 1));
-        int RowOf(double y) => plotTop + (int)Math.Round((yHi - y) / (yHi - yLo) * (plotHeight - 1));
-
-        // Axes, ticks and their labels.
         bool u = style.Unicode;
-        for (int r = plotTop; r < axisRow; r++)
+        DrawAxes(picture, plot, yTicks, u);
+        WriteXTicks(picture, Ticks(xLo, xHi, xStep), plot.Column, plot.AxisRow, u);
+        // Curves (braille dots or plain characters), then marks on top, then the cursor.
+        DrawCurves(picture, plot, data.Lines, u);
+        DrawMarks(picture, plot, data.Lines);
+        string top = TopLine(picture, plot, data, cursor, u);
+        picture.Write(0, 0, top.Length > picture.Width ? top[..picture.Width] : top, ChartPicture.Text);
+        return picture;
+    }
+
+    // The plot's value ranges and its cells in the picture (the y axis in the column left of it, the x axis in the row
+    // below it).
+    private readonly record struct PlotArea(double XLo, double XHi, double YLo, double YHi, int Left, int Top, int Width, int Height)
+    {
+        public int AxisColumn => Left - 1;
+
+        public int AxisRow => Top + Height;
+
+        public int Column(double x) => Left + (int)Math.Round((x - XLo) / (XHi - XLo) * (Width - 1));
+
+        public int Row(double y) => Top + (int)Math.Round((YHi - y) / (YHi - YLo) * (Height - 1));
+
+        public bool Contains((double X, double Y) p) => p.X >= XLo && p.X <= XHi && p.Y >= YLo && p.Y <= YHi;
+    }
+
+    // The y axis with its ticks and labels (both ends always, the others where they do not touch), and the x axis line.
+    private static void DrawAxes(ChartPicture picture, PlotArea plot, List<double> yTicks, bool u)
+    {
+        int axisColumn = plot.AxisColumn, axisRow = plot.AxisRow;
+        for (int r = plot.Top; r < axisRow; r++)
         {
             picture.Set(axisColumn, r, u ? '│' : '|', ChartPicture.Axis);
         }
         picture.Set(axisColumn, axisRow, u ? '└' : '+', ChartPicture.Axis);
-        for (int c = plotLeft; c < plotLeft + plotWidth; c++)
+        for (int c = plot.Left; c < plot.Left + plot.Width; c++)
         {
             picture.Set(c, axisRow, u ? '─' : '-', ChartPicture.Axis);
         }
         int lastLabelRow = -2;
         foreach (double t in yTicks.OrderByDescending(t => t))
         {
-            int r = RowOf(t);
+            int r = plot.Row(t);
             picture.Set(axisColumn, r, u ? '┤' : '+', ChartPicture.Axis);
             bool end = t == yTicks[0] || t == yTicks[^1];
             if (end || r > lastLabelRow + 1)
@@ -76,9 +98,13 @@ public static class ChartRenderer
                 lastLabelRow = r;
             }
         }
-        WriteXTicks(picture, Ticks(xLo, xHi, xStep), Column, axisRow, u);
+    }
 
-        // Curves (braille dots or plain characters), then marks on top, then the cursor.
+    // The joined series as clipped line segments: braille dots (2 x 4 per cell) or one plain character per cell; a cell
+    // belongs to the last series that touched it.
+    private static void DrawCurves(ChartPicture picture, PlotArea plot, IReadOnlyList<ChartLine> lines, bool u)
+    {
+        int plotWidth = plot.Width, plotHeight = plot.Height;
         int pw = u ? plotWidth * 2 : plotWidth, ph = u ? plotHeight * 4 : plotHeight;
         var bits = new int[plotHeight, plotWidth];
         var owner = new int[plotHeight, plotWidth];
@@ -99,9 +125,8 @@ public static class ChartRenderer
             bits[r, c] |= u ? BrailleBits[px % 2, py % 4] : 1;
             owner[r, c] = line;
         }
-        double Px(double x) => (x - xLo) / (xHi - xLo) * (pw - 1);
-        double Py(double y) => (yHi - y) / (yHi - yLo) * (ph - 1);
-        var lines = data.Lines;
+        double Px(double x) => (x - plot.XLo) / (plot.XHi - plot.XLo) * (pw - 1);
+        double Py(double y) => (plot.YHi - y) / (plot.YHi - plot.YLo) * (ph - 1);
         for (int i = 0; i < lines.Count; i++)
         {
             var points = lines[i].Points.Where(Finite).ToList();
@@ -111,7 +136,7 @@ public static class ChartRenderer
             }
             for (int k = 1; k < points.Count; k++)
             {
-                if (Clip(points[k - 1], points[k], xLo, xHi, yLo, yHi) is { } seg)
+                if (Clip(points[k - 1], points[k], plot.XLo, plot.XHi, plot.YLo, plot.YHi) is { } seg)
                 {
                     Bresenham((int)Math.Round(Px(seg.A.X)), (int)Math.Round(Py(seg.A.Y)), (int)Math.Round(Px(seg.B.X)), (int)Math.Round(Py(seg.B.Y)), i, Dot);
                 }
@@ -123,10 +148,15 @@ public static class ChartRenderer
             {
                 if (owner[r, c] >= 0)
                 {
-                    picture.Set(plotLeft + c, plotTop + r, u ? (char)(0x2800 + bits[r, c]) : lines[owner[r, c]].Glyph, owner[r, c]);
+                    picture.Set(plot.Left + c, plot.Top + r, u ? (char)(0x2800 + bits[r, c]) : lines[owner[r, c]].Glyph, owner[r, c]);
                 }
             }
         }
+    }
+
+    // The series drawn as marks (not joined, or fewer than two finite points): each point's glyph in its cell.
+    private static void DrawMarks(ChartPicture picture, PlotArea plot, IReadOnlyList<ChartLine> lines)
+    {
         for (int i = 0; i < lines.Count; i++)
         {
             if (lines[i].Joined && lines[i].Points.Count(Finite) >= 2)
@@ -135,31 +165,29 @@ public static class ChartRenderer
             }
             foreach (var p in lines[i].Points.Where(Finite))
             {
-                if (p.X >= xLo && p.X <= xHi && p.Y >= yLo && p.Y <= yHi)
+                if (plot.Contains(p))
                 {
-                    picture.Set(Column(p.X), RowOf(p.Y), lines[i].Glyph, i);
+                    picture.Set(plot.Column(p.X), plot.Row(p.Y), lines[i].Glyph, i);
                 }
             }
         }
+    }
 
-        string top;
+    // The top line: with a cursor, its mark in the plot and the readout; otherwise the axis names at either end.
+    private static string TopLine(ChartPicture picture, PlotArea plot, ChartData data, (int Line, int Point)? cursor, bool u)
+    {
         if (cursor is { } at && CursorPoint(data, at) is { } point)
         {
-            if (point.X >= xLo && point.X <= xHi && point.Y >= yLo && point.Y <= yHi)
+            if (plot.Contains(point))
             {
-                picture.Set(Column(point.X), RowOf(point.Y), u ? '◆' : '@', ChartPicture.Cursor);
+                picture.Set(plot.Column(point.X), plot.Row(point.Y), u ? '◆' : '@', ChartPicture.Cursor);
             }
-            top = Readout(data, at);
+            return Readout(data, at);
         }
-        else
-        {
-            string yName = (u ? "↑ " : "^ ") + data.YLabel;
-            string xName = data.XLabel + (u ? " →" : " >");
-            int gap = picture.Width - yName.Length - xName.Length;
-            top = gap >= 2 ? yName + new string(' ', gap) + xName : yName + "; " + xName;
-        }
-        picture.Write(0, 0, top.Length > picture.Width ? top[..picture.Width] : top, ChartPicture.Text);
-        return picture;
+        string yName = (u ? "↑ " : "^ ") + data.YLabel;
+        string xName = data.XLabel + (u ? " →" : " >");
+        int gap = picture.Width - yName.Length - xName.Length;
+        return gap >= 2 ? yName + new string(' ', gap) + xName : yName + "; " + xName;
     }
 
     /// <summary>The exact values at the cursor, in words ("station 1: speed 4520 rpm, torque 1.234 N m").</summary>
