@@ -168,56 +168,16 @@ public sealed class HoverYawSheet : Sheet
     /// <summary>The sheet's text: craft, stations, margins, failing limits, yaw, retaining ring and cautions.</summary>
     internal static string Compose(HoverYawFigures f)
     {
-        var model = f.Model!;
         var review = f.Review!;
         var h = review.Hover;
         var sb = new StringBuilder();
-        sb.AppendLine($"CRAFT  {F(h.MassKg, 1)} kg (payload {F(model.PayloadKg, 1)} kg), {F(h.WeightN, 1)} N, gap {F(h.GapM * 1000, 2)} mm");
-        if (h.Balanced)
-        {
-            sb.AppendLine($"  pack {F(h.PackCurrentA, 1)} A at {F(h.BusVoltageV, 2)} V: {F(h.ElectricalPowerW, 0)} W electrical, {F(h.LiftSpecificPowerWPerN, 2)} W/N");
-            sb.AppendLine($"  into the plate {F(h.PlatePowerW, 0)} W; heave stiffness {F(h.HeaveStiffnessNPerM / 1000, 1)} N/mm, natural frequency {F(h.HeaveFrequencyHz, 2)} Hz");
-        }
-        if (f.Study!.Request.PayloadCapacity)
-        {
-            sb.AppendLine(f.PayloadCapacityKg is { } cap
-                ? $"  {(f.Study.CarriesPayload == true ? "" : Over + " ")}max payload within every limit {F(cap, 1)} kg (carries {F(model.PayloadKg, 1)})"
-                : $"  {Over} max payload: even the empty craft does not hover within every limit");
-        }
+        ComposeCraft(sb, f);
         if (h.Balanced)
         {
             sb.AppendLine();
-            static string Row(string n, string spin, string rpm, string duty, string motor, string controller, string wpn, string state)
-                => $"{n,3}  {spin,-4}{rpm,6}  {duty,6}  {motor,5}  {controller,7}  {wpn,5}  {state}";
-            sb.AppendLine("STATIONS");
-            sb.AppendLine(Row("", "", "speed", "duty", "motor", "ctrl in", "W/N", "state"));
-            sb.AppendLine(Row("#", "spin", "rpm", "", "A", "A", "", ""));
-            foreach (var s in h.Stations)
-            {
-                sb.AppendLine(Row((s.Index + 1).ToString(CultureInfo.InvariantCulture), s.Spin == SpinDirection.Clockwise ? "cw" : "ccw", F(s.SpeedRpm, 0),
-                    F(s.Duty, 3), F(s.MotorCurrentA, 1), F(s.BusCurrentA, 1), F(s.LiftSpecificPowerWPerN, 2), StationState(s, review.Findings)));
-            }
+            ComposeStations(sb, h, review.Findings);
             sb.AppendLine();
-            sb.AppendLine("MARGINS TO LIMITS, %");
-            sb.AppendLine("  " + OverLegend);
-            sb.Append("  limit          ");
-            foreach (var s in h.Stations)
-            {
-                sb.Append($"{"#" + (s.Index + 1),6}");
-            }
-            sb.AppendLine();
-            var limits = h.Stations[0].Margins.Select(m => m.Limit).ToList();
-            foreach (var limit in limits)
-            {
-                sb.Append($"  {ShortName(limit),-15}");
-                foreach (var s in h.Stations)
-                {
-                    var m = s.Margins.FirstOrDefault(x => x.Limit == limit);
-                    sb.Append($"{MarginCell(m),6}");
-                }
-                sb.AppendLine();
-            }
-            sb.AppendLine("  pack: " + string.Join(", ", h.PackMargins.Select(m => $"{ShortName(m.Limit)} {(m.Exceeded ? Over : "")}{F(m.MarginFraction * 100, 0)}")));
+            ComposeMargins(sb, h);
         }
         if (review.Findings.Count > 0)
         {
@@ -236,12 +196,80 @@ public sealed class HoverYawSheet : Sheet
         else
         {
             sb.AppendLine("RAILS (guided rig: every station at one common duty; the rails carry pitch, roll and yaw, reported, not judged)");
-            sb.AppendLine(f.Study.Rails is { } rails
+            sb.AppendLine(f.Study!.Rails is { } rails
                 ? $"  pitch moment {F(rails.PitchMomentNm, 3)} N m, roll moment {F(rails.RollMomentNm, 3)} N m, yaw torque {F(rails.YawTorqueNm, 3)} N m"
                 : "  no hover state, so no rail loads");
         }
         sb.AppendLine();
-        var safety = review.Safety;
+        ComposeRetainingRing(sb, review.Safety);
+        sb.AppendLine();
+        sb.Append(CautionText.Compose(review.Safety.Cautions));
+        return sb.ToString();
+    }
+
+    // The CRAFT section: mass, weight and gap; at a balanced hover the pack, power and heave figures; the payload
+    // capacity when it was asked for.
+    private static void ComposeCraft(StringBuilder sb, HoverYawFigures f)
+    {
+        var model = f.Model!;
+        var h = f.Review!.Hover;
+        sb.AppendLine($"CRAFT  {F(h.MassKg, 1)} kg (payload {F(model.PayloadKg, 1)} kg), {F(h.WeightN, 1)} N, gap {F(h.GapM * 1000, 2)} mm");
+        if (h.Balanced)
+        {
+            sb.AppendLine($"  pack {F(h.PackCurrentA, 1)} A at {F(h.BusVoltageV, 2)} V: {F(h.ElectricalPowerW, 0)} W electrical, {F(h.LiftSpecificPowerWPerN, 2)} W/N");
+            sb.AppendLine($"  into the plate {F(h.PlatePowerW, 0)} W; heave stiffness {F(h.HeaveStiffnessNPerM / 1000, 1)} N/mm, natural frequency {F(h.HeaveFrequencyHz, 2)} Hz");
+        }
+        if (f.Study!.Request.PayloadCapacity)
+        {
+            sb.AppendLine(f.PayloadCapacityKg is { } cap
+                ? $"  {(f.Study.CarriesPayload == true ? "" : Over + " ")}max payload within every limit {F(cap, 1)} kg (carries {F(model.PayloadKg, 1)})"
+                : $"  {Over} max payload: even the empty craft does not hover within every limit");
+        }
+    }
+
+    // The STATIONS table of a balanced hover: spin, speed, duty, currents, W/N and each station's state.
+    private static void ComposeStations(StringBuilder sb, HoverResult h, IReadOnlyList<HoverFinding> findings)
+    {
+        static string Row(string n, string spin, string rpm, string duty, string motor, string controller, string wpn, string state)
+            => $"{n,3}  {spin,-4}{rpm,6}  {duty,6}  {motor,5}  {controller,7}  {wpn,5}  {state}";
+        sb.AppendLine("STATIONS");
+        sb.AppendLine(Row("", "", "speed", "duty", "motor", "ctrl in", "W/N", "state"));
+        sb.AppendLine(Row("#", "spin", "rpm", "", "A", "A", "", ""));
+        foreach (var s in h.Stations)
+        {
+            sb.AppendLine(Row((s.Index + 1).ToString(CultureInfo.InvariantCulture), s.Spin == SpinDirection.Clockwise ? "cw" : "ccw", F(s.SpeedRpm, 0),
+                F(s.Duty, 3), F(s.MotorCurrentA, 1), F(s.BusCurrentA, 1), F(s.LiftSpecificPowerWPerN, 2), StationState(s, findings)));
+        }
+    }
+
+    // The MARGINS TO LIMITS table: one row per drive limit, one column per station, then the pack's margins.
+    private static void ComposeMargins(StringBuilder sb, HoverResult h)
+    {
+        sb.AppendLine("MARGINS TO LIMITS, %");
+        sb.AppendLine("  " + OverLegend);
+        sb.Append("  limit          ");
+        foreach (var s in h.Stations)
+        {
+            sb.Append($"{"#" + (s.Index + 1),6}");
+        }
+        sb.AppendLine();
+        var limits = h.Stations[0].Margins.Select(m => m.Limit).ToList();
+        foreach (var limit in limits)
+        {
+            sb.Append($"  {ShortName(limit),-15}");
+            foreach (var s in h.Stations)
+            {
+                var m = s.Margins.FirstOrDefault(x => x.Limit == limit);
+                sb.Append($"{MarginCell(m),6}");
+            }
+            sb.AppendLine();
+        }
+        sb.AppendLine("  pack: " + string.Join(", ", h.PackMargins.Select(m => $"{ShortName(m.Limit)} {(m.Exceeded ? Over : "")}{F(m.MarginFraction * 100, 0)}")));
+    }
+
+    // The RETAINING RING section: rim speed and the worst check at hover, each rotor at its rated speed, the magnet note.
+    private static void ComposeRetainingRing(StringBuilder sb, HoverSafetyReport safety)
+    {
         sb.AppendLine("RETAINING RING (burst checks)");
         if (safety.AtHover.Count > 0)
         {
@@ -257,9 +285,6 @@ public sealed class HoverYawSheet : Sheet
             sb.AppendLine("  " + RotorSafetyText.Line(rated, "rated"));
         }
         sb.AppendLine("  " + safety.MagnetNote);
-        sb.AppendLine();
-        sb.Append(CautionText.Compose(safety.Cautions));
-        return sb.ToString();
     }
 
     // The YAW section of a free craft: equal-duty residual, trim, authority, sensitivity and the yaw findings.
