@@ -81,6 +81,8 @@ public static class Workbench
         var (window, context) = Build(app, rigPath, files, new SystemClock(), new TerminalPrompts(app), out _);
         using (context.Work)
         using (window)
+        // ROTORDRIVE_UI_TRACE=FILE logs how the UI thread spends its time (DEVELOPERS.md, "Workbench response").
+        using (ResponseTrace.StartIfAsked(app, [window, .. window.Sheets]))
         {
             app.Run(window);
         }

@@ -358,8 +358,8 @@ public sealed class ShortlistSheet : Sheet
     private void ShowState()
     {
         bool running = Context.Work.IsActive(RankJob);
-        _progress.Visible = running;
-        _state.Width = running ? Dim.Fill(21) : Dim.Fill();
+        Redraw.Visible(_progress, running);
+        Redraw.Width(_state, running ? Dim.Fill(21) : Dim.Fill());
         if (running)
         {
             double fraction = Context.Work.Current is { Name: RankJob, Progress: { } f } ? f : 0;

@@ -255,8 +255,8 @@ public sealed class StressSheet : Sheet
     private void ShowState()
     {
         bool running = Context.Work.IsActive(StressJob);
-        _progress.Visible = running;
-        _state.Width = running ? Dim.Fill(21) : Dim.Fill();
+        Redraw.Visible(_progress, running);
+        Redraw.Width(_state, running ? Dim.Fill(21) : Dim.Fill());
         if (running)
         {
             int done = SamplesDone;

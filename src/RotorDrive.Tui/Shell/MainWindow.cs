@@ -121,6 +121,13 @@ public sealed class MainWindow : Window
     /// <summary>Shows a sheet by index.</summary>
     public void ShowSheet(int index, bool focusSheet = true)
     {
+        long start = System.Diagnostics.Stopwatch.GetTimestamp();
+        ShowSheetCore(index, focusSheet);
+        Work.ResponseTrace.Step("show sheet", start);
+    }
+
+    private void ShowSheetCore(int index, bool focusSheet)
+    {
         if (index < 0 || index >= _sheets.Count)
         {
             return;
@@ -458,14 +465,14 @@ public sealed class MainWindow : Window
         _status.Text = $"{session.DisplayName}{mark}{work}{failure}{notice}{problems}";
         if (running is { Progress: { } fraction })
         {
-            _progress.Visible = true;
+            Redraw.Visible(_progress, true);
             _progress.Fraction = (float)fraction;
-            _status.Width = Dim.Fill(22);
+            Redraw.Width(_status, Dim.Fill(22));
         }
         else
         {
-            _progress.Visible = false;
-            _status.Width = Dim.Fill();
+            Redraw.Visible(_progress, false);
+            Redraw.Width(_status, Dim.Fill());
         }
         string sheetKeys = _current >= 0 && _sheets[_current].KeyHints.Length > 0 ? _sheets[_current].KeyHints + "  " : "";
         if (_current >= 0 && _sheets[_current] is ChartSheet)

@@ -250,7 +250,9 @@ public sealed class BackgroundWork : IDisposable
             // Every tick while a job runs, so counts a sheet keeps itself (samples done) move too.
             if (running)
             {
+                long start = System.Diagnostics.Stopwatch.GetTimestamp();
                 Raise();
+                ResponseTrace.Step("progress tick", start);
             }
             if (!running || _disposed)
             {
