@@ -44,8 +44,7 @@ public static class CraftInput
     }
 
     /// <summary>True (after printing why) when a whole-craft analysis is asked of a rig it does not fit (rig file
-    /// <c>mount</c>): every one fits a free craft, <c>hover</c> a guided sled too (one common duty, the rails carry
-    /// pitch, roll and yaw), none a bench of stands; the caller exits with <see cref="ExitCodes.BadInput"/>.</summary>
+    /// <c>mount</c>), as <see cref="MountFit.Fits"/> says; the caller exits with <see cref="ExitCodes.BadInput"/>.</summary>
     /// <param name="command">The subcommand's name.</param>
     /// <param name="loaded">The loaded rig (no problems).</param>
     /// <param name="error">Where the message goes.</param>
@@ -54,19 +53,11 @@ public static class CraftInput
         ArgumentNullException.ThrowIfNull(loaded);
         ArgumentNullException.ThrowIfNull(error);
         var mount = loaded.Rig!.Mount;
-        if (Fits(command, mount))
+        if (MountFit.Fits(command, mount))
         {
             return false;
         }
         error.WriteLine($"rotordrive {command}: error: {loaded.RigPath}: $.mount: {Files.Messages.NotForMount(command, Output.JsonNames.Of(mount))}");
         return true;
     }
-
-    // Which whole-craft analyses fit which mount (the README's table says the same).
-    private static bool Fits(string command, MountKind mount) => mount switch
-    {
-        MountKind.Free => true,
-        MountKind.Guided => command == "hover",
-        _ => false,
-    };
 }

@@ -99,7 +99,7 @@ public static class SpinupSimulator
                     touchdown = t;
                     touchdownSpeed = -y[model.Velocity] / 1000.0;
                 }
-                y[model.Gap] = rig.Rig.LandedGapM * 1000.0;
+                y[model.Gap] = rig.Rig.StartGapM * 1000.0;
                 y[model.Velocity] = 0;
                 model.Grounded = true;
                 model.EvaluateAt(t, y);
