@@ -231,6 +231,12 @@ public static class Messages
         ? $"'{command}' is not for a bench rig (mount \"bench\": each rotor on a stand at a fixed gap, no hover); use 'spinup' or 'endurance' for the stations on their stands, or 'load' or 'operate' for each station"
         : $"'{command}' is not for a guided rig (mount \"guided\": rails carry pitch, roll and yaw, which this analysis balances for a free craft); use 'hover', 'spinup' or 'endurance' for the sled, or 'load' or 'operate' for each station";
 
+    /// <summary>A bench-only option (the stands' gap or duty) given for a rig that is not a bench.</summary>
+    /// <param name="option">The option ("--gap-mm").</param>
+    /// <param name="mount">The rig's mount.</param>
+    public static string StandsOptionsNeedBench(string option, string mount)
+        => $"{option} sets the stands of a bench rig (mount \"bench\"); this rig's mount is \"{mount}\"";
+
     /// <summary>A station's set duty above the rig's max duty.</summary>
     public static string DutyAboveMax(double duty, double maxDuty)
         => $"duty {N(duty)} is above limits.max_duty ({N(maxDuty)}); lower it or raise the limit";

@@ -92,9 +92,10 @@ public static class CommonDutyHover
 
     /// <summary>A guided sled with a duty set on every station (<see cref="Station.Duty"/>): the gap at which those duties'
     /// total lift carries the weight (Brent on lift(gap) - weight between half the landed gap and three times the design
-    /// gap) and the state there (<see cref="HoverMode.Guided"/>; the pitch and roll residuals and the yaw torque are what
+    /// gap) and the state there (<see cref="HoverMode.GuidedSetDuties"/>; the pitch and roll residuals and the yaw torque are what
     /// the rails carry). When the duties lift less than the weight even at the smallest gap, or more at the largest, the
-    /// result holds no state and one "lift" finding says which.</summary>
+    /// result holds no state and one "lift" finding says which; when the gap found lies below the landed gap (the gear
+    /// holds the sled there, so that state cannot exist), none either, with one "landed_gap" finding.</summary>
     /// <param name="model">The rig model.</param>
     /// <param name="duties">One duty per station, 0..1.</param>
     /// <param name="options">Numerical settings; defaults when null.</param>
@@ -103,7 +104,7 @@ public static class CommonDutyHover
     {
         Preconditions.NotNull(model, nameof(model));
         Preconditions.NotNull(duties, nameof(duties));
-        return GapFor(model, duties.ToArray(), HoverMode.Guided, "at the stations' set duties", options);
+        return GapFor(model, duties.ToArray(), HoverMode.GuidedSetDuties, "at the stations' set duties", options);
     }
 
     // The gap where these duties' total lift equals the weight, and the state there; no state when none in the range.
@@ -130,6 +131,12 @@ public static class CommonDutyHover
             return NoGap(model, mode, hi, string.Create(inv, $"{what} the rotors still lift {atHi + weight:0} N at {hi * 1000:0.0} mm (3 x the design gap), more than the weight ({weight:0} N): the craft would rise beyond the searched range"), evaluations);
         }
         double gap = Brent.FindRoot(Excess, lo, hi, 1e-10 * hi, 200);
+        double landed = model.Rig.LandedGapM;
+        if (gap < landed)
+        {
+            // The gear stops the craft at its landed gap: the state at the root cannot exist.
+            return NoGap(model, mode, gap, string.Create(inv, $"{what} the rotors carry the weight only at {gap * 1000:0.00} mm, below the landed gap ({landed * 1000:0.0} mm): the craft stays on its gear"), evaluations, "landed_gap");
+        }
         var state = SpeedsAt(model, duties, gap, options);
         return HoverTrim.Describe(model, mode, gap, state.SpeedsRadPerS.ToArray(), evaluations);
     }
@@ -203,9 +210,9 @@ public static class CommonDutyHover
     // Relative lift mismatch beyond which a guided hover's bisection has met a jump, not a root.
     private const double LiftTolerance = 1e-6;
 
-    private static HoverResult NoGap(RigModel model, HoverMode mode, double gapM, string message, int evaluations)
+    private static HoverResult NoGap(RigModel model, HoverMode mode, double gapM, string message, int evaluations, string criterion = "lift")
         => new(mode, HoverStatus.NoBalance, gapM, model.MassKg, model.WeightN, [], double.NaN, double.NaN,
-            double.NaN, double.NaN, double.NaN, double.NaN, double.NaN, double.NaN, [], [new HoverFinding("lift", null, message)], evaluations);
+            double.NaN, double.NaN, double.NaN, double.NaN, double.NaN, double.NaN, [], [new HoverFinding(criterion, null, message)], evaluations);
 
     // The highest speed where motor torque at this duty and bus voltage meets the load torque (stable from above: the
     // motor's torque falls below the load's beyond it); 0 when the rotor cannot leave rest.

@@ -10,9 +10,13 @@ public enum HoverMode
     /// unbalanced and reported).</summary>
     CommonDuty,
 
-    /// <summary>A guided sled: one common duty at a fixed gap found from total lift = weight, or the stations' set duties
-    /// and the gap found from it; the rails carry pitch, roll and yaw (reported in <see cref="RailLoads"/>, not judged).</summary>
+    /// <summary>A guided sled: one common duty at a fixed gap, found from total lift = weight; the rails carry pitch, roll
+    /// and yaw (reported in <see cref="RailLoads"/>, not judged).</summary>
     Guided,
+
+    /// <summary>A guided sled at the duties set on its stations: the gap follows from total lift = weight; the rails carry
+    /// pitch, roll and yaw (reported in <see cref="RailLoads"/>, not judged).</summary>
+    GuidedSetDuties,
 
     /// <summary>A bench of stands: each station at its duty at a fixed gap; no weight to carry (the residuals are not
     /// judged).</summary>
