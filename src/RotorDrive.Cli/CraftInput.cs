@@ -22,11 +22,34 @@ public static class CraftInput
     /// <param name="loaded">The loaded rig (no problems).</param>
     /// <param name="error">Where problems go.</param>
     public static RigModel? ModelOrReport(string command, Files.RigLoadResult loaded, TextWriter error)
+        => ModelOrReport(command, loaded, error, null, null);
+
+    /// <summary>Loads the rig and builds its model with a bench's stands at another gap or every station at one duty
+    /// (<c>--gap-mm</c>, <c>--duty</c>; <see cref="Rig.OnStands"/>); on a problem, or when either is given for a rig that
+    /// is not a bench, prints it and returns null.</summary>
+    /// <param name="command">The subcommand's name, for the message.</param>
+    /// <param name="rigPath">The rig file.</param>
+    /// <param name="error">Where problems go.</param>
+    /// <param name="standsGapMm">The stands' gap, mm, or null for the rig's design gap.</param>
+    /// <param name="standsDuty">Every station's duty, or null for each station's own (or the rig's max duty).</param>
+    public static RigModel? ModelOrReport(string command, string rigPath, TextWriter error, double? standsGapMm, double? standsDuty)
+    {
+        ArgumentNullException.ThrowIfNull(error);
+        var loaded = RigInput.LoadOrReport(rigPath, error);
+        return loaded is null ? null : ModelOrReport(command, loaded, error, standsGapMm, standsDuty);
+    }
+
+    private static RigModel? ModelOrReport(string command, Files.RigLoadResult loaded, TextWriter error, double? standsGapMm, double? standsDuty)
     {
         ArgumentNullException.ThrowIfNull(loaded);
         ArgumentNullException.ThrowIfNull(error);
         string rigPath = loaded.RigPath;
         var rig = loaded.Rig!;
+        if ((standsGapMm is not null || standsDuty is not null) && rig.Mount != MountKind.Bench)
+        {
+            error.WriteLine($"rotordrive {command}: error: {rigPath}: $.mount: {Files.Messages.StandsOptionsNeedBench(standsGapMm is not null ? "--gap-mm" : "--duty", Output.JsonNames.Of(rig.Mount))}");
+            return null;
+        }
         if (RefusesMount(command, loaded, error))
         {
             return null;
@@ -40,12 +63,11 @@ public static class CraftInput
             }
             return null;
         }
-        return RigModel.Build(rig);
+        return RigModel.Build(rig.OnStands(standsGapMm / 1000.0, standsDuty));
     }
 
     /// <summary>True (after printing why) when a whole-craft analysis is asked of a rig it does not fit (rig file
-    /// <c>mount</c>): every one fits a free craft, <c>hover</c> a guided sled too (one common duty, the rails carry
-    /// pitch, roll and yaw), none a bench of stands; the caller exits with <see cref="ExitCodes.BadInput"/>.</summary>
+    /// <c>mount</c>), as <see cref="MountFit.Fits"/> says; the caller exits with <see cref="ExitCodes.BadInput"/>.</summary>
     /// <param name="command">The subcommand's name.</param>
     /// <param name="loaded">The loaded rig (no problems).</param>
     /// <param name="error">Where the message goes.</param>
@@ -54,19 +76,11 @@ public static class CraftInput
         ArgumentNullException.ThrowIfNull(loaded);
         ArgumentNullException.ThrowIfNull(error);
         var mount = loaded.Rig!.Mount;
-        if (Fits(command, mount))
+        if (MountFit.Fits(command, mount))
         {
             return false;
         }
         error.WriteLine($"rotordrive {command}: error: {loaded.RigPath}: $.mount: {Files.Messages.NotForMount(command, Output.JsonNames.Of(mount))}");
         return true;
     }
-
-    // Which whole-craft analyses fit which mount (the README's table says the same).
-    private static bool Fits(string command, MountKind mount) => mount switch
-    {
-        MountKind.Free => true,
-        MountKind.Guided => command == "hover",
-        _ => false,
-    };
 }

@@ -228,8 +228,28 @@ public static class Messages
     /// <param name="command">The command.</param>
     /// <param name="mount">The rig's mount ("bench").</param>
     public static string NotForMount(string command, string mount) => mount == "bench"
-        ? $"'{command}' is not for a bench rig (mount \"bench\": each rotor on a stand at a fixed gap, no hover); use 'load' or 'operate' for each station"
-        : $"'{command}' is not for a guided rig (mount \"guided\": rails carry pitch, roll and yaw, which this analysis balances for a free craft); use 'hover' for the common duty that carries the weight, or 'load' or 'operate' for each station";
+        ? $"'{command}' is not for a bench rig (mount \"bench\": each rotor on a stand at a fixed gap, no hover); use 'spinup' or 'endurance' for the stations on their stands, or 'load' or 'operate' for each station"
+        : $"'{command}' is not for a guided rig (mount \"guided\": rails carry pitch, roll and yaw, which this analysis balances for a free craft); use 'hover', 'spinup' or 'endurance' for the sled, or 'load' or 'operate' for each station";
+
+    /// <summary>A bench-only option (the stands' gap or duty) given for a rig that is not a bench.</summary>
+    /// <param name="option">The option ("--gap-mm").</param>
+    /// <param name="mount">The rig's mount.</param>
+    public static string StandsOptionsNeedBench(string option, string mount)
+        => $"{option} sets the stands of a bench rig (mount \"bench\"); this rig's mount is \"{mount}\"";
+
+    /// <summary>A station's set duty above the rig's max duty.</summary>
+    public static string DutyAboveMax(double duty, double maxDuty)
+        => $"duty {N(duty)} is above limits.max_duty ({N(maxDuty)}); lower it or raise the limit";
+
+    /// <summary>A set duty on a free craft, whose trim finds every duty itself.</summary>
+    public static string DutyOnFreeCraft()
+        => "a free craft's trim sets every station's duty: stations[].duty is for a guided or bench rig (set \"mount\") or leave it out";
+
+    /// <summary>A guided rig with set duties on some stations but not all.</summary>
+    /// <param name="withDuty">A station number (from 1) that has a duty.</param>
+    public static string GuidedDutiesPartial(int withDuty)
+        => $"a guided rig's duties are set on every station or on none: this station has none while station {withDuty} has one "
+            + "(leave all out to hover at one common duty)";
 
     /// <summary>A station name that is empty or a number (which --station would read as a station number).</summary>
     public static string BadStationName(string name)

@@ -8,6 +8,7 @@ using RotorDrive.Core.Thermal;
 using RotorDrive.Files;
 using RotorDrive.Files.Exports;
 using RotorDrive.Files.Plots;
+using RotorDrive.Files.Rigs;
 
 namespace RotorDrive.Cli.Commands;
 
@@ -37,6 +38,8 @@ public static class EnduranceCommand
         {
             Description = "Hover in place over every plate material of the catalog at thicknesses from 3 to 25 mm: time to the plate limit, hover power and the hover time with the plate limit set aside, per floor.",
         };
+        var gap = RigKeyOption.Create("--gap-mm", RigSchema.GapDesignMm, "Bench rig only: the stands' air gap", "G");
+        var duty = RigKeyOption.Create("--duty", RigSchema.StationDuty, "Bench rig only: every station's duty", "D");
         var command = new Command("endurance", "Hover time from a full pack until the first limit, with traces of charge, voltage, currents and temperatures.");
         command.Arguments.Add(rig);
         command.Options.Add(csv);
@@ -44,11 +47,15 @@ public static class EnduranceCommand
         command.Options.Add(json);
         command.Options.Add(plateMap);
         command.Options.Add(sweep);
+        command.Options.Add(gap);
+        command.Options.Add(duty);
         command.Options.Add(plot);
         command.SetAction(parse => parse.GetValue(sweep)
-            ? Sweep(parse.GetValue(rig)!, parse.GetValue(json), parse.InvocationConfiguration.Output, parse.InvocationConfiguration.Error)
+            ? Sweep(parse.GetValue(rig)!, parse.GetValue(gap), parse.GetValue(duty), parse.GetValue(json), parse.InvocationConfiguration.Output, parse.InvocationConfiguration.Error)
             : Run(
             parse.GetValue(rig)!,
+            parse.GetValue(gap),
+            parse.GetValue(duty),
             parse.GetValue(csv),
             parse.GetValue(plateMap),
             parse.GetValue(force),
@@ -59,14 +66,14 @@ public static class EnduranceCommand
         return command;
     }
 
-    private static int Run(string rigPath, string? csvPath, string? mapPath, bool force, bool json, PlotRequest plot, TextWriter output, TextWriter error)
+    private static int Run(string rigPath, double? gapMm, double? duty, string? csvPath, string? mapPath, bool force, bool json, PlotRequest plot, TextWriter output, TextWriter error)
     {
         if (CommonOptions.RefusesExistingCsv("endurance", csvPath, force, error) || CommonOptions.RefusesExistingCsv("endurance", mapPath, force, error)
             || CommonOptions.RefusesPlot("endurance", plot.Path, force, error))
         {
             return ExitCodes.BadInput;
         }
-        var model = CraftInput.ModelOrReport("endurance", rigPath, error);
+        var model = CraftInput.ModelOrReport("endurance", rigPath, error, gapMm, duty);
         if (model is null)
         {
             return ExitCodes.BadInput;
@@ -80,8 +87,12 @@ public static class EnduranceCommand
             return ExitCodes.BadInput;
         }
         bool pass = study.Passes;
+        var start = result.StartHover;
         var report = new EnduranceReport(
             rig.Name,
+            JsonNames.Of(rig.Mount),
+            start.Balanced ? start.GapM * 1000 : null,
+            start.Stations.Select(h => h.Duty).ToArray(),
             result.RuntimeS,
             result.RuntimeS / 60.0,
             result.FirstLimit,
@@ -129,12 +140,20 @@ public static class EnduranceCommand
 
     private static void WriteText(EnduranceReport report, Rig rig, bool pass, string windingLine, TextWriter output)
     {
-        output.WriteLine($"Endurance: {report.Rig}, trimmed hover at the {Numbers.Format(rig.DesignGapM * 1000, 1)} mm design gap from a full pack");
+        string gap = Numbers.Format(report.StartGapMm ?? rig.DesignGapM * 1000, 1);
+        string held = report.Mount switch
+        {
+            "bench" => $"each station at its duty on its stand at {gap} mm",
+            "guided" when rig.Stations.All(s => s.Duty is not null) => $"guided hover at the stations' set duties (gap {gap} mm at the start; the rails carry pitch, roll and yaw)",
+            "guided" => $"guided hover at one common duty at the {gap} mm design gap (the rails carry pitch, roll and yaw)",
+            _ => $"trimmed hover at the {gap} mm design gap",
+        };
+        output.WriteLine($"Endurance: {report.Rig}, {held} from a full pack");
         output.WriteLine($"  runtime: {Numbers.Format(report.RuntimeS, 0)} s ({Numbers.Format(report.RuntimeMin, 1)} min)");
         output.WriteLine($"  ended by: {report.FirstLimit}");
         output.WriteLine(report.StartSpeedsRpm.Count == 0
-            ? "  at the start: no trimmed hover exists"
-            : $"  at the start: {string.Join(" / ", report.StartSpeedsRpm.Select(r => Numbers.Format(r, 0)))} rpm (stations 1..{report.StartSpeedsRpm.Count}), pack current {Numbers.Format(report.StartPackCurrentA, 1)} A");
+            ? $"  at the start: no {(report.Mount == "free" ? "trimmed hover" : report.Mount == "guided" ? "guided hover" : "steady state of the stations")} exists"
+            : $"  at the start: {string.Join(" / ", report.StartSpeedsRpm.Select(r => Numbers.Format(r, 0)))} rpm at duty {string.Join(" / ", report.StartDuties.Select(d => Numbers.Format(d, 3)))} (stations 1..{report.StartSpeedsRpm.Count}), pack current {Numbers.Format(report.StartPackCurrentA, 1)} A");
         output.WriteLine($"  at the end: state of charge {Numbers.Format(report.FinalSocPct, 1)} %, bus {Numbers.Format(report.FinalBusVoltageV, 1)} V, pack current {Numbers.Format(report.FinalPackCurrentA, 1)} A");
         output.WriteLine($"  {windingLine}, hottest point of the plate {Numbers.Format(report.PeakPlateTempC, 1)} C (limit {Numbers.Format(report.PlateLimitC, 0)} C)");
         if (report.PlateHotspot is { } h)
@@ -144,7 +163,8 @@ public static class EnduranceCommand
         }
         output.WriteLine($"  plate model: {report.PlatePatch}");
         output.WriteLine();
-        output.WriteLine(pass ? "Result: the pack ends the hover (no thermal or current limit first)." : "Result: FAILS: a limit other than the pack ends the hover.");
+        string what = report.Mount == "bench" ? "run" : "hover";
+        output.WriteLine(pass ? $"Result: the pack ends the {what} (no thermal or current limit first)." : $"Result: FAILS: a limit other than the pack ends the {what}.");
         output.WriteLine("Caution: plates and windings get hot enough to burn; lithium packs can burn when over-discharged. Estimates only: defer to manufacturers' ratings.");
     }
 
@@ -165,6 +185,9 @@ public static class EnduranceCommand
 
     private sealed record EnduranceReport(
         string Rig,
+        string Mount,
+        double? StartGapMm,
+        IReadOnlyList<double> StartDuties,
         double RuntimeS,
         double RuntimeMin,
         string FirstLimit,
@@ -197,9 +220,9 @@ public static class EnduranceCommand
 
         public IReadOnlyList<TraceEntry>? Trace { get; init; }
 
-        public EnduranceReport(string rig, double runtimeS, double runtimeMin, EnduranceLimit kind, string text, int? station, IReadOnlyList<double> rpm, double current,
+        public EnduranceReport(string rig, string mount, double? startGapMm, IReadOnlyList<double> startDuties, double runtimeS, double runtimeMin, EnduranceLimit kind, string text, int? station, IReadOnlyList<double> rpm, double current,
             double soc, double voltage, double finalCurrent, double winding, double plate, double plateLimit, double spreading, string patch, int steps, bool pass)
-            : this(rig, runtimeS, runtimeMin, text, kind, station, rpm, current, soc, voltage, finalCurrent, winding, plate, plateLimit, spreading, patch, steps, pass)
+            : this(rig, mount, startGapMm, startDuties, runtimeS, runtimeMin, text, kind, station, rpm, current, soc, voltage, finalCurrent, winding, plate, plateLimit, spreading, patch, steps, pass)
         {
         }
     }
@@ -258,10 +281,10 @@ public static class EnduranceCommand
         return sb.ToString();
     }
 
-    private static int Sweep(string rigPath, bool json, TextWriter output, TextWriter error)
+    private static int Sweep(string rigPath, double? gapMm, double? duty, bool json, TextWriter output, TextWriter error)
     {
         var loaded = RigInput.LoadOrReport(rigPath, error);
-        var model = loaded is null ? null : CraftInput.ModelOrReport("endurance", rigPath, error);
+        var model = loaded is null ? null : CraftInput.ModelOrReport("endurance", rigPath, error, gapMm, duty);
         if (loaded is null || model is null)
         {
             return ExitCodes.BadInput;

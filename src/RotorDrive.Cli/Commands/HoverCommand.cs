@@ -114,6 +114,7 @@ public static class HoverCommand
     {
         HoverMode.Trimmed => "trimmed",
         HoverMode.CommonDuty => "common_duty",
+        HoverMode.GuidedSetDuties => "guided_set_duties",
         _ => "guided",
     };
 
@@ -139,6 +140,7 @@ public static class HoverCommand
         {
             "trimmed" => "Trimmed hover",
             "guided" => "Guided hover at one common duty (the rails carry pitch, roll and yaw)",
+            "guided_set_duties" => "Guided hover at the stations' set duties, gap found (the rails carry pitch, roll and yaw)",
             _ => "Hover at one common duty",
         };
         o.WriteLine($"{title}: {r.Rig}");

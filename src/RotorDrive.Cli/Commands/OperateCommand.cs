@@ -30,7 +30,7 @@ public static class OperateCommand
         var motor = new Option<string?>("--motor") { Description = "Motor id from the motors catalog, instead of the station's.", HelpName = "ID" };
         var controller = new Option<string?>("--controller") { Description = "Controller id from the controllers catalog, instead of the station's.", HelpName = "ID" };
         var pack = new Option<string?>("--pack") { Description = "Pack id from the packs catalog, instead of the rig's (same pack count).", HelpName = "ID" };
-        var duty = new Option<double?>("--duty") { Description = "Open-loop duty, 0 to 1. Default: the rig's limits.max_duty (the highest duty it allows), unless --hold-rpm is given.", HelpName = "D" };
+        var duty = new Option<double?>("--duty") { Description = "Open-loop duty, 0 to 1. Default: the station's duty (stations[].duty) or else the rig's limits.max_duty (the highest duty it allows), unless --hold-rpm is given.", HelpName = "D" };
         var hold = new Option<double?>("--hold-rpm") { Description = "Speed to hold, rpm (> 0): the controller sets the duty within its limits.", HelpName = "R" };
         var gap = RigKeyOption.Create("--gap-mm", RigSchema.GapDesignMm, "Air gap", "G");
         var soc = new Option<double>("--soc-pct")

@@ -6,6 +6,7 @@ using RotorDrive.Core.Craft;
 using RotorDrive.Core.Simulation;
 using RotorDrive.Files;
 using RotorDrive.Files.Plots;
+using RotorDrive.Files.Rigs;
 
 namespace RotorDrive.Cli.Commands;
 
@@ -58,6 +59,8 @@ public static class SpinupCommand
                 r.AddError($"--soc-pct must lie in [0, 100]; got {v.ToString(CultureInfo.InvariantCulture)}.");
             }
         });
+        var gap = RigKeyOption.Create("--gap-mm", RigSchema.GapDesignMm, "Bench rig only: the stands' air gap", "G");
+        var duty = RigKeyOption.Create("--duty", RigSchema.StationDuty, "Bench rig only: every station's duty", "D");
         var csv = CommonOptions.Csv("the spin-up time traces");
         var force = CommonOptions.Force();
         var json = CommonOptions.Json();
@@ -67,6 +70,8 @@ public static class SpinupCommand
         command.Options.Add(ramp);
         command.Options.Add(mode);
         command.Options.Add(soc);
+        command.Options.Add(gap);
+        command.Options.Add(duty);
         command.Options.Add(csv);
         command.Options.Add(force);
         command.Options.Add(json);
@@ -76,6 +81,8 @@ public static class SpinupCommand
             parse.GetValue(ramp),
             parse.GetValue(mode) == "hold" ? ControllerMode.SpeedHold : ControllerMode.Duty,
             parse.GetValue(soc) / 100.0,
+            parse.GetValue(gap),
+            parse.GetValue(duty),
             parse.GetValue(csv),
             parse.GetValue(force),
             parse.GetValue(json),
@@ -85,13 +92,13 @@ public static class SpinupCommand
         return command;
     }
 
-    private static int Run(string rigPath, double rampS, ControllerMode mode, double soc, string? csvPath, bool force, bool json, PlotRequest plot, TextWriter output, TextWriter error)
+    private static int Run(string rigPath, double rampS, ControllerMode mode, double soc, double? gapMm, double? duty, string? csvPath, bool force, bool json, PlotRequest plot, TextWriter output, TextWriter error)
     {
         if (CommonOptions.RefusesExistingCsv("spinup", csvPath, force, error) || CommonOptions.RefusesPlot("spinup", plot.Path, force, error))
         {
             return ExitCodes.BadInput;
         }
-        var model = CraftInput.ModelOrReport("spinup", rigPath, error);
+        var model = CraftInput.ModelOrReport("spinup", rigPath, error, gapMm, duty);
         if (model is null)
         {
             return ExitCodes.BadInput;
@@ -162,12 +169,15 @@ public static class SpinupCommand
             l.Stations.Max(s => s.FinalSpeedRpm))).ToList();
         return new SpinupReport(
             rig.Name,
+            JsonNames.Of(rig.Mount),
             study.Request.Mode == ControllerMode.Duty ? "duty" : "hold",
             study.Request.RampS,
             study.SocFraction * 100,
             spin.EndTimeS,
             sim.HoverExists,
             sim.HoverSpeedsRadPerS.Select(Units.RadPerSToRpm).ToArray(),
+            study.Request.Mode == ControllerMode.Duty ? study.TargetsSi : null,
+            (sim.HoverExists ? sim.Hover.GapM : rig.DesignGapM) * 1000,
             sim.MassKg,
             spin.LiftoffTimeS,
             rig.Limits.LiftoffTimeS,
@@ -194,11 +204,30 @@ public static class SpinupCommand
     private static void WriteText(SpinupReport r, Rig rig, TextWriter o)
     {
         o.WriteLine($"Spin-up: {r.Rig}, {r.Mode} mode, ramp {Numbers.Format(r.RampS, 1)} s, pack at {Numbers.Format(r.SocPct, 0)} %, {Numbers.Format(r.MassKg, 1)} kg");
-        o.WriteLine($"  hover target: {(r.HoverExists ? "trimmed speeds" : "no trim exists; full-throttle speeds")} {string.Join(" / ", r.HoverSpeedsRpm.Select(v => Numbers.Format(v, 0)))} rpm (stations 1..{r.HoverSpeedsRpm.Count}) at the {Numbers.Format(rig.DesignGapM * 1000, 1)} mm design gap");
-        o.WriteLine($"  lift-off: {(r.TimeToLiftoffS is { } lo ? Numbers.Format(lo, 2) + " s" : "never")} (limit {Numbers.Format(r.LiftoffLimitS, 1)} s); steady hover: {(r.TimeToHoverS is { } h ? Numbers.Format(h, 2) + " s" : "not reached")}");
+        string speeds = $"{string.Join(" / ", r.HoverSpeedsRpm.Select(v => Numbers.Format(v, 0)))} rpm (stations 1..{r.HoverSpeedsRpm.Count})";
+        string duties = r.TargetDuties is { } d ? $", duties {string.Join(" / ", d.Select(v => Numbers.Format(v, 3)))}" : "";
+        string gap = Numbers.Format(r.TargetGapMm, 1);
+        o.WriteLine(r.Mount switch
+        {
+            "bench" => $"  target: each station at its duty on its stand, {speeds}{duties} at the stands' {gap} mm gap{(r.HoverExists ? "" : " (no steady state: full-throttle speeds)")}",
+            "guided" => r.HoverExists
+                ? $"  target: the guided hover, {speeds}{duties} at {gap} mm (the rails carry pitch, roll and yaw)"
+                : $"  target: no guided hover exists; full-throttle speeds {speeds} (the rails carry pitch, roll and yaw)",
+            _ => $"  hover target: {(r.HoverExists ? "trimmed speeds" : "no trim exists; full-throttle speeds")} {speeds} at the {gap} mm design gap",
+        });
+        if (r.Mount == "bench")
+        {
+            o.WriteLine($"  the stands hold the gap: no lift-off; steady speeds: {(r.TimeToHoverS is { } h ? Numbers.Format(h, 2) + " s" : "not reached")}");
+        }
+        else
+        {
+            o.WriteLine($"  lift-off: {(r.TimeToLiftoffS is { } lo ? Numbers.Format(lo, 2) + " s" : "never")} (limit {Numbers.Format(r.LiftoffLimitS, 1)} s); steady hover: {(r.TimeToHoverS is { } h ? Numbers.Format(h, 2) + " s" : "not reached")}");
+        }
         o.WriteLine($"  pack: peak {Numbers.Format(r.PeakPackCurrentA, 0)} A (continuous {Numbers.Format(r.PackContinuousA, 0)} A for "
             + $"{Numbers.Format(r.PackTimeAboveContinuousS, 2)} s above, burst {Numbers.Format(r.PackBurstA, 0)} A); lowest voltage {Numbers.Format(r.MinPackVoltageV, 1)} V (cutoff {Numbers.Format(r.CutoffVoltageV, 1)} V)");
-        o.WriteLine($"  yaw: peak reaction {Numbers.Format(r.PeakYawTorqueNm, 2)} N m (gear holds {Numbers.Format(r.GearYawFrictionNm, 1)} N m), peak rate {Numbers.Format(r.PeakYawRateDegPerS, 2)} deg/s, final angle {Numbers.Format(r.FinalYawAngleDeg, 2)} deg");
+        o.WriteLine(r.Mount == "free"
+            ? $"  yaw: peak reaction {Numbers.Format(r.PeakYawTorqueNm, 2)} N m (gear holds {Numbers.Format(r.GearYawFrictionNm, 1)} N m), peak rate {Numbers.Format(r.PeakYawRateDegPerS, 2)} deg/s, final angle {Numbers.Format(r.FinalYawAngleDeg, 2)} deg"
+            : $"  yaw: peak reaction {Numbers.Format(r.PeakYawTorqueNm, 2)} N m, carried by the {(r.Mount == "bench" ? "stands" : "rails")} (the rig does not turn)");
         o.WriteLine();
         var table = new TextTable(
             new TableColumn("station", Alignment.Right), new TableColumn("spin", Alignment.Left), new TableColumn("speed_rpm", Alignment.Right),
@@ -216,13 +245,15 @@ public static class SpinupCommand
         o.WriteLine();
         foreach (var l in r.Landing)
         {
-            o.WriteLine($"  landing, braking {(l.Braking ? "on " : "off")}: regenerated current {Numbers.Format(l.PeakRegenCurrentA, 1)} A, bus up to {Numbers.Format(l.MaxBusVoltageV, 1)} V "
+            o.WriteLine($"  {(r.Mount == "bench" ? "stop" : "landing")}, braking {(l.Braking ? "on " : "off")}: regenerated current {Numbers.Format(l.PeakRegenCurrentA, 1)} A, bus up to {Numbers.Format(l.MaxBusVoltageV, 1)} V "
                 + $"(controllers rated {Numbers.Format(l.ControllerMaxVoltageV, 1)} V), touch-down {(l.TouchdownS is { } td ? Numbers.Format(td, 2) + " s at " + Numbers.Format(l.TouchdownSpeedMPerS, 3) + " m/s" : "none")}");
         }
         o.WriteLine();
         if (r.Findings.Count == 0)
         {
-            o.WriteLine("Result: passes (lift-off in time, no stalled rotor, currents within burst allowances, pack above cutoff).");
+            o.WriteLine(r.Mount == "bench"
+                ? "Result: passes (no stalled rotor, currents within burst allowances, pack above cutoff)."
+                : "Result: passes (lift-off in time, no stalled rotor, currents within burst allowances, pack above cutoff).");
         }
         else
         {
@@ -241,12 +272,15 @@ public static class SpinupCommand
 
     private sealed record SpinupReport(
         string Rig,
+        string Mount,
         string Mode,
         double RampS,
         double SocPct,
         double DurationS,
         bool HoverExists,
         IReadOnlyList<double> HoverSpeedsRpm,
+        IReadOnlyList<double>? TargetDuties,
+        double TargetGapMm,
         double MassKg,
         double? TimeToLiftoffS,
         double LiftoffLimitS,

@@ -86,9 +86,31 @@ public static class CommonDutyHover
     {
         Preconditions.NotNull(model, nameof(model));
         Preconditions.InRange(duty, 0, 1, nameof(duty));
+        return GapFor(model, Enumerable.Repeat(duty, model.Stations.Count).ToArray(), HoverMode.CommonDuty,
+            System.FormattableString.Invariant($"at duty {duty:0.000}"), options);
+    }
+
+    /// <summary>A guided sled with a duty set on every station (<see cref="Station.Duty"/>): the gap at which those duties'
+    /// total lift carries the weight (Brent on lift(gap) - weight between half the landed gap and three times the design
+    /// gap) and the state there (<see cref="HoverMode.GuidedSetDuties"/>; the pitch and roll residuals and the yaw torque are what
+    /// the rails carry). When the duties lift less than the weight even at the smallest gap, or more at the largest, the
+    /// result holds no state and one "lift" finding says which; when the gap found lies below the landed gap (the gear
+    /// holds the sled there, so that state cannot exist), none either, with one "landed_gap" finding.</summary>
+    /// <param name="model">The rig model.</param>
+    /// <param name="duties">One duty per station, 0..1.</param>
+    /// <param name="options">Numerical settings; defaults when null.</param>
+    /// <exception cref="ArgumentException">The number of duties differs from the number of stations.</exception>
+    public static HoverResult SolveDuties(RigModel model, IReadOnlyList<double> duties, HoverOptions? options = null)
+    {
+        Preconditions.NotNull(model, nameof(model));
+        Preconditions.NotNull(duties, nameof(duties));
+        return GapFor(model, duties.ToArray(), HoverMode.GuidedSetDuties, "at the stations' set duties", options);
+    }
+
+    // The gap where these duties' total lift equals the weight, and the state there; no state when none in the range.
+    private static HoverResult GapFor(RigModel model, double[] duties, HoverMode mode, string what, HoverOptions? options)
+    {
         options ??= HoverOptions.Default;
-        int n = model.Stations.Count;
-        var duties = Enumerable.Repeat(duty, n).ToArray();
         double weight = model.WeightN;
         double lo = 0.5 * model.Rig.LandedGapM, hi = 3.0 * model.DesignGapM;
         int evaluations = 0;
@@ -97,20 +119,26 @@ public static class CommonDutyHover
             evaluations++;
             return SpeedsAt(model, duties, g, options).TotalLiftN - weight;
         }
+        var inv = System.Globalization.CultureInfo.InvariantCulture;
         double atLo = Excess(lo);
         if (atLo < 0)
         {
-            return NoGap(model, lo, $"at duty {duty:0.000} the rotors lift only {atLo + weight:0} N even at {lo * 1000:0.0} mm, less than the weight ({weight:0} N)", evaluations);
+            return NoGap(model, mode, lo, string.Create(inv, $"{what} the rotors lift only {atLo + weight:0} N even at {lo * 1000:0.0} mm (half the landed gap), less than the weight ({weight:0} N)"), evaluations);
         }
         double atHi = Excess(hi);
         if (atHi > 0)
         {
-            return NoGap(model, hi, $"at duty {duty:0.000} the rotors still lift {atHi + weight:0} N at {hi * 1000:0.0} mm (3 x the design gap), more than the weight ({weight:0} N): the craft would rise beyond the searched range", evaluations);
+            return NoGap(model, mode, hi, string.Create(inv, $"{what} the rotors still lift {atHi + weight:0} N at {hi * 1000:0.0} mm (3 x the design gap), more than the weight ({weight:0} N): the craft would rise beyond the searched range"), evaluations);
         }
         double gap = Brent.FindRoot(Excess, lo, hi, 1e-10 * hi, 200);
+        double landed = model.Rig.LandedGapM;
+        if (gap < landed)
+        {
+            // The gear stops the craft at its landed gap: the state at the root cannot exist.
+            return NoGap(model, mode, gap, string.Create(inv, $"{what} the rotors carry the weight only at {gap * 1000:0.00} mm, below the landed gap ({landed * 1000:0.0} mm): the craft stays on its gear"), evaluations, "landed_gap");
+        }
         var state = SpeedsAt(model, duties, gap, options);
-        var result = HoverTrim.Describe(model, HoverMode.CommonDuty, gap, state.SpeedsRadPerS.ToArray(), evaluations);
-        return result;
+        return HoverTrim.Describe(model, mode, gap, state.SpeedsRadPerS.ToArray(), evaluations);
     }
 
     /// <summary>A guided sled at a fixed gap: the one common duty at which the rotors' total lift equals the weight
@@ -182,9 +210,9 @@ public static class CommonDutyHover
     // Relative lift mismatch beyond which a guided hover's bisection has met a jump, not a root.
     private const double LiftTolerance = 1e-6;
 
-    private static HoverResult NoGap(RigModel model, double gapM, string message, int evaluations)
-        => new(HoverMode.CommonDuty, HoverStatus.NoBalance, gapM, model.MassKg, model.WeightN, [], double.NaN, double.NaN,
-            double.NaN, double.NaN, double.NaN, double.NaN, double.NaN, double.NaN, [], [new HoverFinding("lift", null, message)], evaluations);
+    private static HoverResult NoGap(RigModel model, HoverMode mode, double gapM, string message, int evaluations, string criterion = "lift")
+        => new(mode, HoverStatus.NoBalance, gapM, model.MassKg, model.WeightN, [], double.NaN, double.NaN,
+            double.NaN, double.NaN, double.NaN, double.NaN, double.NaN, double.NaN, [], [new HoverFinding(criterion, null, message)], evaluations);
 
     // The highest speed where motor torque at this duty and bus voltage meets the load torque (stable from above: the
     // motor's torque falls below the load's beyond it); 0 when the rotor cannot leave rest.

@@ -13,4 +13,12 @@ public enum HoverMode
     /// <summary>A guided sled: one common duty at a fixed gap, found from total lift = weight; the rails carry pitch, roll
     /// and yaw (reported in <see cref="RailLoads"/>, not judged).</summary>
     Guided,
+
+    /// <summary>A guided sled at the duties set on its stations: the gap follows from total lift = weight; the rails carry
+    /// pitch, roll and yaw (reported in <see cref="RailLoads"/>, not judged).</summary>
+    GuidedSetDuties,
+
+    /// <summary>A bench of stands: each station at its duty at a fixed gap; no weight to carry (the residuals are not
+    /// judged).</summary>
+    Bench,
 }

@@ -77,9 +77,35 @@ public sealed record Rig(
     public LoadModelKind LoadModel { get; init; } = LoadModelKind.ThreeDimensional;
 
     /// <summary>How the rig is held (rig file <c>mount</c>; default <see cref="MountKind.Free"/>): a free craft, a guided
-    /// sled or a bench of stands. The whole-craft analyses (trimmed hover, yaw, spin-up and endurance of the craft,
-    /// ranking, stress test) describe a free craft.</summary>
+    /// sled or a bench of stands; <see cref="MountFit"/> says which analysis fits which, <see cref="SteadyState"/> gives the
+    /// state each holds.</summary>
     public MountKind Mount { get; init; } = MountKind.Free;
+
+    /// <summary>The gap every rotor starts a spin-up at, m: the landed gap, or on a bench (<see cref="MountKind.Bench"/>)
+    /// the stands' fixed gap, the design gap.</summary>
+    public double StartGapM => Mount == MountKind.Bench ? DesignGapM : LandedGapM;
+
+    /// <summary>This bench rig with its stands at another gap and every station at one duty (the command line's
+    /// <c>--gap-mm</c> and <c>--duty</c>); either left as it is when null. The landed gap is lowered to the new gap when
+    /// it lies above it (a bench never lands).</summary>
+    /// <param name="gapM">The stands' gap, m (&gt; 0), or null.</param>
+    /// <param name="duty">Every station's duty, 0..1, or null.</param>
+    /// <exception cref="ArgumentOutOfRangeException">A value is out of range.</exception>
+    public Rig OnStands(double? gapM, double? duty)
+    {
+        var rig = this;
+        if (gapM is { } g)
+        {
+            Preconditions.Positive(g, nameof(gapM));
+            rig = rig with { DesignGapM = g, LandedGapM = Math.Min(LandedGapM, g) };
+        }
+        if (duty is { } d)
+        {
+            Preconditions.InRange(d, 0, 1, nameof(duty));
+            rig = rig with { Stations = Stations.Select(s => s with { Duty = d }).ToArray() };
+        }
+        return rig;
+    }
 
     /// <summary>The load model settings for a rotor of this rig: the given settings with the rig's load model and the
     /// rotor's calibration, if any.</summary>

@@ -22,6 +22,11 @@ public sealed record Station(
     /// <c>stations[].name</c>).</summary>
     public string? Name { get; init; }
 
+    /// <summary>The controller duty the user sets for this station (rig file <c>stations[].duty</c>), 0..1, or null: a
+    /// guided sled with a duty on every station hovers where these duties lift its weight (<see cref="CommonDutyHover.SolveDuties"/>);
+    /// a bench station runs at it (<see cref="BenchState"/>). A free craft's trim sets its own duties and never carries one.</summary>
+    public double? Duty { get; init; }
+
     /// <summary>The station as every output names it: "station 3", or "station 3 (front left)" when it has a name.</summary>
     /// <param name="index">The station's index in the rig, 0-based; shown counted from 1.</param>
     public string Label(int index)

@@ -298,10 +298,6 @@ public static class EnduranceSimulator
 
         public double Soc(double[] s) => _soc0 - s[0] / _capacityC;
 
-        public double DesignGapM => _r.DesignGapM;
-
-        public double WeightN => _rig.WeightN;
-
         // Re-trims the model at this state: its state of charge, and per station the present plate patch and winding
         // temperatures (the motor magnets rise with the winding).
         public HoverPoint Evaluate(double[] s)
@@ -314,7 +310,7 @@ public static class EnduranceSimulator
                 _conditions[j] = c with { PlateTempC = s[1 + _n + j], WindingTempC = tw, MotorMagnetTempC = c.MotorMagnetTempC + (tw - c.WindingTempC) };
             }
             var model = _rig.Model.WithSoc(Math.Clamp(Soc(s), 0, 1)).WithStationConditions(_conditions);
-            var hover = HoverTrim.Solve(model, _r.DesignGapM, 0.0, _rig.Options.Hover);
+            var hover = SteadyState.Solve(model, _rig.Options.Hover);
             p.Hover = hover;
             if (!hover.Balanced)
             {
@@ -440,8 +436,8 @@ public static class EnduranceSimulator
                 _winding[j].Add(s[1 + j]);
                 _plate[j].Add(s[1 + n + j]);
             }
-            _gap.Add(p.Trimmed ? march.DesignGapM : 0);
-            _lift.Add(p.Trimmed ? march.WeightN : 0);
+            _gap.Add(p.Trimmed ? p.Hover!.GapM : 0);
+            _lift.Add(p.Trimmed ? p.Hover!.Stations.Sum(s => s.LiftN) : 0);
             _v.Add(p.BusVoltage);
             _i.Add(p.PackCurrent);
             _soc.Add(march.Soc(s));

@@ -66,7 +66,7 @@ public sealed class SimulationRig
             _plates[j] = PlatePatchThermalNode.UnderRotor(s.Rotor, rig.Plate, rig.PlateConvectionWPerM2K, spreading);
             _peaks[j] = search.PeakAt(j, s, landed);
         }
-        Hover = HoverTrim.Solve(model, options.Hover);
+        Hover = SteadyState.Solve(model, options.Hover);
         (_hoverSpeeds, double stiffness) = Hover.Balanced ? TrimmedSpeeds(Hover, n) : FullThrottleSpeeds(model, _stations);
         double damping = options.HeaveDampingNsPerM ?? 2 * rig.Body.HeaveDampingRatio * Math.Sqrt(Math.Max(stiffness, 0) * model.MassKg);
         HeaveDampingNsPerM = Preconditions.NonNegative(damping, nameof(options.HeaveDampingNsPerM));
@@ -93,7 +93,7 @@ public sealed class SimulationRig
     {
         var rig = model.Rig;
         Preconditions.Positive(s.Rotor.InertiaKgM2, $"rotor inertia of station {j}");
-        double landed = rig.LandedGapM + s.Conditions.GapOffsetM;
+        double landed = rig.StartGapM + s.Conditions.GapOffsetM;
         double design = rig.DesignGapM + s.Conditions.GapOffsetM;
         if (!(landed > 0) || !(design > 0))
         {
@@ -274,7 +274,7 @@ public sealed class SimulationRig
         {
             return _hoverSpeeds.ToArray();
         }
-        var hover = soc == SocFraction ? Hover : HoverTrim.Solve(Model.WithSoc(soc), Options.Hover);
+        var hover = soc == SocFraction ? Hover : SteadyState.Solve(Model.WithSoc(soc), Options.Hover);
         var targets = new double[n];
         double max = Rig.Limits.MaxDuty;
         for (int j = 0; j < n; j++)
@@ -286,7 +286,7 @@ public sealed class SimulationRig
 
     /// <summary>Station j's air gap on the landing gear: rig landed gap + its offset, m.</summary>
     /// <param name="station">Station index, 0-based.</param>
-    public double LandedGapM(int station) => Rig.LandedGapM + _stations[station].Conditions.GapOffsetM;
+    public double LandedGapM(int station) => Rig.StartGapM + _stations[station].Conditions.GapOffsetM;
 
     // The peak of the total shaft torque at a gap. With a hint (a peak of the same load elsewhere), a short scan of a
     // factor of 3 either side of it; otherwise (or when that scan does not bracket an interior peak) the full search:

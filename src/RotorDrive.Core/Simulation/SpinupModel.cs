@@ -31,6 +31,7 @@ internal sealed class SpinupModel : IOdeEvents, IOdeObserver
     private readonly double[] _motorMagnetStartC;
     private readonly double[] _plateStartC;
     private readonly double _landedMm;
+    private readonly MountKind _mount;
     private readonly double _socStart;
     private readonly double _chargeCapacityC;
     private double _voltageHint = double.NaN;
@@ -77,7 +78,8 @@ internal sealed class SpinupModel : IOdeEvents, IOdeObserver
         _loadPoints = new LoadPoint[_n];
         _scratch = new double[Dimension];
         _lastY = new double[Dimension];
-        _landedMm = rig.Rig.LandedGapM * 1000.0;
+        _landedMm = rig.Rig.StartGapM * 1000.0;
+        _mount = rig.Rig.Mount;
         _socStart = socStart;
         _chargeCapacityC = rig.Packs.CapacityAh * 3600.0;
         Recorder = new SpinupRecorder(this, rig, options, durationS);
@@ -143,8 +145,9 @@ internal sealed class SpinupModel : IOdeEvents, IOdeObserver
             y[Winding + j] = _windingStartC[j];
             y[PlateTemp + j] = _plateStartC[j];
         }
-        y[Gap] = hovering ? rig.DesignGapM * 1000.0 : _landedMm;
-        Grounded = !hovering;
+        // A bench holds its rotors at the stands' gap throughout; a craft or sled starts at its steady gap or on its gear.
+        y[Gap] = _mount == MountKind.Bench ? _landedMm : hovering ? (_rig.Hover.Balanced ? _rig.Hover.GapM : rig.DesignGapM) * 1000.0 : _landedMm;
+        Grounded = !hovering || _mount == MountKind.Bench;
     }
 
     /// <summary>Evaluates the algebra (loads, bus) and the derivatives at (t, y).</summary>
@@ -225,7 +228,12 @@ internal sealed class SpinupModel : IOdeEvents, IOdeObserver
 
         double yawInertia = _rig.Model.YawInertiaKgM2;
         double rate = y[YawRate];
-        if (Grounded)
+        if (_mount != MountKind.Free)
+        {
+            // Rails or stands carry the yaw reaction: the rig does not turn.
+            dy[YawRate] = 0;
+        }
+        else if (Grounded)
         {
             double friction = rig.GearYawFrictionNm;
             if (rate == 0 && Math.Abs(yawTorque) <= friction)
@@ -285,7 +293,13 @@ internal sealed class SpinupModel : IOdeEvents, IOdeObserver
 
     public void Evaluate(double timeS, ReadOnlySpan<double> state, Span<double> values)
     {
-        if (Grounded)
+        if (_mount == MountKind.Bench)
+        {
+            // Stands never lift off nor land.
+            values[0] = -1.0;
+            values[1] = 1.0;
+        }
+        else if (Grounded)
         {
             values[0] = LiftAt(timeS, state) - _rig.WeightN;
             values[1] = 1.0;

@@ -1,3 +1,4 @@
+using RotorDrive.Core.Craft;
 using RotorDrive.Core.Drive;
 using RotorDrive.Core.Numerics;
 
@@ -99,7 +100,7 @@ public static class SpinupSimulator
                     touchdown = t;
                     touchdownSpeed = -y[model.Velocity] / 1000.0;
                 }
-                y[model.Gap] = rig.Rig.LandedGapM * 1000.0;
+                y[model.Gap] = rig.Rig.StartGapM * 1000.0;
                 y[model.Velocity] = 0;
                 model.Grounded = true;
                 model.EvaluateAt(t, y);
@@ -142,7 +143,8 @@ public static class SpinupSimulator
         var pack = new CurrentExposure("pack", recorder.PeakPackA, bank.ContinuousCurrentA, bank.BurstCurrentA, recorder.PackAboveS, null);
         int e = model.EnergyStart;
         var energy = new EnergyLedger(y[e], y[e + 1], y[e + 2], y[e + 3], y[e + 4], y[e + 5], y[e + 6], model.KineticEnergyJ(y) - kineticStart);
-        double? hover = model.Grounded ? null : HoverTime(recorder, rig.StationCount, options);
+        // A bench's rotors never leave their stands: they settle at their duty on the ground.
+        double? hover = model.Grounded && rig.Rig.Mount != MountKind.Bench ? null : HoverTime(recorder, rig.StationCount, options);
         return new SpinupResult(
             status,
             t,

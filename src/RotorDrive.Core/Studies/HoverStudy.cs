@@ -7,8 +7,9 @@ namespace RotorDrive.Core.Studies;
 /// with the loads its rails carry) reviewed against every limit with its rotor safety and cautions, and
 /// optionally the payload capacity and the yaw balance.</summary>
 /// <remarks>Trim: <see cref="HoverTrim"/> at the gap with zero net yaw torque; common duty: <see cref="CommonDutyHover"/>;
-/// guided rig (<see cref="MountKind.Guided"/>): <see cref="CommonDutyHover.SolveAtGap"/> and <see cref="RailLoads"/>, no
-/// payload search and no yaw balance;
+/// guided rig (<see cref="MountKind.Guided"/>): with a duty set on every station and no gap asked,
+/// <see cref="CommonDutyHover.SolveDuties"/> (the gap is found), otherwise <see cref="CommonDutyHover.SolveAtGap"/> at the
+/// gap; and <see cref="RailLoads"/>, no payload search and no yaw balance;
 /// review: <see cref="HoverReview"/>; capacity: <see cref="HoverReview.PayloadCapacityKg"/>; yaw:
 /// <see cref="YawBalance.Analyse"/>. The trim alone takes well under a millisecond; the capacity search and the yaw
 /// balance take tens of trims, so the study reports progress and can be cancelled between its parts. Thread-safe.</remarks>
@@ -40,7 +41,9 @@ public static class HoverStudy
         var review = request.CommonDuty is { } duty
             ? HoverReview.Of(model, CommonDutyHover.Solve(model, Preconditions.InRange(duty, double.Epsilon, 1, nameof(request.CommonDuty)), request.Options), request.Options)
             : guided
-                ? HoverReview.Of(model, CommonDutyHover.SolveAtGap(model, gapM, request.Options), request.Options)
+                ? HoverReview.Of(model, SteadyState.SetDuties(model.Rig) is { } set && request.GapM is null
+                    ? CommonDutyHover.SolveDuties(model, set, request.Options)
+                    : CommonDutyHover.SolveAtGap(model, gapM, request.Options), request.Options)
                 : HoverReview.Trimmed(model, gapM, request.Options);
         var rails = guided ? RailLoads.Of(model, review.Hover) : null;
         progress?.Report(0.35);

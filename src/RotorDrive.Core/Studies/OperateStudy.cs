@@ -51,7 +51,7 @@ public static class OperateStudy
         }
         else
         {
-            point = OperatingPointFinder.Find(drive, request.Throttle ?? ThrottleCommand.Duty(drive.Drivetrain.MaxDuty), conditions);
+            point = OperatingPointFinder.Find(drive, request.Throttle ?? ThrottleCommand.Duty(station.Duty ?? drive.Drivetrain.MaxDuty), conditions);
         }
         var map = request.MapDuties is { } duties ? TorqueSpeedMap.Compute(drive, conditions, duties) : null;
         // A sweep is a table over the duty range: only the parts' compatibility is its verdict.

@@ -8,7 +8,8 @@ namespace RotorDrive.Core.Studies;
 /// <param name="Motor">A motor instead of the station's, or null for the station's.</param>
 /// <param name="Controller">A controller instead of the station's, or null for the station's.</param>
 /// <param name="Packs">A pack bank instead of the rig's, or null for the rig's.</param>
-/// <param name="Throttle">The throttle, or null for the rig's max duty (<c>limits.max_duty</c>).</param>
+/// <param name="Throttle">The throttle, or null for the station's set duty (<c>stations[].duty</c>, a guided or bench rig)
+/// or else the rig's max duty (<c>limits.max_duty</c>).</param>
 /// <param name="GapM">Air gap, m (&gt; 0), or null for the rig's design gap.</param>
 /// <param name="SocFraction">Pack state of charge, 0..1; default 1.</param>
 /// <param name="SweepSteps">When set (&gt;= 2): the point reached from rest at this many duties evenly spaced from 0 to the

@@ -112,6 +112,10 @@ public static class RigResolver
             CheckSpreads(nominal, tolerances, ctx);
         }
         var calibrations = ResolveCalibrations(document, rigFile, stations, stationsOk, ctx, readText ?? TextFiles.TryRead);
+        if (stationsOk && mount is not null && limits is not null)
+        {
+            CheckDuties(stations, mount.Value, limits.MaxDuty, ctx);
+        }
 
         var ordered = problems.OrderBy(p => p.Line).ThenBy(p => p.Column).ToList();
         if (ordered.Count > 0 || !partsOk || !stationsOk || !packOk || !routeOk || name is null || plate is null || body is null || gaps is null
@@ -299,7 +303,41 @@ public static class RigResolver
         {
             return null;
         }
-        return new Station(x.Value / 1000.0, y.Value / 1000.0, spin.Value, rotor, motor, controller) { Name = StationName(s, i, ctx) };
+        return new Station(x.Value / 1000.0, y.Value / 1000.0, spin.Value, rotor, motor, controller)
+        {
+            Name = StationName(s, i, ctx),
+            Duty = ctx.Value(RigSchema.StationDuty, s, i),
+        };
+    }
+
+    // "stations[].duty": at most the rig's max duty; none on a free craft (its trim sets them); on a guided rig on every
+    // station or on none (set duties replace the common duty as a whole).
+    private static void CheckDuties(List<Station> stations, MountKind mount, double maxDuty, Context ctx)
+    {
+        int first = stations.FindIndex(s => s.Duty is not null);
+        if (first < 0)
+        {
+            return;
+        }
+        for (int i = 0; i < stations.Count; i++)
+        {
+            string path = RigSchema.StationDuty.JsonPath(i);
+            if (stations[i].Duty is { } duty)
+            {
+                if (mount == MountKind.Free)
+                {
+                    ctx.Report(path, Messages.DutyOnFreeCraft());
+                }
+                else if (duty > maxDuty)
+                {
+                    ctx.Report(path, Messages.DutyAboveMax(duty, maxDuty));
+                }
+            }
+            else if (mount == MountKind.Guided)
+            {
+                ctx.Report(RigSchema.Stations.JsonPath() + $"[{i}]", Messages.GuidedDutiesPartial(first + 1));
+            }
+        }
     }
 
     // Rotors must not overlap: axes at least the two outer radii apart.

@@ -154,8 +154,9 @@ public static class RigSchema
     public static readonly RigKey Mount = Choice<RigDocument>("mount", ["free", "guided", "bench"], "free", "mount",
         "how the rig is held: \"free\" (a craft that trims force, pitch, roll and yaw itself, four or more stations), \"guided\" (a sled "
         + "on rails that carry pitch, roll and yaw) or \"bench\" (each rotor on a stand at a fixed gap); the whole-craft analyses "
-        + "are for a free craft; a guided sled gets hover at one common duty (the rails carry pitch, roll and yaw), the others "
-        + "refuse it and a bench rig (exit 2); see the README's mount table",
+        + "are for a free craft; a guided sled gets hover (at one common duty or the stations' set duties; the rails carry pitch, roll "
+        + "and yaw), spin-up and endurance; a bench rig spin-up and endurance per station; the others refuse them (exit 2); see "
+        + "the README's mount table",
         d => d.Mount, (d, v) => d.Mount = v);
 
     /// <summary>"stations".</summary>
@@ -190,6 +191,13 @@ public static class RigSchema
     /// <summary>"stations[].controller".</summary>
     public static readonly RigKey StationController = Id<RigStationSection>("stations[].controller", false, "controller", "controllers.csv",
         "assigned speed controller", s => s.Controller, (s, v) => s.Controller = v);
+
+    /// <summary>"stations[].duty".</summary>
+    public static readonly RigKey StationDuty = Num<RigStationSection>("stations[].duty", "1", ValueRule.Between(0, 1), null, "duty",
+        "controller duty the user sets (guided or bench rig only): a guided sled with a duty on every station hovers at the gap "
+        + "where these duties lift its weight (all stations or none); a bench station runs at it (default limits.max_duty); a free "
+        + "craft's trim sets its own duties",
+        s => s.Duty, (s, v) => s.Duty = v, optional: true, rangeNote: "0 to limits.max_duty");
 
     /// <summary>"pack".</summary>
     public static readonly RigKey Pack = Section<RigPackSection>("pack", false,
@@ -282,7 +290,7 @@ public static class RigSchema
         Craft, CraftEmptyMassKg, CraftPayloadKg, CraftCgXMm, CraftCgYMm, CraftYawInertia, CraftHeaveDamping,
         Gap, GapDesignMm, GapLandedMm,
         AmbientC, GearYawFrictionNm, LoadModel, Mount,
-        Stations, StationName, StationXMm, StationYMm, StationSpin, StationRotor, StationMotor, StationController,
+        Stations, StationName, StationXMm, StationYMm, StationSpin, StationRotor, StationMotor, StationController, StationDuty,
         Pack, PackId, PackCount,
         Limits, LimitYawTorqueNm, LimitPlateTempC, LimitCellCutoffV, LimitUsableCapacityPct, LimitMaxDuty, LimitLiftoffTimeS,
         Tolerances,

@@ -23,4 +23,7 @@ public sealed class RigStationSection
 
     /// <summary>"controller": id in controllers.csv (optional).</summary>
     public string? Controller { get; set; }
+
+    /// <summary>"duty": the controller duty the user sets for a guided or bench rig, 0..limits.max_duty (optional).</summary>
+    public double? Duty { get; set; }
 }

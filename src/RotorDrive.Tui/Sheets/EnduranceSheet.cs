@@ -69,6 +69,10 @@ public sealed class EnduranceSheet : ChartSheet
     /// <summary>The run the sheet shows, as the <c>endurance</c> command runs it.</summary>
     internal static EnduranceFigures Compute(Rig rig, RigModelCache models, double socFraction, CancellationToken token, IProgress<double>? progress)
     {
+        if (MountNote.For("endurance", rig) is { } note)
+        {
+            return new EnduranceFigures(null, null, [], note);
+        }
         var missing = RigModel.MissingParts(rig);
         if (missing.Count > 0)
         {
@@ -114,7 +118,7 @@ public sealed class EnduranceSheet : ChartSheet
         Shown = figures;
         if (figures.Study is not { } study || figures.Rig is not { } sim)
         {
-            Panel.Readout = "! The endurance run needs a motor and controller on every station and a pack:\n" + string.Join("\n", figures.Missing);
+            Panel.Readout = figures.NotForMount ?? "! The endurance run needs a motor and controller on every station and a pack:\n" + string.Join("\n", figures.Missing);
             Panel.ShowPages(null);
             _heat.Show(null, [], []);
             return;
@@ -212,7 +216,7 @@ public sealed class EnduranceSheet : ChartSheet
     }
 
     /// <summary>What the sheet computed: the prepared rig and the run, or the parts missing before either can be.</summary>
-    internal sealed record EnduranceFigures(SimulationRig? Rig, EnduranceStudyResult? Study, IReadOnlyList<string> Missing)
+    internal sealed record EnduranceFigures(SimulationRig? Rig, EnduranceStudyResult? Study, IReadOnlyList<string> Missing, string? NotForMount = null)
     {
         /// <summary>The run.</summary>
         public EnduranceResult? Result => Study?.Run;

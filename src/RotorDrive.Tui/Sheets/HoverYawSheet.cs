@@ -76,16 +76,13 @@ public sealed class HoverYawSheet : Sheet
         return false;
     }
 
-    /// <summary>What the sheet says for a bench rig (mount "bench").</summary>
-    internal const string BenchNote = "No hover for a bench rig (mount \"bench\": each rotor on a stand at a fixed gap). See Lift & drag and Running points for each station.";
-
     /// <summary>The figures the sheet shows, as Core computes them for the <c>hover</c> and <c>yaw</c> commands.</summary>
     internal static HoverYawFigures Compute(Rig rig, RigModelCache models, CancellationToken token, IProgress<double>? progress)
     {
-        if (rig.Mount == MountKind.Bench)
+        if (MountNote.For("hover", rig) is { } note)
         {
             // A bench has no hover: say so rather than trim a craft that does not exist (the hover command refuses it too).
-            return new HoverYawFigures(null, [], BenchNote);
+            return new HoverYawFigures(null, [], note);
         }
         var missing = RigModel.MissingParts(rig);
         if (missing.Count > 0)
@@ -160,7 +157,9 @@ public sealed class HoverYawSheet : Sheet
                 ? $"{Over} over: {review.Findings.Count} {(review.Findings.Count == 1 ? "limit fails" : "limits fail")} at {F(review.Hover.GapM * 1000, 2)} mm (marked {Over} below)."
                 : $"{Over} No hover: {review.Findings.FirstOrDefault()?.Limit.Replace('_', ' ') ?? "no balance"} (see below).";
         string yawText = f.Yaw is not { } yaw
-            ? "Guided rig: one common duty carries the weight; the rails carry pitch, roll and yaw (see RAILS below)."
+            ? review.Hover.Mode == HoverMode.GuidedSetDuties
+                ? "Guided rig: the stations' set duties carry the weight at the gap found; the rails carry pitch, roll and yaw (see RAILS below)."
+                : "Guided rig: one common duty carries the weight; the rails carry pitch, roll and yaw (see RAILS below)."
             : yaw.Pass ? "Yaw balanced; the trim covers the tolerance both ways." : $"{Over} Yaw fails (see YAW below).";
         return hover + "\n" + yawText;
     }
@@ -195,7 +194,9 @@ public sealed class HoverYawSheet : Sheet
         }
         else
         {
-            sb.AppendLine("RAILS (guided rig: every station at one common duty; the rails carry pitch, roll and yaw, reported, not judged)");
+            sb.AppendLine(review.Hover.Mode == HoverMode.GuidedSetDuties
+                ? "RAILS (guided rig: every station at its set duty; the rails carry pitch, roll and yaw, reported, not judged)"
+                : "RAILS (guided rig: every station at one common duty; the rails carry pitch, roll and yaw, reported, not judged)");
             sb.AppendLine(f.Study!.Rails is { } rails
                 ? $"  pitch moment {F(rails.PitchMomentNm, 3)} N m, roll moment {F(rails.RollMomentNm, 3)} N m, yaw torque {F(rails.YawTorqueNm, 3)} N m"
                 : "  no hover state, so no rail loads");

@@ -170,6 +170,13 @@ public sealed class ShortlistSheet : Sheet
             _assigned.Text = "";
             return;
         }
+        if (MountNote.For("rank", rig) is { } note)
+        {
+            // The ranking sizes a free craft's trim: a guided or bench rig gets the command line's refusal instead.
+            _state.Text = note;
+            _assigned.Text = "";
+            return;
+        }
         if (!_initialised)
         {
             _initialised = true;
@@ -306,7 +313,7 @@ public sealed class ShortlistSheet : Sheet
     private void Rerun()
     {
         var session = Context.Session;
-        if (session.Rig is { } rig && session.Catalog is { } catalog && session.Document is { } document && ReadPacks() is { } packs)
+        if (session.Rig is { } rig && MountNote.For("rank", rig) is null && session.Catalog is { } catalog && session.Document is { } document && ReadPacks() is { } packs)
         {
             Run(new RankKey(Fingerprint(document), catalog, _objective, packs), rig, catalog, immediately: true);
         }

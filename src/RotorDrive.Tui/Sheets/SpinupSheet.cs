@@ -63,6 +63,10 @@ public sealed class SpinupSheet : ChartSheet
     /// <summary>The study the sheet shows, run as the <c>spinup</c> command runs it.</summary>
     internal static SpinupFigures Compute(Rig rig, RigModelCache models, SpinupStudyRequest request, CancellationToken token, IProgress<double>? progress)
     {
+        if (MountNote.For("spinup", rig) is { } note)
+        {
+            return new SpinupFigures(null, null, [], note);
+        }
         var missing = RigModel.MissingParts(rig);
         if (missing.Count > 0)
         {
@@ -112,7 +116,7 @@ public sealed class SpinupSheet : ChartSheet
         Shown = figures;
         if (figures.Study is not { } study || figures.Rig is not { } sim)
         {
-            Panel.Readout = "! The spin-up needs a motor and controller on every station and a pack:\n" + string.Join("\n", figures.Missing);
+            Panel.Readout = figures.NotForMount ?? "! The spin-up needs a motor and controller on every station and a pack:\n" + string.Join("\n", figures.Missing);
             Panel.ShowPages(null);
             return;
         }
@@ -238,5 +242,5 @@ public sealed class SpinupSheet : ChartSheet
     }
 
     /// <summary>What the sheet computed: the prepared rig and the study, or the parts missing before either can be.</summary>
-    internal sealed record SpinupFigures(SimulationRig? Rig, SpinupStudyResult? Study, IReadOnlyList<string> Missing);
+    internal sealed record SpinupFigures(SimulationRig? Rig, SpinupStudyResult? Study, IReadOnlyList<string> Missing, string? NotForMount = null);
 }

@@ -143,6 +143,11 @@ public sealed class StressSheet : Sheet
             ShowResults();
         }
         ShowState();
+        if (!Context.Work.IsActive(StressJob) && Context.Session.Rig is { } rig && MountNote.For("stress", rig) is { } note)
+        {
+            // The stress test samples a free craft's trim: a guided or bench rig gets the command line's refusal instead.
+            _state.Text = note;
+        }
     }
 
     /// <inheritdoc/>
@@ -181,6 +186,11 @@ public sealed class StressSheet : Sheet
         if (session.Rig is not { } rig)
         {
             Context.Tell("! The rig has problems (see Stations); the stress test needs a valid rig.");
+            return;
+        }
+        if (MountNote.For("stress", rig) is { } note)
+        {
+            Context.Tell(note);
             return;
         }
         if (rig.Packs is null || rig.Stations.Any(s => s.Motor is null || s.Controller is null))

@@ -113,4 +113,87 @@ public sealed class GuidedHoverTests
         Assert.Contains("max_duty 0.950", finding.Message, StringComparison.Ordinal);
         Assert.Null(study.Rails);
     }
+
+    private static RigModel GuidedWithDuties(IReadOnlyList<double> duties, double payloadKg = 0)
+    {
+        var rig = CraftRigs.Circle(3, cgXM: 0.02, cgYM: -0.01, payloadKg: payloadKg) with { Mount = MountKind.Guided };
+        return CraftRigs.Model(rig with { Stations = rig.Stations.Select((s, i) => s with { Duty = duties[i] }).ToArray() });
+    }
+
+    // Inverse problems agree: the common duty the sled needs at the design gap, set on every station, hovers the sled
+    // back at that gap (total lift falls with the gap at fixed duties, so lift = weight has one root; the lifts
+    // recomputed here from the load model at the reported speeds sum to m g, Newton's first law).
+    [Fact]
+    public void SetDuties_EqualToTheCommonDutyFound_HoverAtTheDesignGap()
+    {
+        double duty = HoverStudy.Run(Guided()).Review.Hover.Stations[0].Duty;
+        var model = GuidedWithDuties([duty, duty, duty]);
+        var study = HoverStudy.Run(model);
+        var h = study.Review.Hover;
+        Assert.Equal(HoverMode.GuidedSetDuties, h.Mode);
+        Assert.True(h.Balanced, string.Join("; ", study.Review.Findings.Select(f => f.Message)));
+        RelAssert.Close(CraftRigs.Gap, h.GapM, 1e-6, what: "gap found, m");
+        double lift = h.Stations.Sum(s => model.Stations[s.Index].LoadAt(s.SpeedRadPerS, h.GapM).LiftN);
+        RelAssert.Close(model.WeightN, lift, 1e-6, what: "sum of station lifts against m g");
+        Assert.NotNull(study.Rails);
+    }
+
+    // Unequal set duties: each station runs at its own duty (the duty the drive equations need at the reported speed
+    // equals the one set, Drela 2007 both ways), the gap is common, and the rails carry the moment of the unequal lifts
+    // (rigid-body statics about the centre of gravity).
+    [Fact]
+    public void UnequalSetDuties_RunEachStationAtItsDuty_AndTheRailsCarryTheMoment()
+    {
+        double common = HoverStudy.Run(Guided()).Review.Hover.Stations[0].Duty;
+        double[] duties = [common + 0.1, common, common - 0.05];
+        var model = GuidedWithDuties(duties);
+        var study = HoverStudy.Run(model);
+        var h = study.Review.Hover;
+        Assert.True(h.Balanced, string.Join("; ", study.Review.Findings.Select(f => f.Message)));
+        for (int i = 0; i < 3; i++)
+        {
+            RelAssert.Close(duties[i], h.Stations[i].Duty, 1e-6, what: $"duty of station {i + 1}");
+        }
+        Assert.True(h.Stations[0].LiftN > h.Stations[2].LiftN);
+        double pitch = h.Stations.Sum(s => s.LiftN * (model.Stations[s.Index].XM - model.CgXM));
+        RelAssert.Close(pitch, study.Rails!.PitchMomentNm, 1e-9, what: "pitch moment, N m");
+    }
+
+    // Duties too low to lift the weight at any gap down to half the landed gap: no state, one named criterion.
+    [Fact]
+    public void SetDutiesTooLow_FailNamingTheLift_AndPrintNoState()
+    {
+        var study = HoverStudy.Run(GuidedWithDuties([0.02, 0.02, 0.02], payloadKg: 20));
+        var h = study.Review.Hover;
+        Assert.Equal(HoverStatus.NoBalance, h.Status);
+        Assert.Empty(h.Stations);
+        Assert.Contains(Assert.Single(h.Findings).Limit, new[] { "lift", "landed_gap" });
+        Assert.False(study.Review.Pass);
+        Assert.Null(study.Rails);
+    }
+
+    // Duties that carry the weight only below the landed gap: the gear holds the sled there, so no hover state exists.
+    [Fact]
+    public void SetDutiesThatLiftOnlyBelowTheLandedGap_AreNoHover()
+    {
+        var rig = CraftRigs.Circle(3, payloadKg: 0) with { Mount = MountKind.Guided };
+        var model = CraftRigs.Model(rig);
+        // The duty whose lift balances the weight at 0.8 x the landed gap lies below the one needed at the landed gap.
+        double duty = CommonDutyHover.SolveAtGap(model, 0.8 * rig.LandedGapM).Stations[0].Duty;
+        var study = HoverStudy.Run(GuidedWithDuties([duty, duty, duty]));
+        var finding = Assert.Single(study.Review.Hover.Findings);
+        Assert.Equal("landed_gap", finding.Limit);
+        Assert.Empty(study.Review.Hover.Stations);
+    }
+
+    // Only some stations with a duty: the steady state does not mix set and solved duties (the rig reader refuses such a
+    // rig; here the core falls back to the common duty).
+    [Fact]
+    public void SomeStationsWithoutADuty_AreNotASetOfDuties()
+    {
+        var rig = CraftRigs.Circle(3) with { Mount = MountKind.Guided };
+        rig = rig with { Stations = rig.Stations.Select((s, i) => i == 0 ? s with { Duty = 0.5 } : s).ToArray() };
+        Assert.Null(SteadyState.SetDuties(rig));
+        Assert.Equal(HoverMode.Guided, SteadyState.Solve(CraftRigs.Model(rig)).Mode);
+    }
 }

@@ -148,7 +148,7 @@ public class RigLoaderTests
             GearYawFrictionNm = 1,
             LoadModel = "3d",
             Mount = "free",
-            Stations = [new RigStationSection { Name = "front", XMm = 1, YMm = 2, Spin = "cw", Rotor = "r", Motor = "m", Controller = "c" }],
+            Stations = [new RigStationSection { Name = "front", XMm = 1, YMm = 2, Spin = "cw", Rotor = "r", Motor = "m", Controller = "c", Duty = 0.4 }],
             Pack = new RigPackSection { Id = "p", Count = 2 },
             Limits = new RigLimitsSection { YawTorqueNm = 1, PlateTempC = 2, CellCutoffV = 3, UsableCapacityPct = 4, MaxDuty = 0.5, LiftoffTimeS = 6 },
             Tolerances = new RigTolerancesSection(),

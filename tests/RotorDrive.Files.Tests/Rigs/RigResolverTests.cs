@@ -273,4 +273,75 @@ public class RigResolverTests
         var problem = Assert.Single(result.Problems);
         Assert.Equal(("$.mount", Messages.BadMount("rail")), (problem.Field, problem.Message));
     }
+
+    // stations[].duty (issue 14 item 7): a guided rig's duties on every station or on none; none on a free craft; at
+    // most limits.max_duty (0.95 in the demo rig); a bench station may have one or not.
+    private static string WithDuties(string mount, params double?[] duties)
+    {
+        string text = ReplaceFirst(Demo, "\"stations\": [", $"\"mount\": \"{mount}\", \"stations\": [");
+        string[] lines = text.Split('\n');
+        int k = 0;
+        for (int i = 0; i < lines.Length && k < duties.Length; i++)
+        {
+            if (lines[i].Contains("\"rotor\": \"hx130-p4\"", StringComparison.Ordinal))
+            {
+                if (duties[k] is { } d)
+                {
+                    lines[i] = lines[i].Replace("\"controller\": \"sc120-12s\" }", $"\"controller\": \"sc120-12s\", \"duty\": {d.ToString(System.Globalization.CultureInfo.InvariantCulture)} }}", StringComparison.Ordinal);
+                }
+                k++;
+            }
+        }
+        return string.Join('\n', lines);
+    }
+
+    private static RigResolveResult ResolveText(string text)
+    {
+        var read = RigDocumentReader.Read(text, File);
+        Assert.Empty(read.Problems);
+        return RigResolver.Resolve(read.Document!, Catalogs, File, read.Locations);
+    }
+
+    [Fact]
+    public void Resolve_ReadsADutyOnEveryStationOfAGuidedRig()
+    {
+        var result = ResolveText(WithDuties("guided", 0.5, 0.5, 0.6, 0.6, 0.7, 0.7));
+        Assert.Empty(result.Problems);
+        Assert.Equal([0.5, 0.5, 0.6, 0.6, 0.7, 0.7], result.Rig!.Stations.Select(s => s.Duty!.Value));
+    }
+
+    [Fact]
+    public void Resolve_RejectsAGuidedRigWithDutiesOnSomeStationsOnly_NamingEachStationWithout()
+    {
+        var result = ResolveText(WithDuties("guided", null, 0.5, 0.5, 0.5, 0.5, 0.5));
+        var problem = Assert.Single(result.Problems);
+        Assert.Equal(("$.stations[0]", Messages.GuidedDutiesPartial(2)), (problem.Field, problem.Message));
+        Assert.Null(result.Rig);
+    }
+
+    [Fact]
+    public void Resolve_RejectsADutyOnAFreeCraft()
+    {
+        var problem = Assert.Single(ResolveText(WithDuties("free", 0.5)).Problems);
+        Assert.Equal(("$.stations[0].duty", Messages.DutyOnFreeCraft()), (problem.Field, problem.Message));
+    }
+
+    [Fact]
+    public void Resolve_RejectsADutyAboveMaxDuty_AndOutsideZeroToOne()
+    {
+        var above = Assert.Single(ResolveText(WithDuties("bench", 0.97)).Problems);
+        Assert.Equal(("$.stations[0].duty", Messages.DutyAboveMax(0.97, 0.95)), (above.Field, above.Message));
+        var outside = Assert.Single(ResolveText(WithDuties("bench", 1.5)).Problems);
+        Assert.Equal("$.stations[0].duty", outside.Field);
+        Assert.Equal(Messages.MustBeBetween(0, 1, 1.5), outside.Message);
+    }
+
+    [Fact]
+    public void Resolve_AcceptsABenchWithADutyOnSomeStations()
+    {
+        var result = ResolveText(WithDuties("bench", 0.4));
+        Assert.Empty(result.Problems);
+        Assert.Equal(0.4, result.Rig!.Stations[0].Duty);
+        Assert.Null(result.Rig.Stations[1].Duty);
+    }
 }
