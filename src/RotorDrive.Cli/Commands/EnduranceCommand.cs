@@ -237,7 +237,7 @@ public static class EnduranceCommand
         string k = setup.ConductivityEstimated ? "estimated by the Wiedemann-Franz law" : "from the catalog";
         string spin = spreading > 1 ? $"; plate.spreading_factor {Numbers.Format(spreading, 2)} applies to the spin-up's lumped patch only" : string.Empty;
         return $"2-D sheet with lateral conduction (k {Numbers.Format(setup.ConductivityWPerMK, 0)} W/(m K), {k}) and face loss {Numbers.Format(setup.LossWPerM2K, 1)} W/(m^2 K); "
-            + $"eddy heat spread over each magnet annulus as the load model's strips give it; grid {setup.GridCount} x {setup.GridCount} at {Numbers.Format(setup.GridSpacingM * 1000, 1)} mm over {Numbers.Format(setup.DomainM, 2)} m{spin}";
+            + $"eddy heat spread over each magnet annulus as the 3-D strip model gives it; grid {setup.GridCount} x {setup.GridCount} at {Numbers.Format(setup.GridSpacingM * 1000, 1)} mm over {Numbers.Format(setup.DomainM, 2)} m{spin}";
     }
 
     private static List<TraceEntry> TraceEntries(SpinupTrace trace, EnduranceResult result)

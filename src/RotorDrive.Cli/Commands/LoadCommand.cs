@@ -237,8 +237,8 @@ public static class LoadCommand
         o.WriteLine();
         if (report.Model == "3d")
         {
-            o.WriteLine("Model: 3-D (radial strips, each a finite-width band solved by a double Fourier series, with the array's harmonics): "
-                + "fringing at the magnets' edges and current closure in the plate come out of the solution. Plate assumed much wider than the rotor; calibrate against bench data.");
+            o.WriteLine("Model: 3-D ring model (the array's field as cylindrical harmonics over the plate, with its harmonics): "
+                + "the pitch's growth with radius, fringing at the magnets' edges and current closure in the plate come out of the solution. Plate assumed much wider than the rotor; calibrate against bench data.");
         }
         else
         {

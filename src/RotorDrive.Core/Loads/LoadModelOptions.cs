@@ -1,8 +1,8 @@
 namespace RotorDrive.Core.Loads;
 
 /// <summary>Settings of the rotor load model.</summary>
-/// <remarks>Defaults: the three-dimensional model with 8 radial strips, 4 harmonics of the array and a Fourier series cut at
-/// 1e-6 of the fundamental at a 2 mm gap; for the two-dimensional model, the end correction on and 24 Gauss-Legendre points
+/// <remarks>Defaults: the three-dimensional ring model with 4 harmonics of the array and its spectrum cut at
+/// 1e-6 at a 2 mm gap; for the two-dimensional model, the end correction on and 24 Gauss-Legendre points
 /// over the magnet annulus; standard air; no calibration.</remarks>
 public sealed record LoadModelOptions
 {
@@ -17,9 +17,6 @@ public sealed record LoadModelOptions
 
     /// <summary>Two-dimensional model: Gauss-Legendre points over the magnet annulus, 2..256 (default 24).</summary>
     public int RadialPoints { get; init; } = 24;
-
-    /// <summary>Three-dimensional model: radial strips (Gauss-Legendre points), 2..256 (default 8).</summary>
-    public int StripPoints { get; init; } = 8;
 
     /// <summary>Three-dimensional model: harmonics of the array kept, 1..64 (default 4).</summary>
     public int Harmonics { get; init; } = 4;

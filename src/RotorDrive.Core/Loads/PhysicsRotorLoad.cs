@@ -56,7 +56,7 @@ public sealed class PhysicsRotorLoad : IRotorLoad
         _bearingDampingNmPerRadPerS = calibration.BearingDampingNmPerRadPerS ?? rotor.BearingDampingNmPerRadPerS;
         _eddy = options.Model == LoadModelKind.TwoDimensional
             ? RotorEddyModel.TwoDimensional(rotor, plate, options.EndEffectCorrection, options.RadialPoints)
-            : RotorEddyModel.ThreeDimensional(rotor, plate, options.StripPoints, options.Harmonics, options.ReferenceGapM, options.SeriesTolerance);
+            : RotorEddyModel.ThreeDimensional(rotor, plate, options.Harmonics, options.ReferenceGapM, options.SeriesTolerance);
         _windageRadiusM = rotor.OuterRadiusM + Math.Max(0.0, rotor.RetainerThicknessM ?? 0.0);
         _airDensity = options.Air.DensityKgM3;
         _airViscosity = options.Air.KinematicViscosityM2PerS;

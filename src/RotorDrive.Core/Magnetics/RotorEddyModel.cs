@@ -47,11 +47,11 @@ public sealed class RotorEddyModel
     /// <exception cref="ArgumentNullException">The rotor is null.</exception>
     /// <exception cref="ArgumentOutOfRangeException">The geometry is invalid or a count is out of range.</exception>
     public RotorEddyModel(RotorDesign rotor, double plateThicknessM, bool endEffectCorrection = true, int radialPoints = 24)
-        : this(rotor, plateThicknessM, plateBackIron: false, threeDimensional: false, endEffectCorrection, radialPoints, harmonics: 1, referenceGapM: 0, tolerance: 0)
+        : this(rotor, plateThicknessM, plateBackIron: false, Construction.TwoDimensionalStrips, endEffectCorrection, radialPoints, harmonics: 1, referenceGapM: 0, tolerance: 0)
     {
     }
 
-    private RotorEddyModel(RotorDesign rotor, double plateThicknessM, bool plateBackIron, bool threeDimensional, bool endEffectCorrection,
+    private RotorEddyModel(RotorDesign rotor, double plateThicknessM, bool plateBackIron, Construction construction, bool endEffectCorrection,
         int radialPoints, int harmonics, double referenceGapM, double tolerance)
     {
         Preconditions.NotNull(rotor, nameof(rotor));
@@ -71,14 +71,18 @@ public sealed class RotorEddyModel
         Rotor = rotor;
         PlateThicknessM = plateThicknessM;
         PlateBackIron = plateBackIron;
-        IsThreeDimensional = threeDimensional;
-        EndEffectCorrection = !threeDimensional && endEffectCorrection;
-        RadialPoints = radialPoints;
+        IsThreeDimensional = construction != Construction.TwoDimensionalStrips;
+        IsRingModel = construction == Construction.Rings;
+        EndEffectCorrection = construction == Construction.TwoDimensionalStrips && endEffectCorrection;
+        RadialPoints = construction == Construction.Rings ? 0 : radialPoints;
         Harmonics = harmonics;
 
-        var modes = threeDimensional
-            ? ThreeDimensionalModes(rotor, plateThicknessM, radialPoints, harmonics, referenceGapM, tolerance)
-            : TwoDimensionalModes(rotor, plateThicknessM, endEffectCorrection, radialPoints);
+        var modes = construction switch
+        {
+            Construction.Rings => RingModes(rotor, harmonics, referenceGapM, tolerance),
+            Construction.ThreeDimensionalStrips => ThreeDimensionalModes(rotor, plateThicknessM, radialPoints, harmonics, referenceGapM, tolerance),
+            _ => TwoDimensionalModes(rotor, plateThicknessM, endEffectCorrection, radialPoints),
+        };
         int count = modes.Count;
         _radiusM = new double[count];
         _wavenumberPerM = new double[count];
@@ -113,26 +117,47 @@ public sealed class RotorEddyModel
     public static RotorEddyModel TwoDimensional(RotorDesign rotor, Plate plate, bool endEffectCorrection = true, int radialPoints = 24)
     {
         Preconditions.NotNull(plate, nameof(plate));
-        return new RotorEddyModel(rotor, plate.ThicknessM, plate.HasBackIron, threeDimensional: false, endEffectCorrection, radialPoints, 1, 0, 0);
+        return new RotorEddyModel(rotor, plate.ThicknessM, plate.HasBackIron, Construction.TwoDimensionalStrips, endEffectCorrection, radialPoints, 1, 0, 0);
     }
 
-    /// <summary>The three-dimensional model (../DESIGN.md §4.7).</summary>
+    /// <summary>The three-dimensional model the analyses use: the ring model (cylindrical harmonics, <see cref="AnnularSpectrum"/>;
+    /// ../DESIGN.md §4.7).</summary>
     /// <param name="rotor">The rotor design.</param>
     /// <param name="plate">The plate (its thickness and steel backing).</param>
-    /// <param name="stripPoints">Gauss-Legendre radial strips, 2..256 (default 8).</param>
     /// <param name="harmonics">Harmonics of the array kept, 1..64 (default 4: orders 1, -3, 5, -7 of a 4-segment Halbach array).</param>
     /// <param name="referenceGapM">Smallest gap at which the truncation tolerance is to hold, m, greater than 0 (default 2 mm);
     /// smaller gaps stay close but converge more slowly.</param>
-    /// <param name="tolerance">Relative truncation tolerance of the Fourier series, 1e-12..1e-2 (default 1e-6).</param>
+    /// <param name="tolerance">Relative truncation tolerance of the spectrum, 1e-12..1e-2 (default 1e-6).</param>
     /// <exception cref="ArgumentNullException">An argument is null.</exception>
     /// <exception cref="ArgumentOutOfRangeException">The geometry is invalid or a setting is out of range.</exception>
-    public static RotorEddyModel ThreeDimensional(RotorDesign rotor, Plate plate, int stripPoints = 8, int harmonics = 4, double referenceGapM = 0.002, double tolerance = 1e-6)
+    public static RotorEddyModel ThreeDimensional(RotorDesign rotor, Plate plate, int harmonics = 4, double referenceGapM = 0.002, double tolerance = 1e-6)
     {
         Preconditions.NotNull(plate, nameof(plate));
         Preconditions.InRange(harmonics, 1, 64, nameof(harmonics));
         Preconditions.Positive(referenceGapM, nameof(referenceGapM));
         Preconditions.InRange(tolerance, 1e-12, 1e-2, nameof(tolerance));
-        return new RotorEddyModel(rotor, plate.ThicknessM, plate.HasBackIron, threeDimensional: true, false, stripPoints, harmonics, referenceGapM, tolerance);
+        return new RotorEddyModel(rotor, plate.ThicknessM, plate.HasBackIron, Construction.Rings, false, 2, harmonics, referenceGapM, tolerance);
+    }
+
+    /// <summary>The three-dimensional strip model: radial strips, each a straight band of the magnets' full width solved by
+    /// a double Fourier series (<see cref="FiniteWidthBand"/>). It gives the radial distribution of the plate loss (each
+    /// mode has a radius; <see cref="RadiusM"/>), which the ring model's modes do not carry; its totals put the drag peak
+    /// low in speed when r_o/r_i is large (each strip has its own eddy-current time constant).</summary>
+    /// <param name="rotor">The rotor design.</param>
+    /// <param name="plate">The plate (its thickness and steel backing).</param>
+    /// <param name="stripPoints">Gauss-Legendre radial strips, 2..256 (default 8).</param>
+    /// <param name="harmonics">Harmonics of the array kept, 1..64 (default 4).</param>
+    /// <param name="referenceGapM">Smallest gap at which the truncation tolerance is to hold, m, greater than 0 (default 2 mm).</param>
+    /// <param name="tolerance">Relative truncation tolerance of the Fourier series, 1e-12..1e-2 (default 1e-6).</param>
+    /// <exception cref="ArgumentNullException">An argument is null.</exception>
+    /// <exception cref="ArgumentOutOfRangeException">The geometry is invalid or a setting is out of range.</exception>
+    public static RotorEddyModel ThreeDimensionalStrips(RotorDesign rotor, Plate plate, int stripPoints = 8, int harmonics = 4, double referenceGapM = 0.002, double tolerance = 1e-6)
+    {
+        Preconditions.NotNull(plate, nameof(plate));
+        Preconditions.InRange(harmonics, 1, 64, nameof(harmonics));
+        Preconditions.Positive(referenceGapM, nameof(referenceGapM));
+        Preconditions.InRange(tolerance, 1e-12, 1e-2, nameof(tolerance));
+        return new RotorEddyModel(rotor, plate.ThicknessM, plate.HasBackIron, Construction.ThreeDimensionalStrips, false, stripPoints, harmonics, referenceGapM, tolerance);
     }
 
     /// <summary>The rotor design.</summary>
@@ -147,10 +172,13 @@ public sealed class RotorEddyModel
     /// <summary>Whether this is the three-dimensional model.</summary>
     public bool IsThreeDimensional { get; }
 
+    /// <summary>Whether this is the ring model (cylindrical harmonics): its modes have no radius.</summary>
+    public bool IsRingModel { get; }
+
     /// <summary>Whether the Russell-Norsworthy end correction is applied (two-dimensional model only).</summary>
     public bool EndEffectCorrection { get; }
 
-    /// <summary>Number of Gauss-Legendre points (radial strips) over the annulus.</summary>
+    /// <summary>Number of Gauss-Legendre points (radial strips) over the annulus (0 for the ring model).</summary>
     public int RadialPoints { get; }
 
     /// <summary>Harmonics of the array kept (1 for the two-dimensional model).</summary>
@@ -191,7 +219,7 @@ public sealed class RotorEddyModel
         return new EddyForces(lift, torque, power);
     }
 
-    /// <summary>Mode radii, m (for table builders).</summary>
+    /// <summary>Mode radii, m (strip models; NaN for the ring model, whose modes span the whole plate).</summary>
     internal ReadOnlySpan<double> RadiusM => _radiusM;
 
     /// <summary>Mode wavenumbers k, 1/m (the gap decay is e^(-2 k g)).</summary>
@@ -216,6 +244,27 @@ public sealed class RotorEddyModel
     private const double Lumping = 0.2;
 
     private readonly record struct Mode(double Radius, double K, double EpsPerSigmaOmega, double LiftWeight, double TorqueWeight);
+
+    private enum Construction
+    {
+        TwoDimensionalStrips,
+        ThreeDimensionalStrips,
+        Rings,
+    }
+
+    // Ring model: each cylindrical harmonic (order m, wavenumber kappa) is a mode with eps = mu0 m / kappa^2 per sigma
+    // omega and torque weight m / kappa times its lift weight (AnnularSpectrum).
+    private static List<Mode> RingModes(RotorDesign rotor, int harmonicCount, double referenceGapM, double tolerance)
+    {
+        SourceHarmonic[] harmonics = ArraySource.Harmonics(rotor, harmonicCount);
+        var modes = new List<Mode>();
+        foreach (AnnularSpectrum.RingMode r in AnnularSpectrum.Modes(rotor, harmonics, referenceGapM, tolerance))
+        {
+            double k = r.Wavenumber;
+            modes.Add(new Mode(double.NaN, k, Units.Mu0 * r.Order / (k * k), r.LiftWeight, r.LiftWeight * r.Order / k));
+        }
+        return modes;
+    }
 
     private static List<Mode> TwoDimensionalModes(RotorDesign rotor, double plateThicknessM, bool endEffectCorrection, int radialPoints)
     {

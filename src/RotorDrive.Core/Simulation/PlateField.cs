@@ -80,7 +80,7 @@ internal sealed class PlateField
         return best;
     }
 
-    // The share of eddy power in each radial strip of the load model (../DESIGN.md 4.3): drag pressure x slip speed
+    // The share of eddy power in each radial strip of the load model (../DESIGN.md 4.3; the strip model's for the ring model): drag pressure x slip speed
     // omega r x strip area, at the start hover's speed, gap and plate temperature. Uniform per area when the rotor does not
     // turn (no trim at the start).
     private static (double[] Radii, double[] Fractions) RadialProfile(CraftStation station, Plate plate, double speedRadPerS, double gapM, double plateC)
@@ -91,6 +91,12 @@ internal sealed class PlateField
             PhysicsRotorLoad p => p.Eddy,
             _ => new RotorEddyModel(station.Rotor, plate.ThicknessM),
         };
+        if (eddy.IsRingModel)
+        {
+            // The ring model's modes span the plate and carry no radius: the radial shape of the loss comes from the
+            // three-dimensional strip model of the same rotor (its total is scaled away below).
+            eddy = RotorEddyModel.ThreeDimensionalStrips(station.Rotor, plate, harmonics: eddy.Harmonics);
+        }
         var radii = eddy.RadiusM.ToArray();
         var fractions = new double[radii.Length];
         double sigmaOmega = plate.Material.ConductivityAt(plateC) * Math.Abs(speedRadPerS);
