@@ -159,7 +159,7 @@ public static class SpinupCommand
             controllerMaxV,
             l.TouchdownTimeS,
             l.TouchdownSpeedMPerS,
-            l.Stations.Max(s => s.FinalSpeedRpm))).ToList();
+            l.MaxFinalSpeedRpm)).ToList();
         return new SpinupReport(
             rig.Name,
             study.Request.Mode == ControllerMode.Duty ? "duty" : "hold",
@@ -173,7 +173,7 @@ public static class SpinupCommand
             rig.Limits.LiftoffTimeS,
             spin.HoverTimeS,
             spin.StalledStations.Select(i => i + 1).ToList(),
-            spin.Stations.Max(s => s.Motor.PeakA),
+            spin.PeakMotorCurrentA,
             spin.Pack.PeakA,
             spin.Pack.ContinuousA,
             spin.Pack.BurstA ?? 0,
