@@ -170,7 +170,7 @@ public static class SpinupCommand
             sim.HoverSpeedsRadPerS.Select(Units.RadPerSToRpm).ToArray(),
             sim.MassKg,
             spin.LiftoffTimeS,
-            rig.Limits.LiftoffTimeS,
+            study.LiftoffLimitS,
             spin.HoverTimeS,
             spin.StalledStations.Select(i => i + 1).ToList(),
             spin.PeakMotorCurrentA,
