@@ -105,7 +105,7 @@ public static class EnduranceCommand
             result.FinalPackCurrentA,
             result.PeakWindingTempC,
             result.PeakPlateTempC,
-            rig.Limits.PlateTempC,
+            study.PlateLimitC,
             sim.PlateSpreadingFactor,
             PlateModel(result.PlateSetup, sim.PlateSpreadingFactor),
             result.Steps,

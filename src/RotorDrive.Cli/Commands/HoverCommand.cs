@@ -88,11 +88,11 @@ public static class HoverCommand
         var worst = safety.WorstAtHover;
         var worstMax = safety.WorstAtMaxRpm;
         var safetyEntry = new SafetyEntry(
-            hoverRotors.Count > 0 ? hoverRotors.Max(r => r.RimSpeedMPerS) : null,
+            safety.MaxHoverRimSpeedMPerS,
             worst?.HoopStressPa / 1e6, worst?.RingOwnStressPa / 1e6, worst?.MagnetLoadStressPa / 1e6, worst?.AllowablePa / 1e6, worst?.MarginFraction,
             new MaxRpmEntry(
                 worstMax is null ? double.NaN : Units.RadPerSToRpm(worstMax.SpeedRadPerS),
-                safety.AtMaxRpm.Select(r => r.RimSpeedMPerS).DefaultIfEmpty(double.NaN).Max(),
+                safety.MaxRatedRimSpeedMPerS ?? double.NaN,
                 worstMax?.HoopStressPa / 1e6, worstMax?.RingOwnStressPa / 1e6, worstMax?.MarginFraction),
             hoverRotors.Select(r => JsonNames.Of(r.Assessment)).Distinct().ToList(),
             safety.MagnetNote,

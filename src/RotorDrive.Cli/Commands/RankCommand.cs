@@ -291,9 +291,9 @@ public static class RankCommand
 
     private static string Key(RankObjective objective) => objective.ToString().ToLowerInvariant();
 
-    // The limit that ends every shortlisted endurance run when it is one and the same and not the pack's capacity or
-    // cutoff (e.g. the plate temperature, which depends on the trimmed speeds and so on the craft's mass, hardly on the
-    // drivetrain), with the shortest and longest runtime; null otherwise.
+    // The limit that ends every shortlisted endurance run when it is one and the same and not one that passes (the pack's
+    // capacity or cutoff, the time limit: EnduranceLimits.Passes), e.g. the plate temperature, which depends on the
+    // trimmed speeds and so on the craft's mass, hardly on the drivetrain; with the shortest and longest runtime, or null.
     private static (string Text, double MinS, double MaxS)? NotThePack(IReadOnlyList<RankedEntry> top)
     {
         var sims = top.Select(t => t.Evaluation.Simulation).ToList();
@@ -302,7 +302,7 @@ public static class RankCommand
             return null;
         }
         var limit = sims[0]!.EnduranceLimit;
-        if (limit is EnduranceLimit.UsableCapacity or EnduranceLimit.PackCutoff or EnduranceLimit.TimeLimit || sims.Any(s => s!.EnduranceLimit != limit))
+        if (limit.Passes() || sims.Any(s => s!.EnduranceLimit != limit))
         {
             return null;
         }

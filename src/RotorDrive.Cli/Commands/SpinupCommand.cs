@@ -166,7 +166,7 @@ public static class SpinupCommand
             controllerMaxV,
             l.TouchdownTimeS,
             l.TouchdownSpeedMPerS,
-            l.Stations.Max(s => s.FinalSpeedRpm))).ToList();
+            l.MaxFinalSpeedRpm)).ToList();
         return new SpinupReport(
             rig.Name,
             JsonNames.Of(rig.Mount),
@@ -180,10 +180,10 @@ public static class SpinupCommand
             (sim.HoverExists ? sim.Hover.GapM : rig.DesignGapM) * 1000,
             sim.MassKg,
             spin.LiftoffTimeS,
-            rig.Limits.LiftoffTimeS,
+            study.LiftoffLimitS,
             spin.HoverTimeS,
             spin.StalledStations.Select(i => i + 1).ToList(),
-            spin.Stations.Max(s => s.Motor.PeakA),
+            spin.PeakMotorCurrentA,
             spin.Pack.PeakA,
             spin.Pack.ContinuousA,
             spin.Pack.BurstA ?? 0,

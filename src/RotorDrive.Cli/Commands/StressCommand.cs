@@ -19,8 +19,8 @@ public static class StressCommand
     /// <summary>Default number of samples.</summary>
     public const int DefaultSamples = 2000;
 
-    /// <summary>Default accepted overall failure rate, %.</summary>
-    public const double DefaultAcceptPct = 1.0;
+    /// <summary>Default accepted overall failure rate, % (<see cref="StressResult.DefaultAcceptedFailurePct"/>).</summary>
+    public const double DefaultAcceptPct = StressResult.DefaultAcceptedFailurePct;
 
     /// <summary>Drivers listed in the text report.</summary>
     public const int TextDrivers = 10;
@@ -287,8 +287,7 @@ public static class StressCommand
     private static StressReport Report(StressResult r, string rigName, double acceptPct)
     {
         var rate = r.FailureRate is { } f ? new RateEntry(f.Count, f.EstimateFraction, f.LowerFraction, f.UpperFraction) : null;
-        // Pass only when the study shows the failure rate below the accepted level at 95 % confidence.
-        string verdict = rate is { } x && x.CiHigh < acceptPct / 100.0 ? "pass" : "fail";
+        string verdict = r.PassesAt(acceptPct) ? "pass" : "fail";
         var sample = r.WorstSample is { } w ? r.SampleResults.First(s => s.Index == w) : null;
         return new StressReport(
             rigName,

@@ -22,6 +22,12 @@ public sealed record HoverSafetyReport(
     /// <summary>The smallest retainer margin at rated speed, or null when none was assessed.</summary>
     public double? MinMaxRpmMargin => AtMaxRpm.Min(r => r.MarginFraction);
 
+    /// <summary>The highest rim speed at hover, m/s, or null when no station turns.</summary>
+    public double? MaxHoverRimSpeedMPerS => AtHover.Count > 0 ? AtHover.Max(r => r.RimSpeedMPerS) : null;
+
+    /// <summary>The highest rim speed of a rotor design at its rated speed, m/s, or null when there is none.</summary>
+    public double? MaxRatedRimSpeedMPerS => AtMaxRpm.Count > 0 ? AtMaxRpm.Max(r => r.RimSpeedMPerS) : null;
+
     /// <summary>The rotor closest to failing at hover (<see cref="Worst"/>), or null when no station turns.</summary>
     public RotorSafetyResult? WorstAtHover => Worst(AtHover);
 

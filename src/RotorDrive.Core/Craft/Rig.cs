@@ -123,6 +123,15 @@ public sealed record Rig(
         + Stations.Sum(s => s.Rotor.RotorMassKg + (s.Motor?.MassKg ?? 0) + (s.Controller?.MassKg ?? 0))
         + (Packs?.MassKg ?? 0);
 
+    /// <summary>Mass of the rotors, kg (part of <see cref="TotalMassKg"/>).</summary>
+    public double RotorsMassKg => Stations.Sum(s => s.Rotor.RotorMassKg);
+
+    /// <summary>Mass of the assigned motors, kg (part of <see cref="TotalMassKg"/>).</summary>
+    public double MotorsMassKg => Stations.Sum(s => s.Motor?.MassKg ?? 0);
+
+    /// <summary>Mass of the assigned controllers, kg (part of <see cref="TotalMassKg"/>).</summary>
+    public double ControllersMassKg => Stations.Sum(s => s.Controller?.MassKg ?? 0);
+
     /// <summary>Weight of the whole craft (<see cref="TotalMassKg"/> under standard gravity 9.80665 m/s^2, ISO 80000-3), N.</summary>
     public double WeightN => TotalMassKg * Units.StandardGravity;
 

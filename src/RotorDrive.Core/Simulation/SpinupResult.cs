@@ -51,6 +51,12 @@ public sealed record SpinupResult(
     /// <summary>Indices of stalled stations (empty when none).</summary>
     public IReadOnlyList<int> StalledStations => Stations.Where(s => s.Stalled).Select(s => s.Index).ToArray();
 
+    /// <summary>The largest motor current of any station during the run, A.</summary>
+    public double PeakMotorCurrentA => Stations.Max(s => s.Motor.PeakA);
+
+    /// <summary>The highest final speed of any station, rpm.</summary>
+    public double MaxFinalSpeedRpm => Stations.Max(s => s.FinalSpeedRpm);
+
     /// <summary>True when the pack sagged below its cutoff voltage.</summary>
     public bool BelowCutoff => MinBusVoltageV < CutoffVoltageV;
 }

@@ -124,7 +124,7 @@ public static class RigReportHtml
         {
             list.Add("Ranking: the rig's own drivetrain is rejected: " + string.Join("; ", own.Rejections.Select(r => r.Message)));
         }
-        if (report.Stress is { FailureRate: { } rate } && !(rate.UpperFraction < report.StressAcceptPct / 100))
+        if (report.Stress is { FailureRate: { } rate } stress && !stress.PassesAt(report.StressAcceptPct))
         {
             list.Add($"Stress test: {rate.Count} of {rate.Trials} samples fail a criterion; the 95 % interval reaches {N(rate.UpperFraction * 100, 2)} %, not below the accepted {N(report.StressAcceptPct, 2)} %.");
         }
@@ -276,7 +276,7 @@ public static class RigReportHtml
             return;
         }
         var rate = stress.FailureRate;
-        bool pass = rate is { } x && x.UpperFraction < report.StressAcceptPct / 100;
+        bool pass = stress.PassesAt(report.StressAcceptPct);
         s.Append("<p>").Append(Verdict(pass)).Append(E($" {stress.Samples} samples (seed {stress.Seed})" + (stress.Partial ? ", stopped early" : "")
             + (rate is { } fr ? $": {fr.Count} fail at least one criterion, {N(fr.EstimateFraction * 100, 2)} % (95 % interval {N(fr.LowerFraction * 100, 2)} to {N(fr.UpperFraction * 100, 2)} %); accepted below {N(report.StressAcceptPct, 2)} %." : ".")))
             .Append("</p>\n<table><tr><th>criterion</th><th>failed samples</th><th>rate, %</th></tr>\n");

@@ -272,9 +272,9 @@ public sealed class HoverYawSheet : Sheet
     private static void ComposeRetainingRing(StringBuilder sb, HoverSafetyReport safety)
     {
         sb.AppendLine("RETAINING RING (burst checks)");
-        if (safety.AtHover.Count > 0)
+        if (safety.MaxHoverRimSpeedMPerS is { } rim)
         {
-            sb.AppendLine($"  rim speed {F(safety.AtHover.Max(x => x.RimSpeedMPerS), 1)} m/s at hover");
+            sb.AppendLine($"  rim speed {F(rim, 1)} m/s at hover");
             sb.AppendLine("  " + RotorSafetyText.Line(safety.WorstAtHover!, "hover"));
         }
         else

@@ -92,7 +92,7 @@ internal sealed class RigStressEvaluator(RigStressModel model) : IStressEvaluato
             margins,
             spin.LiftoffTimeS,
             spin.StalledStations,
-            spin.Stations.Max(s => s.Motor.PeakA),
+            spin.PeakMotorCurrentA,
             spin.Pack.PeakA,
             spin.MinBusVoltageV,
             speedRpm,

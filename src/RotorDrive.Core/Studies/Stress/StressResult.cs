@@ -27,4 +27,14 @@ public sealed record StressResult(
     IReadOnlyList<StressDriver> Drivers,
     int? WorstSample,
     IReadOnlyList<StressInput> Inputs,
-    IReadOnlyList<StressSample> SampleResults);
+    IReadOnlyList<StressSample> SampleResults)
+{
+    /// <summary>The accepted overall failure rate when none is given, %: 1 % (common practice, no source).</summary>
+    public const double DefaultAcceptedFailurePct = 1.0;
+
+    /// <summary>The stress test's verdict: true only when the study shows, at 95 % confidence, that the overall failure
+    /// rate is below the accepted level (the upper end of <see cref="FailureRate"/>'s Wilson interval is below it); false
+    /// when no sample ran.</summary>
+    /// <param name="acceptedFailurePct">The accepted overall failure rate, %.</param>
+    public bool PassesAt(double acceptedFailurePct) => FailureRate is { } f && f.UpperFraction < acceptedFailurePct / 100.0;
+}
