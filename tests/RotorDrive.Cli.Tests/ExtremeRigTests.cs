@@ -32,7 +32,7 @@ public sealed class ExtremeRigTests : IDisposable
     ];
 
     private sealed record Draw(double EmptyKg, double PayloadKg, double CgMm, double InertiaKgM2, double DesignMm, double LandedShare,
-        double PlateMm, double AmbientC, int PackCount, double YawNm);
+        double PlateMm, double AmbientC, int PackCount, double YawNm, string Mount = "free", int Stations = 6, double? Duty = null);
 
     // Values at the ends of each accepted range, and in between.
     private static Gen<double> Range(double min, double max) => Gen.Frequency(
@@ -51,7 +51,10 @@ public sealed class ExtremeRigTests : IDisposable
         from ambient in Gen.Elements(-40.0, 22.0, 60.0)
         from packs in Gen.Elements(1, 2, 7, 1000)
         from yaw in Range(0.001, 10000)
-        select new Draw(empty, payload, cg, inertia, design, landed, plate, ambient, packs, yaw);
+        from mount in Gen.Elements("free", "free", "guided", "bench")
+        from stations in mount == "free" ? Gen.Constant(6) : Gen.Elements(1, 2, 3, 6)
+        from duty in mount == "free" ? Gen.Constant<double?>(null) : Gen.Elements<double?>(null, 0.0, 0.5, 0.95)
+        select new Draw(empty, payload, cg, inertia, design, landed, plate, ambient, packs, yaw, mount, stations, duty);
 
     private string Write(Draw d)
     {
@@ -66,6 +69,27 @@ public sealed class ExtremeRigTests : IDisposable
             .Replace("\"ambient_c\": 22", "\"ambient_c\": " + N(d.AmbientC), StringComparison.Ordinal)
             .Replace("\"count\": 2", "\"count\": " + d.PackCount.ToString(CultureInfo.InvariantCulture), StringComparison.Ordinal)
             .Replace("\"yaw_torque_nm\": 2", "\"yaw_torque_nm\": " + N(d.YawNm), StringComparison.Ordinal);
+        // Guided sleds and benches (issue 14 item 7): the first stations only, each with the duty drawn (all or none).
+        if (d.Mount != "free")
+        {
+            text = text.Replace("\"stations\": [", $"\"mount\": \"{d.Mount}\", \"stations\": [", StringComparison.Ordinal);
+            var lines = text.Split('\n').ToList();
+            var rows = lines.Select((l, i) => (l, i)).Where(x => x.l.Contains("\"rotor\": \"hx130-p4\"", StringComparison.Ordinal)).Select(x => x.i).ToList();
+            for (int k = rows.Count - 1; k >= d.Stations; k--)
+            {
+                lines.RemoveAt(rows[k]);
+            }
+            for (int k = 0; k < d.Stations; k++)
+            {
+                string row = lines[rows[k]].Trim().TrimEnd(',');
+                if (d.Duty is { } duty)
+                {
+                    row = row[..row.LastIndexOf('}')].TrimEnd() + ", \"duty\": " + N(duty) + " }";
+                }
+                lines[rows[k]] = "    " + row + (k < d.Stations - 1 ? "," : "");
+            }
+            text = string.Join('\n', lines);
+        }
         // Absolute spreads fit the demo's nominal values only (a 4 kg payload spread cannot sit on a 0 kg payload); the
         // relative ones scale with any rig.
         text = string.Join('\n', text.Split('\n').Where(l => !(l.Contains("{ \"normal_sd\":", StringComparison.Ordinal) || l.Contains("{ \"uniform\":", StringComparison.Ordinal))));
@@ -75,7 +99,7 @@ public sealed class ExtremeRigTests : IDisposable
     }
 
     // A fixed replay seed keeps the suite deterministic (each draw runs ten commands, ~5 s); change it to explore further.
-    [Property(MaxTest = 8, Replay = "(12345,67891)")]
+    [Property(MaxTest = 12, Replay = "(12345,67891)")]
     public Property EveryCommand_OnAnyRigThatPassesCheck_EndsWithAVerdict_AndFiniteNumbers()
         => Prop.ForAll(Draws.ToArbitrary(), d =>
         {
@@ -92,6 +116,14 @@ public sealed class ExtremeRigTests : IDisposable
             {
                 var (code, output, error) = CliRunner.RunAsync([args[0], rig, .. args[1..]]).GetAwaiter().GetResult();
                 string what = $"{string.Join(' ', args)} on {d}: exit {code}\n{error}";
+                var mount = d.Mount switch { "guided" => RotorDrive.Core.Craft.MountKind.Guided, "bench" => RotorDrive.Core.Craft.MountKind.Bench, _ => RotorDrive.Core.Craft.MountKind.Free };
+                if (RotorDrive.Core.Craft.MountKind.Free != mount && RotorDrive.Core.Craft.MountFit.Analyses.Contains(args[0]) && !RotorDrive.Core.Craft.MountFit.Fits(args[0], mount))
+                {
+                    // Not for this mount: the one refusal, exit 2.
+                    Assert.True(code == ExitCodes.BadInput, what);
+                    Assert.Contains("is not for a", error + output);
+                    continue;
+                }
                 Assert.True(code is ExitCodes.Ok or ExitCodes.LimitFindings, what);
                 foreach (string bad in new[] { "NaN", "Infinity", "∞" })
                 {

@@ -10,9 +10,10 @@ using RotorDrive.Files.Rigs;
 
 namespace RotorDrive.Cli.Commands;
 
-/// <summary><c>rotordrive spinup RIG.json [--ramp-s T] [--mode duty|hold] [--soc-pct S] [--csv FILE] [--force] [--json]</c>:
-/// the spin-up from rest on the landing gear through the drag peak to hover, then the landing (stop) profile with
-/// braking on and off.</summary>
+/// <summary><c>rotordrive spinup RIG.json [--ramp-s T] [--mode duty|hold] [--soc-pct S] [--gap-mm G] [--duty D] [--csv FILE]
+/// [--force] [--json]</c>: the spin-up from rest through the drag peak to the rig's steady state (a free craft's trimmed
+/// hover, a guided sled's hover, a bench's stations at their duties on their stands), then the landing (stop) profile
+/// with braking on and off.</summary>
 /// <remarks>The simulation, findings and cautions are <see cref="SpinupStudy.Run"/> (shared with the terminal UI); this
 /// command parses, prints and writes the CSV. Exit 1 when the study finds a failed limit (no lift-off within the rig's
 /// lift-off time limit, a stalled rotor, a current above its burst allowance, the pack below its cutoff); a landing that

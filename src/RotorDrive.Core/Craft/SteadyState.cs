@@ -32,4 +32,19 @@ public static class SteadyState
         Preconditions.NotNull(rig, nameof(rig));
         return rig.Stations.Count > 0 && rig.Stations.All(s => s.Duty is not null) ? rig.Stations.Select(s => s.Duty!.Value).ToArray() : null;
     }
+
+    /// <summary>The state in words, for the interfaces' headings: "trimmed hover", "guided hover at one common duty",
+    /// "guided hover at the stations' set duties" or "each station at its duty on its stand".</summary>
+    /// <param name="rig">The rig.</param>
+    public static string Words(Rig rig)
+    {
+        Preconditions.NotNull(rig, nameof(rig));
+        return rig.Mount switch
+        {
+            MountKind.Guided when SetDuties(rig) is not null => "guided hover at the stations' set duties",
+            MountKind.Guided => "guided hover at one common duty",
+            MountKind.Bench => "each station at its duty on its stand",
+            _ => "trimmed hover",
+        };
+    }
 }

@@ -7,9 +7,9 @@ namespace RotorDrive.Core.Simulation;
 /// and the plate heat, and stops at the first limit reached, naming it and the plate's hottest point.</summary>
 /// <remarks>
 /// <para>Quasi-static march: the electrical and rotor dynamics settle in well under a second, the state of charge and the
-/// temperatures change over minutes, so at every instant the rig sits in its trimmed hover for the present charge and
-/// temperatures. Every evaluation re-trims with <see cref="HoverTrim"/> (force, pitch, roll and yaw balance at the design
-/// gap) on the rig model at the present state of charge with each station's present winding temperature and the mean
+/// temperatures change over minutes, so at every instant the rig sits in its steady state for the present charge and
+/// temperatures. Every evaluation re-solves <see cref="SteadyState.Solve"/> (a free craft's trim: force, pitch, roll and
+/// yaw balance at the design gap; a guided sled's common or set duties; a bench's stations at their duties) on the rig model at the present state of charge with each station's present winding temperature and the mean
 /// plate temperature under its magnet annulus (<see cref="RigModel.WithSoc"/>, <see cref="RigModel.WithStationConditions"/>):
 /// the falling conductivity of a hot plate raises a station's speed, a hot winding its loss, a sagging pack the duties.
 /// Charge drawn and winding temperatures advance by Heun's method (explicit trapezoidal rule) over the lumped winding
@@ -406,7 +406,12 @@ public static class EnduranceSimulator
                 EnduranceLimit.TimeLimit => $"none: the run reached its time limit of {At(maxDurationS, "s")}",
                 EnduranceLimit.PackCutoff => $"pack cutoff voltage ({At(packs.CellsSeries * _r.Limits.CellCutoffV, "V")}: {packs.CellsSeries} cells x {At(_r.Limits.CellCutoffV, "V")})",
                 EnduranceLimit.UsableCapacity => $"usable pack capacity ({At(100 * _r.Limits.UsableCapacityFraction, "%")} of {At(packs.CapacityAh, "A h")})",
-                EnduranceLimit.TrimLost => "the hover trim no longer exists (the rotors or controllers can no longer hold the design gap)",
+                EnduranceLimit.TrimLost => _r.Mount switch
+                {
+                    MountKind.Guided => "the guided hover no longer exists (the rotors or controllers can no longer carry the sled)",
+                    MountKind.Bench => "the stations' steady state no longer exists (a rotor or controller can no longer hold its duty)",
+                    _ => "the hover trim no longer exists (the rotors or controllers can no longer hold the design gap)",
+                },
                 EnduranceLimit.WindingTemperature => $"winding temperature of station {station + 1} ({At(_rig.Drivetrains[station!.Value].Motor.MaxWindingTempC ?? 0, "C")})",
                 EnduranceLimit.MotorCurrent => $"motor current of station {station + 1} above its continuous {At(_rig.Drivetrains[station!.Value].Motor.MaxCurrentA, "A")}",
                 EnduranceLimit.ControllerCurrent => $"controller current of station {station + 1} above its continuous {At(_rig.Drivetrains[station!.Value].Controller.ContinuousCurrentA, "A")}",

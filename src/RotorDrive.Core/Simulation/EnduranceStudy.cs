@@ -3,7 +3,8 @@ using RotorDrive.Core.Safety;
 namespace RotorDrive.Core.Simulation;
 
 /// <summary>The endurance study of a rig, shared by the <c>endurance</c> and <c>report</c> commands and the workbench's
-/// endurance sheet: the trimmed hover held (in place or on the rig's route) while the pack drains and sags and the
+/// endurance sheet: the rig's steady state (<see cref="Craft.SteadyState"/>: trimmed hover, guided hover or a bench's
+/// stations) held (in place or on the rig's route) while the pack drains and sags and the
 /// windings and the plate field heat, until the first limit, with the verdict and cautions.</summary>
 /// <remarks>The simulation is <see cref="EnduranceSimulator.Run"/>; it takes from a fraction of a second to seconds, so
 /// the study reports progress and is cancellable once per step. Passes when the pack ends the hover

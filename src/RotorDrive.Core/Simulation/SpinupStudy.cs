@@ -5,7 +5,8 @@ namespace RotorDrive.Core.Simulation;
 /// <summary>The spin-up study of a rig, shared by the command line and the terminal UI: the spin-up from rest on the
 /// landing gear through the drag peak to the trimmed hover, the landing from that hover with braking on and off, and the
 /// findings and cautions in words.</summary>
-/// <remarks>The throttle ramps from 0 to the trimmed-hover throttle (<see cref="SimulationRig.HoverThrottle"/>: per-station
+/// <remarks>The target is the rig's steady state (<see cref="Craft.SteadyState"/>: a free craft's trim, a guided sled's
+/// hover, or a bench's stations at their duties on their stands, which never lift off). The throttle ramps from 0 to the steady-state throttle (<see cref="SimulationRig.HoverThrottle"/>: per-station
 /// duties or speeds) over the ramp time; the spin-up lasts the ramp plus the settle time. Each landing starts from the
 /// trimmed hover at the state of charge the spin-up ended with and cuts the throttle to zero over the stop ramp. Failed
 /// limits: no trimmed hover to aim for, no lift-off or lift-off later than the rig's limit, a rotor stalled below its drag

@@ -192,7 +192,7 @@ public sealed class EnduranceSheet : ChartSheet
     {
         var r = study.Run;
         var sb = new StringBuilder();
-        sb.AppendLine($"ENDURANCE  trimmed hover at the {F(sim.Rig.DesignGapM * 1000, 1)} mm design gap, {F(sim.MassKg, 1)} kg");
+        sb.AppendLine($"ENDURANCE  {SteadyState.Words(sim.Rig)} at {F((sim.Hover.Balanced ? sim.Hover.GapM : sim.Rig.DesignGapM) * 1000, 1)} mm, {F(sim.MassKg, 1)} kg");
         sb.AppendLine($"  runtime {Runtime(r.RuntimeS)}, {r.Steps} steps");
         sb.AppendLine($"  {(study.Passes ? "" : Over + " ")}ended by {r.FirstLimitText}");
         sb.AppendLine(study.Passes

@@ -129,14 +129,17 @@ public sealed class SpinupSheet : ChartSheet
     {
         var spin = study.Spinup;
         double limitS = study.LiftoffLimitS;
-        string liftoff = spin.LiftoffTimeS is { } lo
-            ? (study.LiftoffFails ? Over + " " : "") + $"lift-off {F(lo, 2)} s (limit {F(limitS, 1)} s)"
-            : $"{Over} never lifts off";
-        string hover = spin.HoverTimeS is { } h ? $", steady hover {F(h, 2)} s" : ", steady hover not reached";
+        bool bench = sim.Rig.Mount == MountKind.Bench;
+        string liftoff = bench ? "on its stands (no lift-off)"
+            : spin.LiftoffTimeS is { } lo
+                ? (study.LiftoffFails ? Over + " " : "") + $"lift-off {F(lo, 2)} s (limit {F(limitS, 1)} s)"
+                : $"{Over} never lifts off";
+        string steady = bench ? "steady speeds" : "steady hover";
+        string hover = spin.HoverTimeS is { } h ? $", {steady} {F(h, 2)} s" : $", {steady} not reached";
         var worst = study.WorstStation;
         string currents = $"peak motor {F(worst.Motor.PeakA, 1)} A (limit {F(worst.CurrentLimitA, 0)} A); pack {(spin.Pack.Exceeded ? Over : "")}{F(spin.Pack.PeakA, 0)} A, low {(spin.BelowCutoff ? Over : "")}{F(spin.MinBusVoltageV, 1)} V";
         string verdict = study.Passes
-            ? "passes: lift-off in time, no stall, currents in allowance"
+            ? bench ? "passes: no stall, currents in allowance" : "passes: lift-off in time, no stall, currents in allowance"
             : $"{Over} fails ({study.Findings.Count}, F7 figures): " + study.Findings[0].Message;
         string landing = study.Cautions.Count > 0
             ? $"caution: landing regen lifts bus to {F(study.Landings.Max(l => l.MaxBusVoltageV), 1)} V (rated {F(study.ControllerMaxVoltageV, 1)} V)"
@@ -183,9 +186,11 @@ public sealed class SpinupSheet : ChartSheet
         var sb = new StringBuilder();
         sb.AppendLine($"SPIN-UP  {(request.Mode == ControllerMode.Duty ? "duty" : "speed hold")} mode, ramp {F(request.RampS, 1)} s, pack at {F(study.SocFraction * 100, 0)} %, {F(sim.MassKg, 1)} kg");
         sb.AppendLine(sim.HoverExists
-            ? $"  target: trimmed hover at {F(sim.HoverSpeedsRadPerS.Min(Units.RadPerSToRpm), 0)}..{F(sim.HoverSpeedsRadPerS.Max(Units.RadPerSToRpm), 0)} rpm, {F(rig.DesignGapM * 1000, 1)} mm design gap"
-            : $"  {Over} no trimmed hover to aim for at the design gap");
-        sb.AppendLine($"  lift-off {(spin.LiftoffTimeS is { } lo ? F(lo, 2) + " s" : Over + " never")} (limit {F(study.LiftoffLimitS, 1)} s); steady hover {(spin.HoverTimeS is { } h ? F(h, 2) + " s" : "not reached")}");
+            ? $"  target: {SteadyState.Words(rig)} at {F(sim.HoverSpeedsRadPerS.Min(Units.RadPerSToRpm), 0)}..{F(sim.HoverSpeedsRadPerS.Max(Units.RadPerSToRpm), 0)} rpm, {F(sim.Hover.GapM * 1000, 1)} mm gap"
+            : $"  {Over} no {SteadyState.Words(rig)} to aim for");
+        sb.AppendLine(rig.Mount == MountKind.Bench
+            ? $"  the stands hold the gap: no lift-off; steady speeds {(spin.HoverTimeS is { } hb ? F(hb, 2) + " s" : "not reached")}"
+            : $"  lift-off {(spin.LiftoffTimeS is { } lo ? F(lo, 2) + " s" : Over + " never")} (limit {F(study.LiftoffLimitS, 1)} s); steady hover {(spin.HoverTimeS is { } h ? F(h, 2) + " s" : "not reached")}");
         sb.AppendLine($"  pack: peak {(spin.Pack.Exceeded ? Over : "")}{F(spin.Pack.PeakA, 0)} A (continuous {F(spin.Pack.ContinuousA, 0)} A, {F(spin.Pack.TimeAboveContinuousS, 2)} s above; burst {F(spin.Pack.BurstA, 0)} A)");
         sb.AppendLine($"  lowest pack voltage {(spin.BelowCutoff ? Over : "")}{F(spin.MinBusVoltageV, 1)} V (cutoff {F(spin.CutoffVoltageV, 1)} V)");
         sb.AppendLine($"  yaw: peak reaction {F(spin.PeakYawTorqueNm, 2)} N m (gear holds {F(rig.GearYawFrictionNm, 1)} N m), peak rate {F(spin.PeakYawRateRadPerS * 180 / Math.PI, 2)} deg/s");
