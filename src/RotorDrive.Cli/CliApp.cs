@@ -7,30 +7,53 @@ using RotorDrive.Files;
 namespace RotorDrive.Cli;
 
 /// <summary>Builds the rotordrive command tree and runs it with the shared error handling and exit codes.</summary>
-/// <remarks>Each subcommand lives in Commands/ with a static <c>Create()</c>; add one line to <see cref="BuildRoot"/>
+/// <remarks>Each subcommand lives in Commands/ with a static <c>Create()</c>; add one line to the <c>Commands</c> table
 /// to register it. Commands write through <c>parse.InvocationConfiguration.Output</c>/<c>.Error</c> so tests can
 /// capture them.</remarks>
 public static class CliApp
 {
+    // Every subcommand by the name it is invoked with. A run builds only the one its first argument names (start-up: the
+    // other commands' option trees are never constructed); help, version and unknown words get the whole tree.
+    private static readonly (string Name, Func<TimeProvider?, Command> Create)[] Commands =
+    [
+        ("check", _ => CheckCommand.Create()),
+        ("load", LoadCommand.Create),
+        ("operate", OperateCommand.Create),
+        ("ui", _ => UiCommand.Create()),
+        ("spinup", SpinupCommand.Create),
+        ("endurance", EnduranceCommand.Create),
+        ("hover", _ => HoverCommand.Create()),
+        ("yaw", _ => YawCommand.Create()),
+        ("rank", RankCommand.Create),
+        ("stress", StressCommand.Create),
+        ("calibrate", _ => CalibrateCommand.Create()),
+        ("report", ReportCommand.Create),
+        ("demo", _ => DemoCommand.Create()),
+        ("schema", _ => SchemaCommand.Create()),
+    ];
+
+    /// <summary>The subcommands' names, in the order help lists them.</summary>
+    public static IReadOnlyList<string> CommandNames { get; } = Commands.Select(c => c.Name).ToArray();
+
     /// <summary>Builds the root command with every subcommand.</summary>
     /// <param name="clock">The clock for the date stamped on plots and reports; the system clock when null.</param>
-    public static RootCommand BuildRoot(TimeProvider? clock = null)
+    public static RootCommand BuildRoot(TimeProvider? clock = null) => BuildRoot(clock, only: null);
+
+    /// <summary>Builds the root command with the subcommand named <paramref name="only"/>, or with every subcommand when
+    /// <paramref name="only"/> is null or names none.</summary>
+    /// <param name="clock">The clock for the date stamped on plots and reports; the system clock when null.</param>
+    /// <param name="only">The one subcommand to build (the first word of the command line), or null.</param>
+    internal static RootCommand BuildRoot(TimeProvider? clock, string? only)
     {
         var root = new RootCommand("RotorDrive: drivetrain choice and analysis for eddy-current levitation rigs.");
-        root.Subcommands.Add(CheckCommand.Create());
-        root.Subcommands.Add(LoadCommand.Create(clock));
-        root.Subcommands.Add(OperateCommand.Create(clock));
-        root.Subcommands.Add(UiCommand.Create());
-        root.Subcommands.Add(SpinupCommand.Create(clock));
-        root.Subcommands.Add(EnduranceCommand.Create(clock));
-        root.Subcommands.Add(HoverCommand.Create());
-        root.Subcommands.Add(YawCommand.Create());
-        root.Subcommands.Add(RankCommand.Create(clock));
-        root.Subcommands.Add(StressCommand.Create(clock));
-        root.Subcommands.Add(CalibrateCommand.Create());
-        root.Subcommands.Add(ReportCommand.Create(clock));
-        root.Subcommands.Add(DemoCommand.Create());
-        root.Subcommands.Add(SchemaCommand.Create());
+        bool one = only is not null && CommandNames.Contains(only, StringComparer.Ordinal);
+        foreach (var (name, create) in Commands)
+        {
+            if (!one || name == only)
+            {
+                root.Subcommands.Add(create(clock));
+            }
+        }
         NumericOptions.Apply(root);
         return root;
     }
@@ -55,7 +78,7 @@ public static class CliApp
         int code = await RunCoreAsync(args, probe, collector, clock);
         if (code == ExitCodes.BadInput && !probe.Written)
         {
-            string command = args.FirstOrDefault(a => !a.StartsWith('-')) is { } first && BuildRoot(clock).Subcommands.Any(c => c.Name == first)
+            string command = args.FirstOrDefault(a => !a.StartsWith('-')) is { } first && CommandNames.Contains(first, StringComparer.Ordinal)
                 ? first : "rotordrive";
             var problems = collector.Problems.Select(p => new ProblemEntry(p.File, p.Line, p.Column, p.Field, p.Message)).ToList();
             JsonOutput.Write(output, new FailureReport(command, false, code, problems));
@@ -67,7 +90,7 @@ public static class CliApp
     {
         try
         {
-            var parse = BuildRoot(clock).Parse(args);
+            var parse = BuildRoot(clock, args.FirstOrDefault()).Parse(args);
             if (parse.Errors.Count > 0)
             {
                 foreach (var e in parse.Errors)

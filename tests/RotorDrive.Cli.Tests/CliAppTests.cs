@@ -29,4 +29,27 @@ public class CliAppTests
         Assert.Equal(ExitCodes.Ok, code);
         Assert.Contains("check", output);
     }
+
+    [Fact]
+    public void EachRegisteredName_BuildsThatCommandAlone_AndHelpBuildsThemAll()
+    {
+        // Start-up (issue 19 item 5): a run builds only the subcommand its first word names; the name each command is
+        // registered under must be the name it parses as, or that command could not be invoked.
+        var all = CliApp.BuildRoot().Subcommands.Select(c => c.Name).ToList();
+        Assert.Equal(CliApp.CommandNames, all);
+        foreach (string name in CliApp.CommandNames)
+        {
+            Assert.Equal([name], CliApp.BuildRoot(null, name).Subcommands.Select(c => c.Name));
+        }
+        Assert.Equal(all, CliApp.BuildRoot(null, "--help").Subcommands.Select(c => c.Name));
+        Assert.Equal(all, CliApp.BuildRoot(null, "hovr").Subcommands.Select(c => c.Name));
+    }
+
+    [Fact]
+    public async Task AMistypedCommand_IsStillAnsweredWithTheWholeTree()
+    {
+        var (code, _, error) = await CliRunner.RunAsync("hovr", "catalogs/demo-rig.json");
+        Assert.Equal(ExitCodes.BadInput, code);
+        Assert.Contains("hovr", error);
+    }
 }

@@ -193,6 +193,10 @@ public sealed class TabulatedRotorLoad : IRotorLoad
 
     // Node layout (8 doubles, one cache line): lift, d lift/du * hu, d lift/dg * hg, d2 lift/du dg * hu hg, then the same
     // for torque, with u = ln x; slopes are stored pre-multiplied by the cell sizes so the lookup needs no scaling.
+    // Compiled optimised at its first call: its 256-bit vectors keep it out of the ahead-of-time image (compiled for the
+    // baseline x64 instruction set), and without this the first table of a process (every command's) was built in the
+    // JIT's unoptimised first tier until on-stack replacement swapped the loop (issue 19 item 5).
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private void Fill(RotorEddyModel eddy, double lnStep, double gapStep)
     {
         int radii = eddy.ModeCount;
