@@ -252,7 +252,7 @@ public static class RankCommand
     {
         if (result.Assigned is { } assigned)
         {
-            string where = result.AssignedRank is { } r ? $"rank {r} of {result.AcceptedCount}" : "rejected";
+            string where = result.AssignedRank is { } r ? $"rank {r.ToString("N0", CultureInfo.InvariantCulture)} of {result.AcceptedCount.ToString("N0", CultureInfo.InvariantCulture)}" : "rejected";
             o.WriteLine($"The rig's own drivetrain, {assigned.Label}: {where}.");
             foreach (var reason in assigned.Rejections)
             {

@@ -259,7 +259,7 @@ public static class RigReportHtml
         s.Append("</table>\n");
         if (rank.Assigned is { } own)
         {
-            s.Append("<p>").Append(E($"The rig's own drivetrain ({own.Label}): " + (rank.AssignedRank is { } r ? $"rank {r} of {rank.AcceptedCount}." : "rejected: " + string.Join("; ", own.Rejections.Select(x => x.Message)))))
+            s.Append("<p>").Append(E($"The rig's own drivetrain ({own.Label}): " + (rank.AssignedRank is { } r ? $"rank {r.ToString("N0", CultureInfo.InvariantCulture)} of {rank.AcceptedCount.ToString("N0", CultureInfo.InvariantCulture)}." : "rejected: " + string.Join("; ", own.Rejections.Select(x => x.Message)))))
                 .Append("</p>\n");
         }
         if (report.RankEvaluate is { } evaluate)
