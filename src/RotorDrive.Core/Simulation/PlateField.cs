@@ -80,6 +80,9 @@ internal sealed class PlateField
         return best;
     }
 
+    // Strip models that shape the loss of each ring model, kept as long as the ring model lives (models are immutable).
+    private static readonly System.Runtime.CompilerServices.ConditionalWeakTable<RotorEddyModel, RotorEddyModel> ShapeModels = new();
+
     // The share of eddy power in each radial strip of the load model (../DESIGN.md 4.3; the strip model's for the ring model): drag pressure x slip speed
     // omega r x strip area, at the start hover's speed, gap and plate temperature. Uniform per area when the rotor does not
     // turn (no trim at the start).
@@ -94,8 +97,10 @@ internal sealed class PlateField
         if (eddy.IsRingModel)
         {
             // The ring model's modes span the plate and carry no radius: the radial shape of the loss comes from the
-            // three-dimensional strip model of the same rotor (its total is scaled away below).
-            eddy = RotorEddyModel.ThreeDimensionalStrips(station.Rotor, plate, harmonics: eddy.Harmonics);
+            // three-dimensional strip model of the same rotor and plate (its total is scaled away below), built once
+            // per ring model.
+            var ring = eddy;
+            eddy = ShapeModels.GetValue(ring, _ => RotorEddyModel.ThreeDimensionalStrips(ring.Rotor, plate with { ThicknessM = ring.PlateThicknessM }, harmonics: ring.Harmonics));
         }
         var radii = eddy.RadiusM.ToArray();
         var fractions = new double[radii.Length];
