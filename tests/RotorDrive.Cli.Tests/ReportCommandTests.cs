@@ -49,6 +49,12 @@ public sealed class ReportCommandTests : IDisposable
         // The burst caution weighs the rated-speed check as the hover review does: the demo rotor's 33 % margin at its rated
         // 5000 rpm is under the caution's 50 %, so the report warns as `hover` does.
         Assert.Contains("Rotor burst (warning).", html);
+        // The load model named is the one the analyses used (the rig's default, 3-D), and stations count from 1 as on
+        // every other output (issue 14 item 6): the spin-up and hover tables' first row is station 1, none is station 0.
+        Assert.Contains("3-D ring model", html);
+        Assert.DoesNotContain("2-D layer model", html);
+        Assert.DoesNotContain("<tr><td class=\"n\">0</td>", html);
+        Assert.Contains("<tr><td class=\"n\">1</td>", html);
         // The exit code agrees with the failed-limits list.
         bool anyFailed = html.Contains("<ul class=\"failed\">", StringComparison.Ordinal);
         Assert.Equal(anyFailed ? ExitCodes.LimitFindings : ExitCodes.Ok, code);

@@ -38,7 +38,7 @@ public static class EndurancePlot
         {
             temperatures.Add(PlotSeries.Level("winding limit", winding));
         }
-        return new PlotFigure($"Endurance (ended by {result.FirstLimitText})", rigName, date,
+        return new PlotFigure($"Endurance (ended by {result.FirstLimit.Words()} after {result.RuntimeS / 60:0.0} min)", rigName, date,
         [
             new PlotPanel("state of charge", "time, min", "state of charge, %", [PlotSeries.Line("charge", minutes, t.SocFraction.Select(s => s * 100).ToArray())]),
             new PlotPanel("pack voltage", "time, min", "voltage, V",

@@ -4,6 +4,7 @@ using System.Text;
 using RotorDrive.Core;
 using RotorDrive.Core.Craft;
 using RotorDrive.Core.Drive;
+using RotorDrive.Core.Loads;
 using RotorDrive.Core.Safety;
 using RotorDrive.Core.Simulation;
 using RotorDrive.Core.Studies.Stress;
@@ -153,7 +154,7 @@ public static class RigReportHtml
         for (int i = 0; i < rig.Stations.Count; i++)
         {
             var st = rig.Stations[i];
-            s.Append("<tr><td class=\"n\">").Append(i).Append("</td><td class=\"n\">").Append(N(st.XM * 1000, 0)).Append("</td><td class=\"n\">")
+            s.Append("<tr><td class=\"n\">").Append(i + 1).Append("</td><td class=\"n\">").Append(N(st.XM * 1000, 0)).Append("</td><td class=\"n\">")
                 .Append(N(st.YM * 1000, 0)).Append("</td><td>").Append(E(st.Spin.ToString())).Append("</td><td>").Append(E(st.Rotor.Id))
                 .Append("</td><td>").Append(E(st.Motor?.Id ?? "none")).Append("</td><td>").Append(E(st.Controller?.Id ?? "none")).Append("</td></tr>\n");
         }
@@ -163,13 +164,23 @@ public static class RigReportHtml
     private static void LoadModelSection(StringBuilder s, RigReport report)
     {
         var load = report.Model.Options.Load;
-        s.Append("<p>").Append(E("2-D layer model of the plate per radius strip (J. R. Reitz, 1970), the fundamental of the Halbach array (K. Halbach, 1980), "
-            + $"integrated over the magnet annulus with {load.RadialPoints}-point Gauss-Legendre quadrature; "
-            + (load.EndEffectCorrection ? "with the Russell-Norsworthy finite-width correction (1958)" : "without the finite-width correction")
-            + "; windage of a free disc (Schlichting) and bearing drag from the rotor rows; values from the precomputed load tables every analysis uses."))
+        string model = load.Model == LoadModelKind.ThreeDimensional
+            ? "3-D ring model: the field of the magnet array's first " + load.Harmonics + " harmonics (Halbach arrays: K. Halbach, 1980) as cylindrical harmonics over a plate "
+              + "much wider than the rotor, each the layer problem of the plate (J. R. Reitz, 1970) in the Hankel-transform solution of C. V. Dodd and "
+              + "W. E. Deeds (1968); the pitch's growth with radius, the fringing at the magnets' edges and the closure of the eddy currents come out of "
+              + "the solution (checked against the axial eddy-current brake of T. Lubin and A. Rezzoug, 2015: peak torque -2 %, its speed -4 %)"
+            : "2-D layer model of the plate per radius strip (J. R. Reitz, 1970), the fundamental of the Halbach array (K. Halbach, 1980), "
+              + $"integrated over the magnet annulus with {load.RadialPoints}-point Gauss-Legendre quadrature; "
+              + (load.EndEffectCorrection ? "with the Russell-Norsworthy finite-width correction (1958)" : "without the finite-width correction")
+              + " (the first-generation model, chosen by the rig's load_model)";
+        s.Append("<p>").Append(E(model + "; windage of a free disc (Schlichting) and bearing drag from the rotor rows; values from the precomputed load tables every analysis uses."))
             .Append("</p>\n");
-        s.Append("<p>").Append(E("Calibration: none. This rig's load model is not fitted to bench data; the 2-D strip model over-predicts lift at low speed and can under-predict drag above the drag peak, so treat the figures as estimates until a calibration is applied."))
-            .Append("</p>\n");
+        var calibrations = report.Model.Rig.Calibrations;
+        string calibration = calibrations.Count == 0
+            ? "Calibration: none. This rig's load model is not fitted to bench data, so treat the figures as estimates until a calibration is applied (README, honest limits)."
+            : "Calibration: " + string.Join("; ", calibrations.Values.OrderBy(c => c.RotorId, StringComparer.Ordinal).Select(c =>
+                $"rotor {c.RotorId} from {c.Source} (conductivity factor {N(c.Factors.ConductivityFactor, 3)}, field factor {N(c.Factors.FieldFactor, 3)})")) + ".";
+        s.Append("<p>").Append(E(calibration)).Append("</p>\n");
     }
 
     private static void HoverSection(StringBuilder s, RigReport report)
@@ -184,7 +195,7 @@ public static class RigReportHtml
         foreach (var st in hover.Stations)
         {
             var least = st.Margins.Count > 0 ? st.Margins.MinBy(m => m.MarginFraction) : (LimitMargin?)null;
-            s.Append("<tr><td class=\"n\">").Append(st.Index).Append("</td><td>").Append(E(st.Spin.ToString())).Append("</td>");
+            s.Append("<tr><td class=\"n\">").Append(st.Index + 1).Append("</td><td>").Append(E(st.Spin.ToString())).Append("</td>");
             Cells(s, N(st.Duty, 3), N(st.SpeedRpm, 0), N(st.LiftN, 1), N(st.ShaftTorqueNm, 2), N(st.MotorCurrentA, 1), N(st.BusCurrentA, 1), N(st.EddyPowerW, 0), N(st.LiftSpecificPowerWPerN, 2));
             s.Append("<td>").Append(st.Stable ? "yes" : "<span class=\"fail\">NO</span>").Append("</td><td>")
                 .Append(least is { } m ? E($"{m.Limit.Describe()} {N(m.MarginFraction * 100, 0)} %") : "").Append("</td></tr>\n");
@@ -219,7 +230,7 @@ public static class RigReportHtml
         s.Append("<table><tr><th>station</th><th>peak motor current, A</th><th>controller limit, A</th><th>drag peak, N m at rpm</th><th>stalled</th></tr>\n");
         foreach (var st in spin.Stations)
         {
-            s.Append("<tr><td class=\"n\">").Append(st.Index).Append("</td>");
+            s.Append("<tr><td class=\"n\">").Append(st.Index + 1).Append("</td>");
             Cells(s, N(st.Motor.PeakA, 1), N(st.CurrentLimitA, 1), $"{N(st.DragPeakTorqueNm, 2)} at {N(Units.RadPerSToRpm(st.DragPeakSpeedRadPerS), 0)}");
             s.Append("<td>").Append(st.Stalled ? "<span class=\"fail\">YES</span>" : "no").Append("</td></tr>\n");
         }
