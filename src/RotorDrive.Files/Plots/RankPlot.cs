@@ -31,7 +31,7 @@ public static class RankPlot
             string where = result.AssignedRank is { } rank ? $"rank {rank}" : "rejected";
             series.Add(PlotSeries.Marks($"the rig's own choice ({where})", [own.TotalMassKg], [own.RuntimeS / 60]));
         }
-        return new PlotFigure($"Catalog ranking, {result.AcceptedCount} accepted of {result.TotalCombinations}", rigName, date,
+        return new PlotFigure($"Catalog ranking, {result.AcceptedCount:N0} accepted of {result.TotalCombinations:N0}", rigName, date,
             [new PlotPanel("pack runtime against craft mass", "total mass, kg", "pack runtime, min", series)]);
     }
 }

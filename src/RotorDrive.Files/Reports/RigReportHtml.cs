@@ -256,9 +256,9 @@ public static class RigReportHtml
             s.Append("<p>").Append(E(report.RankNote ?? "No ranking.")).Append("</p>\n");
             return;
         }
-        s.Append("<p>").Append(E($"{rank.TotalCombinations} combinations of motor, controller and pack count evaluated, {rank.AcceptedCount} accepted; ranked by {rank.Objective.ToString().ToLowerInvariant()}."))
+        s.Append("<p>").Append(E($"{rank.TotalCombinations.ToString("N0", CultureInfo.InvariantCulture)} combinations of motor, controller and pack count evaluated, {rank.AcceptedCount.ToString("N0", CultureInfo.InvariantCulture)} accepted; ranked by {rank.Objective.ToString().ToLowerInvariant()}. The runtime is the pack's alone (the quick estimate); the endurance section gives the hover time with the plate's heating."))
             .Append("</p>\n");
-        s.Append("<table><tr><th>rank</th><th>Pareto</th><th>drivetrain</th><th>mass, kg</th><th>runtime, min</th><th>hover speed, rpm</th><th>motor current, A</th></tr>\n");
+        s.Append("<table><tr><th>rank</th><th>Pareto</th><th>drivetrain</th><th>mass, kg</th><th>pack runtime, min</th><th>hover speed, rpm</th><th>motor current, A</th></tr>\n");
         foreach (var entry in rank.Top.Take(RankRows))
         {
             var f = entry.Evaluation.Figures;
