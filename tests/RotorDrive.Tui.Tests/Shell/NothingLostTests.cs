@@ -7,7 +7,7 @@ namespace RotorDrive.Tui.Tests.Shell;
 
 public class NothingLostTests
 {
-    private static StressSheet StartLongStressRun(Bench bench)
+    internal static StressSheet StartLongStressRun(Bench bench)
     {
         bench.Window.ShowSheet("Stress");
         var sheet = Assert.IsType<StressSheet>(bench.Window.CurrentSheet);
