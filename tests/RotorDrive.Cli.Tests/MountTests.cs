@@ -78,6 +78,24 @@ public sealed class MountTests : IDisposable
         Assert.True(code is ExitCodes.Ok or ExitCodes.LimitFindings, error);
     }
 
+    // The demo's six stations on stands at max duty have no steady state: endurance says so and prints no end state
+    // (a 0 V bus at "the end" of a run that never started would be a state that cannot exist).
+    [Fact]
+    public async Task BenchEndurance_WithoutASteadyState_PrintsNoEndState()
+    {
+        var (code, output, error) = await CliRunner.RunAsync("endurance", RigWith("bench"));
+        Assert.True(code is ExitCodes.Ok or ExitCodes.LimitFindings, error);
+        if (output.Contains("no steady state of the stations exists", StringComparison.Ordinal))
+        {
+            Assert.DoesNotContain("at the end:", output);
+            Assert.DoesNotContain("hot spot at the end", output);
+        }
+        else
+        {
+            Assert.Contains("at the end:", output);
+        }
+    }
+
     // A guided sled hovers at one common duty at its design gap: every station's duty is the same and within max_duty,
     // the lifts sum to the weight (statics, Newton's first law; 1e-6 relative after rounding-free JSON) and the rails'
     // loads are reported.

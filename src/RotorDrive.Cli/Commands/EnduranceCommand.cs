@@ -154,9 +154,13 @@ public static class EnduranceCommand
         output.WriteLine(report.StartSpeedsRpm.Count == 0
             ? $"  at the start: no {(report.Mount == "free" ? "trimmed hover" : report.Mount == "guided" ? "guided hover" : "steady state of the stations")} exists"
             : $"  at the start: {string.Join(" / ", report.StartSpeedsRpm.Select(r => Numbers.Format(r, 0)))} rpm at duty {string.Join(" / ", report.StartDuties.Select(d => Numbers.Format(d, 3)))} (stations 1..{report.StartSpeedsRpm.Count}), pack current {Numbers.Format(report.StartPackCurrentA, 1)} A");
-        output.WriteLine($"  at the end: state of charge {Numbers.Format(report.FinalSocPct, 1)} %, bus {Numbers.Format(report.FinalBusVoltageV, 1)} V, pack current {Numbers.Format(report.FinalPackCurrentA, 1)} A");
+        if (report.StartSpeedsRpm.Count > 0)
+        {
+            // Without a starting state nothing ran: no end state to show (a 0 V bus would be a state that never existed).
+            output.WriteLine($"  at the end: state of charge {Numbers.Format(report.FinalSocPct, 1)} %, bus {Numbers.Format(report.FinalBusVoltageV, 1)} V, pack current {Numbers.Format(report.FinalPackCurrentA, 1)} A");
+        }
         output.WriteLine($"  {windingLine}, hottest point of the plate {Numbers.Format(report.PeakPlateTempC, 1)} C (limit {Numbers.Format(report.PlateLimitC, 0)} C)");
-        if (report.PlateHotspot is { } h)
+        if (report.StartSpeedsRpm.Count > 0 && report.PlateHotspot is { } h)
         {
             output.WriteLine($"  plate hot spot at the end: x {Numbers.Format(h.XMm, 0)} mm, y {Numbers.Format(h.YMm, 0)} mm, {Numbers.Format(h.TemperatureC, 1)} C"
                 + (report.PlateLimitTimeS is { } tl ? $"; the plate limit is reached at {Numbers.Format(tl, 0)} s" : string.Empty));
