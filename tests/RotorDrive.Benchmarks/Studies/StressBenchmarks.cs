@@ -16,6 +16,7 @@ public class StressBenchmarks
     private IStressEvaluator _evaluator = null!;
     private StressParts[] _parts = [];
     private int _next;
+    private StressResult _fiveThousand = null!;
 
     [GlobalSetup]
     public void Setup()
@@ -30,7 +31,14 @@ public class StressBenchmarks
         _model = new RigStressModel(loaded.Rig!, _tolerances);
         _evaluator = _model.CreateEvaluator();
         _parts = Enumerable.Range(0, 64).Select(k => StressSampler.Draw(loaded.Rig!, _tolerances, 1, k)).ToArray();
+        _fiveThousand = StressStudy.Run(_model, _tolerances, new StressStudyOptions(5_000, 1));
     }
+
+    /// <summary>Aggregating 5,000 evaluated samples (rates, percentiles, the drivers' rank correlations): what F8 waits for
+    /// after the workers stop (issue 15 item 1: F8 ends a run within 0.5 s keeping what finished).</summary>
+    [Benchmark]
+    public StressResult AggregateFiveThousand()
+        => StressStudy.Aggregate(_fiveThousand.SampleResults, 5_000, 1, _fiveThousand.Inputs);
 
     /// <summary>One sample of the demo rig with its drawn parts (cycling through 64 samples).</summary>
     [Benchmark]

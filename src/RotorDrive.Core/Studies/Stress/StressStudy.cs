@@ -134,20 +134,7 @@ public static class StressStudy
 
         var figures = FigureKeys.Select(k => Figure(k, samples.Select(s => FigureValue(s.Outcome, k)))).ToArray();
 
-        var drivers = new List<StressDriver>();
-        foreach (var criterion in StressCriteria.All)
-        {
-            var assessed = samples.Where(s => s.Outcome.Margins[(int)criterion] is not null).ToArray();
-            var margins = assessed.Select(s => s.Outcome.Margins[(int)criterion]!.Value).ToArray();
-            foreach (var input in inputs)
-            {
-                var values = assessed.Select(s => input.ValueIn(s.Parts)).ToArray();
-                if (RankCorrelation.Spearman(values, margins) is { } rho)
-                {
-                    drivers.Add(new StressDriver(input.Name, criterion, rho));
-                }
-            }
-        }
+        var drivers = Drivers(samples, inputs);
         var ordered = drivers
             .OrderByDescending(d => Math.Abs(d.Rho))
             .ThenBy(d => d.Input, StringComparer.Ordinal)
@@ -166,6 +153,33 @@ public static class StressStudy
             }
         }
         return new StressResult(n, requested, seed, n < requested, overall, criteria, figures, ordered, worst, inputs, samples);
+    }
+
+    // Spearman's rho of every varied input against every criterion's margin, over the samples where that margin was
+    // assessed. Each series is ranked once: an input's ranks over all samples serve every criterion assessed on all of
+    // them (the usual case), so a run ranks (inputs + criteria) series instead of two per pair.
+    private static List<StressDriver> Drivers(IReadOnlyList<StressSample> samples, IReadOnlyList<StressInput> inputs)
+    {
+        var drivers = new List<StressDriver>();
+        var allRanks = new double[]?[inputs.Count];
+        foreach (var criterion in StressCriteria.All)
+        {
+            var assessed = samples.Where(s => s.Outcome.Margins[(int)criterion] is not null).ToArray();
+            var marginRanks = RankCorrelation.MidRanks(assessed.Select(s => s.Outcome.Margins[(int)criterion]!.Value).ToArray());
+            bool everySample = assessed.Length == samples.Count;
+            for (int i = 0; i < inputs.Count; i++)
+            {
+                var input = inputs[i];
+                var inputRanks = everySample
+                    ? allRanks[i] ??= RankCorrelation.MidRanks(samples.Select(s => input.ValueIn(s.Parts)).ToArray())
+                    : RankCorrelation.MidRanks(assessed.Select(s => input.ValueIn(s.Parts)).ToArray());
+                if (RankCorrelation.OfRanks(inputRanks, marginRanks) is { } rho)
+                {
+                    drivers.Add(new StressDriver(input.Name, criterion, rho));
+                }
+            }
+        }
+        return drivers;
     }
 
     private static StressFigure Figure(string key, IEnumerable<double?> values)

@@ -218,6 +218,62 @@ public class StressStudyTests
         Assert.All(result.Drivers.Where(d => d.Criterion == StressCriterion.Stall), d => Assert.True(d.Rho > 0.15, d.ToString()));
     }
 
+    [Fact]
+    public void Drivers_EqualSpearmanOfEachPair_OverTheSamplesWhereTheMarginWasAssessed()
+    {
+        // The drivers rank each series once and pair the ranks (RankCorrelation.OfRanks); this recomputes every pair from
+        // scratch with RankCorrelation.Spearman (itself checked against a hand computation, the textbook formula and
+        // MathNet's Correlation.Spearman in StatisticsTests). The constructed model leaves the Currents margin unassessed
+        // on about half the samples, so both paths of the aggregation are taken: ranks over every sample, and over a subset.
+        var tolerances = StressTolerances.None
+            .With(StressQuantity.ControllerCurrentLimit, Tolerance.Normal(8, ToleranceScale.Percent, true))
+            .With(StressQuantity.MotorKv, Tolerance.Normal(3, ToleranceScale.Percent, true));
+        var result = StressStudy.Run(new PartlyAssessedModel(StressRigs.Square), tolerances, new StressStudyOptions(600, 3, 2));
+        var expected = new List<StressDriver>();
+        foreach (var criterion in StressCriteria.All)
+        {
+            var assessed = result.SampleResults.Where(s => s.Outcome.Margins[(int)criterion] is not null).ToArray();
+            var margins = assessed.Select(s => s.Outcome.Margins[(int)criterion]!.Value).ToArray();
+            foreach (var input in result.Inputs)
+            {
+                if (RankCorrelation.Spearman(assessed.Select(s => input.ValueIn(s.Parts)).ToArray(), margins) is { } rho)
+                {
+                    expected.Add(new StressDriver(input.Name, criterion, rho));
+                }
+            }
+        }
+        int partly = result.SampleResults.Count(s => s.Outcome.Margins[(int)StressCriterion.Currents] is null);
+        Assert.InRange(partly, 150, 450);
+        Assert.Contains(result.Drivers, d => d.Criterion == StressCriterion.Currents);
+        Assert.Equal(expected.Count, result.Drivers.Count);
+        foreach (var e in expected)
+        {
+            var got = Assert.Single(result.Drivers, d => d.Input == e.Input && d.Criterion == e.Criterion);
+            Assert.Equal(e.Rho, got.Rho, 12);
+        }
+    }
+
+    // Stall margin on every sample; Currents margin only where station 1's Kv drew above nominal.
+    private sealed class PartlyAssessedModel(Rig rig) : IStressModel
+    {
+        public Rig Rig => rig;
+
+        public IStressEvaluator CreateEvaluator() => new Evaluator(rig);
+
+        private sealed class Evaluator(Rig rig) : IStressEvaluator
+        {
+            public StressOutcome Evaluate(StressParts parts, bool recordTrace)
+            {
+                var margins = new double?[StressCriteria.All.Count];
+                double worst = parts.Stations.Min(s => s.CurrentLimitA);
+                margins[(int)StressCriterion.Stall] = worst / 160 - 1;
+                double kvRatio = parts.Stations[0].KvRadPerSPerV / rig.Stations[0].Motor!.KvRadPerSPerV;
+                margins[(int)StressCriterion.Currents] = kvRatio > 1 ? 0.2 - (kvRatio - 1) - 0.001 * parts.Stations[1].CurrentLimitA : null;
+                return new StressOutcome(margins, null, [], worst, 0, 0, null, null, null, null, null, null, null);
+            }
+        }
+    }
+
     private sealed class CancelAfter(CancellationTokenSource cts, int count) : IProgress<int>
     {
         public void Report(int value)
