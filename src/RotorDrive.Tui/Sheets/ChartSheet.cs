@@ -46,7 +46,7 @@ public abstract class ChartSheet : Sheet
         {
             _seenRevision = Context.Session.Revision;
             OnRigChanged(rig);
-            Recompute(immediately: false);
+            Recompute(immediately: Arriving);
         }
     }
 

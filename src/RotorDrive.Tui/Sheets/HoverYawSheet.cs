@@ -61,7 +61,7 @@ public sealed class HoverYawSheet : Sheet
         if (_seenRevision != Context.Session.Revision)
         {
             _seenRevision = Context.Session.Revision;
-            Recompute(rig);
+            Recompute(rig, immediately: Arriving);
         }
     }
 

@@ -32,6 +32,25 @@ public abstract class Sheet : View
     /// <summary>Called (on the UI thread) when the sheet is shown and whenever the rig changes while it is shown.</summary>
     public abstract void Refresh();
 
+    /// <summary>Shows the sheet's current state on arrival: <see cref="Refresh"/> with <see cref="Arriving"/> true.</summary>
+    public void Arrive()
+    {
+        Arriving = true;
+        try
+        {
+            Refresh();
+        }
+        finally
+        {
+            Arriving = false;
+        }
+    }
+
+    /// <summary>True while <see cref="Refresh"/> runs because the sheet is being shown, false when it answers an edit. A
+    /// sheet that recomputes on a rig it has not seen starts at once on arrival: the debounce delay is for bursts of
+    /// edits, and a visit is not one (it made a first visit during a long run wait a third of a second for nothing).</summary>
+    protected bool Arriving { get; private set; }
+
     /// <summary>Handles a sheet-specific key; true when handled.</summary>
     public virtual bool HandleKey(Terminal.Gui.Input.Key key) => false;
 }

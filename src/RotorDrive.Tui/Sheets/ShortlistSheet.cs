@@ -195,7 +195,7 @@ public sealed class ShortlistSheet : Sheet
             var key = new RankKey(Fingerprint(document), catalog, _objective, packs);
             if (key != _requested)
             {
-                Run(key, rig, catalog, immediately: false);
+                Run(key, rig, catalog, immediately: Arriving);
             }
         }
         ShowAssigned();

@@ -146,7 +146,7 @@ public sealed class MainWindow : Window
         {
             _list.SetSelection(index, false);
         }
-        _sheets[index].Refresh();
+        _sheets[index].Arrive();
         if (focusSheet)
         {
             _sheets[index].SetFocus();
