@@ -1,12 +1,13 @@
 #!/usr/bin/env python3
 # Not run by CI. How the workbench answers while a long run goes (issue 15 item 1), in a pseudo-terminal (120 x 40):
 #   tools/busy-response-time.py ROTORDRIVE ui RIG.json
-# opens the Stress sheet (Alt+9), starts its run (F5), then while it runs switches sheets (Alt+5, Alt+1, Alt+3,
-# Alt+9, five rounds) and times each switch from the key to the first screen output that shows the sheet; finally
-# presses F8 on the Stress sheet and times it to the 'PARTIAL' result. Elapsed wall-clock times; the machine's load
-# counts, so quote them with the load average.
+# opens the Stress sheet (Alt+9), sets 50,000 samples and starts the run (F5), then while it runs switches sheets
+# (Alt+5, Alt+1, Alt+3, Alt+9, five rounds) and times each switch from the key to the first screen output that shows the
+# sheet's title in the frame ("switch"), and to the first output that shows text of the sheet's own content, which on a
+# first visit may wait for the sheet's computation ("content"); finally presses F8 on the Stress sheet and times it to
+# the 'PARTIAL' result. Elapsed wall-clock times; the machine's load counts, so quote them with the load average.
 
-import os, pty, sys, time, select, fcntl, termios, struct
+import os, pty, re, sys, time, select, fcntl, termios, struct
 
 exe = sys.argv[1:]
 
@@ -21,19 +22,20 @@ def start():
     return pid, fd
 
 
-def wait_for(fd, needle, timeout=30.0):
-    """Reads until the output holds needle; returns the seconds it took, or None."""
-    t0 = time.monotonic(); buf = b''
-    while time.monotonic() - t0 < timeout:
+def wait_for(fd, needles, timeout=30.0):
+    """Reads until the output has matched each pattern (bytes regexes); returns the seconds each took (None if not seen)."""
+    t0 = time.monotonic(); buf = b''; seen = [None] * len(needles)
+    while time.monotonic() - t0 < timeout and None in seen:
         r, _, _ = select.select([fd], [], [], 0.005)
         if r:
             data = os.read(fd, 65536)
             if b'\x1b[6n' in data: os.write(fd, b'\x1b[1;1R')
             if b'\x1b[c' in data or b'\x1b[0c' in data: os.write(fd, b'\x1b[?62;c')
             buf += data
-            if needle in buf:
-                return time.monotonic() - t0
-    return None
+            for i, n in enumerate(needles):
+                if seen[i] is None and re.search(n, buf):
+                    seen[i] = time.monotonic() - t0
+    return seen
 
 
 def drain(fd, seconds):
@@ -43,26 +45,38 @@ def drain(fd, seconds):
             os.read(fd, 65536)
 
 
+def title(name):
+    # The sheet's name in the frame's top border, '┤' + colour codes + name + (colour reset or '├'); the sheet list on the
+    # left shows every name too, but as '5 Hover & yaw', never after '┤'.
+    return b'\xe2\x94\xa4(?:\x1b\\[[0-9;]*m)*' + re.escape(name) + b'(?:\x1b|\xe2\x94\x9c)'
+
+
 pid, fd = start()
-wait_for(fd, b'F10 Quit', 60)
+wait_for(fd, [re.escape(b'F10 Quit')], 60)
 drain(fd, 0.5)
-os.write(fd, b'\x1b9'); wait_for(fd, b'Tolerances'); drain(fd, 0.5)
+os.write(fd, b'\x1b9'); wait_for(fd, [re.escape(b'Tolerances')]); drain(fd, 0.5)
+# The samples field has the focus on arrival: 50,000 samples, as the issue's load (a 2000-sample run ends within seconds).
+os.write(fd, b'\x1b[F' + b'\x7f' * 8 + b'50000'); drain(fd, 0.5)
 os.write(fd, b'\x1b[15~')  # F5: run
-print('run started: %s' % ('yes' if wait_for(fd, b'Running') is not None else 'no'))
+print('run started: %s' % ('yes' if wait_for(fd, [re.escape(b'Running')])[0] is not None else 'no'))
 drain(fd, 1.0)
-times = []
+switch, content, order = [], [], []
 for _ in range(5):
-    # Each needle is text of the sheet itself, never of the sheet list on the left: the list shows every sheet's name,
-    # and a redraw of the whole window (four a second before 12-03) printed those names without any switch.
-    for key, title in ((b'5', b'over = the limit'), (b'1', b'CG forward x'), (b'3', b'drag peak'), (b'9', b'Tolerances (first six')):
+    # Each content needle is text of the sheet itself, never of the sheet list on the left.
+    for key, name, text in ((b'5', b'Hover & yaw', b'over = the limit'), (b'1', b'Rig', b'CG forward x'),
+                            (b'3', b'Lift & drag', b'drag peak'), (b'9', b'Stress', b'Tolerances (first six')):
         os.write(fd, b'\x1b' + key)
-        t = wait_for(fd, title, 10)
-        times.append(t if t is not None else float('inf'))
+        s, c = wait_for(fd, [title(name), re.escape(text)], 10)
+        switch.append(s if s is not None else float('inf'))
+        content.append(c if c is not None else float('inf'))
+        order.append('Alt+%s %.3f/%.3f' % (key.decode(), switch[-1], content[-1]))
         drain(fd, 0.2)
-times.sort()
-print('sheet switches during the run: %d, median %.3f s, max %.3f s' % (len(times), times[len(times) // 2], times[-1]))
+for label, times in (('switch (frame title)', switch), ('content', content)):
+    t = sorted(times)
+    print('%s: %d, median %.3f s, max %.3f s' % (label, len(t), t[len(t) // 2], t[-1]))
+print('in order, switch/content (s): ' + ', '.join(order))
 os.write(fd, b'\x1b[19~')  # F8: stop
-t = wait_for(fd, b'PARTIAL', 10)
+t = wait_for(fd, [re.escape(b'PARTIAL')], 10)[0]
 print('F8 to the partial result: %s' % ('%.3f s' % t if t is not None else 'not seen in 10 s (the run may have finished)'))
 os.write(fd, b'\x1b[21~')
 time.sleep(0.3)

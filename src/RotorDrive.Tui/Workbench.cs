@@ -76,8 +76,10 @@ public static class Workbench
             error.WriteLine($"rotordrive ui: cannot open the rig: {failure}");
             return 2;
         }
+        KeyTiming.SetLoopRate();
         using IApplication app = Application.Create();
         app.Init();
+        KeyTiming.ShortenEscapeWait(app);
         var (window, context) = Build(app, rigPath, files, new SystemClock(), new TerminalPrompts(app), out _);
         using (context.Work)
         using (window)

@@ -126,29 +126,32 @@ public sealed class BackgroundWork : IDisposable
             StartProgressTimer();
             Raise();
             var progress = new Progress(job);
-            job.Task = Task.Run(() => work(job.Token, progress), job.Token).ContinueWith(t =>
-            {
-                Post(() =>
+            // A thread of its own, not one of the pool's: a run holding pool threads for minutes delays the timers that
+            // the UI's main loop and the terminal reader sleep on (KeyTiming), and keys then wait for the pool to grow.
+            job.Task = Task.Factory.StartNew(() => work(job.Token, progress), job.Token, TaskCreationOptions.LongRunning, TaskScheduler.Default)
+                .ContinueWith(t =>
                 {
-                    job.Running = false;
-                    bool current;
-                    lock (_gate)
+                    Post(() =>
                     {
-                        current = _jobs.TryGetValue(name, out var latest) && ReferenceEquals(latest, job);
-                    }
-                    if (t.IsCompletedSuccessfully && (keepWhenCancelled || !job.Token.IsCancellationRequested) && current && !_disposed)
-                    {
-                        LastFailure = null;
-                        job.Delivered = true;
-                        done(t.Result);
-                    }
-                    else if (t.IsFaulted && current)
-                    {
-                        LastFailure = $"{name}: {t.Exception!.GetBaseException().Message}";
-                    }
-                    Raise();
-                });
-            }, TaskScheduler.Default);
+                        job.Running = false;
+                        bool current;
+                        lock (_gate)
+                        {
+                            current = _jobs.TryGetValue(name, out var latest) && ReferenceEquals(latest, job);
+                        }
+                        if (t.IsCompletedSuccessfully && (keepWhenCancelled || !job.Token.IsCancellationRequested) && current && !_disposed)
+                        {
+                            LastFailure = null;
+                            job.Delivered = true;
+                            done(t.Result);
+                        }
+                        else if (t.IsFaulted && current)
+                        {
+                            LastFailure = $"{name}: {t.Exception!.GetBaseException().Message}";
+                        }
+                        Raise();
+                    });
+                }, TaskScheduler.Default);
         }
         if (immediately || _debounce <= TimeSpan.Zero)
         {
