@@ -1,24 +1,26 @@
 #!/usr/bin/env python3
-# Not run by CI. How the workbench answers while a long run goes (issue 15 item 1), in a pseudo-terminal (120 x 40):
+# Not run by CI. How the workbench answers while a long run goes (issue 15 item 1), in a pseudo-terminal (120 x 40, or RD_SIZE=80x24):
 #   tools/busy-response-time.py ROTORDRIVE ui RIG.json
 # opens the Stress sheet (Alt+9), sets 50,000 samples and starts the run (F5), then while it runs switches sheets
 # (Alt+5, Alt+1, Alt+3, Alt+9, five rounds) and times each switch from the key to the first screen output that shows the
 # sheet's title in the frame ("switch"), and to the first output that shows text of the sheet's own content, which on a
 # first visit may wait for the sheet's computation ("content"); finally presses F8 on the Stress sheet and times it to
-# the 'PARTIAL' result. Elapsed wall-clock times; the machine's load counts, so quote them with the load average.
+# the 'PARTIAL' result. In between it types into a Rig field during the run and times each key to its echo. Elapsed wall-clock times; the machine's load counts, so quote them with the load average.
 
 import os, pty, re, sys, time, select, fcntl, termios, struct
 
 exe = sys.argv[1:]
+# RD_SIZE=80x24 for the smallest terminal the sheets are laid out for (content needles below the fold then show 'inf').
+COLS, ROWS = (int(v) for v in os.environ.get('RD_SIZE', '120x40').split('x'))
 
 
 def start():
     pid, fd = pty.fork()
     if pid == 0:
         os.environ['TERM'] = 'xterm-256color'
-        os.environ['COLUMNS'] = '120'; os.environ['LINES'] = '40'
+        os.environ['COLUMNS'] = str(COLS); os.environ['LINES'] = str(ROWS)
         os.execvp(exe[0], exe)
-    fcntl.ioctl(fd, termios.TIOCSWINSZ, struct.pack('HHHH', 40, 120, 0, 0))
+    fcntl.ioctl(fd, termios.TIOCSWINSZ, struct.pack('HHHH', ROWS, COLS, 0, 0))
     return pid, fd
 
 
@@ -75,6 +77,21 @@ for label, times in (('switch (frame title)', switch), ('content', content)):
     t = sorted(times)
     print('%s: %d, median %.3f s, max %.3f s' % (label, len(t), t[len(t) // 2], t[-1]))
 print('in order, switch/content (s): ' + ', '.join(order))
+# Typing during the run: on the Rig sheet the first field (the plate material's id, al-1350) has the focus; a '7' typed at its end
+# makes the id unknown (the field's text shows it), Backspace puts it back (the totals line returns).
+os.write(fd, b'\x1b1'); wait_for(fd, [title(b'Rig')]); drain(fd, 0.3)
+os.write(fd, b'\x1b[F'); drain(fd, 0.3)
+typed = []
+for _ in range(5):
+    os.write(fd, b'7')
+    typed.append(wait_for(fd, [re.escape(b'al-13507')], 10)[0] or float('inf'))
+    drain(fd, 0.3)
+    os.write(fd, b'\x7f')
+    typed.append(wait_for(fd, [rb'Mass \d'], 10)[0] or float('inf'))
+    drain(fd, 0.3)
+t = sorted(typed)
+print('typing (key to echo): %d, median %.3f s, max %.3f s' % (len(t), t[len(t) // 2], t[-1]))
+os.write(fd, b'\x1b9'); wait_for(fd, [title(b'Stress')]); drain(fd, 0.3)
 os.write(fd, b'\x1b[19~')  # F8: stop
 t = wait_for(fd, [re.escape(b'PARTIAL')], 10)[0]
 print('F8 to the partial result: %s' % ('%.3f s' % t if t is not None else 'not seen in 10 s (the run may have finished)'))

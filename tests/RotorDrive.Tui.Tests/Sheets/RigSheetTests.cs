@@ -30,6 +30,38 @@ public class RigSheetTests
     }
 
     [Fact]
+    public void FieldRows_AreDrawnBesideTheirFields_ByTheSheet_AndScrollWithThem()
+    {
+        // Issue 15 item 1: the Rig sheet was about 170 views (a label, a field, a unit and a message per value), and a
+        // sheet switch during a long run spent most of its time drawing them. Labels, units and messages are now drawn by
+        // the sheet on each field's row; only the fields are views. Each must still sit on its field's row, also after
+        // scrolling (80 x 24 shows part of the sheet), and a problem must show beside its field.
+        using var bench = new Bench(80, 24);
+        bench.Window.ShowSheet("Rig");
+        var sheet = Assert.IsType<RigSheet>(bench.Window.CurrentSheet);
+        int views = 0;
+        void Count(Terminal.Gui.ViewBase.View v) { views++; foreach (var sub in v.SubViews) { Count(sub); } }
+        Count(sheet);
+        // The sheet, its three summary lines and six headings, and per field the text field with its completion popup.
+        Assert.InRange(views, 2 * sheet.Fields.Count, 2 * sheet.Fields.Count + 12);
+        Assert.Contains(bench.Screen.Split('\n'), line => line.Contains(" thickness        12            mm", StringComparison.Ordinal));
+
+        var last = sheet.Fields[^1];
+        last.Field.SetFocus();
+        string scrolled = bench.Screen;
+        Assert.DoesNotContain(" thickness ", scrolled, StringComparison.Ordinal);
+        Assert.Contains(scrolled.Split('\n'), line => line.Contains($" {last.Spec.Label}", StringComparison.Ordinal)
+            && line.Contains(last.Field.Text, StringComparison.Ordinal));
+
+        var thickness = sheet.Fields.Single(f => f.Spec.Label == "thickness");
+        thickness.Field.SetFocus();
+        thickness.Field.Text = "-3";
+        string marked = bench.Screen;
+        Assert.True(thickness.Message.IsError);
+        Assert.Contains(marked.Split('\n'), line => line.Contains(" thickness        -3", StringComparison.Ordinal) && line.Contains("! ", StringComparison.Ordinal));
+    }
+
+    [Fact]
     public void TheTestRig_ShowsTheDefaultOfEveryBlankLimit_AsTheResolverUsesIt()
     {
         using var bench = new Bench(columns: 120, rigPath: "/lab/test-rig.json");

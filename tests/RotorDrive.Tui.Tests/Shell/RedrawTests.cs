@@ -27,7 +27,8 @@ public class RedrawTests
     {
         // Issue 15 item 1: during a long run the UI thread must stay free for keys. Each progress tick changes a count and
         // a bar; before this, assigning the progress line's width (even the same one) laid out and redrew every view
-        // of the window four times a second (the window with the Stress sheet is about 100 views).
+        // of the window four times a second (the window with the Stress sheet was about 100 views; about 50 since field
+        // labels, units and messages are drawn by the view holding the fields).
         using var bench = new Bench(120, 40);
         var sheet = NothingLostTests.StartLongStressRun(bench);
         var deadline = DateTime.UtcNow.AddSeconds(120);
@@ -48,11 +49,14 @@ public class RedrawTests
             bench.App.LayoutAndDraw(false);
         }
         int drawn = views.Sum(v => v.Draws());
+        string which = string.Join(", ", views.Where(v => v.Draws() > 0).GroupBy(v => v.View.GetType().Name).Select(g => $"{g.Key} x{g.Sum(v => v.Draws())}"));
         string running = sheet.StateText;
         bench.Press(Key.F8);
         await bench.SettleAsync();
         Assert.StartsWith("Running: ", running);
-        Assert.True(views.Count > 80, $"the window holds the Stress sheet's views ({views.Count})");
-        Assert.True(drawn <= ticks * views.Count / 4, $"{drawn} draws in {ticks} progress ticks of a window of {views.Count} views");
+        Assert.True(views.Count > 40, $"the window holds the Stress sheet's views ({views.Count})");
+        // A tick redraws the progress line and the run's state (about 19 views with the chain above them); a whole-window
+        // redraw would be every view, each tick.
+        Assert.True(drawn <= ticks * 25 && drawn < ticks * views.Count / 2, $"{drawn} draws in {ticks} progress ticks of a window of {views.Count} views: {which}");
     }
 }
