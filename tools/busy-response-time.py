@@ -12,6 +12,35 @@ import os, pty, re, sys, time, select, fcntl, termios, struct
 exe = sys.argv[1:]
 # RD_SIZE=80x24 for the smallest terminal the sheets are laid out for (content needles below the fold then show 'inf').
 COLS, ROWS = (int(v) for v in os.environ.get('RD_SIZE', '120x40').split('x'))
+# RD_LOAD=rank runs a full ranking instead of the stress run. The demo catalogs rank in half a second, so the rig is
+# copied with its catalogs to a temporary folder and every motor row gets 200 invented Kv variants (Kv x f, resistance
+# / f^2, no-load current x sqrt f, current x f: the same copper wound for another Kv; generated here, never committed).
+LOAD = os.environ.get('RD_LOAD', 'stress')
+
+
+def big_catalog(rig):
+    import csv, io, shutil, tempfile
+    src = os.path.dirname(os.path.abspath(rig)); dst = tempfile.mkdtemp(prefix='rd-rank-')
+    for name in os.listdir(src):
+        if os.path.isfile(os.path.join(src, name)):
+            shutil.copy(os.path.join(src, name), dst)
+    rows = list(csv.DictReader(open(os.path.join(src, 'motors.csv'))))
+    out = io.StringIO(); w = csv.DictWriter(out, fieldnames=list(rows[0].keys()), lineterminator='\n'); w.writeheader()
+    for r in rows:
+        w.writerow(r)
+        for k in range(200):
+            f = 0.8 + 0.4 * k / 199.0; v = dict(r); v['id'] = '%s-v%03d' % (r['id'], k)
+            v['kv_rpm_per_v'] = '%.4g' % (float(r['kv_rpm_per_v']) * f)
+            v['resistance_ohm'] = '%.4g' % (float(r['resistance_ohm']) / f ** 2)
+            v['no_load_current_a'] = '%.4g' % (float(r['no_load_current_a']) * f ** 0.5)
+            v['max_current_a'] = '%.4g' % (float(r['max_current_a']) * f)
+            w.writerow(v)
+    open(os.path.join(dst, 'motors.csv'), 'w').write(out.getvalue())
+    return os.path.join(dst, os.path.basename(rig))
+
+
+if LOAD == 'rank':
+    exe[-1] = big_catalog(exe[-1])
 
 
 def start():
@@ -56,17 +85,24 @@ def title(name):
 pid, fd = start()
 wait_for(fd, [re.escape(b'F10 Quit')], 60)
 drain(fd, 0.5)
-os.write(fd, b'\x1b9'); wait_for(fd, [re.escape(b'Tolerances')]); drain(fd, 0.5)
-# The samples field has the focus on arrival: 50,000 samples, as the issue's load (a 2000-sample run ends within seconds).
-os.write(fd, b'\x1b[F' + b'\x7f' * 8 + b'50000'); drain(fd, 0.5)
-os.write(fd, b'\x1b[15~')  # F5: run
-print('run started: %s' % ('yes' if wait_for(fd, [re.escape(b'Running')])[0] is not None else 'no'))
+if LOAD == 'rank':
+    # The Shortlist ranks the catalogs on arrival.
+    os.write(fd, b'\x1b8')
+    print('run started: %s' % ('yes' if wait_for(fd, [re.escape(b'Ranking')])[0] is not None else 'no'))
+    run_key, run_name, run_text, stopped = b'8', b'Shortlist', b'rank by', b'Stopped before the ranking finished'
+else:
+    os.write(fd, b'\x1b9'); wait_for(fd, [re.escape(b'Tolerances')]); drain(fd, 0.5)
+    # The samples field has the focus on arrival: 50,000 samples, as the issue's load (2,000 end within seconds).
+    os.write(fd, b'\x1b[F' + b'\x7f' * 8 + b'50000'); drain(fd, 0.5)
+    os.write(fd, b'\x1b[15~')  # F5: run
+    print('run started: %s' % ('yes' if wait_for(fd, [re.escape(b'Running')])[0] is not None else 'no'))
+    run_key, run_name, run_text, stopped = b'9', b'Stress', b'Tolerances (first six', b'PARTIAL'
 drain(fd, 1.0)
 switch, content, order = [], [], []
 for _ in range(5):
     # Each content needle is text of the sheet itself, never of the sheet list on the left.
     for key, name, text in ((b'5', b'Hover & yaw', b'over = the limit'), (b'1', b'Rig', b'CG forward x'),
-                            (b'3', b'Lift & drag', b'drag peak'), (b'9', b'Stress', b'Tolerances (first six')):
+                            (b'3', b'Lift & drag', b'drag peak'), (run_key, run_name, run_text)):
         os.write(fd, b'\x1b' + key)
         s, c = wait_for(fd, [title(name), re.escape(text)], 10)
         switch.append(s if s is not None else float('inf'))
@@ -91,10 +127,10 @@ for _ in range(5):
     drain(fd, 0.3)
 t = sorted(typed)
 print('typing (key to echo): %d, median %.3f s, max %.3f s' % (len(t), t[len(t) // 2], t[-1]))
-os.write(fd, b'\x1b9'); wait_for(fd, [title(b'Stress')]); drain(fd, 0.3)
+os.write(fd, b'\x1b' + run_key); wait_for(fd, [title(run_name)]); drain(fd, 0.3)
 os.write(fd, b'\x1b[19~')  # F8: stop
-t = wait_for(fd, [re.escape(b'PARTIAL')], 10)[0]
-print('F8 to the partial result: %s' % ('%.3f s' % t if t is not None else 'not seen in 10 s (the run may have finished)'))
+t = wait_for(fd, [re.escape(stopped)], 10)[0]
+print('F8 to the %s result: %s' % (LOAD, '%.3f s' % t if t is not None else 'not seen in 10 s (the run may have finished)'))
 os.write(fd, b'\x1b[21~')
 time.sleep(0.3)
 try: os.kill(pid, 9)

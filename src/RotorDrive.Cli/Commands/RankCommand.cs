@@ -282,7 +282,7 @@ public static class RankCommand
         foreach (var e in explained)
         {
             string verdict = e.Accepted
-                ? $"accepted, rank {result.RankOf(e.Candidate)}"
+                ? $"accepted, rank {result.RankOf(e.Candidate)?.ToString("N0", CultureInfo.InvariantCulture)}"
                 : string.Join("; ", e.Rejections.Select(r => r.Message));
             table.AddRow(e.ControllerId, $"{e.Candidate.PackCount} x {e.PackId}", verdict);
         }

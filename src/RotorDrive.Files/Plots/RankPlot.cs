@@ -1,3 +1,4 @@
+using System.Globalization;
 using RotorDrive.Core.Studies.Ranking;
 
 namespace RotorDrive.Files.Plots;
@@ -23,15 +24,15 @@ public static class RankPlot
         var top = result.Top.Select(t => t.Evaluation.Figures).Where(f => f is not null).Select(f => f!).ToList();
         var series = new List<PlotSeries>
         {
-            PlotSeries.Marks($"Pareto set ({pareto.Count})", pareto.Select(f => f.TotalMassKg).ToArray(), pareto.Select(f => f.RuntimeS / 60).ToArray()),
+            PlotSeries.Marks($"Pareto set ({pareto.Count.ToString("N0", CultureInfo.InvariantCulture)})", pareto.Select(f => f.TotalMassKg).ToArray(), pareto.Select(f => f.RuntimeS / 60).ToArray()),
             PlotSeries.Marks($"best {top.Count} by {result.Objective.ToString().ToLowerInvariant()}", top.Select(f => f.TotalMassKg).ToArray(), top.Select(f => f.RuntimeS / 60).ToArray(), hollow: true),
         };
         if (result.Assigned?.Figures is { } own)
         {
-            string where = result.AssignedRank is { } rank ? $"rank {rank}" : "rejected";
+            string where = result.AssignedRank is { } rank ? $"rank {rank.ToString("N0", CultureInfo.InvariantCulture)}" : "rejected";
             series.Add(PlotSeries.Marks($"the rig's own choice ({where})", [own.TotalMassKg], [own.RuntimeS / 60]));
         }
-        return new PlotFigure($"Catalog ranking, {result.AcceptedCount:N0} accepted of {result.TotalCombinations:N0}", rigName, date,
+        return new PlotFigure(string.Create(CultureInfo.InvariantCulture, $"Catalog ranking, {result.AcceptedCount:N0} accepted of {result.TotalCombinations:N0}"), rigName, date,
             [new PlotPanel("pack runtime against craft mass", "total mass, kg", "pack runtime, min", series)]);
     }
 }

@@ -382,7 +382,7 @@ public sealed class ShortlistSheet : Sheet
         }
         var r = shown.Result;
         string stale = shown.Key != _requested ? " (earlier settings; stopped: F5 ranks again)" : "";
-        _state.Text = $"{N(r.TotalCombinations)} tried, {N(r.AcceptedCount)} accepted, {r.ParetoRanks.Count} in the Pareto set (P){stale}";
+        _state.Text = $"{N(r.TotalCombinations)} tried, {N(r.AcceptedCount)} accepted, {N(r.ParetoRanks.Count)} in the Pareto set (P){stale}";
     }
 
     private void ShowTable()
@@ -472,7 +472,7 @@ public sealed class ShortlistSheet : Sheet
         if (shown.Result.RankOf(candidate) is { } rank)
         {
             bool pareto = shown.Result.ParetoRanks.Contains(rank);
-            _assigned.Text = Fit($"Rig: rank {rank}{(pareto ? " P" : "")} of {N(shown.Result.AcceptedCount)}", evaluation.Label);
+            _assigned.Text = Fit($"Rig: rank {N(rank)}{(pareto ? " P" : "")} of {N(shown.Result.AcceptedCount)}", evaluation.Label);
             var listed = shown.Result.Top.FirstOrDefault(t => t.Evaluation.Candidate == candidate);
             var sim = listed?.Evaluation.Simulation ?? SimulationOf(shown.Study, candidate);
             _rigRow = Row($"rig {rank}", pareto, evaluation, sim, listed?.LiftoffTimeS ?? sim.LiftoffTimeS, listed?.Score);
@@ -577,7 +577,7 @@ public sealed class ShortlistSheet : Sheet
                 foreach (var e in explained)
                 {
                     string verdict = e.Accepted
-                        ? (shown.Result.RankOf(e.Candidate) is { } rank ? $"accepted, rank {rank}" : "accepted")
+                        ? (shown.Result.RankOf(e.Candidate) is { } rank ? $"accepted, rank {N(rank)}" : "accepted")
                         : "! " + string.Join("; ", e.Rejections.Select(r => r.Message));
                     lines.Add($"  {e.ControllerId} + {e.Candidate.PackCount} x {e.PackId}: {verdict}");
                 }
