@@ -208,7 +208,7 @@ public static class StressCommand
             {
                 lock (_gate)
                 {
-                    error.WriteLine($"stress: stopped after {done}/{total} samples; the report covers those (partial).");
+                    error.WriteLine($"stress: stopped after {done.ToString("N0", CultureInfo.InvariantCulture)} of {total.ToString("N0", CultureInfo.InvariantCulture)} samples; the report covers those (partial).");
                 }
             }
         }
@@ -332,7 +332,7 @@ public static class StressCommand
 
     private static void WriteText(StressReport r, int varied, TextWriter o)
     {
-        o.WriteLine($"Stress test: {r.Rig}; {r.Samples} of {r.RequestedSamples} samples, seed {r.Seed}, {varied} quantities varied"
+        o.WriteLine($"Stress test: {r.Rig}; {r.Samples.ToString("N0", CultureInfo.InvariantCulture)} of {r.RequestedSamples.ToString("N0", CultureInfo.InvariantCulture)} samples, seed {r.Seed}, {varied} quantities varied"
             + (r.Partial ? " (PARTIAL: stopped early)" : ""));
         if (r.FailureRate is { } f)
         {

@@ -125,7 +125,7 @@ public sealed class StressSheet : Sheet
 
     /// <inheritdoc/>
     public override string? LongRunResults
-        => Context.Work.IsActive(StressJob) ? $"the stress run in progress ({SamplesDone} of {_requestedSamples} samples done)"
+        => Context.Work.IsActive(StressJob) ? $"the stress run in progress ({N(SamplesDone)} of {N(_requestedSamples)} samples done)"
             : _shown is { Result.Samples: >= LongRunSamples } shown ? $"the stress results ({shown.Result.Samples} samples)"
             : null;
 
@@ -276,7 +276,7 @@ public sealed class StressSheet : Sheet
                 return;
             }
             _progress.Fraction = _requestedSamples > 0 ? (float)done / _requestedSamples : 0;
-            _state.Text = done == 0 ? "Preparing the load tables... F8 stops" : $"Running: {done} of {_requestedSamples}... F8 stops";
+            _state.Text = done == 0 ? "Preparing the load tables... F8 stops" : $"Running: {N(done)} of {N(_requestedSamples)}... F8 stops";
             return;
         }
         if (_shown is not { } shown)
@@ -285,7 +285,7 @@ public sealed class StressSheet : Sheet
             return;
         }
         var r = shown.Result;
-        string partial = r.Partial ? $"PARTIAL: stopped after {r.Samples} of {r.RequestedSamples} samples" : $"{r.Samples} samples";
+        string partial = r.Partial ? $"PARTIAL: stopped after {N(r.Samples)} of {N(r.RequestedSamples)} samples" : $"{N(r.Samples)} samples";
         string stale = !ReferenceEquals(shown.Rig, Context.Session.Rig) ? "; ! the rig changed since: F5 runs again" : "";
         _state.Text = $"{partial}, seed {r.Seed}{stale}";
     }
@@ -309,7 +309,7 @@ public sealed class StressSheet : Sheet
             return lines;
         }
         var r = shown.Result;
-        lines.Add($"{(r.Partial ? "PARTIAL: " : "")}{r.Samples} of {r.RequestedSamples} samples, seed {r.Seed}, {shown.Tolerances.Varied.Count} varied");
+        lines.Add($"{(r.Partial ? "PARTIAL: " : "")}{N(r.Samples)} of {N(r.RequestedSamples)} samples, seed {r.Seed}, {shown.Tolerances.Varied.Count} varied");
         if (r.FailureRate is not { } overall)
         {
             lines.Add("No sample finished.");
@@ -376,6 +376,8 @@ public sealed class StressSheet : Sheet
         => $"  {key,-13} {rate.Count,7} {Pct(rate.EstimateFraction),8}  {Pct(rate.LowerFraction)} - {Pct(rate.UpperFraction)}";
 
     private static string Pct(double fraction) => (fraction * 100).ToString("F2", CultureInfo.InvariantCulture) + " %";
+
+    private static string N(long n) => n.ToString("N0", CultureInfo.InvariantCulture);
 
     private static string F(double v, int decimals) => v.ToString("F" + decimals.ToString(CultureInfo.InvariantCulture), CultureInfo.InvariantCulture);
 

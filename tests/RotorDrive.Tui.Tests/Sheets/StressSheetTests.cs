@@ -1,3 +1,4 @@
+using System.Globalization;
 using Terminal.Gui.Input;
 using RotorDrive.Core.Studies.Stress;
 using RotorDrive.Files;
@@ -151,7 +152,7 @@ public class StressSheetTests
         Assert.True(partial.Partial);
         Assert.InRange(partial.Samples, 3, 199_999);
         Assert.Equal(200_000, partial.RequestedSamples);
-        Assert.StartsWith($"PARTIAL: stopped after {partial.Samples} of 200000 samples", sheet.StateText);
+        Assert.StartsWith($"PARTIAL: stopped after {partial.Samples.ToString("N0", CultureInfo.InvariantCulture)} of 200,000 samples", sheet.StateText);
         Assert.StartsWith("PARTIAL: ", sheet.ResultLines[0]);
 
         Retype(bench, sheet.SamplesField, "6");
