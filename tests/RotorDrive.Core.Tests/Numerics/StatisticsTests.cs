@@ -151,7 +151,8 @@ public class StatisticsTests
     [FsCheck.Xunit.Property(MaxTest = 100)]
     public bool Spearman_WithTies_EqualsMathNetsSpearman_AndRankingOnceGivesTheSame(int seed)
     {
-        // Reference library: MathNet.Numerics' Correlation.Spearman (mid-ranks, Pearson of the ranks). Values drawn from a
+        // Reference library: MathNet.Numerics' Correlation.Spearman (mid-ranks, Pearson of the ranks) and Statistics.Ranks
+        // (average definition, for the mid-ranks). Values drawn from a
         // few levels so that ties are common. Ranking each series once (MidRanks) and pairing the ranks (OfRanks) is the
         // path the stress study's drivers take.
         var random = new Random(seed);
@@ -160,12 +161,41 @@ public class StatisticsTests
         var y = Enumerable.Range(0, n).Select(_ => random.Next(5) + 0.5 * x[0]).ToArray();
         double? rho = RankCorrelation.Spearman(x, y);
         double? ranked = RankCorrelation.OfRanks(RankCorrelation.MidRanks(x), RankCorrelation.MidRanks(y));
+        // The mid-ranks themselves against MathNet's Statistics.Ranks with the average definition.
+        var referenceRanks = MathNet.Numerics.Statistics.Statistics.Ranks(x, MathNet.Numerics.Statistics.RankDefinition.Average);
+        if (!RankCorrelation.MidRanks(x).SequenceEqual(referenceRanks))
+        {
+            return false;
+        }
         if (x.Distinct().Count() == 1 || y.Distinct().Count() == 1)
         {
             return rho is null && ranked is null;
         }
         double reference = MathNet.Numerics.Statistics.Correlation.Spearman(x, y);
         return rho is { } r && ranked == r && Math.Abs(r - reference) < 1e-12;
+    }
+
+    [FsCheck.Xunit.Property(MaxTest = 100)]
+    public bool MidRanksOfAPart_FromTheWholeSeriesSortOrder_EqualRankingThePartAlone(int seed)
+    {
+        // The stress drivers sort each input once over all samples and take the ranks of the samples where a criterion was
+        // assessed from that order; they must be the ranks of those samples ranked alone (mid-ranks for ties).
+        var random = new Random(seed);
+        int n = 1 + random.Next(80);
+        var values = Enumerable.Range(0, n).Select(_ => (double)random.Next(8)).ToArray();
+        var place = new int[n];
+        var part = new List<double>();
+        for (int i = 0; i < n; i++)
+        {
+            place[i] = random.Next(3) == 0 ? -1 : part.Count;
+            if (place[i] >= 0)
+            {
+                part.Add(values[i]);
+            }
+        }
+        var fromOrder = RankCorrelation.SortOrder(values).MidRanks(place, part.Count);
+        return fromOrder.SequenceEqual(RankCorrelation.MidRanks(part))
+            && RankCorrelation.SortOrder(values).MidRanks(null, n).SequenceEqual(MathNet.Numerics.Statistics.Statistics.Ranks(values, MathNet.Numerics.Statistics.RankDefinition.Average));
     }
 
     [Fact]

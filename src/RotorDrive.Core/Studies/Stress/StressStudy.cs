@@ -156,29 +156,55 @@ public static class StressStudy
     }
 
     // Spearman's rho of every varied input against every criterion's margin, over the samples where that margin was
-    // assessed. Each series is ranked once: an input's ranks over all samples serve every criterion assessed on all of
-    // them (the usual case), so a run ranks (inputs + criteria) series instead of two per pair.
+    // assessed. Each input is sorted once over all samples (the inputs in parallel: F8 waits for this, and the run's
+    // workers have stopped); the ranks of the samples where a criterion was assessed follow from that order without
+    // sorting again. A 45,000-sample run aggregated in 0.57 s when every pair ranked its own two series.
     private static List<StressDriver> Drivers(IReadOnlyList<StressSample> samples, IReadOnlyList<StressInput> inputs)
     {
-        var drivers = new List<StressDriver>();
-        var allRanks = new double[]?[inputs.Count];
-        foreach (var criterion in StressCriteria.All)
+        int n = samples.Count;
+        var orders = new RankCorrelation.Ranking[inputs.Count];
+        var allRanks = new double[inputs.Count][];
+        Parallel.For(0, inputs.Count, i =>
         {
-            var assessed = samples.Where(s => s.Outcome.Margins[(int)criterion] is not null).ToArray();
-            var marginRanks = RankCorrelation.MidRanks(assessed.Select(s => s.Outcome.Margins[(int)criterion]!.Value).ToArray());
-            bool everySample = assessed.Length == samples.Count;
-            for (int i = 0; i < inputs.Count; i++)
+            var values = new double[n];
+            for (int k = 0; k < n; k++)
             {
-                var input = inputs[i];
-                var inputRanks = everySample
-                    ? allRanks[i] ??= RankCorrelation.MidRanks(samples.Select(s => input.ValueIn(s.Parts)).ToArray())
-                    : RankCorrelation.MidRanks(assessed.Select(s => input.ValueIn(s.Parts)).ToArray());
-                if (RankCorrelation.OfRanks(inputRanks, marginRanks) is { } rho)
+                values[k] = inputs[i].ValueIn(samples[k].Parts);
+            }
+            orders[i] = RankCorrelation.SortOrder(values);
+            allRanks[i] = orders[i].MidRanks(null, n);
+        });
+        // Criteria in parallel too, each into its own list; joined in criterion order, so the result does not depend on
+        // threads.
+        var criteria = StressCriteria.All;
+        var perCriterion = new List<StressDriver>[criteria.Count];
+        Parallel.For(0, criteria.Count, c =>
+        {
+            var criterion = criteria[c];
+            var place = new int[n];
+            var margins = new List<double>(n);
+            for (int k = 0; k < n; k++)
+            {
+                place[k] = -1;
+                if (samples[k].Outcome.Margins[(int)criterion] is { } m)
                 {
-                    drivers.Add(new StressDriver(input.Name, criterion, rho));
+                    place[k] = margins.Count;
+                    margins.Add(m);
                 }
             }
-        }
+            var marginRanks = RankCorrelation.MidRanks(margins);
+            var found = new List<StressDriver>();
+            for (int i = 0; i < inputs.Count; i++)
+            {
+                var inputRanks = margins.Count == n ? allRanks[i] : orders[i].MidRanks(place, margins.Count);
+                if (RankCorrelation.OfRanks(inputRanks, marginRanks) is { } rho)
+                {
+                    found.Add(new StressDriver(inputs[i].Name, criterion, rho));
+                }
+            }
+            perCriterion[c] = found;
+        });
+        var drivers = perCriterion.SelectMany(d => d).ToList();
         return drivers;
     }
 
