@@ -127,12 +127,37 @@ public static class StressStudy
                 [], null, inputs, samples);
         }
 
-        var overall = WilsonInterval.Compute(samples.Count(s => !s.Outcome.PassedAll), n);
-        var criteria = StressCriteria.All
-            .Select(c => new StressCriterionRate(c, WilsonInterval.Compute(samples.Count(s => !s.Outcome.Passed(c)), n)))
-            .ToArray();
-
-        var figures = FigureKeys.Select(k => Figure(k, samples.Select(s => FigureValue(s.Outcome, k)))).ToArray();
+        // One pass over the samples for the counts and the figures' values (each sample's outcome is an object of its own;
+        // a pass per criterion and per figure fetched them a dozen times).
+        var all = StressCriteria.All;
+        int failedAny = 0;
+        var failed = new int[all.Count];
+        var figureValues = new double?[FigureKeys.Count][];
+        for (int f = 0; f < figureValues.Length; f++)
+        {
+            figureValues[f] = new double?[n];
+        }
+        for (int k = 0; k < n; k++)
+        {
+            var outcome = samples[k].Outcome;
+            bool any = false;
+            for (int c = 0; c < all.Count; c++)
+            {
+                if (!outcome.Passed(all[c]))
+                {
+                    failed[c]++;
+                    any = true;
+                }
+            }
+            failedAny += any ? 1 : 0;
+            for (int f = 0; f < figureValues.Length; f++)
+            {
+                figureValues[f][k] = FigureValue(outcome, FigureKeys[f]);
+            }
+        }
+        var overall = WilsonInterval.Compute(failedAny, n);
+        var criteria = all.Select((c, i) => new StressCriterionRate(c, WilsonInterval.Compute(failed[i], n))).ToArray();
+        var figures = FigureKeys.Select((k, f) => Figure(k, figureValues[f])).ToArray();
 
         var drivers = Drivers(samples, inputs);
         var ordered = drivers
@@ -156,56 +181,70 @@ public static class StressStudy
     }
 
     // Spearman's rho of every varied input against every criterion's margin, over the samples where that margin was
-    // assessed. Each input is sorted once over all samples (the inputs in parallel: F8 waits for this, and the run's
-    // workers have stopped); the ranks of the samples where a criterion was assessed follow from that order without
-    // sorting again. A 45,000-sample run aggregated in 0.57 s when every pair ranked its own two series.
+    // assessed. F8 waits for this, so it is built for speed (a 45,000-sample run took 0.6 s before, most of it memory
+    // waits): the samples are read once, in order, into one array per input and per criterion (each sample's parts are
+    // scattered objects, and a pass per input fetched them 45 times); each input is sorted once over all samples, in
+    // parallel (the run's workers have stopped), and the ranks of the samples where a criterion was assessed follow from
+    // that order without sorting again. Criteria run in parallel too and are joined in criterion order, so the result
+    // does not depend on threads.
     private static List<StressDriver> Drivers(IReadOnlyList<StressSample> samples, IReadOnlyList<StressInput> inputs)
     {
         int n = samples.Count;
+        var criteria = StressCriteria.All;
+        var values = new double[inputs.Count][];
+        for (int i = 0; i < values.Length; i++)
+        {
+            values[i] = new double[n];
+        }
+        var place = new int[criteria.Count][];
+        var margins = new List<double>[criteria.Count];
+        for (int c = 0; c < criteria.Count; c++)
+        {
+            place[c] = new int[n];
+            margins[c] = new List<double>(n);
+        }
+        for (int k = 0; k < n; k++)
+        {
+            var sample = samples[k];
+            for (int i = 0; i < values.Length; i++)
+            {
+                values[i][k] = inputs[i].ValueIn(sample.Parts);
+            }
+            var sampleMargins = sample.Outcome.Margins;
+            for (int c = 0; c < criteria.Count; c++)
+            {
+                place[c][k] = -1;
+                if (sampleMargins[(int)criteria[c]] is { } m)
+                {
+                    place[c][k] = margins[c].Count;
+                    margins[c].Add(m);
+                }
+            }
+        }
+
         var orders = new RankCorrelation.Ranking[inputs.Count];
         var allRanks = new double[inputs.Count][];
         Parallel.For(0, inputs.Count, i =>
         {
-            var values = new double[n];
-            for (int k = 0; k < n; k++)
-            {
-                values[k] = inputs[i].ValueIn(samples[k].Parts);
-            }
-            orders[i] = RankCorrelation.SortOrder(values);
+            orders[i] = RankCorrelation.SortOrder(values[i]);
             allRanks[i] = orders[i].MidRanks(null, n);
         });
-        // Criteria in parallel too, each into its own list; joined in criterion order, so the result does not depend on
-        // threads.
-        var criteria = StressCriteria.All;
         var perCriterion = new List<StressDriver>[criteria.Count];
         Parallel.For(0, criteria.Count, c =>
         {
-            var criterion = criteria[c];
-            var place = new int[n];
-            var margins = new List<double>(n);
-            for (int k = 0; k < n; k++)
-            {
-                place[k] = -1;
-                if (samples[k].Outcome.Margins[(int)criterion] is { } m)
-                {
-                    place[k] = margins.Count;
-                    margins.Add(m);
-                }
-            }
-            var marginRanks = RankCorrelation.MidRanks(margins);
+            var marginRanks = RankCorrelation.MidRanks(margins[c]);
             var found = new List<StressDriver>();
             for (int i = 0; i < inputs.Count; i++)
             {
-                var inputRanks = margins.Count == n ? allRanks[i] : orders[i].MidRanks(place, margins.Count);
+                var inputRanks = margins[c].Count == n ? allRanks[i] : orders[i].MidRanks(place[c], margins[c].Count);
                 if (RankCorrelation.OfRanks(inputRanks, marginRanks) is { } rho)
                 {
-                    found.Add(new StressDriver(inputs[i].Name, criterion, rho));
+                    found.Add(new StressDriver(inputs[i].Name, criteria[c], rho));
                 }
             }
             perCriterion[c] = found;
         });
-        var drivers = perCriterion.SelectMany(d => d).ToList();
-        return drivers;
+        return perCriterion.SelectMany(d => d).ToList();
     }
 
     private static StressFigure Figure(string key, IEnumerable<double?> values)
