@@ -27,6 +27,7 @@ public sealed class StressSheet : Sheet
     public const int DriversShown = 8;
 
     private const string StressJob = "stress test";
+    private const string DriversJob = "stress drivers";
 
     /// <summary>The reported figures in words with their units, by <see cref="StressStudy.FigureKeys"/> key.</summary>
     internal static IReadOnlyDictionary<string, (string Words, int Decimals)> FigureWords { get; } = new Dictionary<string, (string, int)>
@@ -200,7 +201,8 @@ public sealed class StressSheet : Sheet
         }
         var tolerances = session.Tolerances;
         // One processor stays free for the UI thread (keys, drawing) during a long run; results do not depend on threads.
-        var options = new StressStudyOptions(settings.Samples, settings.Seed, BackgroundWork.WorkerThreads);
+        // A stopped run's figures show at once; its drivers follow (ShowDriversWhenReady), so F8 never waits for them.
+        var options = new StressStudyOptions(settings.Samples, settings.Seed, BackgroundWork.WorkerThreads, DriversWhenStopped: false);
         _requested = true;
         _requestedSamples = settings.Samples;
         Volatile.Write(ref _done, 0);
@@ -214,8 +216,27 @@ public sealed class StressSheet : Sheet
         {
             _shown = run;
             ShowResults();
+            ShowDriversWhenReady(run);
         }, immediately: true, keepWhenCancelled: true);
         ShowState();
+    }
+
+    // The drivers of a stopped run, computed after its other figures are on screen (a fraction of a second; a second F8
+    // does not drop them) and shown if that run is still the one on show.
+    private void ShowDriversWhenReady(StressRun run)
+    {
+        if (!run.Result.DriversPending)
+        {
+            return;
+        }
+        Context.Work.Request(DriversJob, (_, _) => run with { Result = StressStudy.CompleteDrivers(run.Result) }, completed =>
+        {
+            if (ReferenceEquals(_shown, run))
+            {
+                _shown = completed;
+                ShowResults();
+            }
+        }, immediately: true, keepWhenCancelled: true);
     }
 
     /// <inheritdoc/>
@@ -344,11 +365,15 @@ public sealed class StressSheet : Sheet
         }
         lines.Add("");
         lines.Add("Top drivers (Spearman rho of a drawn value with a margin; + means larger is safer):");
+        if (r.DriversPending)
+        {
+            lines.Add("  computing...");
+        }
         foreach (var d in r.Drivers.Take(DriversShown))
         {
             lines.Add($"  {FieldWords.Input(d.Input),-30} {d.Margin.Replace('_', ' '),-13} {d.Rho.ToString("+0.000;-0.000;0.000", CultureInfo.InvariantCulture)}");
         }
-        if (r.Drivers.Count == 0)
+        if (r.Drivers.Count == 0 && !r.DriversPending)
         {
             lines.Add("  none (nothing varied, or too few samples)");
         }

@@ -154,6 +154,12 @@ public class StressSheetTests
         Assert.Equal(200_000, partial.RequestedSamples);
         Assert.StartsWith($"PARTIAL: stopped after {partial.Samples.ToString("N0", CultureInfo.InvariantCulture)} of 200,000 samples", sheet.StateText);
         Assert.StartsWith("PARTIAL: ", sheet.ResultLines[0]);
+        // The figures showed at once and the drivers followed (F8 never waits for them); they are the drivers the
+        // aggregation gives on the same samples.
+        Assert.False(partial.DriversPending);
+        var aggregated = StressStudy.Aggregate(partial.SampleResults, partial.RequestedSamples, partial.Seed, partial.Inputs);
+        Assert.Equal(aggregated.Drivers, partial.Drivers);
+        Assert.DoesNotContain(sheet.ResultLines, l => l.Contains("computing...", StringComparison.Ordinal));
 
         Retype(bench, sheet.SamplesField, "6");
         bench.Press(Key.F5);

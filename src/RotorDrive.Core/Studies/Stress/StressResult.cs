@@ -29,6 +29,11 @@ public sealed record StressResult(
     IReadOnlyList<StressInput> Inputs,
     IReadOnlyList<StressSample> SampleResults)
 {
+    /// <summary>True when the drivers have not been computed yet (a stopped run asked to return at once; see
+    /// <see cref="StressStudyOptions.DriversWhenStopped"/>): <see cref="Drivers"/> is then empty, and
+    /// <see cref="StressStudy.CompleteDrivers"/> gives the result with them.</summary>
+    public bool DriversPending { get; init; }
+
     /// <summary>The accepted overall failure rate when none is given, %: 1 % (common practice, no source).</summary>
     public const double DefaultAcceptedFailurePct = 1.0;
 

@@ -93,7 +93,20 @@ public static class StressStudy
             // Cancelled: what finished is reported as partial.
         }
         var done = samples.Where(s => s is not null).Select(s => s!).ToArray();
-        return Aggregate(done, n, o.Seed, StressInput.Varied(tolerances, rig.Stations.Count));
+        bool drivers = o.DriversWhenStopped || done.Length == n;
+        return Aggregate(done, n, o.Seed, StressInput.Varied(tolerances, rig.Stations.Count), drivers);
+    }
+
+    /// <summary>The result with its drivers computed, when they were left pending (<see cref="StressResult.DriversPending"/>);
+    /// otherwise the result itself. The drivers are those <see cref="Aggregate"/> would have given.</summary>
+    /// <param name="result">A result.</param>
+    /// <exception cref="ArgumentNullException">The result is null.</exception>
+    public static StressResult CompleteDrivers(StressResult result)
+    {
+        Preconditions.NotNull(result, nameof(result));
+        return result.DriversPending
+            ? result with { Drivers = OrderedDrivers(result.SampleResults, result.Inputs), DriversPending = false }
+            : result;
     }
 
     /// <summary>Evaluates one sample exactly as <see cref="Run"/> does, with its spin-up trace.</summary>
@@ -115,8 +128,10 @@ public static class StressStudy
     /// <param name="requested">Samples asked for.</param>
     /// <param name="seed">The study's seed.</param>
     /// <param name="inputs">The varied inputs.</param>
+    /// <param name="drivers">False to leave the drivers pending (<see cref="CompleteDrivers"/>).</param>
     /// <exception cref="ArgumentNullException">An argument is null.</exception>
-    public static StressResult Aggregate(IReadOnlyList<StressSample> samples, int requested, int seed, IReadOnlyList<StressInput> inputs)
+    public static StressResult Aggregate(IReadOnlyList<StressSample> samples, int requested, int seed, IReadOnlyList<StressInput> inputs,
+        bool drivers = true)
     {
         Preconditions.NotNull(samples, nameof(samples));
         Preconditions.NotNull(inputs, nameof(inputs));
@@ -159,12 +174,7 @@ public static class StressStudy
         var criteria = all.Select((c, i) => new StressCriterionRate(c, WilsonInterval.Compute(failed[i], n))).ToArray();
         var figures = FigureKeys.Select((k, f) => Figure(k, figureValues[f])).ToArray();
 
-        var drivers = Drivers(samples, inputs);
-        var ordered = drivers
-            .OrderByDescending(d => Math.Abs(d.Rho))
-            .ThenBy(d => d.Input, StringComparer.Ordinal)
-            .ThenBy(d => d.Criterion)
-            .ToArray();
+        var ordered = drivers ? OrderedDrivers(samples, inputs) : [];
 
         int? worst = null;
         double worstMargin = double.PositiveInfinity;
@@ -177,8 +187,19 @@ public static class StressStudy
                 worst = s.Index;
             }
         }
-        return new StressResult(n, requested, seed, n < requested, overall, criteria, figures, ordered, worst, inputs, samples);
+        return new StressResult(n, requested, seed, n < requested, overall, criteria, figures, ordered, worst, inputs, samples)
+        {
+            DriversPending = !drivers,
+        };
     }
+
+    // The drivers, largest |rho| first (ties by input name, then criterion).
+    private static StressDriver[] OrderedDrivers(IReadOnlyList<StressSample> samples, IReadOnlyList<StressInput> inputs)
+        => Drivers(samples, inputs)
+            .OrderByDescending(d => Math.Abs(d.Rho))
+            .ThenBy(d => d.Input, StringComparer.Ordinal)
+            .ThenBy(d => d.Criterion)
+            .ToArray();
 
     // Spearman's rho of every varied input against every criterion's margin, over the samples where that margin was
     // assessed. F8 waits for this, so it is built for speed (a 45,000-sample run took 0.6 s before, most of it memory

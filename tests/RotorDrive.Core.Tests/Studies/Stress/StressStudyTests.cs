@@ -219,6 +219,30 @@ public class StressStudyTests
     }
 
     [Fact]
+    public void AStoppedRun_CanLeaveItsDriversPending_AndCompleteThemLater_ToTheSameDrivers()
+    {
+        // The workbench shows a stopped run's figures at once and its drivers after (issue 15 item 1: F8 within 0.5 s).
+        var tolerances = StressTolerances.None.With(StressQuantity.ControllerCurrentLimit, Tolerance.Normal(8, ToleranceScale.Percent, true));
+        using var cts = new CancellationTokenSource();
+        var stopped = StressStudy.Run(new ThresholdModel(StressRigs.Square, 160), tolerances,
+            new StressStudyOptions(100_000, 2, 1, DriversWhenStopped: false), new CancelAfter(cts, 300), cts.Token);
+        Assert.True(stopped.Partial);
+        Assert.True(stopped.DriversPending);
+        Assert.Empty(stopped.Drivers);
+        var completed = StressStudy.CompleteDrivers(stopped);
+        Assert.False(completed.DriversPending);
+        Assert.NotEmpty(completed.Drivers);
+        Assert.Equal(StressStudy.Aggregate(stopped.SampleResults, stopped.RequestedSamples, stopped.Seed, stopped.Inputs).Drivers, completed.Drivers);
+        Assert.Equal(stopped.FailureRate, completed.FailureRate);
+        Assert.Same(completed, StressStudy.CompleteDrivers(completed));
+
+        // A run that finishes computes its drivers whatever the option says.
+        var whole = StressStudy.Run(new ThresholdModel(StressRigs.Square, 160), tolerances, new StressStudyOptions(50, 2, 1, DriversWhenStopped: false));
+        Assert.False(whole.DriversPending);
+        Assert.NotEmpty(whole.Drivers);
+    }
+
+    [Fact]
     public void Drivers_EqualSpearmanOfEachPair_OverTheSamplesWhereTheMarginWasAssessed()
     {
         // The drivers rank each series once and pair the ranks (RankCorrelation.OfRanks); this recomputes every pair from
