@@ -45,7 +45,7 @@ public sealed class StressCommandTests : IDisposable
         Assert.True(root.GetProperty("drivers").GetArrayLength() > 0);
         Assert.True(root.GetProperty("worst_sample").GetProperty("index").GetInt32() is >= 0 and < 24);
         // Progress goes to stderr, never to stdout.
-        Assert.Contains("stress: 24/24 samples", error);
+        Assert.Contains("stress: 24 of 24 samples", error);
         Assert.DoesNotContain("stress:", output);
     }
 

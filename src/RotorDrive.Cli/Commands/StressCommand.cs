@@ -197,7 +197,7 @@ public static class StressCommand
                 if (tenth > _lastTenth)
                 {
                     _lastTenth = tenth;
-                    error.WriteLine($"stress: {value}/{total} samples");
+                    error.WriteLine($"stress: {N(value)} of {N(total)} samples");
                 }
             }
         }
@@ -208,7 +208,7 @@ public static class StressCommand
             {
                 lock (_gate)
                 {
-                    error.WriteLine($"stress: stopped after {done.ToString("N0", CultureInfo.InvariantCulture)} of {total.ToString("N0", CultureInfo.InvariantCulture)} samples; the report covers those (partial).");
+                    error.WriteLine($"stress: stopped after {N(done)} of {N(total)} samples; the report covers those (partial).");
                 }
             }
         }
@@ -328,15 +328,17 @@ public static class StressCommand
             o.MinPackVoltageV, o.HoverSpeedRpm, o.HoverCurrentA, o.HoverPackVoltageV, o.YawResidualNm, o.YawAuthorityNm, o.TrimLimit, Parts(s.Parts), trace);
     }
 
+    private static string N(long n) => n.ToString("N0", CultureInfo.InvariantCulture);
+
     private static string Pct(double fraction) => Numbers.Format(fraction * 100, 2) + " %";
 
     private static void WriteText(StressReport r, int varied, TextWriter o)
     {
-        o.WriteLine($"Stress test: {r.Rig}; {r.Samples.ToString("N0", CultureInfo.InvariantCulture)} of {r.RequestedSamples.ToString("N0", CultureInfo.InvariantCulture)} samples, seed {r.Seed}, {varied} quantities varied"
+        o.WriteLine($"Stress test: {r.Rig}; {N(r.Samples)} of {N(r.RequestedSamples)} samples, seed {r.Seed}, {varied} quantities varied"
             + (r.Partial ? " (PARTIAL: stopped early)" : ""));
         if (r.FailureRate is { } f)
         {
-            o.WriteLine($"  failure rate {Pct(f.Rate)} ({f.Failures} samples), 95 % interval {Pct(f.CiLow)} to {Pct(f.CiHigh)}; accepted below {Numbers.Format(r.AcceptFailurePct, 2)} %: {r.Verdict.ToUpperInvariant()}");
+            o.WriteLine($"  failure rate {Pct(f.Rate)} ({N(f.Failures)} samples), 95 % interval {Pct(f.CiLow)} to {Pct(f.CiHigh)}; accepted below {Numbers.Format(r.AcceptFailurePct, 2)} %: {r.Verdict.ToUpperInvariant()}");
         }
         o.WriteLine();
         var criteria = new TextTable(new TableColumn("criterion"), new TableColumn("failures", Alignment.Right), new TableColumn("rate", Alignment.Right),
