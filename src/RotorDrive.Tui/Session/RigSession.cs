@@ -197,8 +197,16 @@ public sealed class RigSession
         {
             return typed;
         }
-        return (Problems.FirstOrDefault(p => string.Equals(p.Field, fieldPath, StringComparison.Ordinal))
-            ?? Problems.FirstOrDefault(p => p.Field.StartsWith(fieldPath + ".", StringComparison.Ordinal)))?.Message;
+        var problem = Problems.FirstOrDefault(p => string.Equals(p.Field, fieldPath, StringComparison.Ordinal))
+            ?? Problems.FirstOrDefault(p => p.Field.StartsWith(fieldPath + ".", StringComparison.Ordinal));
+        // A required value left blank: beside its field the file's wording ("required key 'thickness_mm' is missing")
+        // names a JSON key the sheet shows in words; say what to do instead.
+        if (problem is not null && problem.Field == fieldPath
+            && problem.Message == Messages.MissingKey(fieldPath[(fieldPath.LastIndexOf('.') + 1)..]))
+        {
+            return "a value is required";
+        }
+        return problem?.Message;
     }
 
     /// <summary>Saves to the current path: the previous file is kept as PATH.bak, the new one is written atomically.</summary>

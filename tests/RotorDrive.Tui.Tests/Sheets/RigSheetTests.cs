@@ -59,6 +59,11 @@ public class RigSheetTests
         string marked = bench.Screen;
         Assert.True(thickness.Message.IsError);
         Assert.Contains(marked.Split('\n'), line => line.Contains(" thickness        -3", StringComparison.Ordinal) && line.Contains("! ", StringComparison.Ordinal));
+
+        // A required value left blank says so in words, not with the file's JSON key (issue 15 item 4).
+        thickness.Field.Text = "";
+        Assert.Equal("a value is required", thickness.CurrentMessage);
+        Assert.DoesNotContain("thickness_mm", bench.Screen, StringComparison.Ordinal);
     }
 
     [Fact]
