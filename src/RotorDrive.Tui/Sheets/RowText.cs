@@ -13,27 +13,22 @@ internal sealed class RowText(View owner, string text)
     public string Text
     {
         get => _text;
-        set
-        {
-            if (_text != value)
-            {
-                _text = value;
-                owner.SetNeedsDraw();
-            }
-        }
+        set => Set(ref _text, value);
     }
 
     /// <summary>True to draw in the error colours (beside the "!" mark the text carries).</summary>
     public bool IsError
     {
         get => _isError;
-        set
+        set => Set(ref _isError, value);
+    }
+
+    private void Set<T>(ref T field, T value)
+    {
+        if (!EqualityComparer<T>.Default.Equals(field, value))
         {
-            if (_isError != value)
-            {
-                _isError = value;
-                owner.SetNeedsDraw();
-            }
+            field = value;
+            owner.SetNeedsDraw();
         }
     }
 }

@@ -127,7 +127,7 @@ public sealed class StressSheet : Sheet
     /// <inheritdoc/>
     public override string? LongRunResults
         => Context.Work.IsActive(StressJob) ? $"the stress run in progress ({N(SamplesDone)} of {N(_requestedSamples)} samples done)"
-            : _shown is { Result.Samples: >= LongRunSamples } shown ? $"the stress results ({shown.Result.Samples} samples)"
+            : _shown is { Result.Samples: >= LongRunSamples } shown ? $"the stress results ({N(shown.Result.Samples)} samples)"
             : null;
 
     /// <summary>Samples from which a finished stress run counts as a long run whose results quitting would lose.</summary>

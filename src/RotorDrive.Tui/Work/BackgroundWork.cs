@@ -126,8 +126,8 @@ public sealed class BackgroundWork : IDisposable
             StartProgressTimer();
             Raise();
             var progress = new Progress(job);
-            // A thread of its own, not one of the pool's: a run holding pool threads for minutes delays the timers that
-            // the UI's main loop and the terminal reader sleep on (KeyTiming), and keys then wait for the pool to grow.
+            // A thread of its own, not one of the pool's: a run may last minutes, and the UI's main loop and the terminal
+            // reader sleep on timers that complete on pool threads (KeyTiming). A precaution; no stall was measured.
             job.Task = Task.Factory.StartNew(() => work(job.Token, progress), job.Token, TaskCreationOptions.LongRunning, TaskScheduler.Default)
                 .ContinueWith(t =>
                 {

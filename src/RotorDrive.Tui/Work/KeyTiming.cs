@@ -16,7 +16,7 @@ namespace RotorDrive.Tui.Work;
 /// default escape-time is 10 ms; from memory).</item>
 /// </list>
 /// Terminal.Gui 2.5 has no setting for the Esc wait; it is a private field of its input processor, set here by name.
-/// <see cref="Apply"/> reports whether it took, and a test pins that it does on the version the build uses, so an
+/// <see cref="ShortenEscapeWait"/> reports whether it took, and a test pins that it does on the version the build uses, so an
 /// upgrade that renames the field fails the test instead of silently bringing the longer wait back.</remarks>
 public static class KeyTiming
 {
@@ -34,19 +34,34 @@ public static class KeyTiming
     /// <returns>True when the wait was set; false when this Terminal.Gui version keeps it elsewhere.</returns>
     public static bool ShortenEscapeWait(IApplication app)
     {
+        if (EscapeWaitField(app) is not var (processor, field))
+        {
+            return false;
+        }
+        field.SetValue(processor, EscapeWait);
+        return true;
+    }
+
+    /// <summary>The Esc wait of the application's input processor, or null when this Terminal.Gui version keeps it
+    /// elsewhere.</summary>
+    /// <param name="app">An initialised application.</param>
+    internal static TimeSpan? EscapeWaitOf(IApplication app)
+        => EscapeWaitField(app) is var (processor, field) ? (TimeSpan)field.GetValue(processor)! : null;
+
+    private static (object Processor, FieldInfo Field)? EscapeWaitField(IApplication app)
+    {
         ArgumentNullException.ThrowIfNull(app);
         if (app.Driver?.GetInputProcessor() is not { } processor)
         {
-            return false;
+            return null;
         }
         for (var type = processor.GetType(); type is not null; type = type.BaseType)
         {
             if (type.GetField("_escTimeout", BindingFlags.Instance | BindingFlags.NonPublic) is { } field && field.FieldType == typeof(TimeSpan))
             {
-                field.SetValue(processor, EscapeWait);
-                return true;
+                return (processor, field);
             }
         }
-        return false;
+        return null;
     }
 }
